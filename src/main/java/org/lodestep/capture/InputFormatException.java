@@ -1,0 +1,69 @@
+package org.lodestep.capture;
+
+import java.util.Objects;
+
+/**
+ * Input that cannot be read as what it claims to be: names the source, the line, what was found and what was expected.
+ *
+ * <p>The parts are kept as fields so tests assert them instead of parsing the message. The message itself is one line,
+ * in the form {@code FILE line N, column C: 'TEXT' EXPECTED}, ready to show a user.
+ */
+public class InputFormatException extends Exception {
+    private static final long serialVersionUID = 1L;
+
+    /** Line number when the whole input is at fault (empty file, missing header). */
+    public static final int NO_LINE = 0;
+
+    private final String source;
+    private final int line;
+    private final String column;
+    private final String text;
+    private final String expected;
+
+    /**
+     * @param source   file name or other label of the input (never null)
+     * @param line     1-based line number, or {@link #NO_LINE}
+     * @param column   column name or number, or null
+     * @param text     the offending text, or null
+     * @param expected what was expected there, in words a user understands (with the unit where one applies)
+     */
+    public InputFormatException(String source, int line, String column, String text, String expected) {
+        super(format(source, line, column, text, expected));
+        this.source = Objects.requireNonNull(source, "source");
+        this.line = line;
+        this.column = column;
+        this.text = text;
+        this.expected = Objects.requireNonNull(expected, "expected");
+    }
+
+    private static String format(String source, int line, String column, String text, String expected) {
+        StringBuilder b = new StringBuilder(String.valueOf(source));
+        if (line > 0) {
+            b.append(" line ").append(line);
+        }
+        if (column != null) {
+            b.append(", column ").append(column);
+        }
+        b.append(": ");
+        if (text != null) {
+            b.append('\'').append(oneLine(text)).append("' ");
+        }
+        b.append(expected);
+        return b.toString();
+    }
+
+    private static String oneLine(String s) {
+        String t = s.replaceAll("\\p{Cntrl}", "?");
+        return t.length() > 60 ? t.substring(0, 57) + "..." : t;
+    }
+
+    public String source() { return source; }
+
+    public int line() { return line; }
+
+    public String column() { return column; }
+
+    public String text() { return text; }
+
+    public String expected() { return expected; }
+}

@@ -1,0 +1,128 @@
+package org.lodestep.cli;
+
+import java.io.FileNotFoundException;
+import java.io.IOException;
+import java.io.PrintWriter;
+import java.io.UncheckedIOException;
+import java.nio.charset.StandardCharsets;
+import java.nio.file.AccessDeniedException;
+import java.nio.file.NoSuchFileException;
+
+import org.lodestep.capture.InputFormatException;
+import org.lodestep.qa.StoreException;
+import org.lodestep.rig.RigException;
+
+import picocli.CommandLine;
+import picocli.CommandLine.Command;
+import picocli.CommandLine.Option;
+
+/** Entry point: builds the command tree and maps every failure to one documented exit code. */
+@Command(name = "lodestep",
+        mixinStandardHelpOptions = true,
+        versionProvider = VersionProvider.class,
+        description = "Bench test-data analyzer for two-phase hybrid stepper motors.",
+        subcommands = {
+            DemoCommand.class,
+            LeadsCommand.class,
+            CommandLine.HelpCommand.class
+        },
+        footerHeading = "%nExit codes:%n",
+        footer = {
+            "  0  done",
+            "  1  internal error (rerun with --verbose and report it)",
+            "  2  usage error or unreadable input",
+            "  3  the analysis found an error-severity fault, or a QA check failed",
+            "  4  rig or I/O failure",
+            "  5  database failure"
+        })
+public final class Main implements Runnable {
+
+    @Option(names = "--verbose", scope = CommandLine.ScopeType.INHERIT,
+            description = "Show stack traces and extra detail when something fails.")
+    boolean verbose;
+
+    @CommandLine.Spec
+    CommandLine.Model.CommandSpec spec;
+
+    @Override
+    public void run() {
+        spec.commandLine().usage(spec.commandLine().getOut());
+    }
+
+    public static void main(String[] args) {
+        PrintWriter out = new PrintWriter(System.out, true, StandardCharsets.UTF_8);
+        PrintWriter err = new PrintWriter(System.err, true, StandardCharsets.UTF_8);
+        int code = run(out, err, args);
+        out.flush();
+        err.flush();
+        System.exit(code);
+    }
+
+    /** Runs one command line in-process, writing to the given streams; returns the exit code. */
+    public static int run(PrintWriter out, PrintWriter err, String... args) {
+        CommandLine cl = commandLine();
+        cl.setOut(out);
+        cl.setErr(err);
+        return cl.execute(args);
+    }
+
+    /** The configured command tree, for tests and for {@link #run}. */
+    static CommandLine commandLine() {
+        CommandLine cl = new CommandLine(new Main());
+        cl.setCaseInsensitiveEnumValuesAllowed(true);
+        cl.setUsageHelpAutoWidth(true);
+        cl.setExecutionExceptionHandler((ex, cmd, parseResult) -> handle(ex, cmd, isVerbose(parseResult)));
+        return cl;
+    }
+
+    private static boolean isVerbose(CommandLine.ParseResult parseResult) {
+        CommandLine.ParseResult p = parseResult;
+        while (p != null) {
+            if (p.hasMatchedOption("--verbose")) {
+                return true;
+            }
+            p = p.hasSubcommand() ? p.subcommand() : null;
+        }
+        return false;
+    }
+
+    /** The one table from failure kinds to exit codes. */
+    static int handle(Exception ex, CommandLine cmd, boolean verbose) {
+        PrintWriter err = cmd.getErr();
+        Throwable t = ex instanceof UncheckedIOException u ? u.getCause() : ex;
+        int code;
+        String message;
+        if (t instanceof InputFormatException) {
+            code = ExitCode.USAGE;
+            message = t.getMessage();
+        } else if (t instanceof NoSuchFileException || t instanceof FileNotFoundException) {
+            code = ExitCode.USAGE;
+            message = t.getMessage() + ": no such file";
+        } else if (t instanceof AccessDeniedException) {
+            code = ExitCode.USAGE;
+            message = t.getMessage() + ": permission denied";
+        } else if (t instanceof UsageException) {
+            code = ExitCode.USAGE;
+            message = t.getMessage();
+        } else if (t instanceof RigException) {
+            code = ExitCode.RIG_OR_IO;
+            message = "rig: " + t.getMessage();
+        } else if (t instanceof IOException) {
+            code = ExitCode.RIG_OR_IO;
+            message = "I/O: " + t.getMessage();
+        } else if (t instanceof StoreException) {
+            code = ExitCode.DATABASE;
+            message = "database: " + t.getMessage();
+        } else {
+            code = ExitCode.INTERNAL;
+            message = "internal error: " + t + (verbose ? "" : " (rerun with --verbose for details)");
+        }
+        err.println(cmd.getCommandName().equals("lodestep") ? "lodestep: " + message
+                : "lodestep " + cmd.getCommandName() + ": " + message);
+        if (verbose) {
+            t.printStackTrace(err);
+        }
+        err.flush();
+        return code;
+    }
+}
