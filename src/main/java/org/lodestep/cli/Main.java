@@ -24,6 +24,10 @@ import picocli.CommandLine.Option;
         subcommands = {
             DemoCommand.class,
             LeadsCommand.class,
+            MotorCommand.class,
+            ResonanceCommand.class,
+            QaCommand.class,
+            RigCommand.class,
             CommandLine.HelpCommand.class
         },
         footerHeading = "%nExit codes:%n",
