@@ -1,0 +1,98 @@
+package org.lodestep.report.html;
+
+import java.awt.Graphics2D;
+import java.awt.geom.Rectangle2D;
+import java.io.ByteArrayOutputStream;
+import java.io.IOException;
+import java.io.UncheckedIOException;
+import java.nio.charset.StandardCharsets;
+import java.nio.file.Path;
+import java.util.Objects;
+import java.util.concurrent.atomic.AtomicLong;
+
+import org.jfree.chart.ChartUtils;
+import org.jfree.chart.JFreeChart;
+import org.jfree.svg.SVGGraphics2D;
+import org.jfree.svg.ViewBox;
+
+/**
+ * A finished chart, ready to render as inline SVG (through JFreeSVG) or as PNG at its design size.
+ *
+ * <p>Made by {@link XyChart}, {@link HeatMapChart}, {@link HistogramChart} and {@link ControlChart}.
+ */
+public final class Chart {
+    /** Gives each SVG its own id prefix, so several charts can share one HTML document. */
+    private static final AtomicLong SERIAL = new AtomicLong();
+
+    private final JFreeChart chart;
+    private final int widthPx;
+    private final int heightPx;
+    private final String description;
+
+    Chart(JFreeChart chart, int widthPx, int heightPx, String description) {
+        if (widthPx < 100 || heightPx < 80) {
+            throw new IllegalArgumentException("chart size " + widthPx + " x " + heightPx
+                    + " px is too small (at least 100 x 80 px)");
+        }
+        this.chart = Objects.requireNonNull(chart, "chart");
+        this.widthPx = widthPx;
+        this.heightPx = heightPx;
+        this.description = description == null ? "" : description;
+        ChartStyle.apply(chart);
+    }
+
+    /** Design width in CSS pixels. */
+    public int widthPx() {
+        return widthPx;
+    }
+
+    /** Design height in CSS pixels. */
+    public int heightPx() {
+        return heightPx;
+    }
+
+    /** The chart as an {@code <svg>} element that scales to its container's width. */
+    public SvgFragment toSvg() {
+        SVGGraphics2D g = new SVGGraphics2D(widthPx, heightPx);
+        String id = "ch" + SERIAL.incrementAndGet();
+        g.setDefsKeyPrefix(id + "_");
+        chart.draw(g, new Rectangle2D.Double(0, 0, widthPx, heightPx));
+        String svg = g.getSVGElement(id, false, new ViewBox(0, 0, widthPx, heightPx), null, null);
+        return new SvgFragment(svg, description);
+    }
+
+    /** The chart as PNG bytes at {@code scale} times its design size (2 for sharp printing). */
+    public byte[] toPng(double scale) {
+        if (!(scale > 0 && scale <= 8)) {
+            throw new IllegalArgumentException("PNG scale must be in (0, 8], got " + scale);
+        }
+        int w = (int) Math.round(widthPx * scale);
+        int h = (int) Math.round(heightPx * scale);
+        java.awt.image.BufferedImage img = new java.awt.image.BufferedImage(w, h,
+                java.awt.image.BufferedImage.TYPE_INT_RGB);
+        Graphics2D g = img.createGraphics();
+        try {
+            g.scale(scale, scale);
+            chart.draw(g, new Rectangle2D.Double(0, 0, widthPx, heightPx));
+        } finally {
+            g.dispose();
+        }
+        ByteArrayOutputStream out = new ByteArrayOutputStream();
+        try {
+            ChartUtils.writeBufferedImageAsPNG(out, img);
+        } catch (IOException e) {
+            throw new UncheckedIOException(e);
+        }
+        return out.toByteArray();
+    }
+
+    /** Writes the chart as a PNG file, whole or not at all. */
+    public void writePng(Path file, double scale) throws IOException {
+        AtomicWrite.write(file, toPng(scale));
+    }
+
+    /** Writes the chart as a standalone SVG file, whole or not at all. */
+    public void writeSvg(Path file) throws IOException {
+        AtomicWrite.write(file, toSvg().asDocument().getBytes(StandardCharsets.UTF_8));
+    }
+}

@@ -1,0 +1,277 @@
+package org.lodestep.report.html;
+
+import java.awt.BasicStroke;
+import java.awt.Color;
+import java.util.ArrayList;
+import java.util.List;
+import java.util.Objects;
+
+import org.jfree.chart.JFreeChart;
+import org.jfree.chart.axis.LogarithmicAxis;
+import org.jfree.chart.axis.NumberAxis;
+import org.jfree.chart.axis.ValueAxis;
+import org.jfree.chart.plot.IntervalMarker;
+import org.jfree.chart.plot.PlotOrientation;
+import org.jfree.chart.plot.ValueMarker;
+import org.jfree.chart.plot.XYPlot;
+import org.jfree.chart.renderer.xy.XYLineAndShapeRenderer;
+import org.jfree.chart.ui.Layer;
+import org.jfree.chart.ui.LengthAdjustmentType;
+import org.jfree.chart.ui.RectangleAnchor;
+import org.jfree.chart.ui.RectangleInsets;
+import org.jfree.chart.ui.TextAnchor;
+import org.jfree.data.xy.XYSeries;
+import org.jfree.data.xy.XYSeriesCollection;
+
+/**
+ * Line and point charts over a numeric x axis, with shaded, labelled bands (resonance bands against step rate),
+ * vertical and horizontal reference lines, and fitted curves drawn over measured points.
+ *
+ * <pre>{@code
+ * Chart c = XyChart.builder("Response vs step rate", "step rate (full steps/s)", "vibration (m/s² RMS)")
+ *         .line("response", rates, levels)
+ *         .band(118, 131, "R1 118–131 steps/s", Status.FAIL)
+ *         .build();
+ * }</pre>
+ */
+public final class XyChart {
+    private XyChart() {
+    }
+
+    /** Starts a chart with its title and axis labels (put the unit in each label). */
+    public static Builder builder(String title, String xLabel, String yLabel) {
+        return new Builder(title, xLabel, yLabel);
+    }
+
+    /** Measured points with a fitted curve drawn over them (ring-down, RL step response). */
+    public static Chart fitOverData(String title, String xLabel, String yLabel, String dataLabel, double[] xData,
+                                    double[] yData, String fitLabel, double[] xFit, double[] yFit) {
+        return builder(title, xLabel, yLabel).points(dataLabel, xData, yData).line(fitLabel, xFit, yFit)
+                .describe(title + ": " + dataLabel + " as points, " + fitLabel + " as a line.").build();
+    }
+
+    private record Series(String name, double[] x, double[] y, boolean lines, boolean shapes) {
+    }
+
+    private record Band(double from, double to, String label, Status status) {
+    }
+
+    private record Line(boolean vertical, double at, String label, Status status) {
+    }
+
+    /** Collects series, bands and reference lines. */
+    public static final class Builder {
+        private final String title;
+        private final String xLabel;
+        private final String yLabel;
+        private final List<Series> series = new ArrayList<>();
+        private final List<Band> bands = new ArrayList<>();
+        private final List<Line> lines = new ArrayList<>();
+        private boolean logY;
+        private boolean yFromZero;
+        private int widthPx = 760;
+        private int heightPx = 380;
+        private String description;
+
+        private Builder(String title, String xLabel, String yLabel) {
+            this.title = Html.clean(title);
+            this.xLabel = Html.clean(xLabel);
+            this.yLabel = Html.clean(yLabel);
+        }
+
+        /** A series drawn as a line without markers. */
+        public Builder line(String name, double[] x, double[] y) {
+            series.add(checked(name, x, y, true, false));
+            return this;
+        }
+
+        /** A series drawn as markers only (measured samples). */
+        public Builder points(String name, double[] x, double[] y) {
+            series.add(checked(name, x, y, false, true));
+            return this;
+        }
+
+        /** A series drawn as a line with a marker at each point. */
+        public Builder lineWithPoints(String name, double[] x, double[] y) {
+            series.add(checked(name, x, y, true, true));
+            return this;
+        }
+
+        /**
+         * A shaded band from {@code fromX} to {@code toX} on the x axis, labelled at its top. The status sets the
+         * fill and the edge pattern (solid for fail, dashed for warning, dotted otherwise) and prefixes its symbol.
+         */
+        public Builder band(double fromX, double toX, String label, Status status) {
+            if (!Double.isFinite(fromX) || !Double.isFinite(toX) || toX < fromX) {
+                throw new IllegalArgumentException("band needs finite from <= to, got " + fromX + " .. " + toX);
+            }
+            bands.add(new Band(fromX, toX, Html.clean(label), Objects.requireNonNull(status, "status")));
+            return this;
+        }
+
+        /** A labelled vertical line at {@code x} (a predicted frequency, a limit). */
+        public Builder verticalLine(double x, String label, Status status) {
+            requireFinite(x, "line position");
+            lines.add(new Line(true, x, Html.clean(label), Objects.requireNonNull(status, "status")));
+            return this;
+        }
+
+        /** A labelled horizontal line at {@code y} (a threshold). */
+        public Builder horizontalLine(double y, String label, Status status) {
+            requireFinite(y, "line position");
+            lines.add(new Line(false, y, Html.clean(label), Objects.requireNonNull(status, "status")));
+            return this;
+        }
+
+        /** A logarithmic y axis (all y values must be positive). */
+        public Builder logY(boolean on) {
+            this.logY = on;
+            return this;
+        }
+
+        /** Makes the y axis start at zero. */
+        public Builder yFromZero(boolean on) {
+            this.yFromZero = on;
+            return this;
+        }
+
+        /** Design size in CSS pixels (default 760 x 380). */
+        public Builder size(int widthPx, int heightPx) {
+            this.widthPx = widthPx;
+            this.heightPx = heightPx;
+            return this;
+        }
+
+        /** The text alternative of the chart (default: title and series names). */
+        public Builder describe(String text) {
+            this.description = text;
+            return this;
+        }
+
+        private static Series checked(String name, double[] x, double[] y, boolean lines, boolean shapes) {
+            Objects.requireNonNull(x, "x");
+            Objects.requireNonNull(y, "y");
+            if (x.length != y.length) {
+                throw new IllegalArgumentException("series '" + name + "' has " + x.length + " x values but "
+                        + y.length + " y values");
+            }
+            return new Series(Html.clean(name), x.clone(), y.clone(), lines, shapes);
+        }
+
+        private static void requireFinite(double v, String what) {
+            if (!Double.isFinite(v)) {
+                throw new IllegalArgumentException(what + " must be finite, got " + v);
+            }
+        }
+
+        public Chart build() {
+            if (series.isEmpty()) {
+                throw new IllegalStateException("chart '" + title + "' has no series");
+            }
+            XYSeriesCollection data = new XYSeriesCollection();
+            XYLineAndShapeRenderer r = new XYLineAndShapeRenderer();
+            for (int i = 0; i < series.size(); i++) {
+                Series s = series.get(i);
+                // Two series may share a name; JFreeChart needs unique keys, the legend shows the name.
+                XYSeries xs = new XYSeries(new SeriesKey(i, s.name()), false, true);
+                for (int k = 0; k < s.x().length; k++) {
+                    if (Double.isFinite(s.x()[k]) && Double.isFinite(s.y()[k]) && (!logY || s.y()[k] > 0)) {
+                        xs.add(s.x()[k], s.y()[k], false);
+                    }
+                }
+                data.addSeries(xs);
+                r.setSeriesLinesVisible(i, s.lines());
+                r.setSeriesShapesVisible(i, s.shapes());
+                r.setSeriesPaint(i, ChartStyle.seriesPaint(i));
+                r.setSeriesStroke(i, ChartStyle.seriesStroke(i));
+                r.setSeriesShape(i, ChartStyle.seriesShape(i));
+                r.setSeriesShapesFilled(i, i % 2 == 0);
+            }
+            r.setDrawSeriesLineAsPath(true);
+            NumberAxis x = new NumberAxis(xLabel);
+            x.setAutoRangeIncludesZero(false);
+            ValueAxis y;
+            if (logY) {
+                LogarithmicAxis la = new LogarithmicAxis(yLabel);
+                la.setAllowNegativesFlag(false);
+                la.setStrictValuesFlag(false);
+                y = la;
+            } else {
+                NumberAxis na = new NumberAxis(yLabel);
+                na.setAutoRangeIncludesZero(yFromZero);
+                y = na;
+            }
+            XYPlot plot = new XYPlot(data, x, y, r);
+            plot.setOrientation(PlotOrientation.VERTICAL);
+            for (int i = 0; i < bands.size(); i++) {
+                plot.addDomainMarker(bandMarker(bands.get(i), i), Layer.BACKGROUND);
+            }
+            for (Line l : lines) {
+                ValueMarker m = new ValueMarker(l.at());
+                m.setPaint(ChartStyle.statusColor(l.status()));
+                m.setStroke(ChartStyle.dashed(1.5f, 6f, 4f));
+                m.setLabel(l.label());
+                m.setLabelFont(ChartStyle.TICK);
+                m.setLabelPaint(ChartStyle.INK);
+                m.setLabelBackgroundColor(new Color(255, 255, 255, 220));
+                if (l.vertical()) {
+                    m.setLabelAnchor(RectangleAnchor.BOTTOM_RIGHT);
+                    m.setLabelTextAnchor(TextAnchor.BOTTOM_LEFT);
+                    m.setLabelOffset(new RectangleInsets(4, 4, 18, 4));
+                    plot.addDomainMarker(m, Layer.FOREGROUND);
+                } else {
+                    m.setLabelAnchor(RectangleAnchor.TOP_RIGHT);
+                    m.setLabelTextAnchor(TextAnchor.BOTTOM_RIGHT);
+                    plot.addRangeMarker(m, Layer.FOREGROUND);
+                }
+            }
+            JFreeChart chart = new JFreeChart(title.isEmpty() ? null : title, ChartStyle.TITLE, plot,
+                    series.size() > 1);
+            String desc = description != null ? description : defaultDescription();
+            return new Chart(chart, widthPx, heightPx, desc);
+        }
+
+        private IntervalMarker bandMarker(Band b, int index) {
+            Color c = ChartStyle.statusColor(b.status());
+            IntervalMarker m = new IntervalMarker(b.from(), b.to());
+            m.setPaint(new Color(c.getRed(), c.getGreen(), c.getBlue(), b.status() == Status.FAIL ? 60 : 45));
+            m.setOutlinePaint(c);
+            m.setOutlineStroke(switch (b.status()) {
+                case FAIL -> new BasicStroke(1.5f);
+                case WARN -> ChartStyle.dashed(1.5f, 6f, 4f);
+                default -> ChartStyle.dashed(1.5f, 2f, 3f);
+            });
+            m.setLabel(b.status().symbol() + " " + b.label());
+            m.setLabelFont(ChartStyle.NOTE);
+            m.setLabelPaint(c.darker());
+            m.setLabelAnchor(RectangleAnchor.TOP_LEFT);
+            m.setLabelTextAnchor(TextAnchor.TOP_LEFT);
+            // Stagger labels of neighbouring bands so they do not print over each other.
+            m.setLabelOffset(new RectangleInsets(4 + (index % 3) * 16, 3, 2, 2));
+            m.setLabelOffsetType(LengthAdjustmentType.EXPAND);
+            return m;
+        }
+
+        private String defaultDescription() {
+            StringBuilder sb = new StringBuilder(title.isEmpty() ? "Chart" : title).append(": ").append(yLabel)
+                    .append(" against ").append(xLabel);
+            for (Band b : bands) {
+                sb.append("; ").append(b.status().word()).append(" band ").append(b.label());
+            }
+            return sb.append('.').toString();
+        }
+    }
+
+    /** A series key that is unique per chart but shows only the name in the legend. */
+    record SeriesKey(int index, String name) implements Comparable<SeriesKey> {
+        @Override
+        public int compareTo(SeriesKey o) {
+            return Integer.compare(index, o.index);
+        }
+
+        @Override
+        public String toString() {
+            return name;
+        }
+    }
+}
