@@ -5,6 +5,7 @@ import java.nio.file.AtomicMoveNotSupportedException;
 import java.nio.file.Files;
 import java.nio.file.Path;
 import java.nio.file.StandardCopyOption;
+import java.nio.file.attribute.PosixFilePermissions;
 
 /** Writes a file whole or not at all: a temporary file in the same folder, then an atomic move over the target. */
 final class AtomicWrite {
@@ -20,6 +21,7 @@ final class AtomicWrite {
         Path tmp = Files.createTempFile(dir, "." + abs.getFileName() + ".", ".tmp");
         try {
             Files.write(tmp, content);
+            readableByAll(tmp);
             try {
                 Files.move(tmp, abs, StandardCopyOption.ATOMIC_MOVE, StandardCopyOption.REPLACE_EXISTING);
             } catch (AtomicMoveNotSupportedException e) {
@@ -27,6 +29,13 @@ final class AtomicWrite {
             }
         } finally {
             Files.deleteIfExists(tmp);
+        }
+    }
+
+    /** A temporary file starts private (rw-------); a report is meant to be shared like any other file. */
+    private static void readableByAll(Path tmp) throws IOException {
+        if (tmp.getFileSystem().supportedFileAttributeViews().contains("posix")) {
+            Files.setPosixFilePermissions(tmp, PosixFilePermissions.fromString("rw-r--r--"));
         }
     }
 }

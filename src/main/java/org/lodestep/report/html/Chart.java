@@ -56,9 +56,25 @@ public final class Chart {
         SVGGraphics2D g = new SVGGraphics2D(widthPx, heightPx);
         String id = "ch" + SERIAL.incrementAndGet();
         g.setDefsKeyPrefix(id + "_");
+        // Two decimals of a CSS pixel are finer than any screen or printer; full doubles triple the file size.
+        g.setGeomDoubleConverter(Chart::twoDecimals);
         chart.draw(g, new Rectangle2D.Double(0, 0, widthPx, heightPx));
         String svg = g.getSVGElement(id, false, new ViewBox(0, 0, widthPx, heightPx), null, null);
         return new SvgFragment(svg, description);
+    }
+
+    static String twoDecimals(double v) {
+        if (!Double.isFinite(v)) {
+            return "0";
+        }
+        long scaled = Math.round(v * 100);
+        if (scaled % 100 == 0) {
+            return Long.toString(scaled / 100);
+        }
+        String sign = scaled < 0 ? "-" : "";
+        long a = Math.abs(scaled);
+        long frac = a % 100;
+        return sign + (a / 100) + "." + (frac % 10 == 0 ? Long.toString(frac / 10) : (frac < 10 ? "0" : "") + frac);
     }
 
     /** The chart as PNG bytes at {@code scale} times its design size (2 for sharp printing). */

@@ -28,6 +28,8 @@ final class ChartStyle {
         if (System.getProperty("java.awt.headless") == null) {
             System.setProperty("java.awt.headless", "true");
         }
+        // Rotated labels (the y axis) as SVG text, not glyph outlines: smaller, selectable, searchable.
+        org.jfree.chart.text.TextUtils.setUseDrawRotatedStringWorkaround(false);
     }
 
     static final Color INK = new Color(0x1d2733);
@@ -72,6 +74,18 @@ final class ChartStyle {
             case 2 -> ShapeUtils.createUpTriangle((float) (s / 2 + 0.5));
             case 3 -> ShapeUtils.createDiamond((float) (s / 2 + 0.5));
             default -> ShapeUtils.createDiagonalCross((float) (s / 2), 1f);
+        };
+    }
+
+    /** A smaller, hollow-friendly marker for series with many points. */
+    static Shape smallShape(int i) {
+        double s = 4.5;
+        return switch (i % 5) {
+            case 0 -> new Ellipse2D.Double(-s / 2, -s / 2, s, s);
+            case 1 -> new Rectangle2D.Double(-s / 2, -s / 2, s, s);
+            case 2 -> ShapeUtils.createUpTriangle((float) (s / 2 + 0.5));
+            case 3 -> ShapeUtils.createDiamond((float) (s / 2 + 0.5));
+            default -> ShapeUtils.createDiagonalCross((float) (s / 2), 0.7f);
         };
     }
 

@@ -7,6 +7,7 @@ import java.util.Objects;
 import org.jfree.chart.JFreeChart;
 import org.jfree.chart.annotations.XYTextAnnotation;
 import org.jfree.chart.axis.NumberAxis;
+import org.jfree.chart.plot.SeriesRenderingOrder;
 import org.jfree.chart.plot.ValueMarker;
 import org.jfree.chart.plot.XYPlot;
 import org.jfree.chart.renderer.xy.XYLineAndShapeRenderer;
@@ -136,7 +137,7 @@ public final class ControlChart {
 
         public Chart build() {
             XYSeries run = new XYSeries("values in run order", false, true);
-            XYSeries marked = new XYSeries("\u25C7 beyond a limit", false, true);
+            XYSeries marked = new XYSeries(flagged == null ? "beyond a limit" : "marked out of control", false, true);
             XYLineAndShapeRenderer r = new XYLineAndShapeRenderer(true, true);
             int markedCount = 0;
             for (int i = 0; i < values.length; i++) {
@@ -179,6 +180,7 @@ public final class ControlChart {
             ya.setAutoRangeIncludesZero(false);
             ya.setUpperMargin(0.15);
             XYPlot plot = new XYPlot(data, xa, ya, r);
+            plot.setSeriesRenderingOrder(SeriesRenderingOrder.FORWARD);
             double lo = Double.POSITIVE_INFINITY;
             double hi = Double.NEGATIVE_INFINITY;
             for (double v : new double[] {centre, upper, lower}) {
@@ -194,7 +196,9 @@ public final class ControlChart {
                 }
             }
             double pad = hi > lo ? (hi - lo) * 0.12 : Math.max(Math.abs(hi) * 0.05, 1e-9);
-            ya.setRange(lo - pad, hi + pad * 1.5);
+            // A chart of ranges (no lower limit, nothing negative) starts at zero, its natural floor.
+            boolean fromZero = Double.isNaN(lower) && lo >= 0;
+            ya.setRange(fromZero ? 0 : lo - pad, hi + pad * 1.5);
             if (!Double.isNaN(centre)) {
                 plot.addRangeMarker(line(centre, centreLabel, false), Layer.BACKGROUND);
             }

@@ -122,6 +122,17 @@ public final class HistogramChart {
             int k = bins > 0 ? bins : Math.max(5, Math.min(30, (int) Math.ceil(Math.sqrt(n))));
             double width = hi > lo ? (hi - lo) / k : Math.max(Math.abs(lo) * 0.01, 1e-9);
             double start = hi > lo ? lo : lo - width * k / 2.0;
+            if (!Double.isNaN(lower) && !Double.isNaN(upper) && upper > lower) {
+                // Put both spec limits on bin edges, so no bar straddles a limit.
+                double span = Math.max(hi, upper) - Math.min(lo, lower);
+                int inside = Math.max(2, (int) Math.round(k * (upper - lower) / span));
+                width = (upper - lower) / inside;
+                start = lower - Math.ceil((lower - Math.min(lo, lower)) / width) * width;
+                k = Math.min(500, (int) Math.ceil((Math.max(hi, upper) - start) / width - 1e-9));
+                if (start + k * width <= hi) {
+                    k++;
+                }
+            }
             int[] inside = new int[k];
             int[] outside = new int[k];
             int outCount = 0;
@@ -129,11 +140,14 @@ public final class HistogramChart {
                 if (!Double.isFinite(v)) {
                     continue;
                 }
-                int b = Math.min(k - 1, Math.max(0, (int) Math.floor((v - start) / width)));
+                int b = Math.min(k - 1, Math.max(0, (int) Math.floor((v - start) / width + 1e-9)));
                 if ((!Double.isNaN(lower) && v < lower) || (!Double.isNaN(upper) && v > upper)) {
                     outside[b]++;
                     outCount++;
                 } else {
+                    if (!Double.isNaN(upper) && b > 0 && start + b * width >= upper - 1e-9 * width) {
+                        b--; // a value exactly at the upper limit is in spec: keep it left of the line
+                    }
                     inside[b]++;
                 }
             }

@@ -62,6 +62,7 @@ final class HtmlStyle {
             dl.facts dd{margin:0;font-weight:600;text-align:right;font-variant-numeric:tabular-nums}
             figure{margin:1rem 0;padding:.5rem;border:1px solid var(--rule);border-radius:.25rem;background:#fff}
             figure svg{display:block;width:100%;height:auto;max-width:100%}
+            figure svg.wiring{max-width:46rem;margin:0 auto}
             figcaption{font-size:.88rem;color:var(--muted);padding:.4rem .25rem 0}
             figcaption strong{color:var(--ink)}
             aside.safety{margin:1rem 0;padding:.6rem .9rem;border:2px solid var(--warn);border-radius:.25rem;background:#fffaf0}

@@ -12,6 +12,7 @@ import org.jfree.chart.axis.NumberAxis;
 import org.jfree.chart.axis.ValueAxis;
 import org.jfree.chart.plot.IntervalMarker;
 import org.jfree.chart.plot.PlotOrientation;
+import org.jfree.chart.plot.SeriesRenderingOrder;
 import org.jfree.chart.plot.ValueMarker;
 import org.jfree.chart.plot.XYPlot;
 import org.jfree.chart.renderer.xy.XYLineAndShapeRenderer;
@@ -35,6 +36,9 @@ import org.jfree.data.xy.XYSeriesCollection;
  * }</pre>
  */
 public final class XyChart {
+    /** Above this many points a marker series is drawn as a thin line. */
+    static final int MAX_MARKERS = 200;
+
     private XyChart() {
     }
 
@@ -172,19 +176,23 @@ public final class XyChart {
             XYLineAndShapeRenderer r = new XYLineAndShapeRenderer();
             for (int i = 0; i < series.size(); i++) {
                 Series s = series.get(i);
+                // Hundreds of markers bury each other and bloat the SVG: a dense measured trace becomes a thin line.
+                boolean dense = s.shapes() && s.x().length > MAX_MARKERS;
                 // Two series may share a name; JFreeChart needs unique keys, the legend shows the name.
                 XYSeries xs = new XYSeries(new SeriesKey(i, s.name()), false, true);
-                for (int k = 0; k < s.x().length; k++) {
-                    if (Double.isFinite(s.x()[k]) && Double.isFinite(s.y()[k]) && (!logY || s.y()[k] > 0)) {
-                        xs.add(s.x()[k], s.y()[k], false);
+                double[][] xy = s.shapes() && !dense ? new double[][] {s.x(), s.y()}
+                        : Decimate.minMax(s.x(), s.y(), widthPx);
+                for (int k = 0; k < xy[0].length; k++) {
+                    if (Double.isFinite(xy[0][k]) && Double.isFinite(xy[1][k]) && (!logY || xy[1][k] > 0)) {
+                        xs.add(xy[0][k], xy[1][k], false);
                     }
                 }
                 data.addSeries(xs);
-                r.setSeriesLinesVisible(i, s.lines());
-                r.setSeriesShapesVisible(i, s.shapes());
+                r.setSeriesLinesVisible(i, s.lines() || dense);
+                r.setSeriesShapesVisible(i, s.shapes() && !dense);
                 r.setSeriesPaint(i, ChartStyle.seriesPaint(i));
-                r.setSeriesStroke(i, ChartStyle.seriesStroke(i));
-                r.setSeriesShape(i, ChartStyle.seriesShape(i));
+                r.setSeriesStroke(i, dense ? new BasicStroke(1f) : ChartStyle.seriesStroke(i));
+                r.setSeriesShape(i, s.x().length > 60 ? ChartStyle.smallShape(i) : ChartStyle.seriesShape(i));
                 r.setSeriesShapesFilled(i, i % 2 == 0);
             }
             r.setDrawSeriesLineAsPath(true);
@@ -203,6 +211,12 @@ public final class XyChart {
             }
             XYPlot plot = new XYPlot(data, x, y, r);
             plot.setOrientation(PlotOrientation.VERTICAL);
+            // Later series on top: a fitted curve is drawn over the data it was fitted to.
+            plot.setSeriesRenderingOrder(SeriesRenderingOrder.FORWARD);
+            if (!bands.isEmpty()) {
+                // Head room for the band labels above the data.
+                y.setUpperMargin(0.08 + 0.07 * Math.min(bands.size(), 3));
+            }
             for (int i = 0; i < bands.size(); i++) {
                 plot.addDomainMarker(bandMarker(bands.get(i), i), Layer.BACKGROUND);
             }
@@ -244,6 +258,7 @@ public final class XyChart {
             m.setLabel(b.status().symbol() + " " + b.label());
             m.setLabelFont(ChartStyle.NOTE);
             m.setLabelPaint(c.darker());
+            m.setLabelBackgroundColor(new Color(255, 255, 255, 215));
             m.setLabelAnchor(RectangleAnchor.TOP_LEFT);
             m.setLabelTextAnchor(TextAnchor.TOP_LEFT);
             // Stagger labels of neighbouring bands so they do not print over each other.

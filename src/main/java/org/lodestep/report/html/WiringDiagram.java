@@ -1,0 +1,263 @@
+package org.lodestep.report.html;
+
+import java.util.ArrayList;
+import java.util.LinkedHashMap;
+import java.util.LinkedHashSet;
+import java.util.List;
+import java.util.Map;
+import java.util.Objects;
+import java.util.Set;
+
+/**
+ * A small model of how a motor's leads go to a driver, and its drawing: coils (windings or half-windings) with their
+ * end leads and optional centre tap, grouped by phase, and where each lead goes: a driver terminal, a tie with other
+ * leads (series link), or insulated and unused.
+ *
+ * <p>Covers 4-, 5-, 6- and 8-lead motors in bipolar series, bipolar parallel, half-coil and unipolar connections. A
+ * 5-lead motor's shared common is one lead named as the tap of both coils.
+ *
+ * <pre>{@code
+ * WiringDiagram d = WiringDiagram.builder("Bipolar series, 6-lead")
+ *         .coil("A", "Black", "Green", "Yellow").coil("B", "Red", "Blue", "White")
+ *         .connect("Black", DriverTerminal.A_PLUS).connect("Green", DriverTerminal.A_MINUS)
+ *         .connect("Red", DriverTerminal.B_PLUS).connect("Blue", DriverTerminal.B_MINUS)
+ *         .insulate("Yellow").insulate("White")
+ *         .build();
+ * SvgFragment svg = d.toSvg();
+ * }</pre>
+ */
+public final class WiringDiagram {
+    private final String connection;
+    private final List<Coil> coils;
+    private final Map<String, Destination> destinations;
+    private final List<List<String>> ties;
+
+    private WiringDiagram(Builder b) {
+        this.connection = b.connection;
+        this.coils = List.copyOf(b.coils);
+        this.destinations = Map.copyOf(b.destinations);
+        List<List<String>> t = new ArrayList<>();
+        for (List<String> tie : b.ties) {
+            t.add(List.copyOf(tie));
+        }
+        this.ties = List.copyOf(t);
+    }
+
+    /** Starts a diagram; {@code connection} names it ("Bipolar series, 8-lead"). */
+    public static Builder builder(String connection) {
+        return new Builder(connection);
+    }
+
+    /**
+     * One coil: a whole winding, or one of the two half-windings of an 8-lead motor's phase.
+     *
+     * @param phase     "A" or "B"
+     * @param startLead the lead at the coil's start (dot end)
+     * @param endLead   the lead at its end
+     * @param tapLead   the centre tap's lead, or null
+     */
+    public record Coil(String phase, String startLead, String endLead, String tapLead) {
+        public Coil {
+            if (!"A".equals(phase) && !"B".equals(phase)) {
+                throw new IllegalArgumentException("coil phase must be A or B, got '" + phase + "'");
+            }
+            requireLabel(startLead, "start lead");
+            requireLabel(endLead, "end lead");
+            if (tapLead != null) {
+                requireLabel(tapLead, "tap lead");
+            }
+            if (startLead.equals(endLead) || startLead.equals(tapLead) || endLead.equals(tapLead)) {
+                throw new IllegalArgumentException("coil of phase " + phase + " names lead '"
+                        + (startLead.equals(endLead) || startLead.equals(tapLead) ? startLead : endLead) + "' twice");
+            }
+        }
+
+        private static void requireLabel(String s, String what) {
+            if (s == null || s.isBlank()) {
+                throw new IllegalArgumentException(what + " needs a label");
+            }
+        }
+    }
+
+    /** Where one lead goes. */
+    sealed interface Destination permits ToTerminal, ToTie, Insulated {
+    }
+
+    record ToTerminal(DriverTerminal terminal) implements Destination {
+    }
+
+    record ToTie(int index) implements Destination {
+    }
+
+    record Insulated() implements Destination {
+    }
+
+    /** The connection's name. */
+    public String connection() {
+        return connection;
+    }
+
+    /** The coils in drawing order (phase A first). */
+    public List<Coil> coils() {
+        return coils;
+    }
+
+    /** The leads wired to {@code terminal}, in coil order (two for a parallel connection). */
+    public List<String> leadsAt(DriverTerminal terminal) {
+        List<String> out = new ArrayList<>();
+        for (String lead : leads()) {
+            if (destinations.get(lead) instanceof ToTerminal t && t.terminal() == terminal) {
+                out.add(lead);
+            }
+        }
+        return out;
+    }
+
+    /** Groups of leads tied together and insulated (series links, joined commons). */
+    public List<List<String>> ties() {
+        return ties;
+    }
+
+    /** Leads insulated and left unconnected. */
+    public List<String> insulated() {
+        List<String> out = new ArrayList<>();
+        for (String lead : leads()) {
+            if (destinations.get(lead) instanceof Insulated) {
+                out.add(lead);
+            }
+        }
+        return out;
+    }
+
+    /** Every distinct lead in coil order. */
+    public List<String> leads() {
+        Set<String> s = new LinkedHashSet<>();
+        for (Coil c : coils) {
+            s.add(c.startLead());
+            if (c.tapLead() != null) {
+                s.add(c.tapLead());
+            }
+            s.add(c.endLead());
+        }
+        return List.copyOf(s);
+    }
+
+    Destination destination(String lead) {
+        return destinations.get(lead);
+    }
+
+    /** One-line summaries, terminal by terminal, then ties and insulated leads (also printed under the drawing). */
+    public List<String> summary() {
+        List<String> lines = new ArrayList<>();
+        for (DriverTerminal t : DriverTerminal.values()) {
+            List<String> at = leadsAt(t);
+            if (!at.isEmpty()) {
+                lines.add(t.label() + " \u2190 " + String.join(" + ", at) + (at.size() > 1 ? " (joined)" : ""));
+            }
+        }
+        for (int i = 0; i < ties.size(); i++) {
+            lines.add("J" + (i + 1) + ": " + String.join(" + ", ties.get(i)) + " tied together, insulated");
+        }
+        List<String> ins = insulated();
+        if (!ins.isEmpty()) {
+            lines.add("Insulate, do not connect: " + String.join(", ", ins));
+        }
+        return lines;
+    }
+
+    /** The drawing as an {@code <svg>} element. */
+    public SvgFragment toSvg() {
+        return WiringDiagramSvg.render(this);
+    }
+
+    /** Collects coils and lead destinations; {@link #build} checks that every lead goes somewhere exactly once. */
+    public static final class Builder {
+        private final String connection;
+        private final List<Coil> coils = new ArrayList<>();
+        private final Map<String, Destination> destinations = new LinkedHashMap<>();
+        private final List<List<String>> ties = new ArrayList<>();
+
+        private Builder(String connection) {
+            this.connection = Objects.requireNonNull(connection, "connection");
+        }
+
+        /** A coil without a tap. */
+        public Builder coil(String phase, String startLead, String endLead) {
+            return coil(phase, startLead, endLead, null);
+        }
+
+        /** A coil with a centre tap (tapLead may be null). */
+        public Builder coil(String phase, String startLead, String endLead, String tapLead) {
+            coils.add(new Coil(phase, startLead, endLead, tapLead));
+            return this;
+        }
+
+        /** Wires {@code lead} to a driver terminal; two leads on one terminal are joined there (parallel). */
+        public Builder connect(String lead, DriverTerminal terminal) {
+            return assign(lead, new ToTerminal(Objects.requireNonNull(terminal, "terminal")));
+        }
+
+        /** Ties leads together and insulates the joint (the series link of an 8-lead phase). */
+        public Builder tie(String... leads) {
+            if (leads.length < 2) {
+                throw new IllegalArgumentException("a tie needs at least two leads");
+            }
+            int index = ties.size();
+            for (String lead : leads) {
+                assign(lead, new ToTie(index));
+            }
+            ties.add(List.of(leads));
+            return this;
+        }
+
+        /** Insulates a lead and leaves it unconnected. */
+        public Builder insulate(String lead) {
+            return assign(lead, new Insulated());
+        }
+
+        private Builder assign(String lead, Destination d) {
+            Objects.requireNonNull(lead, "lead");
+            Destination old = destinations.putIfAbsent(lead, d);
+            if (old != null) {
+                throw new IllegalArgumentException("lead '" + lead + "' is given two destinations");
+            }
+            return this;
+        }
+
+        public WiringDiagram build() {
+            if (coils.isEmpty()) {
+                throw new IllegalStateException("a wiring diagram needs at least one coil");
+            }
+            Set<String> leads = new LinkedHashSet<>();
+            Map<String, Integer> uses = new LinkedHashMap<>();
+            for (Coil c : coils) {
+                for (String l : new String[] {c.startLead(), c.endLead(), c.tapLead()}) {
+                    if (l != null) {
+                        leads.add(l);
+                        uses.merge(l, 1, Integer::sum);
+                    }
+                }
+            }
+            for (Map.Entry<String, Integer> u : uses.entrySet()) {
+                // A lead may appear on two coils only as a shared tap (the 5-lead common).
+                if (u.getValue() > 1 && coils.stream().filter(c -> u.getKey().equals(c.tapLead())).count()
+                        != u.getValue()) {
+                    throw new IllegalArgumentException("lead '" + u.getKey() + "' is on two coils but not as a "
+                            + "shared centre tap");
+                }
+            }
+            for (String l : leads) {
+                if (!destinations.containsKey(l)) {
+                    throw new IllegalArgumentException("lead '" + l + "' has no destination (connect, tie or "
+                            + "insulate it)");
+                }
+            }
+            for (String l : destinations.keySet()) {
+                if (!leads.contains(l)) {
+                    throw new IllegalArgumentException("lead '" + l + "' is wired but is on no coil");
+                }
+            }
+            return new WiringDiagram(this);
+        }
+    }
+}
