@@ -35,6 +35,61 @@ public final class HistogramChart {
     private record Limit(double at, String label, boolean spec) {
     }
 
+    /** Equal-width bins from {@code start}; counts within and outside the limits, kept apart. */
+    record Bins(double start, double width, int[] inside, int[] outside) {
+        int outsideCount() {
+            int c = 0;
+            for (int o : outside) {
+                c += o;
+            }
+            return c;
+        }
+    }
+
+    /**
+     * Bins the finite values into about {@code k} bins. With both limits given, the limits fall on bin edges (no bar
+     * straddles a limit) and a value exactly at a limit is counted inside; NaN limits mean none.
+     */
+    static Bins bins(double[] values, double lower, double upper, int k) {
+        double lo = Double.POSITIVE_INFINITY;
+        double hi = Double.NEGATIVE_INFINITY;
+        for (double v : values) {
+            if (Double.isFinite(v)) {
+                lo = Math.min(lo, v);
+                hi = Math.max(hi, v);
+            }
+        }
+        double width = hi > lo ? (hi - lo) / k : Math.max(Math.abs(lo) * 0.01, 1e-9);
+        double start = hi > lo ? lo : lo - width * k / 2.0;
+        if (!Double.isNaN(lower) && !Double.isNaN(upper) && upper > lower) {
+            double span = Math.max(hi, upper) - Math.min(lo, lower);
+            int within = Math.max(2, (int) Math.round(k * (upper - lower) / span));
+            width = (upper - lower) / within;
+            start = lower - Math.ceil((lower - Math.min(lo, lower)) / width - 1e-9) * width;
+            k = Math.min(500, (int) Math.ceil((Math.max(hi, upper) - start) / width - 1e-9));
+            if (start + k * width <= hi) {
+                k = Math.min(500, k + 1);
+            }
+        }
+        int[] inside = new int[k];
+        int[] outside = new int[k];
+        for (double v : values) {
+            if (!Double.isFinite(v)) {
+                continue;
+            }
+            int b = Math.min(k - 1, Math.max(0, (int) Math.floor((v - start) / width + 1e-9)));
+            if ((!Double.isNaN(lower) && v < lower) || (!Double.isNaN(upper) && v > upper)) {
+                outside[b]++;
+            } else {
+                if (!Double.isNaN(upper) && b > 0 && start + b * width >= upper - 1e-9 * width) {
+                    b--; // a value exactly at the upper limit is in spec: keep it left of the line
+                }
+                inside[b]++;
+            }
+        }
+        return new Bins(start, width, inside, outside);
+    }
+
     /** Collects the values, the limits and the bin count. */
     public static final class Builder {
         private final String title;
@@ -119,44 +174,18 @@ public final class HistogramChart {
             if (n == 0) {
                 throw new IllegalArgumentException("histogram '" + title + "' has no finite value");
             }
-            int k = bins > 0 ? bins : Math.max(5, Math.min(30, (int) Math.ceil(Math.sqrt(n))));
-            double width = hi > lo ? (hi - lo) / k : Math.max(Math.abs(lo) * 0.01, 1e-9);
-            double start = hi > lo ? lo : lo - width * k / 2.0;
-            if (!Double.isNaN(lower) && !Double.isNaN(upper) && upper > lower) {
-                // Put both spec limits on bin edges, so no bar straddles a limit.
-                double span = Math.max(hi, upper) - Math.min(lo, lower);
-                int inside = Math.max(2, (int) Math.round(k * (upper - lower) / span));
-                width = (upper - lower) / inside;
-                start = lower - Math.ceil((lower - Math.min(lo, lower)) / width) * width;
-                k = Math.min(500, (int) Math.ceil((Math.max(hi, upper) - start) / width - 1e-9));
-                if (start + k * width <= hi) {
-                    k++;
-                }
-            }
-            int[] inside = new int[k];
-            int[] outside = new int[k];
-            int outCount = 0;
-            for (double v : values) {
-                if (!Double.isFinite(v)) {
-                    continue;
-                }
-                int b = Math.min(k - 1, Math.max(0, (int) Math.floor((v - start) / width + 1e-9)));
-                if ((!Double.isNaN(lower) && v < lower) || (!Double.isNaN(upper) && v > upper)) {
-                    outside[b]++;
-                    outCount++;
-                } else {
-                    if (!Double.isNaN(upper) && b > 0 && start + b * width >= upper - 1e-9 * width) {
-                        b--; // a value exactly at the upper limit is in spec: keep it left of the line
-                    }
-                    inside[b]++;
-                }
-            }
+            Bins h = HistogramChart.bins(values, lower, upper, bins > 0 ? bins
+                    : Math.max(5, Math.min(30, (int) Math.ceil(Math.sqrt(n)))));
+            int k = h.inside().length;
+            double start = h.start();
+            double width = h.width();
+            int outCount = h.outsideCount();
             XYSeries in = new XYSeries("within limits (" + (n - outCount) + ")", false, false);
             XYSeries out = new XYSeries("\u2716 outside limits (" + outCount + ")", false, false);
             for (int b = 0; b < k; b++) {
                 double centre = start + (b + 0.5) * width;
-                in.add(centre, inside[b]);
-                out.add(centre, outside[b]);
+                in.add(centre, h.inside()[b]);
+                out.add(centre, h.outside()[b]);
             }
             DefaultTableXYDataset data = new DefaultTableXYDataset();
             data.addSeries(in);

@@ -35,7 +35,7 @@ final class SampleReports {
                 .line("measured response", rate, level)
                 .band(288, 326, "R1 288\u2013326 steps/s: avoid", Status.FAIL)
                 .band(146, 161, "R2 146\u2013161 steps/s: cross quickly", Status.WARN)
-                .verticalLine(306.29, "predicted f\u2099 306 Hz", Status.INFO)
+                .verticalLine(306.29, "predicted f\u2099: 306 steps/s", Status.INFO)
                 .yFromZero(true)
                 .build();
     }
@@ -165,8 +165,14 @@ final class SampleReports {
                 .build();
     }
 
-    /** Everything the module draws, in one document, with hostile strings in every user field. */
+    private static final Map<String, HtmlReport> EVERYTHING = new java.util.concurrent.ConcurrentHashMap<>();
+
+    /** Everything the module draws, in one document, with hostile strings in every user field (built once each). */
     static HtmlReport everything(String hostile) {
+        return EVERYTHING.computeIfAbsent(hostile, SampleReports::buildEverything);
+    }
+
+    private static HtmlReport buildEverything(String hostile) {
         Map<String, String> card = new LinkedHashMap<>();
         card.put("Step angle", "1.8\u00B0 (200 steps/rev)");
         card.put("Winding resistance", "2.00 \u03A9");
