@@ -65,7 +65,7 @@ final class WiringDiagramSvg {
             }
             coilsInPhase = c.phase().equals(lastPhase) ? coilsInPhase + 1 : 1;
             lastPhase = c.phase();
-            int h = c.tapLead() == null ? 92 : 124;
+            int h = c.tapLead() == null ? 104 : 140;
             int top = y + 10;
             int bot = y + h - 10;
             long samePhase = d.coils().stream().filter(k -> k.phase().equals(c.phase())).count();
@@ -84,7 +84,7 @@ final class WiringDiagramSvg {
             drawPhaseLabel(body, e.getKey(), e.getValue()[0], e.getValue()[1]);
         }
 
-        Map<DriverTerminal, Integer> termY = terminalRows(d, phaseSpan);
+        Map<DriverTerminal, Integer> termY = terminalRows(d, phaseSpan, tags);
         StringBuilder wires = new StringBuilder();
         StringBuilder caps = new StringBuilder();
         Map<DriverTerminal, List<Integer>> laneRows = new EnumMap<>(DriverTerminal.class);
@@ -177,7 +177,7 @@ final class WiringDiagramSvg {
 
     private static void drawCoil(StringBuilder sb, WiringDiagram.Coil c, String name, int top, int bot) {
         boolean tapped = c.tapLead() != null;
-        int loops = tapped ? 8 : 6;
+        int loops = tapped ? 8 : 5;
         double bodyTop = top + 14;
         double bodyBot = bot - 14;
         double d = (bodyBot - bodyTop) / loops;
@@ -217,20 +217,42 @@ final class WiringDiagramSvg {
                 .append(Html.escape(phase)).append("</text>\n");
     }
 
-    private static Map<DriverTerminal, Integer> terminalRows(WiringDiagram d, Map<String, int[]> phaseSpan) {
+    private static Map<DriverTerminal, Integer> terminalRows(WiringDiagram d, Map<String, int[]> phaseSpan,
+                                                             List<Tag> tags) {
         Map<DriverTerminal, Integer> rows = new EnumMap<>(DriverTerminal.class);
         int[] a = phaseSpan.getOrDefault("A", new int[] {56, 150});
         int[] b = phaseSpan.getOrDefault("B", new int[] {a[1] + 40, a[1] + 134});
         int am = (a[0] + a[1]) / 2;
         int bm = (b[0] + b[1]) / 2;
-        rows.put(DriverTerminal.A_PLUS, am - 20);
-        rows.put(DriverTerminal.A_MINUS, am + 20);
-        rows.put(DriverTerminal.B_PLUS, bm - 20);
-        rows.put(DriverTerminal.B_MINUS, bm + 20);
+        List<Integer> taken = new ArrayList<>();
+        place(rows, taken, tags, DriverTerminal.A_PLUS, am - 20);
+        place(rows, taken, tags, DriverTerminal.A_MINUS, am + 20);
         if (!d.leadsAt(DriverTerminal.COMMON).isEmpty()) {
-            rows.put(DriverTerminal.COMMON, (a[1] + b[0]) / 2 + (bm - am < 140 ? 0 : 0));
+            place(rows, taken, tags, DriverTerminal.COMMON, (a[1] + b[0]) / 2);
         }
+        place(rows, taken, tags, DriverTerminal.B_PLUS, bm - 20);
+        place(rows, taken, tags, DriverTerminal.B_MINUS, bm + 20);
         return rows;
+    }
+
+    /**
+     * Puts a terminal near its wanted row, but never on a lead-tag row (a lead wire running on to a farther lane
+     * would lie on top of the terminal's wire) nor within a terminal's height of another terminal.
+     */
+    private static void place(Map<DriverTerminal, Integer> rows, List<Integer> taken, List<Tag> tags,
+                              DriverTerminal t, int wanted) {
+        for (int k = 0; k < 200; k++) {
+            int y = wanted + (k % 2 == 0 ? 1 : -1) * ((k + 1) / 2) * 2;
+            boolean clear = tags.stream().allMatch(tag -> Math.abs(tag.y() - y) >= 14)
+                    && taken.stream().allMatch(o -> Math.abs(o - y) >= 32);
+            if (clear) {
+                rows.put(t, y);
+                taken.add(y);
+                return;
+            }
+        }
+        rows.put(t, wanted);
+        taken.add(wanted);
     }
 
     private static StringBuilder drawDriver(Map<DriverTerminal, Integer> termY,
