@@ -12,6 +12,7 @@ import java.nio.file.Path;
 import javax.imageio.ImageIO;
 
 import org.junit.jupiter.api.Test;
+import org.lodestep.report.PixelStats;
 import org.junit.jupiter.api.io.TempDir;
 import org.w3c.dom.Document;
 

@@ -1,12 +1,12 @@
-package org.lodestep.report.html;
+package org.lodestep.report;
 
 import java.awt.image.BufferedImage;
 
 /** Simple pixel statistics of a region, to tell a drawn chart from an empty box. */
-record PixelStats(double meanLuma, double stdLuma, double inkFraction) {
+public record PixelStats(double meanLuma, double stdLuma, double inkFraction) {
 
     /** Luma statistics of a region; "ink" is any pixel at least 24 levels off the region's most common colour. */
-    static PixelStats of(BufferedImage img, int x, int y, int w, int h) {
+    public static PixelStats of(BufferedImage img, int x, int y, int w, int h) {
         int x0 = Math.max(0, x);
         int y0 = Math.max(0, y);
         int x1 = Math.min(img.getWidth(), x + w);
