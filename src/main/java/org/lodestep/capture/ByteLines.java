@@ -24,6 +24,8 @@ final class ByteLines {
     private int start;
     private int end;
     private int lineNumber;
+    /** Index just after the last newline in the buffer; every line starting before it is whole in the buffer. */
+    private int safeEnd;
 
     ByteLines(InputStream in, String source, int bufferBytes) {
         this.in = in;
@@ -87,6 +89,32 @@ final class ByteLines {
         } else {
             limit += n;
         }
+        safeEnd = 0;
+        for (int i = limit - 1; i >= pos; i--) {
+            if (buf[i] == '\n') {
+                safeEnd = i + 1;
+                break;
+            }
+        }
+    }
+
+    /** Position of the first unread byte. */
+    int pos() {
+        return pos;
+    }
+
+    /**
+     * Index just after the last newline read so far: a line starting at {@link #pos()} below this is whole in the
+     * buffer, so a parser may scan it without checking for the buffer's end.
+     */
+    int safeEnd() {
+        return safeEnd;
+    }
+
+    /** Marks the line starting at {@link #pos()} as consumed by a caller that parsed it in place. */
+    void consumeLine(int nextPos) {
+        pos = nextPos;
+        lineNumber++;
     }
 
     byte[] buffer() { return buf; }

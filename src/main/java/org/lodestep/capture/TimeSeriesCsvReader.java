@@ -21,8 +21,9 @@ import ch.randelshofer.fastdoubleparser.JavaDoubleParser;
  * {@code # key=value} lines before the header become {@link #metadata()} (keys in lower case); later comment lines and
  * blank lines are skipped. Fields may be quoted.
  *
- * <p><b>Speed.</b> Rows are split straight from the bytes and numbers parsed with FastDoubleParser; the rare row
- * holding a quote character goes through Commons CSV instead. Memory is bounded by one read buffer and the caller's
+ * <p><b>Speed.</b> Rows of the plain shape are parsed in place in the read buffer: plain decimals exactly by
+ * {@link PlainDecimal}, other numbers by FastDoubleParser. Any other row (spaces, quotes, comments, errors) takes a
+ * general path that splits the line first; a row holding a quote character goes through Commons CSV. Memory is bounded by one read buffer and the caller's
  * block, whatever the file's length.
  *
  * <p><b>Errors.</b> A cell that is empty, not a number, NaN or infinite, a row with the wrong number of fields, and a
@@ -49,6 +50,7 @@ public final class TimeSeriesCsvReader implements SampleStream {
     private long frameIndex;
     private double rowTimeS;
     private final byte[] scratch = new byte[64];
+    private final int[] numberEnd = new int[1];
     private boolean closed;
 
     private TimeSeriesCsvReader(InputStream in, String source) throws IOException, InputFormatException {
@@ -374,7 +376,15 @@ public final class TimeSeriesCsvReader implements SampleStream {
             pendingPos += take;
             k = take;
         }
-        while (k < maxFrames && lines.next()) {
+        while (k < maxFrames) {
+            k += parseWholeLinesInPlace(dest, offset + k, maxFrames - k);
+            if (k >= maxFrames) {
+                break;
+            }
+            // The next line is not whole in the buffer, or is not of the plain shape: the general path handles it.
+            if (!lines.next()) {
+                break;
+            }
             if (!parseRow(dest, offset + k)) {
                 continue;
             }
@@ -385,6 +395,99 @@ public final class TimeSeriesCsvReader implements SampleStream {
             k++;
         }
         return k == 0 && maxFrames > 0 ? -1 : k;
+    }
+
+    /**
+     * The fast path: parses rows of the plain shape (unquoted numbers separated by the delimiter, no spaces, ending
+     * in a newline) straight from the read buffer. Stops before the first row that is not whole in the buffer or
+     * not plain, leaving it to {@link #parseRow}, which reads every shape and words every error.
+     *
+     * @return the number of rows parsed
+     */
+    private int parseWholeLinesInPlace(double[][] dest, int at, int max) throws InputFormatException {
+        byte[] b = lines.buffer();
+        int p = lines.pos();
+        int safe = lines.safeEnd();
+        int width = columns.width();
+        int timeCol = columns.timeIndex;
+        int[] channelOf = channelOfColumn;
+        byte delim = (byte) columns.delimiter;
+        int[] end = numberEnd;
+        int rows = 0;
+        rowLoop:
+        while (rows < max && p < safe) {
+            int q = p;
+            double timeS = 0;
+            for (int col = 0; col < width; col++) {
+                double v = PlainDecimal.parse(b, q, decimalComma, end);
+                if (Double.isNaN(v)) {
+                    v = generalNumber(b, q, delim);
+                    if (Double.isNaN(v)) {
+                        break rowLoop;
+                    }
+                }
+                q = end[0];
+                byte c = b[q];
+                if (col < width - 1) {
+                    if (c != delim) {
+                        break rowLoop;
+                    }
+                } else if (c == '\r' && b[q + 1] == '\n') {
+                    q++;
+                } else if (c != '\n') {
+                    break rowLoop;
+                }
+                q++;
+                int ch = channelOf[col];
+                if (ch >= 0) {
+                    dest[ch][at + rows] = v;
+                } else {
+                    timeS = v;
+                }
+            }
+            if (timeCol >= 0) {
+                axis.check(frameIndex, timeS * columns.timeToSeconds, lines.lineNumber() + 1);
+            }
+            lines.consumeLine(q);
+            p = q;
+            frameIndex++;
+            rows++;
+        }
+        return rows;
+    }
+
+    /**
+     * A number the plain parser declined (exponent, many digits): parsed by FastDoubleParser up to the next
+     * delimiter or line end; NaN when it is not a finite number, so the general path words the error.
+     */
+    private double generalNumber(byte[] b, int from, byte delim) {
+        int q = from;
+        while (b[q] != delim && b[q] != '\n' && b[q] != '\r' && b[q] != '"' && b[q] != ' ') {
+            q++;
+        }
+        numberEnd[0] = q;
+        if (q == from || decimalComma && hasComma(b, from, q)) {
+            return Double.NaN;
+        }
+        byte last = b[q - 1];
+        if ((last < '0' || last > '9') && last != '.') {
+            return Double.NaN;
+        }
+        try {
+            double v = JavaDoubleParser.parseDouble(b, from, q - from);
+            return Double.isFinite(v) ? v : Double.NaN;
+        } catch (NumberFormatException e) {
+            return Double.NaN;
+        }
+    }
+
+    private static boolean hasComma(byte[] b, int from, int to) {
+        for (int i = from; i < to; i++) {
+            if (b[i] == ',') {
+                return true;
+            }
+        }
+        return false;
     }
 
     @Override

@@ -240,4 +240,43 @@ class TimeSeriesCsvReaderTest {
         r.close();
         assertThrows(IOException.class, () -> r.read(new double[2][4], 0, 4));
     }
+
+    /**
+     * Rows of every shape the reader meets, mixed in one file: each must give the same value whichever parser path
+     * took it. The expected values are the JDK's Double.parseDouble of the same text.
+     */
+    @Test
+    void everyRowShapeGivesTheSameValuesAsTheJdkParser() throws Exception {
+        String[] values = {"0.5", "1.0E-5", "-2.5e3", "0.12345678901234567", "  7.25 ", "\"3.5\"", "+4", "-.5", "6."};
+        StringBuilder sb = new StringBuilder("# sample_rate_hz=100\r\nx_v,y_v\r\n");
+        int n = 3000;   // many rows, so the fast path runs between the odd ones and across reads
+        for (int i = 0; i < n; i++) {
+            String a = values[i % values.length];
+            String b = values[(i / values.length) % values.length];
+            sb.append(a).append(',').append(b).append(i % 2 == 0 ? "\r\n" : "\n");
+        }
+        try (TimeSeriesCsvReader r = TimeSeriesCsvReader.open(TestStreams.text(sb.toString()), "mixed.csv")) {
+            double[][] d = TestStreams.readAll(r, 97);
+            assertEquals(n, d[0].length);
+            for (int i = 0; i < n; i++) {
+                String a = values[i % values.length].replace("\"", "").strip();
+                String b = values[(i / values.length) % values.length].replace("\"", "").strip();
+                assertEquals(Double.parseDouble(a), d[0][i], "row " + i);
+                assertEquals(Double.parseDouble(b), d[1][i], "row " + i);
+            }
+        }
+    }
+
+    @Test
+    void reportsBadCellFoundAfterManyPlainRowsAtItsLine() {
+        StringBuilder sb = new StringBuilder("time_s;a_g\n");
+        for (int i = 0; i < 9000; i++) {
+            sb.append(TestStreams.fixed(i / 1000.0, 3).replace('.', ',')).append(';').append(i == 8000 ? "1e" : "0,5")
+                    .append('\n');
+        }
+        InputFormatException e = failureOf(sb.toString());
+        assertEquals(8002, e.line());
+        assertEquals("a_g", e.column());
+        assertEquals("1e", e.text());
+    }
 }
