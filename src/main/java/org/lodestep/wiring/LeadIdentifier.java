@@ -70,7 +70,7 @@ public final class LeadIdentifier {
             }
         }
         if (groupsDecided && !singletons.isEmpty()) {
-            findings.add(WindingChecks.openWinding(singletons, m.leads().size()));
+            findings.add(WindingChecks.openWinding(singletons, windings, m.leads().size()));
         }
         WindingChecks.imbalance(topology, windings, s).ifPresent(findings::add);
         findings.sort(Comparator.comparing(Finding::severity).reversed());

@@ -14,8 +14,8 @@ import java.util.OptionalDouble;
  * <p>Planning: for 4, 5, 6 and 8 leads the session keeps every healthy layout still consistent with the readings
  * ({@link MotorHypotheses}) and asks for the pair whose outcome (open, one coil, two coils) splits them most evenly
  * (fewest expected survivors: the sum of squared outcome counts). Once one layout is left, or none fits (a faulty
- * motor, or another lead count), it asks for the pairs {@link LeadIdentifier} still needs, and finally for every
- * pair. Not thread-safe.
+ * motor, or another lead count), it asks for the pairs {@link LeadIdentifier} still needs, and then (faulty motor) for every
+ * remaining pair, so that the findings rest on the whole matrix. Not thread-safe.
  */
 public final class ProbeSession {
     /** Largest ratio between per-coil values of one layout's finite readings for them to be the same coil size. */
@@ -98,13 +98,24 @@ public final class ProbeSession {
         return LeadIdentifier.identify(matrix(), settings);
     }
 
-    /** Whether the answer is certain: every pair measured, or the identification is determined and no rival layout fits. */
+    /** Whether the answer is certain: every pair measured, or the readings settle the layout (see class notes). */
     public boolean determined() {
         ResistanceMatrix m = matrix();
         if (m.unmeasuredPairs().isEmpty()) {
             return true;
         }
-        return LeadIdentifier.identify(m, settings).determined() && consistentLayouts(m).size() <= 1;
+        return settled(LeadIdentifier.identify(m, settings), consistentLayouts(m));
+    }
+
+    /**
+     * Certain when the identification needs no more pairs and, for a lead count with known layouts, exactly one
+     * layout is left; when none is left the motor is faulty and every pair is measured, so findings see everything.
+     */
+    private boolean settled(Identification id, List<int[][]> alive) {
+        if (!id.determined()) {
+            return false;
+        }
+        return layouts.isEmpty() || alive.size() == 1;
     }
 
     /** The pair to measure next, or empty once {@link #determined()}. */
@@ -116,7 +127,7 @@ public final class ProbeSession {
         }
         Identification id = LeadIdentifier.identify(m, settings);
         List<int[][]> alive = consistentLayouts(m);
-        if (id.determined() && alive.size() <= 1) {
+        if (settled(id, alive)) {
             return Optional.empty();
         }
         if (alive.size() > 1) {

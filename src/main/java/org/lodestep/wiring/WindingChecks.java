@@ -83,7 +83,7 @@ final class WindingChecks {
                 double a = h1.getAsDouble();
                 double b = h2.getAsDouble();
                 double asym = Math.abs(a - b) / ((a + b) / 2);
-                if (asym > s.imbalanceTolerance()) {
+                if (asym > s.imbalanceTolerance() && Math.abs(a - b) > allowance) {
                     String low = a < b ? e1 : e2;
                     out.add(new Finding(FindingCode.TAP_ASYMMETRY, Severity.WARNING, String.format(Locale.ROOT,
                             "The halves of winding %s-%s differ by %.1f %% (%s-%s %s, %s-%s %s; tolerance %.0f %%):"
@@ -159,12 +159,18 @@ final class WindingChecks {
                 + " the motor.", p, ohm(u.resistanceOhm()), ohm(limitOhm), p), List.of(p.a(), p.b()));
     }
 
-    static Finding openWinding(List<String> singletons, int leadCount) {
+    static Finding openWinding(List<String> singletons, List<Winding> windings, int leadCount) {
         String what;
-        if (singletons.size() == 1) {
+        List<Winding> bare = windings.stream().filter(w -> w.tap() == null && !w.halfWinding()).toList();
+        if (singletons.size() == 1 && leadCount == 6 && bare.size() == 1) {
+            Winding w = bare.get(0);
+            what = "Lead " + singletons.get(0) + " has no continuity to any other lead; with " + w.ends().get(0)
+                    + " and " + w.ends().get(1) + " it most likely formed a centre-tapped winding whose half to "
+                    + singletons.get(0) + " is open (broken lead or burnt coil).";
+        } else if (singletons.size() == 1) {
             what = "Lead " + singletons.get(0) + " has no continuity to any other lead: a broken lead or an open"
                     + " coil behind it.";
-        } else if (singletons.size() == 2 && leadCount <= 4) {
+        } else if (singletons.size() == 2 && (leadCount == 4 || leadCount == 8)) {
             what = "Leads " + singletons.get(0) + " and " + singletons.get(1) + " connect to nothing: the winding"
                     + " between them is open (broken lead or burnt coil).";
         } else {
@@ -181,7 +187,6 @@ final class WindingChecks {
         }
         Winding min = windings.get(0);
         Winding max = windings.get(0);
-        double sum = 0;
         for (Winding w : windings) {
             if (w.resistanceOhm() < min.resistanceOhm()) {
                 min = w;
@@ -189,11 +194,11 @@ final class WindingChecks {
             if (w.resistanceOhm() > max.resistanceOhm()) {
                 max = w;
             }
-            sum += w.resistanceOhm();
         }
-        double mean = sum / windings.size();
-        double imbalance = (max.resistanceOhm() - min.resistanceOhm()) / mean;
-        if (!(imbalance > s.imbalanceTolerance())) {
+        double imbalance = imbalance(windings.stream().mapToDouble(Winding::resistanceOhm).toArray());
+        // Probe contact alone can make two readings differ by up to the allowance: not a motor fault.
+        if (!(imbalance > s.imbalanceTolerance())
+                || max.resistanceOhm() - min.resistanceOhm() <= s.contactAllowanceOhm()) {
             return Optional.empty();
         }
         String unit = t == Topology.FOUR_LEAD || t == Topology.SIX_LEAD ? "Phase" : "Half-winding";
@@ -203,6 +208,19 @@ final class WindingChecks {
                 + " shorted turns, and the motor will run unevenly.", unit, 100 * imbalance, name(max),
                 ohm(max.resistanceOhm()), name(min), ohm(min.resistanceOhm()), 100 * s.imbalanceTolerance(),
                 name(max), name(min)), List.of()));
+    }
+
+    /** (max − min)/mean of the values (REFERENCE-CHECKS item 4), as a fraction. */
+    static double imbalance(double... values) {
+        double min = Double.POSITIVE_INFINITY;
+        double max = Double.NEGATIVE_INFINITY;
+        double sum = 0;
+        for (double v : values) {
+            min = Math.min(min, v);
+            max = Math.max(max, v);
+            sum += v;
+        }
+        return (max - min) / (sum / values.length);
     }
 
     private static String name(Winding w) {
