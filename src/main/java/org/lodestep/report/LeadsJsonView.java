@@ -26,7 +26,7 @@ public final class LeadsJsonView {
 
     /** A winding; {@code resistanceAtReferenceOhm} is null without a measurement temperature. */
     public record WindingJson(List<String> ends, String tap, double resistanceOhm, List<Double> halfResistancesOhm,
-                              boolean halfWinding, Double resistanceAtReferenceOhm) {
+                              boolean halfWinding, boolean resistanceMeasured, Double resistanceAtReferenceOhm) {
     }
 
     /** A finding. */
@@ -51,7 +51,7 @@ public final class LeadsJsonView {
             Winding w = id.windings().get(i);
             Double atRef = id.windingsAtReferenceOhm().isEmpty() ? null : id.windingsAtReferenceOhm().get(i);
             windings.add(new WindingJson(w.ends(), w.tap(), w.resistanceOhm(), w.halfResistancesOhm(), w.halfWinding(),
-                    atRef));
+                    w.resistanceMeasured(), atRef));
         }
         List<FindingJson> findings = new ArrayList<>();
         for (Finding f : id.findings()) {

@@ -33,7 +33,7 @@ public final class LeadIdentifier {
             switch (g.size()) {
                 case 1 -> singletons.add(g.get(0));
                 case 2 -> windings.add(new Winding(g, null, m.ohms(LeadPair.of(g.get(0), g.get(1))).getAsDouble(),
-                        List.of(), false));
+                        List.of(), false, true));
                 case 3, 5 -> {
                     HubFit fit = new HubFit(g, m);
                     if (fit.best != null) {
@@ -61,7 +61,7 @@ public final class LeadIdentifier {
         boolean groupsDecided = cg.undecided.isEmpty();
         Topology topology = groupsDecided && allStructured ? topologyOf(sizes) : Topology.UNKNOWN;
         if (topology == Topology.EIGHT_LEAD) {
-            windings = windings.stream().map(w -> new Winding(w.ends(), null, w.resistanceOhm(), List.of(), true))
+            windings = windings.stream().map(w -> new Winding(w.ends(), null, w.resistanceOhm(), List.of(), true, true))
                     .toList();
         }
         for (ReadingUse u : cg.uses) {

@@ -150,10 +150,21 @@ public final class ProbeSession {
                 return Optional.of(best);
             }
         }
+        // One layout left: confirm it, joining predicted windings first (one continuity reading settles many pairs).
+        LeadPair fallback = null;
         for (LeadPair p : id.missingPairs()) {
-            if (!m.isMeasured(p)) {
+            if (m.isMeasured(p)) {
+                continue;
+            }
+            if (alive.size() == 1 && alive.get(0)[leads.indexOf(p.a())][leads.indexOf(p.b())] > 0) {
                 return Optional.of(p);
             }
+            if (fallback == null) {
+                fallback = p;
+            }
+        }
+        if (fallback != null) {
+            return Optional.of(fallback);
         }
         return Optional.of(unmeasured.get(0));
     }

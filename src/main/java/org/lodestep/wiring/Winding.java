@@ -12,9 +12,11 @@ import java.util.Objects;
  *                             pair was not measured)
  * @param halfResistancesOhm   tap-to-first-end and tap-to-second-end resistances in ohms; empty without a tap
  * @param halfWinding          true for one half of a phase (8-lead coils, 5-lead coils from the common lead)
+ * @param resistanceMeasured   true when {@code resistanceOhm} is a reading, false when it follows from other readings
+ *                             by the series relation (and so carries their contact resistance)
  */
 public record Winding(List<String> ends, String tap, double resistanceOhm, List<Double> halfResistancesOhm,
-                      boolean halfWinding) {
+                      boolean halfWinding, boolean resistanceMeasured) {
     public Winding {
         ends = List.copyOf(ends);
         if (ends.size() != 2) {

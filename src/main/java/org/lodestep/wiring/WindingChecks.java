@@ -27,13 +27,15 @@ final class WindingChecks {
             String e2 = c.ends().get(1);
             double h1 = m.ohms(LeadPair.of(c.hub(), e1)).orElse(c.coilOhm()[0]);
             double h2 = m.ohms(LeadPair.of(c.hub(), e2)).orElse(c.coilOhm()[1]);
-            double ee = m.ohms(LeadPair.of(e1, e2)).orElse(h1 + h2);
-            out.add(new Winding(List.of(e1, e2), c.hub(), ee, List.of(h1, h2), false));
+            OptionalDouble measured = m.ohms(LeadPair.of(e1, e2));
+            out.add(new Winding(List.of(e1, e2), c.hub(), measured.orElse(h1 + h2), List.of(h1, h2), false,
+                    measured.isPresent()));
         } else {
             for (int i = 0; i < c.ends().size(); i++) {
                 String e = c.ends().get(i);
-                double h = m.ohms(LeadPair.of(c.hub(), e)).orElse(c.coilOhm()[i]);
-                out.add(new Winding(List.of(c.hub(), e), null, h, List.of(), true));
+                OptionalDouble measured = m.ohms(LeadPair.of(c.hub(), e));
+                out.add(new Winding(List.of(c.hub(), e), null, measured.orElse(c.coilOhm()[i]), List.of(), true,
+                        measured.isPresent()));
             }
         }
         return out;
@@ -181,7 +183,9 @@ final class WindingChecks {
                 + " replacing.", singletons);
     }
 
-    static Optional<Finding> imbalance(Topology t, List<Winding> windings, IdentifySettings s) {
+    static Optional<Finding> imbalance(Topology t, List<Winding> all, IdentifySettings s) {
+        // Values derived from other readings carry several contact resistances: compare readings only.
+        List<Winding> windings = all.stream().filter(Winding::resistanceMeasured).toList();
         if (t == Topology.UNKNOWN || windings.size() < 2) {
             return Optional.empty();
         }
