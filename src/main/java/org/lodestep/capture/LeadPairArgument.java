@@ -64,13 +64,14 @@ public final class LeadPairArgument {
             return OptionalDouble.of(Double.POSITIVE_INFINITY);
         }
         double factor = 1;
+        if (t.toLowerCase(Locale.ROOT).endsWith("ohm") || t.endsWith("Ω")) {
+            t = t.replaceAll("(?i)\\s*(ohm|Ω)$", "");
+        }
         if (!t.isEmpty()) {
             char last = t.charAt(t.length() - 1);
             if (last == 'm' || last == 'k' || last == 'K' || last == 'M') {
                 factor = last == 'm' ? 1e-3 : last == 'M' ? 1e6 : 1e3;
-                t = t.substring(0, t.length() - 1);
-            } else if (t.toLowerCase(Locale.ROOT).endsWith("ohm") || t.endsWith("Ω")) {
-                t = t.replaceAll("(?i)\\s*(ohm|Ω)$", "");
+                t = t.substring(0, t.length() - 1).strip();
             }
         }
         OptionalDouble v = ResistanceValues.number(t, true);

@@ -136,6 +136,11 @@ public final class ResistanceCsvReader {
             if (ResistanceValues.isOpen(cell)) {
                 return Double.POSITIVE_INFINITY;
             }
+            if (cell.strip().startsWith("-") && ResistanceValues.number(cell.strip().substring(1), decimalComma)
+                    .isPresent()) {
+                throw new InputFormatException(source, line, column, cell, "is negative: expected a resistance >= 0"
+                        + " (a negative value is a typing error)");
+            }
             OptionalDouble v = ResistanceValues.number(cell, decimalComma);
             if (v.isEmpty()) {
                 throw new InputFormatException(source, line, column, cell, "is not a resistance: expected a number"
@@ -154,6 +159,10 @@ public final class ResistanceCsvReader {
     private static void readPairs(List<Row> rows, Reading r) throws InputFormatException {
         List<String> header = rows.get(0).cells;
         double factor = ResistanceValues.unitFactor(header.get(2));
+        if (Double.isNaN(factor)) {
+            throw new InputFormatException(r.source, rows.get(0).line, "3", header.get(2).strip(),
+                    "has no unit: expected resistance_ohm, _mohm, _kohm, _Mohm, or a unit in brackets ([Ω], [kΩ] ...)");
+        }
         for (Row row : rows.subList(1, rows.size())) {
             List<String> c = row.cells;
             if (c.size() != 3 && !(c.size() > 3 && c.subList(3, c.size()).stream().allMatch(String::isBlank))) {
