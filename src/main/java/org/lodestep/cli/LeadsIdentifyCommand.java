@@ -7,7 +7,6 @@ import java.util.List;
 import java.util.OptionalDouble;
 import java.util.concurrent.Callable;
 
-import org.lodestep.capture.InputFormatException;
 import org.lodestep.capture.LeadPairArgument;
 import org.lodestep.capture.LeadPairReading;
 import org.lodestep.capture.ResistanceCsvReader;
@@ -94,7 +93,7 @@ final class LeadsIdentifyCommand implements Callable<Integer> {
     }
 
     /** The readings of a file plus command-line readings (which replace the file's value for the same pair). */
-    static ResistanceMatrix matrix(ResistanceReadings r, List<LeadPairReading> extra) throws InputFormatException {
+    static ResistanceMatrix matrix(ResistanceReadings r, List<LeadPairReading> extra) {
         ResistanceMatrix.Builder b = ResistanceMatrix.builder();
         r.leads().forEach(b::lead);
         List<LeadPairReading> all = new ArrayList<>(r.readings());
