@@ -104,9 +104,11 @@ final class WiringDiagramSvg {
                         .append("\">insulate</text>\n");
             }
         }
+        int laneIndex = 0;
         for (Map.Entry<DriverTerminal, List<Integer>> e : laneRows.entrySet()) {
             DriverTerminal term = e.getKey();
-            int lane = LANE_X + LANE_STEP * term.ordinal();
+            // One lane per terminal in use, in terminal order (EnumMap iterates by ordinal).
+            int lane = LANE_X + LANE_STEP * laneIndex++;
             int ty = termY.get(term);
             String color = wireColor(term);
             String dash = wireDash(term);
@@ -224,14 +226,22 @@ final class WiringDiagramSvg {
         int[] b = phaseSpan.getOrDefault("B", new int[] {a[1] + 40, a[1] + 134});
         int am = (a[0] + a[1]) / 2;
         int bm = (b[0] + b[1]) / 2;
+        boolean unipolar = !d.leadsAt(DriverTerminal.A).isEmpty() || !d.leadsAt(DriverTerminal.A_PRIME).isEmpty()
+                || !d.leadsAt(DriverTerminal.B).isEmpty() || !d.leadsAt(DriverTerminal.B_PRIME).isEmpty();
         List<Integer> taken = new ArrayList<>();
-        place(rows, taken, tags, DriverTerminal.A_PLUS, am - 20);
-        place(rows, taken, tags, DriverTerminal.A_MINUS, am + 20);
+        place(rows, taken, tags, unipolar ? DriverTerminal.A : DriverTerminal.A_PLUS, am - 20);
+        place(rows, taken, tags, unipolar ? DriverTerminal.A_PRIME : DriverTerminal.A_MINUS, am + 20);
         if (!d.leadsAt(DriverTerminal.COMMON).isEmpty()) {
             place(rows, taken, tags, DriverTerminal.COMMON, (a[1] + b[0]) / 2);
         }
-        place(rows, taken, tags, DriverTerminal.B_PLUS, bm - 20);
-        place(rows, taken, tags, DriverTerminal.B_MINUS, bm + 20);
+        place(rows, taken, tags, unipolar ? DriverTerminal.B : DriverTerminal.B_PLUS, bm - 20);
+        place(rows, taken, tags, unipolar ? DriverTerminal.B_PRIME : DriverTerminal.B_MINUS, bm + 20);
+        // A terminal used by the wiring but not in the usual set (a mixed diagram) still gets a row.
+        for (DriverTerminal t : DriverTerminal.values()) {
+            if (!rows.containsKey(t) && !d.leadsAt(t).isEmpty()) {
+                place(rows, taken, tags, t, "A".equals(t.phase()) ? am : bm);
+            }
+        }
         return rows;
     }
 

@@ -1,0 +1,122 @@
+package org.lodestep.report;
+
+import java.util.ArrayList;
+import java.util.LinkedHashSet;
+import java.util.List;
+import java.util.Map;
+import java.util.Set;
+
+import org.lodestep.report.html.DriverTerminal;
+import org.lodestep.report.html.WiringDiagram;
+import org.lodestep.wiring.Connection;
+import org.lodestep.wiring.Identification;
+import org.lodestep.wiring.Topology;
+import org.lodestep.wiring.Winding;
+
+/**
+ * Turns a lead identification and one of its driver connections into a {@link WiringDiagram}: windings become coils
+ * (phase taken from the terminals their leads go to), the connection's terminals, jumpers and insulated leads become
+ * the lead destinations. A 5-lead motor's four half-windings from the common are drawn as two centre-tapped coils
+ * sharing the common lead, which is what the motor is inside.
+ */
+public final class WiringDiagrams {
+    private WiringDiagrams() {
+    }
+
+    /**
+     * The diagram of {@code connection} for the motor of {@code id}.
+     *
+     * @throws IllegalArgumentException when the connection names a lead or terminal the identification does not have
+     */
+    public static WiringDiagram of(Identification id, Connection connection) {
+        String title = title(id.topology(), connection.name());
+        WiringDiagram.Builder b = WiringDiagram.builder(title);
+        Map<String, List<String>> terminals = connection.terminals();
+        if (id.topology() == Topology.FIVE_LEAD) {
+            fiveLeadCoils(b, id.windings(), terminals);
+        } else {
+            List<Winding> windings = id.windings();
+            // Phase A first: the windings whose leads reach an A terminal, then the rest.
+            List<Winding> a = new ArrayList<>();
+            List<Winding> rest = new ArrayList<>();
+            for (Winding w : windings) {
+                (phaseOf(w, terminals, windings).equals("A") ? a : rest).add(w);
+            }
+            for (Winding w : a) {
+                b.coil("A", w.ends().get(0), w.ends().get(1), w.tap());
+            }
+            for (Winding w : rest) {
+                b.coil("B", w.ends().get(0), w.ends().get(1), w.tap());
+            }
+        }
+        for (Map.Entry<String, List<String>> e : terminals.entrySet()) {
+            DriverTerminal t = DriverTerminal.parse(e.getKey());
+            for (String lead : e.getValue()) {
+                b.connect(lead, t);
+            }
+        }
+        for (List<String> j : connection.jumpers()) {
+            b.tie(j.toArray(String[]::new));
+        }
+        for (String lead : connection.insulate()) {
+            b.insulate(lead);
+        }
+        return b.build();
+    }
+
+    /** A heading such as "Bipolar series, 6-lead". */
+    static String title(Topology t, String connectionName) {
+        String n = connectionName.replace('-', ' ');
+        n = n.isEmpty() ? n : Character.toUpperCase(n.charAt(0)) + n.substring(1);
+        return t == Topology.UNKNOWN ? n : n + ", " + t.label();
+    }
+
+    /**
+     * The phase of a winding: that of the first terminal one of its leads goes to; a winding on no phase terminal
+     * (a series half-winding tied at both ends never is) takes the phase of the winding it is tied to, else B.
+     */
+    private static String phaseOf(Winding w, Map<String, List<String>> terminals, List<Winding> all) {
+        String p = directPhase(w, terminals);
+        if (p != null) {
+            return p;
+        }
+        return all.indexOf(w) < all.size() / 2 ? "A" : "B";
+    }
+
+    private static String directPhase(Winding w, Map<String, List<String>> terminals) {
+        for (Map.Entry<String, List<String>> e : terminals.entrySet()) {
+            String phase = DriverTerminal.parse(e.getKey()).phase();
+            if (phase.isEmpty()) {
+                continue;
+            }
+            for (String lead : w.leads()) {
+                if (e.getValue().contains(lead)) {
+                    return phase;
+                }
+            }
+        }
+        return null;
+    }
+
+    private static void fiveLeadCoils(WiringDiagram.Builder b, List<Winding> halves,
+                                      Map<String, List<String>> terminals) {
+        Set<String> common = new LinkedHashSet<>(terminals.getOrDefault("COM", List.of()));
+        if (common.size() != 1) {
+            throw new IllegalArgumentException("a 5-lead connection needs exactly one common lead, got " + common);
+        }
+        String com = common.iterator().next();
+        for (String phase : List.of("A", "B")) {
+            List<String> ends = new ArrayList<>();
+            for (Winding w : halves) {
+                if (phase.equals(directPhase(w, terminals))) {
+                    ends.add(w.ends().get(0).equals(com) ? w.ends().get(1) : w.ends().get(0));
+                }
+            }
+            if (ends.size() != 2) {
+                throw new IllegalArgumentException("phase " + phase + " of a 5-lead connection needs two half-windings,"
+                        + " got " + ends);
+            }
+            b.coil(phase, ends.get(0), ends.get(1), com);
+        }
+    }
+}
