@@ -1,0 +1,151 @@
+package org.lodestep.report;
+
+import java.util.ArrayList;
+import java.util.LinkedHashMap;
+import java.util.List;
+import java.util.Locale;
+import java.util.Map;
+
+import org.lodestep.report.html.Cell;
+import org.lodestep.report.html.HtmlReport;
+import org.lodestep.report.html.HtmlTable;
+import org.lodestep.report.html.SafetyNote;
+import org.lodestep.report.html.Status;
+import org.lodestep.wiring.Connection;
+import org.lodestep.wiring.Finding;
+import org.lodestep.wiring.Identification;
+import org.lodestep.wiring.ReadingUse;
+import org.lodestep.wiring.Severity;
+import org.lodestep.wiring.Topology;
+import org.lodestep.wiring.Winding;
+
+/**
+ * The HTML report of a lead identification: verdict, a wiring diagram for each driver connection, the windings,
+ * the findings with what to do next, and every reading used.
+ */
+public final class LeadsHtml {
+    private LeadsHtml() {
+    }
+
+    /**
+     * Builds the report.
+     *
+     * @param title  the motor's name or serial (shown as the heading)
+     * @param source the file the readings came from, or null
+     */
+    public static HtmlReport report(String title, String source, Identification id) {
+        HtmlReport.Builder b = HtmlReport.builder("Lead identification", title)
+                .meta("Layout", id.topology().label() + (id.determined() ? "" : " (not yet certain)"))
+                .meta("Leads", id.leads().size() + ": " + String.join(", ", id.leads()))
+                .meta("Pairs measured", id.measuredPairs() + " of " + id.totalPairs());
+        if (source != null) {
+            b.meta("Source", source);
+        }
+        if (id.temperature() != null) {
+            b.meta("Temperature", String.format(Locale.ROOT, "%.1f \u00B0C, corrected to %.1f \u00B0C",
+                    id.temperature().measuredC(), id.temperature().referenceC()));
+        }
+        verdict(b, id);
+        b.safety(SafetyNote.ENERGISED_COILS);
+
+        if (!id.connections().isEmpty()) {
+            b.section("How to wire it");
+            for (Connection c : id.connections()) {
+                b.figure(WiringDiagrams.of(id, c).toSvg(), caption(c));
+                List<HtmlReport.Finding> notes = new ArrayList<>();
+                notes.add(new HtmlReport.Finding(Status.INFO, c.tradeoff()));
+                if (!c.note().isEmpty()) {
+                    notes.add(new HtmlReport.Finding(c.verified() ? Status.INFO : Status.WARN,
+                            (c.verified() ? "" : "Provisional: ") + c.note()));
+                }
+                b.findings(notes);
+            }
+        }
+
+        b.section("Windings");
+        HtmlTable.Builder t = HtmlTable.builder(null, "Winding", "Ends", "Centre tap", "End to end",
+                "Halves", id.temperature() == null ? "At reference"
+                        : String.format(Locale.ROOT, "At %.0f \u00B0C", id.temperature().referenceC()));
+        List<Winding> ws = id.windings();
+        for (int i = 0; i < ws.size(); i++) {
+            Winding w = ws.get(i);
+            String halves = w.halfResistancesOhm().isEmpty() ? "\u2014"
+                    : String.join(" + ", w.halfResistancesOhm().stream().map(LeadsTextReport::ohm).toList());
+            t.row(Cell.text((w.halfWinding() ? "half-winding " : "winding ") + (i + 1)),
+                    Cell.text(w.ends().get(0) + " \u2013 " + w.ends().get(1)),
+                    Cell.text(w.tap() == null ? "\u2014" : w.tap()),
+                    Cell.number(LeadsTextReport.ohm(w.resistanceOhm()) + (w.resistanceMeasured() ? "" : " (sum)")),
+                    Cell.number(halves),
+                    Cell.number(id.windingsAtReferenceOhm().isEmpty() ? "\u2014"
+                            : LeadsTextReport.ohm(id.windingsAtReferenceOhm().get(i))));
+        }
+        if (ws.isEmpty()) {
+            b.paragraph("No winding was found in the readings.");
+        } else {
+            b.table(t.build());
+        }
+
+        b.section("Findings");
+        if (id.findings().isEmpty()) {
+            b.findings(List.of(new HtmlReport.Finding(Status.PASS,
+                    "None: windings balanced and readings consistent.")));
+        } else {
+            List<HtmlReport.Finding> fs = new ArrayList<>();
+            for (Finding f : id.findings()) {
+                fs.add(new HtmlReport.Finding(status(f.severity()), f.code().code() + ": " + f.message()));
+            }
+            b.findings(fs);
+        }
+        if (!id.missingPairs().isEmpty()) {
+            b.paragraph("Measure next: " + String.join(", ", id.missingPairs().stream().map(Object::toString)
+                    .toList()) + ".");
+        }
+
+        b.section("Readings used");
+        HtmlTable.Builder r = HtmlTable.builder(null, "Pair", "Reading", "Read as");
+        for (ReadingUse u : id.readings()) {
+            r.row(Cell.text(u.pair().toString()), Cell.number(LeadsTextReport.ohm(u.resistanceOhm())),
+                    Cell.text(u.kind()));
+        }
+        b.table(r.build());
+        return b.build();
+    }
+
+    private static void verdict(HtmlReport.Builder b, Identification id) {
+        if (id.hasError()) {
+            Finding first = id.findings().get(0);
+            b.verdict(Status.FAIL, "Fault found: do not use this motor as it is", first.message());
+        } else if (!id.determined()) {
+            b.verdict(Status.WARN, "Not yet certain", id.missingPairs().isEmpty() ? "The readings allow more than one"
+                    + " layout." : "Measure " + id.missingPairs().size() + " more pair(s) to settle the layout.");
+        } else if (id.topology() == Topology.UNKNOWN) {
+            b.verdict(Status.WARN, "No two-phase layout fits the readings", null);
+        } else {
+            boolean warned = id.findings().stream().anyMatch(f -> f.severity() == Severity.WARNING);
+            b.verdict(warned ? Status.WARN : Status.PASS, id.topology().label() + " motor, "
+                    + id.windings().size() + (id.topology() == Topology.FIVE_LEAD || id.topology() == Topology.EIGHT_LEAD
+                    ? " half-windings" : " windings"), warned ? "See the findings before wiring it." : null);
+        }
+    }
+
+    private static String caption(Connection c) {
+        Map<String, String> parts = new LinkedHashMap<>();
+        parts.put("phase", LeadsTextReport.ohm(c.phaseResistanceOhm()));
+        return String.format(Locale.ROOT, "%s: phase resistance %s, inductance \u00D7%s and current rating \u00D7%s"
+                        + " of one half-winding%s.", c.name(), parts.get("phase"), trim(c.inductanceFactor()),
+                trim(c.currentFactor()), c.verified() ? "" : " (provisional)");
+    }
+
+    private static String trim(double v) {
+        String s = String.format(Locale.ROOT, "%.3f", v).replaceAll("0+$", "");
+        return s.endsWith(".") ? s.substring(0, s.length() - 1) : s;
+    }
+
+    static Status status(Severity s) {
+        return switch (s) {
+            case ERROR -> Status.FAIL;
+            case WARNING -> Status.WARN;
+            case INFO -> Status.INFO;
+        };
+    }
+}
