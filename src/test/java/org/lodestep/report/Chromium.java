@@ -35,6 +35,7 @@ public final class Chromium {
             + ".join(','));});"
             + "document.title='PROBE|'+document.documentElement.scrollWidth+'|'"
             + "+document.documentElement.scrollHeight+'|'+window.innerWidth+'|'+r.join(';');})();</script>";
+    private static final Pattern MEDIA_BOX = Pattern.compile("/MediaBox \\[0 0 ([0-9.]+) ([0-9.]+)\\]");
     private static final Pattern TITLE = Pattern.compile("<title>PROBE\\|(\\d+)\\|(\\d+)\\|(\\d+)\\|([0-9,;-]*)</title>");
 
     /** The narrowest window headless Chromium lays out at (found by trial: narrower windows stay 500 px wide). */
@@ -49,7 +50,7 @@ public final class Chromium {
 
     /** What one page load produced. */
     public record Page(BufferedImage screenshot, List<Box> figures, int scrollWidth, int scrollHeight,
-                       int viewportWidth, List<String> console) {
+                       int viewportWidth, List<String> console, List<double[]> printedPageSizesPt) {
     }
 
     /** The browser binary, or a skipped test (a failed one with {@code CI=true}) when there is none. */
@@ -70,28 +71,39 @@ public final class Chromium {
 
     /** Loads {@code html} in a window {@code width} CSS pixels wide, tall enough for the whole page. */
     public static Page render(Path html, int width) throws IOException, InterruptedException {
-        return renderAll(List.of(html), width).get(0);
+        return renderAll(List.of(new Load(html, width))).get(0);
+    }
+
+    /** One page to load: a file and the window width in CSS pixels. */
+    public record Load(Path html, int width) {
+        public Load {
+            if (width < NARROWEST_WIDTH) {
+                throw new IllegalArgumentException("headless Chromium lays out no narrower than " + NARROWEST_WIDTH
+                        + " px, asked for " + width);
+            }
+        }
+    }
+
+    /** Loads each file at the same width; see {@link #renderAll(List)}. */
+    public static List<Page> renderAll(List<Path> htmls, int width) throws IOException, InterruptedException {
+        return renderAll(htmls.stream().map(h -> new Load(h, width)).toList());
     }
 
     /**
-     * Loads each file in its own browser, all at once (the browser mostly waits, so parallel loads cost little more
+     * Loads each page in its own browser, all at once (the browser mostly waits, so parallel loads cost little more
      * than one), and returns the pages in the order given.
      */
-    public static List<Page> renderAll(List<Path> htmls, int width) throws IOException, InterruptedException {
-        if (width < NARROWEST_WIDTH) {
-            throw new IllegalArgumentException("headless Chromium lays out no narrower than " + NARROWEST_WIDTH
-                    + " px, asked for " + width);
-        }
+    public static List<Page> renderAll(List<Load> loads) throws IOException, InterruptedException {
         Path browser = require();
         Path work = Files.createTempDirectory("lodestep-browser");
         java.util.concurrent.ExecutorService pool = java.util.concurrent.Executors.newFixedThreadPool(
-                Math.min(4, Math.max(1, htmls.size())));
+                Math.min(4, Math.max(1, loads.size())));
         try {
             List<java.util.concurrent.Future<Page>> futures = new ArrayList<>();
-            for (int i = 0; i < htmls.size(); i++) {
-                Path html = htmls.get(i);
+            for (int i = 0; i < loads.size(); i++) {
+                Load load = loads.get(i);
                 Path dir = Files.createDirectory(work.resolve("p" + i));
-                futures.add(pool.submit(() -> renderOne(browser, dir, html, width)));
+                futures.add(pool.submit(() -> renderOne(browser, dir, load.html(), load.width())));
             }
             List<Page> pages = new ArrayList<>();
             for (java.util.concurrent.Future<Page> f : futures) {
@@ -133,6 +145,7 @@ public final class Chromium {
             throws IOException, InterruptedException {
         Path profile = Files.createTempDirectory(work, "profile");
         Path shot = work.resolve("shot-" + height + ".png");
+        Path pdf = work.resolve("print-" + height + ".pdf");
         Path out = work.resolve("out.txt");
         Path err = work.resolve("err.txt");
         List<String> cmd = List.of(browser.toString(), "--headless", "--no-sandbox", "--disable-gpu",
@@ -141,6 +154,7 @@ public final class Chromium {
                 "--disable-features=Translate,MediaRouter,OptimizationHints", "--no-default-browser-check",
                 "--password-store=basic", "--use-mock-keychain", "--mute-audio", "--user-data-dir=" + profile,
                 "--enable-logging=stderr", "--v=0", "--dump-dom", "--screenshot=" + shot,
+                "--print-to-pdf=" + pdf, "--no-pdf-header-footer",
                 "--window-size=" + width + "," + height, probed.toUri().toString());
         Process proc = new ProcessBuilder(cmd).redirectOutput(out.toFile()).redirectError(err.toFile()).start();
         // A guard against a hung browser, not a speed check.
@@ -169,8 +183,16 @@ public final class Chromium {
             }
         }
         BufferedImage img = ImageIO.read(shot.toFile());
+        List<double[]> sizes = new ArrayList<>();
+        if (Files.exists(pdf)) {
+            // Chromium writes each page's MediaBox uncompressed: "/MediaBox [0 0 594.95996 841.91998]".
+            Matcher mb = MEDIA_BOX.matcher(new String(Files.readAllBytes(pdf), StandardCharsets.ISO_8859_1));
+            while (mb.find()) {
+                sizes.add(new double[] {Double.parseDouble(mb.group(1)), Double.parseDouble(mb.group(2))});
+            }
+        }
         return new Page(img, boxes, Integer.parseInt(m.group(1)), Integer.parseInt(m.group(2)),
-                Integer.parseInt(m.group(3)), console);
+                Integer.parseInt(m.group(3)), console, sizes);
     }
 
     private static void deleteTree(Path dir) throws IOException {

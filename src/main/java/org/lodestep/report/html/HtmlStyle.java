@@ -58,8 +58,10 @@ final class HtmlStyle {
             ul.findings .text{color:var(--ink)}
             dl.facts{display:grid;grid-template-columns:repeat(auto-fit,minmax(14rem,1fr));gap:0 1.25rem;margin:.5rem 0 1rem}
             dl.facts div{display:flex;justify-content:space-between;gap:1rem;border-bottom:1px dotted var(--rule);padding:.3rem 0}
-            dl.facts dt{color:var(--muted)}
-            dl.facts dd{margin:0;font-weight:600;text-align:right;font-variant-numeric:tabular-nums}
+            dl.facts dt{color:var(--muted);min-width:0;overflow-wrap:anywhere}
+            dl.facts dd{margin:0;font-weight:600;text-align:right;font-variant-numeric:tabular-nums;min-width:0;
+            overflow-wrap:anywhere}
+            h1,h2,p,li,figcaption,aside{overflow-wrap:anywhere}
             figure{margin:1rem 0;padding:.5rem;border:1px solid var(--rule);border-radius:.25rem;background:#fff}
             figure svg{display:block;width:100%;height:auto;max-width:100%}
             figure svg.wiring{max-width:46rem;margin:0 auto}
