@@ -5,7 +5,7 @@ import java.awt.Color;
 import java.util.Objects;
 
 import org.jfree.chart.JFreeChart;
-import org.jfree.chart.annotations.XYTextAnnotation;
+import org.jfree.chart.annotations.XYPointerAnnotation;
 import org.jfree.chart.axis.NumberAxis;
 import org.jfree.chart.plot.SeriesRenderingOrder;
 import org.jfree.chart.plot.ValueMarker;
@@ -147,9 +147,16 @@ public final class ControlChart {
                     marked.add(xi, values[i]);
                     markedCount++;
                     String name = pointLabels != null ? Html.clean(pointLabels[i]) : "#" + (firstIndex + i);
-                    XYTextAnnotation a = new XYTextAnnotation(name, xi, values[i]);
+                    // A short pointer from the name to the point keeps the label clear of the marker.
+                    XYPointerAnnotation a = new XYPointerAnnotation(name, xi, values[i], -Math.PI / 2);
                     a.setFont(ChartStyle.NOTE);
                     a.setPaint(ChartStyle.FAIL);
+                    a.setArrowPaint(ChartStyle.FAIL);
+                    a.setTipRadius(9);
+                    a.setBaseRadius(24);
+                    a.setArrowLength(6);
+                    a.setArrowWidth(3);
+                    a.setLabelOffset(3);
                     a.setTextAnchor(TextAnchor.BOTTOM_CENTER);
                     a.setBackgroundPaint(new Color(255, 255, 255, 210));
                     r.addAnnotation(a);
@@ -198,7 +205,7 @@ public final class ControlChart {
             double pad = hi > lo ? (hi - lo) * 0.12 : Math.max(Math.abs(hi) * 0.05, 1e-9);
             // A chart of ranges (no lower limit, nothing negative) starts at zero, its natural floor.
             boolean fromZero = Double.isNaN(lower) && lo >= 0;
-            ya.setRange(fromZero ? 0 : lo - pad, hi + pad * 1.5);
+            ya.setRange(fromZero ? 0 : lo - pad, hi + pad * 2.5);
             if (!Double.isNaN(centre)) {
                 plot.addRangeMarker(line(centre, centreLabel, false), Layer.BACKGROUND);
             }

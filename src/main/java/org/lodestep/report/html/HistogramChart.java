@@ -131,7 +131,7 @@ public final class HistogramChart {
             return this;
         }
 
-        /** The number of bins (default: about the square root of the count, 5 to 30). */
+        /** The number of bins (default: about twice the square root of the count, 8 to 40). */
         public Builder bins(int count) {
             if (count < 1 || count > 500) {
                 throw new IllegalArgumentException("bin count must be 1..500, got " + count);
@@ -175,7 +175,7 @@ public final class HistogramChart {
                 throw new IllegalArgumentException("histogram '" + title + "' has no finite value");
             }
             Bins h = HistogramChart.bins(values, lower, upper, bins > 0 ? bins
-                    : Math.max(5, Math.min(30, (int) Math.ceil(Math.sqrt(n)))));
+                    : Math.max(8, Math.min(40, (int) Math.ceil(2 * Math.sqrt(n)))));
             int k = h.inside().length;
             double start = h.start();
             double width = h.width();
@@ -213,13 +213,13 @@ public final class HistogramChart {
             ya.setUpperMargin(0.25);
             XYPlot plot = new XYPlot(data, xa, ya, r);
             if (!Double.isNaN(lower)) {
-                plot.addDomainMarker(limitMarker(lower, lowerLabel, true, false), Layer.FOREGROUND);
+                plot.addDomainMarker(limitMarker(lower, lowerLabel, true, false, false), Layer.FOREGROUND);
             }
             if (!Double.isNaN(upper)) {
-                plot.addDomainMarker(limitMarker(upper, upperLabel, true, true), Layer.FOREGROUND);
+                plot.addDomainMarker(limitMarker(upper, upperLabel, true, true, false), Layer.FOREGROUND);
             }
             for (Limit l : lines) {
-                plot.addDomainMarker(limitMarker(l.at(), l.label(), false, false), Layer.FOREGROUND);
+                plot.addDomainMarker(limitMarker(l.at(), l.label(), false, false, true), Layer.FOREGROUND);
             }
             JFreeChart chart = new JFreeChart(title.isEmpty() ? null : title, ChartStyle.TITLE, plot, true);
             String desc = description != null ? description
@@ -228,7 +228,8 @@ public final class HistogramChart {
             return new Chart(chart, widthPx, heightPx, desc);
         }
 
-        private static ValueMarker limitMarker(double at, String label, boolean spec, boolean upperSide) {
+        private static ValueMarker limitMarker(double at, String label, boolean spec, boolean upperSide,
+                                               boolean lowered) {
             ValueMarker m = new ValueMarker(at);
             m.setPaint(spec ? ChartStyle.FAIL : ChartStyle.MUTED);
             m.setStroke(spec ? ChartStyle.dashed(2.5f, 10f, 5f) : ChartStyle.dashed(1.5f, 2f, 3f));
@@ -237,9 +238,11 @@ public final class HistogramChart {
             m.setLabelPaint(spec ? ChartStyle.FAIL : ChartStyle.INK);
             m.setLabelBackgroundColor(new Color(255, 255, 255, 225));
             // Lower limit labelled to its left, upper to its right, so the labels sit outside the spec window.
-            m.setLabelAnchor(upperSide ? RectangleAnchor.TOP_RIGHT : RectangleAnchor.TOP_LEFT);
-            m.setLabelTextAnchor(upperSide ? TextAnchor.TOP_LEFT : TextAnchor.TOP_RIGHT);
-            m.setLabelOffset(new RectangleInsets(spec ? 4 : 22, 4, 4, 4));
+            // Labels sit inside the spec window (lower limit's to its right, upper's to its left), where there is
+            // always room; outside, a limit near the plot edge would have its label cut off.
+            m.setLabelAnchor(upperSide ? RectangleAnchor.TOP_LEFT : RectangleAnchor.TOP_RIGHT);
+            m.setLabelTextAnchor(upperSide ? TextAnchor.TOP_RIGHT : TextAnchor.TOP_LEFT);
+            m.setLabelOffset(new RectangleInsets(lowered ? 24 : 4, 4, 4, 4));
             return m;
         }
     }
