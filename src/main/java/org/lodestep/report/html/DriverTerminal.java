@@ -22,7 +22,8 @@ public enum DriverTerminal {
 
     /**
      * The terminal a plain-text name stands for: {@code A+}, {@code A-} (or with a true minus), {@code B+}, {@code B-},
-     * {@code A}, {@code A'}, {@code B}, {@code B'}, {@code COM}.
+     * {@code A}, {@code A'} (or {@code A/}), {@code B}, {@code B'}, {@code COM} (or a phase's {@code A COM}, drawn on
+     * the one common terminal).
      */
     public static DriverTerminal parse(String name) {
         return switch (name.trim().replace('\u2212', '-').replace('\u2032', '\'')) {
@@ -31,12 +32,12 @@ public enum DriverTerminal {
             case "B+" -> B_PLUS;
             case "B-" -> B_MINUS;
             case "A" -> A;
-            case "A'" -> A_PRIME;
+            case "A'", "A/" -> A_PRIME;
             case "B" -> B;
-            case "B'" -> B_PRIME;
-            case "COM" -> COMMON;
+            case "B'", "B/" -> B_PRIME;
+            case "COM", "A COM", "B COM" -> COMMON;
             default -> throw new IllegalArgumentException("unknown driver terminal '" + name
-                    + "' (expected A+, A-, B+, B-, A, A', B, B' or COM)");
+                    + "' (expected A+, A-, B+, B-, A, A', B, B', COM)");
         };
     }
 
