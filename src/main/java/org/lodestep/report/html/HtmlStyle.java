@@ -56,7 +56,7 @@ final class HtmlStyle {
             ul.findings .mark{flex:0 0 1.2rem;font-weight:700}
             ul.findings .word{font-weight:600;min-width:4.5rem}
             ul.findings .text{color:var(--ink)}
-            dl.facts{display:grid;grid-template-columns:repeat(auto-fit,minmax(14rem,1fr));gap:0 1.25rem;margin:.5rem 0 1rem}
+            dl.facts{display:grid;grid-template-columns:repeat(auto-fit,minmax(16rem,1fr));gap:0 1.25rem;margin:.5rem 0 1rem}
             dl.facts div{display:flex;justify-content:space-between;gap:1rem;border-bottom:1px dotted var(--rule);padding:.3rem 0}
             dl.facts dt{color:var(--muted);min-width:0;overflow-wrap:anywhere}
             dl.facts dd{margin:0;font-weight:600;text-align:right;font-variant-numeric:tabular-nums;min-width:0;

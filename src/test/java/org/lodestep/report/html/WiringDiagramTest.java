@@ -122,4 +122,29 @@ class WiringDiagramTest {
         assertThrows(IllegalArgumentException.class, () -> new WiringDiagram.Coil("C", "a", "b", null));
         assertThrows(IllegalArgumentException.class, () -> new WiringDiagram.Coil("A", "a", "a", null));
     }
+
+    @Test
+    void unipolarDiagramUsesUnipolarTerminalNames() throws Exception {
+        // 6-lead unipolar: each winding's ends to A, A' (B, B'), both taps to the supply common.
+        WiringDiagram d = WiringDiagram.builder("Unipolar, 6-lead")
+                .coil("A", "Black", "Green", "Yellow").coil("B", "Red", "Blue", "White")
+                .connect("Black", DriverTerminal.A).connect("Green", DriverTerminal.A_PRIME)
+                .connect("Red", DriverTerminal.B).connect("Blue", DriverTerminal.B_PRIME)
+                .connect("Yellow", DriverTerminal.COMMON).connect("White", DriverTerminal.COMMON).build();
+        List<String> texts = svgTexts(d);
+        assertTrue(texts.containsAll(List.of("A", "A\u2032", "B", "B\u2032", "COM")), texts.toString());
+        assertTrue(!texts.contains("A+"), "no bipolar terminal drawn: " + texts);
+        assertTrue(d.summary().contains("COM \u2190 Yellow + White (joined)"), d.summary().toString());
+    }
+
+    @Test
+    void terminalNamesOfTheAnalysesParse() {
+        assertEquals(DriverTerminal.A_MINUS, DriverTerminal.parse("A-"));
+        assertEquals(DriverTerminal.A_MINUS, DriverTerminal.parse("A\u2212"));
+        assertEquals(DriverTerminal.A_PRIME, DriverTerminal.parse("A'"));
+        assertEquals(DriverTerminal.B_PRIME, DriverTerminal.parse("B/"));
+        assertEquals(DriverTerminal.COMMON, DriverTerminal.parse("B COM"));
+        IllegalArgumentException e = assertThrows(IllegalArgumentException.class, () -> DriverTerminal.parse("C+"));
+        assertTrue(e.getMessage().contains("'C+'"), e.getMessage());
+    }
 }
