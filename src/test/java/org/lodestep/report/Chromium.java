@@ -97,7 +97,7 @@ public final class Chromium {
         Path browser = require();
         Path work = Files.createTempDirectory("lodestep-browser");
         java.util.concurrent.ExecutorService pool = java.util.concurrent.Executors.newFixedThreadPool(
-                Math.min(4, Math.max(1, loads.size())));
+                Math.min(6, Math.max(1, loads.size())));
         try {
             List<java.util.concurrent.Future<Page>> futures = new ArrayList<>();
             for (int i = 0; i < loads.size(); i++) {
