@@ -54,7 +54,8 @@ public final class XyChart {
                 .describe(title + ": " + dataLabel + " as points, " + fitLabel + " as a line.").build();
     }
 
-    private record Series(String name, double[] x, double[] y, boolean lines, boolean shapes) {
+    /** One series; {@code styleOf} is the index of the series whose look it shares (its own index otherwise). */
+    private record Series(String name, double[] x, double[] y, boolean lines, boolean shapes, int styleOf) {
     }
 
     private record Band(double from, double to, String label, Status status) {
@@ -92,6 +93,21 @@ public final class XyChart {
         /** A series drawn as markers only (measured samples). */
         public Builder points(String name, double[] x, double[] y) {
             series.add(checked(name, x, y, false, true));
+            return this;
+        }
+
+        /**
+         * A second line drawn exactly like the previous series, without its own legend entry: the lower half of an
+         * envelope, a band's other edge.
+         */
+        public Builder sameAsPrevious(double[] x, double[] y) {
+            if (series.isEmpty()) {
+                throw new IllegalStateException("sameAsPrevious needs a series before it");
+            }
+            Series prev = series.get(series.size() - 1);
+            Series s = checked(prev.name(), x, y, prev.lines(), prev.shapes());
+            int style = prev.styleOf() >= 0 ? prev.styleOf() : series.size() - 1;
+            series.add(new Series(s.name(), s.x(), s.y(), s.lines(), s.shapes(), style));
             return this;
         }
 
@@ -159,7 +175,7 @@ public final class XyChart {
                 throw new IllegalArgumentException("series '" + name + "' has " + x.length + " x values but "
                         + y.length + " y values");
             }
-            return new Series(Html.clean(name), x.clone(), y.clone(), lines, shapes);
+            return new Series(Html.clean(name), x.clone(), y.clone(), lines, shapes, -1);
         }
 
         private static void requireFinite(double v, String what) {
@@ -188,12 +204,14 @@ public final class XyChart {
                     }
                 }
                 data.addSeries(xs);
+                int look = s.styleOf() >= 0 ? s.styleOf() : i;
                 r.setSeriesLinesVisible(i, s.lines() || dense);
                 r.setSeriesShapesVisible(i, s.shapes() && !dense);
-                r.setSeriesPaint(i, ChartStyle.seriesPaint(i));
-                r.setSeriesStroke(i, dense ? new BasicStroke(1f) : ChartStyle.seriesStroke(i));
-                r.setSeriesShape(i, s.x().length > 60 ? ChartStyle.smallShape(i) : ChartStyle.seriesShape(i));
-                r.setSeriesShapesFilled(i, i % 2 == 0);
+                r.setSeriesPaint(i, ChartStyle.seriesPaint(look));
+                r.setSeriesStroke(i, dense ? new BasicStroke(1f) : ChartStyle.seriesStroke(look));
+                r.setSeriesShape(i, s.x().length > 60 ? ChartStyle.smallShape(look) : ChartStyle.seriesShape(look));
+                r.setSeriesShapesFilled(i, look % 2 == 0);
+                r.setSeriesVisibleInLegend(i, s.styleOf() < 0);
             }
             r.setDrawSeriesLineAsPath(true);
             NumberAxis x = new NumberAxis(xLabel);
@@ -240,7 +258,7 @@ public final class XyChart {
                 }
             }
             JFreeChart chart = new JFreeChart(title.isEmpty() ? null : title, ChartStyle.TITLE, plot,
-                    series.size() > 1);
+                    series.stream().filter(x -> x.styleOf() < 0).count() > 1);
             String desc = description != null ? description : defaultDescription();
             return new Chart(chart, widthPx, heightPx, desc);
         }

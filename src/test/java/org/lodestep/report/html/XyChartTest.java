@@ -66,4 +66,15 @@ class XyChartTest {
                 .line("psd", new double[] {1, 2, 3, 4}, new double[] {1e-3, 0, 1e-5, 1e-6}).build();
         assertEquals("svg", XmlCheck.parse(c.toSvg().markup()).getDocumentElement().getLocalName());
     }
+
+    @Test
+    void secondHalfOfAnEnvelopeSharesTheLegendEntryOfTheFirst() throws Exception {
+        double[] t = {0, 1, 2, 3};
+        Chart c = XyChart.builder("", "t (s)", "x").points("measured", t, new double[] {1, -0.5, 0.25, -0.1})
+                .line("envelope", t, new double[] {1, 0.5, 0.25, 0.12})
+                .sameAsPrevious(t, new double[] {-1, -0.5, -0.25, -0.12}).build();
+        java.util.List<String> texts = XmlCheck.texts(XmlCheck.parse(c.toSvg().markup()), XmlCheck.SVG, "text");
+        assertEquals(1, texts.stream().filter("envelope"::equals).count(), texts.toString());
+        assertThrows(IllegalStateException.class, () -> XyChart.builder("", "x", "y").sameAsPrevious(t, t));
+    }
 }
