@@ -258,7 +258,7 @@ public final class XyChart {
                 }
             }
             JFreeChart chart = new JFreeChart(title.isEmpty() ? null : title, ChartStyle.TITLE, plot,
-                    series.stream().filter(x -> x.styleOf() < 0).count() > 1);
+                    series.stream().filter(s -> s.styleOf() < 0).count() > 1);
             String desc = description != null ? description : defaultDescription();
             return new Chart(chart, widthPx, heightPx, desc);
         }
