@@ -137,7 +137,7 @@ public final class RigClient implements Closeable {
     }
 
     /** A step-rate sweep of the user's driver: channels accel (g), current (A, phase A), step (V). */
-    public RigCapture sweep(SweepProfile profile, Progress p) throws RigException {
+    public RigCapture sweep(SweepPlan profile, Progress p) throws RigException {
         RigCapture c = stream("sweep", "SWEEP from=" + StreamSpec.fmt(profile.fromFullStepsPerS()) + " to="
                 + StreamSpec.fmt(profile.toFullStepsPerS()) + " seconds=" + StreamSpec.fmt(profile.seconds())
                 + " microsteps=" + profile.microsteps() + " rate_hz=" + StreamSpec.fmt(profile.sampleRateHz()),

@@ -25,7 +25,8 @@ import java.util.List;
  * @param rotorInertiaKgM2   rotor inertia, kg·m²
  * @param loadInertiaKgM2    coupled load inertia referred to the shaft, kg·m²
  * @param dampingNmsPerRad   viscous damping, N·m·s/rad
- * @param insulationOhm      insulation resistance of each phase to the frame, ohm
+ * @param insulationOhm      insulation resistance of each phase to the frame, ohm (each half-winding carries
+ *                           half the conductance, so an isolated half of an 8-lead motor reads twice this)
  * @param accelRadiusM       radius at which the accelerometer reads tangential acceleration, m
  * @param accelNoiseG        accelerometer noise, g RMS
  * @param handTurnRpm        peak speed of the simulated hand turn for back-EMF, rev/min
@@ -68,6 +69,13 @@ public record Scenario(String description, long seed, String serial, int leads, 
         positive("accel_radius_m", accelRadiusM, "m");
         nonNegative("accel_noise_g", accelNoiseG, "g");
         positive("hand_turn_rpm", handTurnRpm, "rev/min");
+    }
+
+    /** The same motor with another seed (another lead shuffle and other noise). */
+    public Scenario withSeed(long newSeed) {
+        return new Scenario(description, newSeed, serial, leads, rotorTeeth, shuffleLeads, leadLabels, halfWindingOhm,
+                halfWindingH, coupling, keVsPerRad, ratedCurrentA, holdingTorqueNm, detentTorqueNm, rotorInertiaKgM2,
+                loadInertiaKgM2, dampingNmsPerRad, insulationOhm, accelRadiusM, accelNoiseG, handTurnRpm, faults);
     }
 
     /** Rotor plus load inertia, kg·m². */

@@ -1,6 +1,5 @@
 package org.lodestep.rig;
 
-
 /**
  * Opens a {@link Transport} from an address: {@code serial:/dev/ttyUSB0?baud=921600}, {@code tcp:host:port}, or
  * {@code sim:<scenario>[?seed=N&realtime=1]} (the virtual rig, started in-process on a pipe).
@@ -74,12 +73,16 @@ public final class Transports {
             throw new IllegalArgumentException("address 'sim:' names no scenario; known: "
                     + String.join(", ", Scenarios.all().keySet()));
         }
-        Scenario s = Scenarios.get(name);
+        Scenario s = Scenarios.all().get(name);
+        if (s == null) {
+            throw new IllegalArgumentException("no virtual-rig scenario '" + name + "'; known: "
+                    + String.join(", ", Scenarios.all().keySet()));
+        }
         boolean realTime = false;
         if (q >= 0) {
             for (String kv : rest.substring(q + 1).split("&")) {
                 if (kv.startsWith("seed=")) {
-                    s = withSeed(s, parseInt(kv.substring(5), address, "seed=INTEGER"));
+                    s = s.withSeed(parseInt(kv.substring(5), address, "seed=INTEGER"));
                 } else if (kv.equals("realtime=1")) {
                     realTime = true;
                 } else {
@@ -94,14 +97,6 @@ public final class Transports {
         t.setDaemon(true);
         t.start();
         return new SimLink(ends[0], rig, t);
-    }
-
-    static Scenario withSeed(Scenario s, long seed) {
-        return new Scenario(s.description(), seed, s.serial(), s.leads(), s.rotorTeeth(), s.shuffleLeads(),
-                s.leadLabels(), s.halfWindingOhm(), s.halfWindingH(), s.coupling(), s.keVsPerRad(), s.ratedCurrentA(),
-                s.holdingTorqueNm(), s.detentTorqueNm(), s.rotorInertiaKgM2(), s.loadInertiaKgM2(),
-                s.dampingNmsPerRad(), s.insulationOhm(), s.accelRadiusM(), s.accelNoiseG(), s.handTurnRpm(),
-                s.faults());
     }
 
     private static int parseInt(String s, String address, String expected) {
@@ -122,4 +117,9 @@ public final class Transports {
         return SerialTransport.open("serial:" + device, device, baud);
     }
 
+
+    /** Wraps a socket accepted by {@code rig serve --tcp} as the rig side's transport. */
+    public static Transport acceptedTcp(String address, java.net.Socket socket) throws java.io.IOException {
+        return new TcpTransport(address, socket);
+    }
 }

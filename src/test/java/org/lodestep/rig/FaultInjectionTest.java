@@ -10,7 +10,7 @@ import org.junit.jupiter.api.Test;
 
 /** A damaged line ends in retries and a whole capture, or in a clear error and a rig with every output off. */
 class FaultInjectionTest {
-    private static final SweepProfile PROFILE = new SweepProfile(40, 160, 1.0, 4, 5000);
+    private static final SweepPlan PROFILE = new SweepPlan(40, 160, 1.0, 4, 5000);
     private static final RigClient.Settings FAST = new RigClient.Settings(300, 5, 100);
 
     private static RigCapture cleanSweep() throws Exception {

@@ -55,7 +55,7 @@ class RigClientTest {
     @Test
     void sweepStreamArrivesWholeWithThreeChannels() throws Exception {
         try (RigClient c = RigClient.open("sim:gantry-axis")) {
-            RigCapture cap = c.sweep(new SweepProfile(20, 200, 2, 8, 5000), RigClient.Progress.NONE);
+            RigCapture cap = c.sweep(new SweepPlan(20, 200, 2, 8, 5000), RigClient.Progress.NONE);
             assertEquals(10000, cap.signal().length());
             assertEquals(List.of("accel", "current", "step"), cap.signal().channelNames());
             double fraction = (double) cap.sampleBytes() / cap.wireBytes();

@@ -4,9 +4,9 @@ package org.lodestep.rig;
  * A step-rate sweep: the rate rises (or falls) linearly from {@code fromFullStepsPerS} to {@code toFullStepsPerS}
  * over {@code seconds}, at 1/{@code microsteps} resolution, sampled at {@code sampleRateHz}.
  */
-public record SweepProfile(double fromFullStepsPerS, double toFullStepsPerS, double seconds, int microsteps,
+public record SweepPlan(double fromFullStepsPerS, double toFullStepsPerS, double seconds, int microsteps,
                            double sampleRateHz) {
-    public SweepProfile {
+    public SweepPlan {
         if (!(fromFullStepsPerS > 0) || !(toFullStepsPerS > 0) || !Double.isFinite(fromFullStepsPerS)
                 || !Double.isFinite(toFullStepsPerS)) {
             throw new IllegalArgumentException("step rates must be positive full steps/s, got " + fromFullStepsPerS
