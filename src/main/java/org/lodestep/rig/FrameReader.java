@@ -39,16 +39,18 @@ final class FrameReader {
      */
     Frame next(int timeoutMs) throws IOException {
         long deadline = System.nanoTime() + timeoutMs * 1_000_000L;
+        boolean looked = false;
         while (true) {
             Frame f = tryDecode();
             if (f != null) {
                 return f;
             }
             long leftMs = (deadline - System.nanoTime()) / 1_000_000L;
-            if (leftMs <= 0) {
+            if (leftMs <= 0 && looked) {
                 return null;
             }
-            fill((int) Math.max(1, leftMs));
+            fill((int) Math.max(0, leftMs));
+            looked = true;
         }
     }
 

@@ -21,7 +21,7 @@ public record RigInfo(String address, int protocolVersion, String rig, String fi
     public RigInfo {
         labels = List.copyOf(labels);
         measures = List.copyOf(measures);
-        capabilities = Map.copyOf(capabilities);
+        capabilities = java.util.Collections.unmodifiableMap(new java.util.TreeMap<>(capabilities));
         if (leads < 2 || leads > 64) {
             throw new IllegalArgumentException("a rig with " + leads + " leads is not plausible");
         }
