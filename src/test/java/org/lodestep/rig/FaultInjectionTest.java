@@ -78,15 +78,33 @@ class FaultInjectionTest {
     }
 
     @Test
-    void persistentCorruptionEndsInErrorAfterRetriesWithOutputsOff() throws Exception {
+    void lineGoingBadMidStreamEndsInErrorAfterReRequestsWithOutputsOff() throws Exception {
         Transports.SimLink link = Transports.openSim("sim:gantry-axis");
         FaultyTransport line = new FaultyTransport(link.host(), 15, 0, 0, 0, Long.MAX_VALUE);
         RigClient c = RigClient.connect(line, FAST);
-        line.corruptEverything();
+        line.corruptAfter(20_000 + c.stats().bytesReceived());
         RigException e = assertThrows(RigException.class, () -> c.sweep(PROFILE, RigClient.Progress.NONE));
-        assertTrue(e.getMessage().contains("after 5 attempts"), e.getMessage());
+        assertTrue(e.getMessage().contains("still damaged or missing after 5 requests"), e.getMessage());
         assertTrue(e.getMessage().contains("outputs switched off"), e.getMessage());
-        assertTrue(c.stats().commandRetries() >= 4);
+        assertTrue(c.stats().resendRequests() >= 5);
+        // the host's SAFE reaches the rig (only the rig-to-host direction is damaged): the stream stops, coil off
+        for (int i = 0; i < 50 && link.rig().energised(); i++) {
+            Thread.sleep(20);
+        }
+        assertFalse(link.rig().energised());
+        c.close();
+    }
+
+    @Test
+    void commandsOnADeadLineEndInErrorAfterRetries() throws Exception {
+        Transports.SimLink link = Transports.openSim("sim:bench-4");
+        FaultyTransport line = new FaultyTransport(link.host(), 16, 0, 0, 0, Long.MAX_VALUE);
+        RigClient c = RigClient.connect(line, FAST);
+        line.corruptEverything();
+        RigException e = assertThrows(RigException.class, () -> c.resistance(1, 2));
+        assertTrue(e.getMessage().contains("no answer from the rig at sim:bench-4 to 'RES 1 2' after 5 attempts"),
+                e.getMessage());
+        assertEquals(4, c.stats().commandRetries());
         assertFalse(link.rig().energised());
         c.close();
     }

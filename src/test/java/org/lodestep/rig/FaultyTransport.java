@@ -27,9 +27,16 @@ final class FaultyTransport implements Transport {
         this.disconnectAfterBytes = disconnectAfterBytes;
     }
 
+    private long corruptAfterBytes = Long.MAX_VALUE;
+
     /** From now on, flip a bit in every byte received (a line gone bad). */
     void corruptEverything() {
         corruptEverything = true;
+    }
+
+    /** Flip a bit in every byte received after this many bytes (a line that goes bad mid-stream). */
+    void corruptAfter(long bytes) {
+        corruptAfterBytes = bytes;
     }
 
     @Override
@@ -71,7 +78,7 @@ final class FaultyTransport implements Transport {
                 continue;
             }
             byte b = tmp[i];
-            if (corruptEverything || random.nextDouble() < flipPerByte) {
+            if (corruptEverything || delivered - n + i >= corruptAfterBytes || random.nextDouble() < flipPerByte) {
                 b ^= (byte) (1 << random.nextInt(8));
             }
             dest[offset + out++] = b;
