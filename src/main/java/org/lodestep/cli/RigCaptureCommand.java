@@ -1,7 +1,6 @@
 package org.lodestep.cli;
 
 import java.io.PrintWriter;
-import java.nio.file.Files;
 import java.nio.file.Path;
 import java.util.concurrent.Callable;
 
@@ -81,9 +80,7 @@ final class RigCaptureCommand implements Callable<Integer> {
         } catch (IllegalArgumentException e) {
             throw new UsageException(e.getMessage());
         }
-        if (Files.exists(out)) {
-            throw new UsageException(out + " already exists: a capture is never overwritten");
-        }
+        RigCaptureFiles.checkTarget(out);
         PrintWriter o = spec.commandLine().getOut();
         o.printf(RigCautions.MOVING + "%n", Math.max(from, to));
         o.flush();

@@ -8,7 +8,7 @@ import java.util.List;
 
 /**
  * The demo's bench-rig part: the Kestrel Lane workshop's virtual rig queries a salvaged motor, measures its leads,
- * checks a returned motor's insulation and records a gantry sweep. Registered in {@link DemoCommand}'s sections.
+ * identifies its leads, checks a returned motor's insulation and records a gantry sweep. Registered in {@link DemoCommand}'s sections.
  */
 final class RigDemo implements DemoCommand.Section {
 
@@ -30,6 +30,8 @@ final class RigDemo implements DemoCommand.Section {
             "rig", "info", "sim:salvage-8"});
         steps.add(new String[] {"Four-wire resistance of all 28 lead pairs through the relay matrix.",
             "rig", "measure", "sim:salvage-8", "resistance"});
+        steps.add(new String[] {"The same motor identified by the rig alone: it measures only the pairs the "
+                + "identification asks for.", "leads", "identify", "--rig", "sim:salvage-8"});
         steps.add(new String[] {"A returned motor's insulation, lead 1 to frame, at 500 V (confirmed for the demo).",
             "rig", "measure", "sim:faulty-8", "insulation", "--lead", "1", "--volts", "500",
             "--yes-i-have-read-the-caution"});

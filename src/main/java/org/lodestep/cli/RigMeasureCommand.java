@@ -95,6 +95,12 @@ final class RigMeasureCommand implements Callable<Integer> {
         }
         PrintWriter o = spec.commandLine().getOut();
         List<int[]> pairs = RigCli.pairs(pairTexts, "--pair");
+        if (out != null) {
+            if (k != Kind.STEP_RESPONSE && k != Kind.BACK_EMF) {
+                throw new UsageException("--out saves step-response and back-emf captures only");
+            }
+            RigCaptureFiles.checkTarget(out);
+        }
         if (k == Kind.INSULATION) {
             int v = volts == null ? 500 : (int) Math.round(volts);
             o.printf(RigCautions.INSULATION + "%n", v);

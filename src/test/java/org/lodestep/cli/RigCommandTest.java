@@ -127,4 +127,48 @@ class RigCommandTest {
             assertTrue(r.out().contains("lodestep rig " + c), c + ": " + r.out());
         }
     }
+
+    @Test
+    void sweepCaptureIsWrittenWholeAndReadsBackWithItsProvenance(@TempDir Path dir) throws Exception {
+        Path csv = dir.resolve("gantry.csv");
+        Result r = run("rig", "capture", "sim:gantry-axis", "sweep", "--from", "40", "--to", "160", "--seconds", "2",
+                "--microsteps", "4", "--out", csv.toString());
+        assertEquals(0, r.code(), r.err());
+        assertTrue(r.out().contains("CAUTION - moving axis"), r.out());
+        org.lodestep.capture.CaptureSidecar side = org.lodestep.capture.CaptureReader.verify(csv);
+        assertTrue(side.complete());
+        assertEquals("gantry-axis", side.scenario());
+        assertEquals("KL5002-00871", side.serialNumber());
+        org.lodestep.capture.SampledSignal s = org.lodestep.capture.Captures.readAll(csv);
+        assertEquals(10000, s.length());
+        assertEquals(java.util.List.of("accel", "current", "step"), s.channelNames());
+        assertEquals(5000.0, s.sampleRateHz());
+        // no stray temporary files beside the capture
+        try (var files = Files.list(dir)) {
+            assertEquals(2, files.count());
+        }
+    }
+
+    @Test
+    void stepResponseSavedWithOutReadsBack(@TempDir Path dir) throws Exception {
+        Path csv = dir.resolve("step.csv");
+        Result r = run("rig", "measure", "sim:bench-4", "step-response", "--pair", "1-2", "--out", csv.toString());
+        assertEquals(0, r.code(), r.err());
+        org.lodestep.capture.SampledSignal s = org.lodestep.capture.Captures.readAll(csv);
+        assertEquals(java.util.List.of("current", "voltage"), s.channelNames());
+        // 2 V into 1.5 ohm winding + 0.1 ohm drive (scenarios.toml): settles at 1.25 A (Ohm's law)
+        double[] i = s.channel(0);
+        assertEquals(1.25, i[i.length - 1], 0.01);
+    }
+
+    @Test
+    void rigDemoSectionRunsEveryStepWithoutUnexpectedFailure(@TempDir Path dir) throws Exception {
+        StringWriter out = new StringWriter();
+        StringWriter err = new StringWriter();
+        int code = new RigDemo().run(dir, dir, new PrintWriter(out, true), new PrintWriter(err, true));
+        assertEquals(ExitCode.OK, code, err.toString());
+        assertTrue(Files.exists(dir.resolve("rig").resolve("gantry-sweep.csv")));
+        // runs again over its own earlier output
+        assertEquals(ExitCode.OK, new RigDemo().run(dir, dir, new PrintWriter(out, true), new PrintWriter(err, true)));
+    }
 }
