@@ -109,4 +109,36 @@ class VirtualRigTest {
             assertEquals(RigError.OVER_LIMIT, e.error());
         }
     }
+
+    @Test
+    void hostSilentDuringARealTimeSweepStopsItAndSwitchesOff() throws Exception {
+        Host h = new Host("sim:gantry-axis?realtime=1");
+        Frame header = h.ask(1, "SWEEP from=20 to=100 seconds=10 microsteps=1 rate_hz=1000");
+        assertEquals(Frame.REPLY, header.type(), header.text());
+        assertTrue(h.link.rig().energised(), "the sweep drives the motor");
+        // the host stops talking (it keeps reading, as a host whose sender died would)
+        Frame end = null;
+        long deadline = System.nanoTime() + 6_000_000_000L;
+        while (end == null && System.nanoTime() < deadline) {
+            Frame f = h.in.next(100);
+            if (f != null && f.type() == Frame.END) {
+                end = f;
+            }
+        }
+        assertNotNull(end, "the stream ends");
+        assertTrue(end.text().contains("status=watchdog"), end.text());
+        assertFalse(h.link.rig().energised());
+        assertEquals("watchdog", h.link.rig().lastSafeReason());
+    }
+
+    @Test
+    void keepAlivePingsCarryARealTimeSweepPastTheWatchdog() throws Exception {
+        Transports.SimLink link = Transports.openSim("sim:gantry-axis?realtime=1");
+        try (RigClient c = RigClient.connect(link.host(), RigClient.Settings.DEFAULT)) {
+            // 2.6 s of real time, longer than the 2 s watchdog
+            RigCapture cap = c.sweep(new SweepPlan(20, 60, 2.6, 1, 1000), RigClient.Progress.NONE);
+            assertEquals(2600, cap.signal().length());
+            assertEquals(0, link.rig().safeEvents());
+        }
+    }
 }
