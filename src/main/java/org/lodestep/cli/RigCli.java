@@ -57,8 +57,10 @@ final class RigCli {
      */
     static final class Bar implements AutoCloseable, RigClient.Progress {
         private final ProgressBar bar;
+        private final PrintWriter err;
 
         Bar(String task, PrintWriter err, boolean quiet) {
+            this.err = err;
             if (quiet || System.console() == null) {
                 bar = null;
             } else {
@@ -83,6 +85,8 @@ final class RigCli {
         public void close() {
             if (bar != null) {
                 bar.close();
+                err.println();
+                err.flush();
             }
         }
     }
