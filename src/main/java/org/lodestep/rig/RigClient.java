@@ -4,7 +4,6 @@ import java.io.Closeable;
 import java.io.EOFException;
 import java.io.IOException;
 import java.time.Instant;
-import java.util.ArrayList;
 import java.util.LinkedHashMap;
 import java.util.List;
 import java.util.Map;
@@ -392,13 +391,5 @@ public final class RigClient implements Closeable {
         requests[seq]++;
         resendRequests++;
         send(Frame.text(Frame.COMMAND, tag(), "RESEND seq=" + seq));
-    }
-
-    static List<int[]> pairs(int... leads) {
-        List<int[]> out = new ArrayList<>();
-        for (int i = 0; i + 1 < leads.length; i += 2) {
-            out.add(new int[] {leads[i], leads[i + 1]});
-        }
-        return out;
     }
 }

@@ -121,4 +121,16 @@ class BenchMotorTest {
         assertEquals(4, pairs);
         assertEquals(8, m.labels().size());
     }
+
+    @Test
+    void swappedLeadsMakeTheColourCodeLie() {
+        // bench-4 as labelled: blk-grn is phase A; swapped-4 has grn and red exchanged (scenarios.toml)
+        BenchMotor good = new BenchMotor(Scenarios.all().get("bench-4"));
+        BenchMotor swapped = new BenchMotor(Scenarios.all().get("swapped-4"));
+        assertEquals(List.of("blk", "grn", "red", "blu"), good.labels());
+        assertEquals(List.of("blk", "red", "grn", "blu"), swapped.labels());
+        // the same positions still form the windings; only the names moved
+        assertEquals(1.5, swapped.trueResistanceOhm(1, 2), 1e-6);
+        assertTrue(swapped.trueResistanceOhm(1, 3) > 1e8);
+    }
 }
