@@ -4,9 +4,11 @@ import java.io.Closeable;
 import java.io.EOFException;
 import java.io.IOException;
 import java.time.Instant;
+import java.util.HashSet;
 import java.util.LinkedHashMap;
 import java.util.List;
 import java.util.Map;
+import java.util.Set;
 
 /**
  * The host side of {@code firmware-protocol.md}: handshake, measurements and streams, with timeouts, retries,
@@ -268,99 +270,76 @@ public final class RigClient implements Closeable {
         // the virtual rig computes a record before it answers; a real one answers at once and streams in real time
         Frame header = command(text, (int) Math.min(Integer.MAX_VALUE / 2, seconds * 1000 * 2
                 + settings.replyTimeoutMs()));
-        int tag = header.tag();
         StreamSpec spec = StreamSpec.decode(header.text());
-        int blocks = spec.blocks();
-        int nc = spec.channels().size();
-        short[][] got = new short[blocks][];
-        int[] requests = new int[blocks];
-        int have = 0;
-        int lowestMissing = 0;
-        int idle = 0;
-        long framesDone = 0;
-        progress.frames(0, spec.frames());
+        BlockCollector blocks = new BlockCollector(spec);
         try {
-            while (have < blocks) {
-                Frame f = reader.next(Math.min(settings.replyTimeoutMs(), settings.keepaliveMs()));
-                keepalive();
-                if (f == null) {
-                    idle += Math.min(settings.replyTimeoutMs(), settings.keepaliveMs());
-                    if (idle >= settings.replyTimeoutMs()) {
-                        idle = 0;
-                        // silence: ask again for what is missing, oldest first
-                        int asked = 0;
-                        for (int s = lowestMissing; s < blocks && asked < 32; s++) {
-                            if (got[s] == null) {
-                                request(s, requests, kind, have, blocks);
-                                asked++;
-                            }
-                        }
-                    }
-                    continue;
-                }
-                if (f.type() == Frame.ERROR && (f.tag() == 0 || f.tag() == tag)) {
-                    throw refused(text, f);
-                }
-                if (f.tag() != tag) {
-                    continue; // ping replies, answers to re-requests (the block itself carries the stream's tag)
-                }
-                if (f.type() == Frame.END) {
-                    Fields e = Fields.parse(f.text());
-                    if (!e.get("status", "").equals("complete")) {
-                        throw failSafe("the rig ended the " + kind + " stream early (" + f.text() + ") after "
-                                + have + " of " + blocks + " blocks; capture discarded", null);
-                    }
-                    for (int s = lowestMissing; s < blocks; s++) {
-                        if (got[s] == null && requests[s] == 0) {
-                            request(s, requests, kind, have, blocks);
-                        }
-                    }
-                    continue;
-                }
-                if (f.type() != Frame.BLOCK) {
-                    continue;
-                }
-                SampleBlock b = SampleBlock.decode(f.payload());
-                if (b.seq() >= blocks || b.channels() != nc || b.frames() != spec.framesIn(b.seq())) {
-                    throw failSafe("block " + b.seq() + " (" + b.frames() + " frames x " + b.channels()
-                            + " channels) does not match the stream header (" + blocks + " blocks of "
-                            + spec.blockFrames() + " x " + nc + ")", null);
-                }
-                idle = 0;
-                if (got[b.seq()] == null) {
-                    got[b.seq()] = b.samples();
-                    have++;
-                    framesDone += b.frames();
-                    progress.frames(framesDone, spec.frames());
-                }
-                // a gap before this block means damaged or lost blocks: ask for each once now
-                for (int s = lowestMissing; s < b.seq(); s++) {
-                    if (got[s] == null && requests[s] == 0) {
-                        request(s, requests, kind, have, blocks);
-                    }
-                }
-                while (lowestMissing < blocks && got[lowestMissing] != null) {
-                    lowestMissing++;
-                }
-            }
+            receive(kind, text, header.tag(), blocks, progress);
         } catch (EOFException e) {
-            throw failSafe(transport.address() + ": the line closed during the " + kind + " stream after " + have
-                    + " of " + blocks + " blocks; capture discarded", e);
+            throw failSafe(transport.address() + ": the line closed during the " + kind + " stream after "
+                    + blocks.have() + " of " + blocks.blocks() + " blocks; capture discarded", e);
         } catch (IOException e) {
             throw failSafe(transport.address() + ": " + e.getMessage() + " during the " + kind + " stream; capture "
                     + "discarded", e);
+        } catch (RigRefusedException e) {
+            throw e;
+        } catch (RigException e) {
+            throw failSafe(e.getMessage() + "; capture discarded", null);
         }
-        double[][] samples = new double[nc][spec.frames()];
-        for (int s = 0; s < blocks; s++) {
-            short[] v = got[s];
-            int base = s * spec.blockFrames();
-            int n = v.length / nc;
-            for (int i = 0; i < n; i++) {
-                for (int c = 0; c < nc; c++) {
-                    samples[c][base + i] = v[i * nc + c] * spec.lsb()[c];
+        return new RigCapture(kind, transport.address(), spec.channels(), spec.rateHz(), blocks.samples(),
+                provenance(kind, text, started), reader.bytesRead() - bytes0,
+                2L * spec.channels().size() * spec.frames());
+    }
+
+    /** Receives blocks until every one is present, asking again for damaged or lost ones. */
+    private void receive(String kind, String text, int tag, BlockCollector blocks, Progress progress)
+            throws IOException, RigException {
+        Set<Integer> resendTags = new HashSet<>();
+        int waitMs = Math.min(settings.replyTimeoutMs(), settings.keepaliveMs());
+        int idleMs = 0;
+        progress.frames(0, blocks.totalFrames());
+        while (!blocks.complete()) {
+            Frame f = reader.next(waitMs);
+            keepalive();
+            if (f == null) {
+                idleMs += waitMs;
+                if (idleMs >= settings.replyTimeoutMs()) {
+                    idleMs = 0;
+                    // silence: ask again for what is missing, oldest first
+                    for (int s : blocks.missing(32)) {
+                        request(s, blocks, kind, resendTags);
+                    }
+                }
+                continue;
+            }
+            if (f.type() == Frame.ERROR && (f.tag() == 0 || f.tag() == tag || resendTags.contains(f.tag()))) {
+                throw refused(text, f);
+            }
+            if (f.tag() != tag) {
+                continue; // ping replies; a re-sent block carries the stream's tag, not the request's
+            }
+            if (f.type() == Frame.END) {
+                if (!Fields.parse(f.text()).get("status", "").equals("complete")) {
+                    throw new RigException("the rig ended the " + kind + " stream early (" + f.text() + ") after "
+                            + blocks.have() + " of " + blocks.blocks() + " blocks");
+                }
+                for (int s : blocks.unrequestedBefore(blocks.blocks())) {
+                    request(s, blocks, kind, resendTags);
+                }
+            } else if (f.type() == Frame.BLOCK) {
+                SampleBlock b = SampleBlock.decode(f.payload());
+                idleMs = 0;
+                if (blocks.accept(b)) {
+                    progress.frames(blocks.framesReceived(), blocks.totalFrames());
+                }
+                // a gap before this block means damaged or lost blocks: ask for each once now
+                for (int s : blocks.unrequestedBefore(b.seq())) {
+                    request(s, blocks, kind, resendTags);
                 }
             }
         }
+    }
+
+    private Map<String, String> provenance(String kind, String command, String started) {
         Map<String, String> meta = new LinkedHashMap<>();
         meta.put("kind", kind);
         meta.put("rig", info.rig());
@@ -368,7 +347,7 @@ public final class RigClient implements Closeable {
         meta.put("firmware", info.firmware());
         meta.put("protocol", Integer.toString(info.protocolVersion()));
         meta.put("address", transport.address());
-        meta.put("command", text);
+        meta.put("command", command);
         String scenario = info.capability("scenario", "");
         if (!scenario.isEmpty()) {
             meta.put("scenario", scenario);
@@ -379,17 +358,20 @@ public final class RigClient implements Closeable {
         }
         meta.put("started_utc", started);
         meta.put("finished_utc", Instant.now().toString());
-        return new RigCapture(kind, transport.address(), spec.channels(), spec.rateHz(), samples, meta,
-                reader.bytesRead() - bytes0, 2L * nc * spec.frames());
+        return meta;
     }
 
-    private void request(int seq, int[] requests, String kind, int have, int blocks) throws IOException {
-        if (requests[seq] >= settings.attempts()) {
+    private void request(int seq, BlockCollector blocks, String kind, Set<Integer> resendTags)
+            throws IOException {
+        if (blocks.requests(seq) >= settings.attempts()) {
             throw new IOException("block " + seq + " of the " + kind + " stream still damaged or missing after "
-                    + settings.attempts() + " requests (" + have + " of " + blocks + " blocks intact)");
+                    + settings.attempts() + " requests (" + blocks.have() + " of " + blocks.blocks()
+                    + " blocks intact)");
         }
-        requests[seq]++;
+        blocks.noteRequest(seq);
         resendRequests++;
-        send(Frame.text(Frame.COMMAND, tag(), "RESEND seq=" + seq));
+        int t = tag();
+        resendTags.add(t);
+        send(Frame.text(Frame.COMMAND, t, "RESEND seq=" + seq));
     }
 }
