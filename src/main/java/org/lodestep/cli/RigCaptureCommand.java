@@ -82,8 +82,10 @@ final class RigCaptureCommand implements Callable<Integer> {
         }
         RigCaptureFiles.checkTarget(out);
         PrintWriter o = spec.commandLine().getOut();
-        o.printf(RigCautions.MOVING + "%n", Math.max(from, to));
-        o.flush();
+        // with --json the caution goes to stderr, so standard output stays one JSON document
+        PrintWriter caution = json ? spec.commandLine().getErr() : o;
+        caution.printf(RigCautions.MOVING + "%n", Math.max(from, to));
+        caution.flush();
         RigCapture cap;
         try (RigClient c = RigCli.connect(address);
              RigCli.Bar bar = new RigCli.Bar("sweep", spec.commandLine().getErr(), quiet)) {
@@ -92,10 +94,11 @@ final class RigCaptureCommand implements Callable<Integer> {
         Path written = RigCaptureFiles.save(cap, out, plan);
         if (json) {
             o.println(Json.write(cap.metadata()));
+            spec.commandLine().getErr().println("saved " + written);
         } else {
             o.print(RigText.capture(cap));
+            o.println("saved " + written);
         }
-        o.println("saved " + written);
         o.flush();
         return ExitCode.OK;
     }

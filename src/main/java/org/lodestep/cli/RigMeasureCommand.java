@@ -101,18 +101,20 @@ final class RigMeasureCommand implements Callable<Integer> {
             }
             RigCaptureFiles.checkTarget(out);
         }
+        // cautions go to stderr with --json, so standard output stays one JSON document
+        PrintWriter caution = json ? spec.commandLine().getErr() : o;
         if (k == Kind.INSULATION) {
             int v = volts == null ? 500 : (int) Math.round(volts);
-            o.printf(RigCautions.INSULATION + "%n", v);
-            o.flush();
+            caution.printf(RigCautions.INSULATION + "%n", v);
+            caution.flush();
             if (!confirmed && !confirmAtConsole(v)) {
                 throw new UsageException("insulation test not confirmed: read the caution, then add "
                         + "--yes-i-have-read-the-caution (or type ARM at the prompt)");
             }
         } else if (k == Kind.STEP_RESPONSE) {
-            o.printf(RigCautions.ENERGISED + "%n", volts == null ? 2.0 : volts);
+            caution.printf(RigCautions.ENERGISED + "%n", volts == null ? 2.0 : volts);
         } else if (k == Kind.BACK_EMF) {
-            o.println(RigCautions.HAND_TURN);
+            caution.println(RigCautions.HAND_TURN);
         }
         try (RigClient c = RigCli.connect(address)) {
             List<String> labels = c.info().labels();
@@ -181,7 +183,8 @@ final class RigMeasureCommand implements Callable<Integer> {
             o.print(RigText.capture(cap));
         }
         if (out != null) {
-            o.println("saved " + RigCaptureFiles.save(cap, out, plan));
+            Path saved = RigCaptureFiles.save(cap, out, plan);
+            (json ? spec.commandLine().getErr() : o).println("saved " + saved);
         }
     }
 

@@ -171,4 +171,14 @@ class RigCommandTest {
         // runs again over its own earlier output
         assertEquals(ExitCode.OK, new RigDemo().run(dir, dir, new PrintWriter(out, true), new PrintWriter(err, true)));
     }
+
+    @Test
+    void jsonOutputStaysOneDocumentWithTheCautionOnStderr() throws Exception {
+        Result r = run("rig", "measure", "sim:bench-4", "insulation", "--lead", "2", "--json",
+                "--yes-i-have-read-the-caution");
+        assertEquals(0, r.code(), r.err());
+        com.fasterxml.jackson.databind.JsonNode j = org.lodestep.report.Json.mapper().readTree(r.out());
+        assertEquals(2, j.get(0).get("lead").asInt());
+        assertTrue(r.err().contains("CAUTION - insulation test"), r.err());
+    }
 }
