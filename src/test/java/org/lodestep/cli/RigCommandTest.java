@@ -181,4 +181,11 @@ class RigCommandTest {
         assertEquals(2, j.get(0).get("lead").asInt());
         assertTrue(r.err().contains("CAUTION - insulation test"), r.err());
     }
+
+    @Test
+    void portsListsTheVirtualRigAddresses() {
+        Result r = run("rig", "ports");
+        assertEquals(0, r.code(), r.err());
+        assertTrue(r.out().contains("sim:gantry-axis"), r.out());
+    }
 }

@@ -14,11 +14,16 @@ class BenchMotorTest {
     /** A 4-lead motor whose values are chosen for the published check values. */
     private static Scenario motor(double halfOhm, double halfH, double coupling, double rpm, List<Scenario.Fault> f,
                                   int leads) {
+        return motor(halfOhm, halfH, coupling, rpm, f, leads, 50);
+    }
+
+    private static Scenario motor(double halfOhm, double halfH, double coupling, double rpm, List<Scenario.Fault> f,
+                                  int leads, int rotorTeeth) {
         List<String> labels = new ArrayList<>();
         for (int i = 1; i <= leads; i++) {
             labels.add("L" + i);
         }
-        return new Scenario("test motor", 1, "T-1", leads, 50, false, labels, halfOhm, halfH, coupling, 0.25, 1.0,
+        return new Scenario("test motor", 1, "T-1", leads, rotorTeeth, false, labels, halfOhm, halfH, coupling, 0.25, 1.0,
                 0.4, 0.0, 5.4e-6, 0, 1e-4, 1e9, 0.02, 0.0, rpm, f);
     }
 
@@ -132,5 +137,15 @@ class BenchMotorTest {
         // the same positions still form the windings; only the names moved
         assertEquals(1.5, swapped.trueResistanceOhm(1, 2), 1e-6);
         assertTrue(swapped.trueResistanceOhm(1, 3) > 1e8);
+    }
+
+    @Test
+    void hundredToothRotorDoublesTheElectricalFrequency() {
+        // REFERENCE-CHECKS item 14: N_r = 100 at 300 rpm -> f_e = 500 Hz (period 2.000 ms)
+        BenchMotor m = new BenchMotor(motor(1.0, 0.001, 0.97, 300, List.of(), 4, 100));
+        double rate = 50_000;
+        double[][] e = m.handTurnEmf(List.of(new int[] {1, 2}), 1.0, rate, (int) rate);
+        double[] a = java.util.Arrays.copyOfRange(e[0], (int) (0.25 * rate), (int) (0.75 * rate));
+        assertEquals(2.000e-3, RotorDynamicsTest.meanPeriodS(a, rate, 0), 2e-6);
     }
 }
