@@ -65,7 +65,9 @@ public final class LeadsTextReport {
         }
         if (!id.connections().isEmpty()) {
             Connection c = id.connections().get(0);
-            out.println("  " + c.name() + ": " + terminals(c.terminals())
+            String joins = c.jumpers().isEmpty() ? "" : "  join " + String.join(", ",
+                    c.jumpers().stream().map(j -> String.join("+", j)).toList());
+            out.println("  " + c.name() + ": " + terminals(c.terminals()) + joins
                     + (c.verified() ? "" : "  (provisional: back-EMF phasing settles it)"));
         }
         if (!id.missingPairs().isEmpty()) {
