@@ -75,7 +75,8 @@ final class LeadsIdentifyCommand implements Callable<Integer> {
         for (ResistanceReadings r : inputs) {
             Identification id = LeadIdentifier.identify(matrix(r, extra), options.settings(r.temperatureC()));
             error |= id.hasError();
-            String title = r.motor() != null ? "Motor " + r.motor() + " (" + r.source() + ")" : r.source();
+            String title = r.motor() != null ? "Motor " + r.motor() + " (" + r.source() + ")"
+                    : files.isEmpty() ? "Readings from --pair" : r.source();
             if (options.json) {
                 json.add(LeadsJsonView.of(r.source(), r.motor(), id, null));
             } else {

@@ -11,8 +11,8 @@ import picocli.CommandLine.Option;
 final class LeadsIdentifyOptions {
 
     @Option(names = "--ambient-c", paramLabel = "DEG_C",
-            description = "Winding temperature when measured, in °C (overrides '# temperature_c=' in the file). "
-                    + "Resistances are then also given at the reference temperature.")
+            description = "Winding temperature when measured, in °C (identify: overrides '# temperature_c=' in the "
+                    + "file). Resistances are then also given at the reference temperature.")
     Double ambientC;
 
     @Option(names = "--reference-c", paramLabel = "DEG_C", defaultValue = "20",

@@ -44,7 +44,7 @@ final class LeadsProbeCommand implements Callable<Integer> {
             + "--labels is given.")
     Integer leadCount;
 
-    @Option(names = "--labels", paramLabel = "A,B,...", split = ",",
+    @Option(names = "--labels", paramLabel = "LABEL", split = ",",
             description = "Lead labels (wire colours or terminal numbers), comma separated.")
     List<String> labels;
 

@@ -28,8 +28,8 @@ public final class LeadsTextReport {
     public static void write(PrintWriter out, String title, Identification id) {
         out.printf(Locale.ROOT, "%s: %d leads, %d of %d pairs measured%n", title, id.leads().size(),
                 id.measuredPairs(), id.totalPairs());
-        out.println("Topology: " + id.topology().label() + describe(id.topology())
-                + (id.determined() ? "" : " (not yet certain)"));
+        out.println("Topology: " + id.topology().label()
+                + (id.determined() ? describe(id.topology()) : " (not yet certain: more pairs needed)"));
         out.println();
         schematic(out, id);
         if (id.temperature() != null) {
@@ -37,7 +37,7 @@ public final class LeadsTextReport {
                     id.temperature().measuredC(), id.temperature().referenceC(), num(id.temperature().constantC()),
                     id.temperature().standard());
         }
-        findings(out, id.findings());
+        findings(out, id.findings(), id.determined());
         connections(out, id.connections());
         if (!id.missingPairs().isEmpty()) {
             out.println();
@@ -130,10 +130,11 @@ public final class LeadsTextReport {
                 num(id.temperature().referenceC()));
     }
 
-    private static void findings(PrintWriter out, List<Finding> findings) {
+    private static void findings(PrintWriter out, List<Finding> findings, boolean determined) {
         out.println();
         if (findings.isEmpty()) {
-            out.println("Findings: none; windings balanced and readings consistent.");
+            out.println(determined ? "Findings: none; windings balanced and readings consistent."
+                    : "Findings so far: none.");
             return;
         }
         out.println("Findings:");
