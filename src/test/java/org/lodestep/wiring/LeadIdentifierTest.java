@@ -238,6 +238,15 @@ class LeadIdentifierTest {
     }
 
     @Test
+    void loneKiloohmReadingIsLeakageNotAWinding() {
+        ResistanceMatrix m = ResistanceMatrix.builder().reading("1", "2", 48_000).lead("3").lead("4").build();
+        Identification id = identify(m);
+        assertEquals("leakage", id.readings().get(0).kind());
+        assertTrue(id.windings().isEmpty());
+        assertEquals(Set.of("phase-leakage"), codes(id));
+    }
+
+    @Test
     void contactOutlierInFiveLeadGroupIsFound() {
         ResistanceMatrix.Builder b = ResistanceMatrix.builder();
         String com = "c";
