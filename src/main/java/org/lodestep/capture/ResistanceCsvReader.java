@@ -198,6 +198,10 @@ public final class ResistanceCsvReader {
         List<String> header = rows.get(0).cells;
         String corner = header.get(0).strip();
         double factor = corner.isEmpty() ? 1.0 : ResistanceValues.unitFactor(corner);
+        // A word such as "leads" in the corner is a title, not a unit: ohms, as for an empty corner.
+        if (Double.isNaN(factor) && !corner.toLowerCase(Locale.ROOT).contains("ohm") && !corner.contains("Ω")) {
+            factor = 1.0;
+        }
         if (Double.isNaN(factor)) {
             throw new InputFormatException(r.source, rows.get(0).line, "1", corner, "is not a unit: " + EXPECTED_HEADER
                     + " (top-left cell empty for ohms, or ohm, mohm, kohm, Mohm, [Ω], [kΩ] ...)");
