@@ -216,6 +216,11 @@ public final class ResistanceCsvReader {
             labels.add(l);
         }
         int n = labels.size();
+        // Not a pair-list header, and the next row does not start with the first label: not a matrix either.
+        if (rows.size() < 2 || !rows.get(1).cells.get(0).strip().equals(labels.get(0))) {
+            throw new InputFormatException(r.source, rows.get(0).line, null, String.join(",", header),
+                    EXPECTED_HEADER);
+        }
         if (rows.size() - 1 != n) {
             throw new InputFormatException(r.source, rows.get(rows.size() - 1).line, null, null,
                     "ends after " + (rows.size() - 1) + " rows: expected a square matrix, one row per lead (" + n + ")");
