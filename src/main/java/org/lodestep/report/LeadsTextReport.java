@@ -149,7 +149,8 @@ public final class LeadsTextReport {
             return;
         }
         out.println();
-        out.println("Driver connections (factors relative to one half-winding; current factors are trade convention):");
+        out.println("Driver connections (factors relative to one half-winding, or to the whole winding of a 4-lead"
+                + " motor; current factors are trade convention):");
         for (Connection c : cs) {
             out.printf(Locale.ROOT, "  %s: phase %s, inductance x%s, current rating x%s%s%n", c.name(),
                     ohm(c.phaseResistanceOhm()), num(c.inductanceFactor()), num(c.currentFactor()),
