@@ -47,6 +47,8 @@ public final class TimeSeriesCsvReader implements SampleStream {
     private final double[][] pending;
     private int pendingCount;
     private int pendingPos;
+    private int pendingStart;
+    private InputFormatException pendingError;
     private long frameIndex;
     private double rowTimeS;
     private final byte[] scratch = new byte[64];
@@ -362,11 +364,37 @@ public final class TimeSeriesCsvReader implements SampleStream {
         return metadata;
     }
 
+    /**
+     * {@inheritDoc}
+     *
+     * <p>Rows before a malformed one are always delivered: a read that meets an error returns the frames before it,
+     * and the next read throws.
+     */
     @Override
     public int read(double[][] dest, int offset, int maxFrames) throws IOException, InputFormatException {
         if (closed) {
             throw new IOException(source + ": read after close");
         }
+        if (pendingError != null) {
+            InputFormatException e = pendingError;
+            pendingError = null;
+            throw e;
+        }
+        long firstFrame = frameIndex;
+        try {
+            return readRows(dest, offset, maxFrames);
+        } catch (InputFormatException e) {
+            int delivered = (pendingPos - pendingStart) + (int) (frameIndex - firstFrame);
+            if (delivered > 0) {
+                pendingError = e;
+                return delivered;
+            }
+            throw e;
+        }
+    }
+
+    private int readRows(double[][] dest, int offset, int maxFrames) throws IOException, InputFormatException {
+        pendingStart = pendingPos;
         int k = 0;
         if (pendingPos < pendingCount) {
             int take = Math.min(maxFrames, pendingCount - pendingPos);

@@ -279,4 +279,20 @@ class TimeSeriesCsvReaderTest {
         assertEquals("a_g", e.column());
         assertEquals("1e", e.text());
     }
+
+    @Test
+    void deliversEveryRowBeforeABadOneThenFails() throws Exception {
+        StringBuilder sb = new StringBuilder("time_s,a_g\n");
+        for (int i = 0; i < 5000; i++) {
+            sb.append(TestStreams.fixed(i / 1000.0, 3)).append(',').append(i == 4500 ? "?" : "1").append('\n');
+        }
+        try (TimeSeriesCsvReader r = TimeSeriesCsvReader.open(TestStreams.text(sb.toString()), "late.csv")) {
+            double[][] buf = new double[1][4096];
+            assertEquals(4096, r.read(buf, 0, 4096));
+            // Rows 4096..4499 are good: they come first, the error with the next read.
+            assertEquals(404, r.read(buf, 0, 4096));
+            InputFormatException e = assertThrows(InputFormatException.class, () -> r.read(buf, 0, 4096));
+            assertEquals(4502, e.line());
+        }
+    }
 }
