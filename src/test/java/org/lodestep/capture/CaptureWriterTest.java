@@ -100,6 +100,23 @@ class CaptureWriterTest {
             }
         }
         assertEquals(sidecar, CaptureReader.verify(csv));
+        // Permissions like any other file the user writes (umask applies), not owner-only like a temp file.
+        Path plain = Files.writeString(dir.resolve("plain.txt"), "x");
+        assertEquals(Files.getPosixFilePermissions(plain), Files.getPosixFilePermissions(csv));
+        assertEquals(Files.getPosixFilePermissions(plain), Files.getPosixFilePermissions(dir.resolve("sweep-017.json")));
+    }
+
+    @Test
+    void refusesSidecarThatBelongsToAnotherDataFile() throws Exception {
+        try (CaptureWriter w = CaptureWriter.create(dir.resolve("one.csv"), info(1000),
+                CaptureWriter.Interrupted.DISCARD)) {
+            w.append(block(0, 10), 0, 10);
+            w.commit();
+        }
+        Files.move(dir.resolve("one.csv"), dir.resolve("two.csv"));
+        Files.move(dir.resolve("one.json"), dir.resolve("two.json"));
+        InputFormatException e = assertThrows(InputFormatException.class, () -> Captures.open(dir.resolve("two.csv")));
+        assertEquals("data_file", e.column());
     }
 
     @Test

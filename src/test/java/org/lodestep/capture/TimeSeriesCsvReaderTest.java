@@ -207,6 +207,9 @@ class TimeSeriesCsvReaderTest {
         assertEquals("time", failureOf("time,a_g\n0,1\n").column());
         assertEquals("a_g", failureOf("time_s,a_g,a_g\n0,1,1\n").column());
         assertTrue(failureOf("time_s\n0\n1\n").expected().contains("no data column"));
+        InputFormatException noHeader = failureOf("0.000,1.5\n0.001,1.5\n");
+        assertEquals(1, noHeader.line());
+        assertTrue(noHeader.expected().contains("header"), noHeader.getMessage());
     }
 
     @Test
