@@ -144,6 +144,12 @@ public final class CaptureReader implements SampleStream {
         }
     }
 
+    /** The row count the sidecar recorded (checked when the read reaches the end). */
+    @Override
+    public long knownFrameCount() {
+        return sidecar.frames();
+    }
+
     /** What the sidecar says. */
     public CaptureSidecar sidecar() {
         return sidecar;

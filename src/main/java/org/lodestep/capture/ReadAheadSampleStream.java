@@ -111,6 +111,11 @@ final class ReadAheadSampleStream implements SampleStream {
     }
 
     @Override
+    public long knownFrameCount() {
+        return in.knownFrameCount();
+    }
+
+    @Override
     public String source() {
         return in.source();
     }

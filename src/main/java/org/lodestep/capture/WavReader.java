@@ -59,6 +59,7 @@ public final class WavReader implements SampleStream {
     private final int bits;
     private final int blockAlign;
     private final long dataStart;
+    private final long frameCount;
     /** Bytes of sample data still to read, or -1 to read to the end of the input. */
     private long remaining;
     private long position;
@@ -156,6 +157,7 @@ public final class WavReader implements SampleStream {
             }
         }
         this.dataStart = position;
+        this.frameCount = remaining < 0 ? -1 : remaining / fmtBlockAlign;
         this.format = fmtFormat;
         this.bits = fmtBits;
         this.blockAlign = fmtBlockAlign;
@@ -332,6 +334,12 @@ public final class WavReader implements SampleStream {
     @Override
     public Map<String, String> metadata() {
         return metadata;
+    }
+
+    /** Frames declared by the data chunk; -1 when its size was written as unknown and the file length is unknown. */
+    @Override
+    public long knownFrameCount() {
+        return frameCount;
     }
 
     /** Byte offset of the first sample in the file. */

@@ -85,6 +85,7 @@ class CaptureWriterTest {
                 assertTrue(s instanceof CaptureReader, open.toString());
                 assertEquals(CHANNELS, s.channels());
                 assertEquals(51200.0, s.sampleRateHz());
+                assertEquals(n, s.knownFrameCount());
                 assertEquals("HS-23-00917", s.metadata().get("serial_number"));
                 assertEquals("gantry-x", s.metadata().get("scenario"));
                 assertEquals("R. Okafor", s.metadata().get("operator"));

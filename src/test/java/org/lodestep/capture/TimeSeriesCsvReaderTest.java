@@ -34,6 +34,7 @@ class TimeSeriesCsvReaderTest {
     void readsCommaFileWithUnitsMetadataAndRate() throws Exception {
         try (TimeSeriesCsvReader r = TimeSeriesCsvReader.open(TestStreams.fixture("comma.csv"))) {
             assertEquals(List.of(new Channel("accel", "g"), new Channel("current", "a")), r.channels());
+            assertEquals(-1, r.knownFrameCount());
             // Time stamps 0.000, 0.001, ... s: 1000 Hz by definition of the fixture.
             assertEquals(1000.0, r.sampleRateHz());
             assertEquals(0.0, r.startTimeS());

@@ -52,6 +52,7 @@ class WavReaderTest {
             assertEquals(48000.0, r.sampleRateHz());
             assertEquals(List.of(new Channel("ch1", "")), r.channels());
             assertEquals(44, r.dataStart());
+            assertEquals(48000, r.knownFrameCount());
             double[] d = TestStreams.readAll(r, 10_000)[0];
             assertEquals(48000, d.length);
             assertEquals(-1.0, d[0]);
@@ -211,6 +212,7 @@ class WavReaderTest {
         file[file.length - 6] = (byte) 0xFF;
         file[file.length - 5] = (byte) 0xFF;
         try (WavReader r = read(file)) {
+            assertEquals(-1, r.knownFrameCount());
             assertArrayEquals(new double[] {0.5, -0.5}, TestStreams.readAll(r, 8)[0]);
         }
     }
