@@ -22,7 +22,7 @@ import ch.randelshofer.fastdoubleparser.JavaDoubleParser;
  * blank lines are skipped. Fields may be quoted.
  *
  * <p><b>Speed.</b> Rows of the plain shape are parsed in place in the read buffer: plain decimals exactly by
- * {@link PlainDecimal}, other numbers by FastDoubleParser. Any other row (spaces, quotes, comments, errors) takes a
+ * {@link PlainDecimal}, other numbers by FastDoubleParser. Any other row (quotes, comments, errors) takes a
  * general path that splits the line first; a row holding a quote character goes through Commons CSV. Memory is bounded by one read buffer and the caller's
  * block, whatever the file's length.
  *
@@ -426,8 +426,8 @@ public final class TimeSeriesCsvReader implements SampleStream {
     }
 
     /**
-     * The fast path: parses rows of the plain shape (unquoted numbers separated by the delimiter, no spaces, ending
-     * in a newline) straight from the read buffer. Stops before the first row that is not whole in the buffer or
+     * The fast path: parses rows of the plain shape (unquoted numbers separated by the delimiter, spaces allowed
+     * around them, ending in a newline) straight from the read buffer. Stops before the first row that is not whole in the buffer or
      * not plain, leaving it to {@link #parseRow}, which reads every shape and words every error.
      *
      * @return the number of rows parsed
@@ -447,6 +447,9 @@ public final class TimeSeriesCsvReader implements SampleStream {
             int q = p;
             double timeS = 0;
             for (int col = 0; col < width; col++) {
+                while (b[q] == ' ') {
+                    q++;   // "0.001, 0.5": spaces around fields are common in hand-made and logger files
+                }
                 double v = PlainDecimal.parse(b, q, decimalComma, end);
                 if (Double.isNaN(v)) {
                     v = generalNumber(b, q, delim);
@@ -455,6 +458,9 @@ public final class TimeSeriesCsvReader implements SampleStream {
                     }
                 }
                 q = end[0];
+                while (b[q] == ' ') {
+                    q++;
+                }
                 byte c = b[q];
                 if (col < width - 1) {
                     if (c != delim) {
