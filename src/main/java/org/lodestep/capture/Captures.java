@@ -33,8 +33,25 @@ public final class Captures {
             case CAPTURE:
                 return CaptureReader.open(path, incomplete);
             default:
-                return TimeSeriesCsvReader.open(path);
+                return plainCsv(path);
         }
+    }
+
+    /**
+     * A CSV without a sidecar; refused when its own header says it is a rig capture, because then nothing can tell
+     * whether it is complete and unchanged.
+     */
+    private static SampleStream plainCsv(Path path) throws IOException, InputFormatException {
+        TimeSeriesCsvReader csv = TimeSeriesCsvReader.open(path);
+        if (csv.metadata().containsKey("lodestep_capture")) {
+            csv.close();
+            String name = path.getFileName().toString();
+            int dot = name.lastIndexOf('.');
+            throw new InputFormatException(path.toString(), InputFormatException.NO_LINE, null, null,
+                    "is a rig capture whose sidecar is missing: expected " + (dot > 0 ? name.substring(0, dot) : name)
+                            + ".json beside it, to check that the data are complete and unchanged");
+        }
+        return csv;
     }
 
     /**

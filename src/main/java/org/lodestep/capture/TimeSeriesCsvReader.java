@@ -23,8 +23,8 @@ import ch.randelshofer.fastdoubleparser.JavaDoubleParser;
  *
  * <p><b>Speed.</b> Rows of the plain shape are parsed in place in the read buffer: plain decimals exactly by
  * {@link PlainDecimal}, other numbers by FastDoubleParser. Any other row (quotes, comments, errors) takes a
- * general path that splits the line first; a row holding a quote character goes through Commons CSV. Memory is bounded by one read buffer and the caller's
- * block, whatever the file's length.
+ * general path that splits the line first; a row holding a quote character goes through Commons CSV. Memory is
+ * bounded by one read buffer and the caller's block, whatever the file's length.
  *
  * <p><b>Errors.</b> A cell that is empty, not a number, NaN or infinite, a row with the wrong number of fields, and a
  * time stamp that breaks the sample clock (see {@link TimeAxis}: gaps, repeats, backwards steps, drift) end the read

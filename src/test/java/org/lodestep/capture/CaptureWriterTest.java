@@ -108,6 +108,17 @@ class CaptureWriterTest {
     }
 
     @Test
+    void refusesCaptureCsvWhoseSidecarIsMissing() throws Exception {
+        Path csv = dir.resolve("lost.csv");
+        try (CaptureWriter w = CaptureWriter.create(csv, info(1000), CaptureWriter.Interrupted.KEEP_INCOMPLETE)) {
+            w.append(block(0, 10), 0, 10);
+        }
+        Files.delete(dir.resolve("lost.json"));
+        InputFormatException e = assertThrows(InputFormatException.class, () -> Captures.open(csv));
+        assertTrue(e.expected().contains("lost.json"), e.getMessage());
+    }
+
+    @Test
     void refusesSidecarThatBelongsToAnotherDataFile() throws Exception {
         try (CaptureWriter w = CaptureWriter.create(dir.resolve("one.csv"), info(1000),
                 CaptureWriter.Interrupted.DISCARD)) {
