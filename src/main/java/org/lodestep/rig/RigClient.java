@@ -155,8 +155,17 @@ public final class RigClient implements Closeable {
     @Override
     public void close() {
         try {
-            send(Frame.text(Frame.COMMAND, tag(), "BYE"));
-            reader.next(Math.min(200, settings.replyTimeoutMs()));
+            int t = tag();
+            send(Frame.text(Frame.COMMAND, t, "BYE"));
+            // wait for the answer to BYE itself: a stream's end frame or a ping reply may still be on the line, and
+            // closing a serial port can discard bytes not yet sent
+            long deadline = System.nanoTime() + Math.min(1000, settings.replyTimeoutMs()) * 1_000_000L;
+            while (System.nanoTime() < deadline) {
+                Frame f = reader.next(50);
+                if (f != null && f.tag() == t) {
+                    break;
+                }
+            }
         } catch (IOException | RuntimeException ignored) {
             // closing anyway
         }

@@ -101,7 +101,7 @@ class RigServeCommandTest {
                 assertEquals(2500, cap.signal().length());
                 assertEquals(0, c.stats().damagedFrames(), "a pseudo-terminal does not damage bytes");
             }
-            t.join(5000);
+            t.join(15000);
             assertFalse(t.isAlive(), "--once ends after BYE: " + log);
             assertEquals(0, code.get(), log.toString());
         } finally {
