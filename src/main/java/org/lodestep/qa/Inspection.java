@@ -145,7 +145,11 @@ public final class Inspection {
         return i < 26 ? String.valueOf((char) ('A' + i)) : "P" + (i + 1);
     }
 
-    private static String fmt(double v) {
+    /** Four significant digits, without a trailing ".0" on whole numbers (500 V, not 500.0 V). */
+    static String fmt(double v) {
+        if (v == Math.rint(v) && Math.abs(v) < 1e7) {
+            return String.valueOf((long) v);
+        }
         return String.format(Locale.ROOT, "%.4g", v);
     }
 }
