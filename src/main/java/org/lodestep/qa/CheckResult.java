@@ -22,7 +22,7 @@ public record CheckResult(String parameter, String label, double measured, doubl
         Objects.requireNonNull(limit, "limit");
         Objects.requireNonNull(verdict, "verdict");
         Objects.requireNonNull(note, "note");
-        if (verdict != Verdict.INCOMPLETE && !Double.isFinite(judged)) {
+        if (verdict == Verdict.PASS && !Double.isFinite(judged)) {
             throw new IllegalArgumentException(parameter + " " + label + ": a " + verdict
                     + " verdict needs a finite judged value, got " + judged + " " + limit.unit());
         }

@@ -18,6 +18,9 @@ public final class Inspection {
     /** Test voltages within this fraction of the spec's are accepted (tester setting tolerance). */
     static final double TEST_VOLTAGE_TOLERANCE = 0.05;
 
+    /** Phases of a two-phase hybrid stepper. */
+    static final int PHASES = 2;
+
     private Inspection() {
     }
 
@@ -78,6 +81,11 @@ public final class Inspection {
                         + WindingResistance.STANDARD + ")";
             }
             out.add(judgedResult(limit, phaseLabel(i), raw, judged, note));
+        }
+        // A two-phase hybrid has two phase windings; fewer found in a complete reading means an open winding.
+        for (int i = m.phaseResistancesOhm().size(); i < PHASES; i++) {
+            out.add(new CheckResult(limit.parameter(), phaseLabel(i), Double.NaN, Double.NaN, limit, Verdict.FAIL,
+                    "phase winding " + phaseLabel(i) + " not found: open winding or broken lead"));
         }
     }
 

@@ -85,4 +85,14 @@ class InspectionTest {
         assertEquals(Verdict.INCOMPLETE, b.verdict());
         assertTrue(b.note().contains("repeat at 500 V"), b.note());
     }
+
+    @Test
+    void singlePhaseFoundFailsAsOpenWinding() {
+        Measurements m = new Measurements(List.of(2.0), 20.0, List.of(3.2e-3), List.of(), Double.NaN, 1.8, List.of());
+        Inspection.Judgement j = Inspection.judge(Fixtures.spec(), m);
+        CheckResult b = check(j, Parameters.PHASE_RESISTANCE, "B");
+        assertEquals(Verdict.FAIL, b.verdict());
+        assertTrue(b.note().contains("open winding"), b.note());
+        assertEquals(Verdict.FAIL, j.verdict());
+    }
 }
