@@ -12,6 +12,7 @@ import org.lodestep.qa.CaptureRef;
 import org.lodestep.qa.Hashes;
 import org.lodestep.qa.InsulationReading;
 import org.lodestep.qa.Measurements;
+import org.lodestep.qa.MeterLog;
 
 import picocli.CommandLine.Option;
 
@@ -52,6 +53,14 @@ final class QaReadings {
     @Option(names = "--step-angle-deg", paramLabel = "DEG", description = "Full-step angle, degrees.")
     Double stepAngleDeg;
 
+    @Option(names = "--meter-log", paramLabel = "FILE",
+            description = "CSV of hand-held meter readings, one row per serial number (columns serial, phase_a_ohm, "
+                    + "phase_b_ohm, inductance_a_mh, inductance_b_mh, insulation_<label>_mohm, insulation_test_v, "
+                    + "ke_v_s_per_rad, step_angle_deg, winding_c; empty cells = not measured).")
+    Path meterLogFile;
+
+    private MeterLog meterLog;
+
     @Option(names = "--winding-c", paramLabel = "°C",
             description = "Winding temperature during the resistance reading, °C (default: the CSV's temperature_c, "
                     + "else --ambient-c: a motor that has rested at the bench is at ambient).")
@@ -78,11 +87,31 @@ final class QaReadings {
             }
             captures.add(new CaptureRef(file.toString(), "resistance", Hashes.sha256(file)));
         }
-        if (Double.isNaN(temperature)) {
-            temperature = ambientC;
-        }
-        List<Double> inductances = inductanceMh.stream().map(v -> v / 1000.0).toList();
+        List<Double> inductances = new ArrayList<>(inductanceMh.stream().map(v -> v / 1000.0).toList());
         List<InsulationReading> ins = new ArrayList<>();
+        double ke = keVsPerRad == null ? Double.NaN : keVsPerRad;
+        double step = stepAngleDeg == null ? Double.NaN : stepAngleDeg;
+        if (meterLogFile != null) {
+            if (meterLog == null) {
+                meterLog = MeterLog.read(meterLogFile);
+            }
+            MeterLog.Row row = meterLog.row(serial).orElse(null);
+            if (row != null) {
+                captures.add(new CaptureRef(meterLogFile + " line " + row.line(), "meter_log", row.sha256()));
+                fromLog(row, "phase_a_ohm", "phase_b_ohm", 1.0, phases, "phase resistance");
+                fromLog(row, "inductance_a_mh", "inductance_b_mh", 1e-3, inductances, "inductance");
+                double volts = Double.isNaN(row.get("insulation_test_v")) ? specTestVoltageV : row.get("insulation_test_v");
+                for (var e : row.insulationMohm().entrySet()) {
+                    ins.add(new InsulationReading(e.getKey().replace('_', '-'), e.getValue() * 1e6,
+                            Double.isNaN(volts) ? 500 : volts));
+                }
+                ke = pick(ke, row.get("ke_v_s_per_rad"), "back-EMF constant");
+                step = pick(step, row.get("step_angle_deg"), "step angle");
+                if (Double.isNaN(temperature) && !Double.isNaN(row.get("winding_c"))) {
+                    temperature = row.get("winding_c");
+                }
+            }
+        }
         for (String spec : insulation) {
             Matcher m = INSULATION.matcher(spec.trim());
             if (!m.matches()) {
@@ -96,13 +125,38 @@ final class QaReadings {
             }
             ins.add(new InsulationReading(m.group(1).trim(), Double.parseDouble(m.group(2)) * 1e6, volts));
         }
+        if (Double.isNaN(temperature)) {
+            temperature = ambientC;
+        }
         try {
-            return new Measurements(phases, temperature, inductances, ins,
-                    keVsPerRad == null ? Double.NaN : keVsPerRad,
-                    stepAngleDeg == null ? Double.NaN : stepAngleDeg, captures);
+            return new Measurements(phases, temperature, inductances, ins, ke, step, captures);
         } catch (IllegalArgumentException e) {
             throw new UsageException(e.getMessage());
         }
+    }
+
+    private static void fromLog(MeterLog.Row row, String a, String b, double scale, List<Double> into, String what) {
+        double va = row.get(a);
+        double vb = row.get(b);
+        if (Double.isNaN(va) && Double.isNaN(vb)) {
+            return;
+        }
+        if (!into.isEmpty()) {
+            throw new UsageException(what + " of " + row.serial() + " given twice (meter log line " + row.line()
+                    + " and another option)");
+        }
+        if (Double.isNaN(va) || Double.isNaN(vb)) {
+            throw new UsageException("meter log line " + row.line() + ": " + what + " needs both " + a + " and " + b);
+        }
+        into.add(va * scale);
+        into.add(vb * scale);
+    }
+
+    private static double pick(double option, double logged, String what) {
+        if (!Double.isNaN(option) && !Double.isNaN(logged)) {
+            throw new UsageException(what + " given both as an option and in the meter log");
+        }
+        return Double.isNaN(option) ? logged : option;
     }
 
     /** The capture file of one serial number; refuses serials that would leave the pattern's folder. */
@@ -121,7 +175,7 @@ final class QaReadings {
     /** True when any reading source was given. */
     boolean any() {
         return resistanceFile != null || resistancePattern != null || !phaseOhm.isEmpty() || !inductanceMh.isEmpty()
-                || !insulation.isEmpty() || keVsPerRad != null || stepAngleDeg != null;
+                || !insulation.isEmpty() || keVsPerRad != null || stepAngleDeg != null || meterLogFile != null;
     }
 
 }
