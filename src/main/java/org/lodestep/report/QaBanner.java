@@ -36,7 +36,7 @@ final class QaBanner {
         }
         int width = Math.max(rows[0].length(), caption.length()) + 4;
         char frame = v == Verdict.PASS ? '=' : v == Verdict.FAIL ? 'X' : '?';
-        String bar = String.valueOf(frame).repeat(width + 4);
+        String bar = String.valueOf(frame).repeat(width + 3);
         List<String> out = new java.util.ArrayList<>();
         out.add(bar);
         for (StringBuilder row : rows) {
