@@ -67,7 +67,9 @@ public final class IndividualsChart {
         double uclMr = D4 * mrBar;
         List<Integer> outX = new ArrayList<>();
         List<Integer> outMr = new ArrayList<>();
-        for (int i = 0; i < n; i++) {
+        // No variation at all (a discrete value such as a step angle): the limits collapse onto the centre and no point
+        // is out of control, whatever the last bit of rounding in the mean says.
+        for (int i = 0; mrBar > 0 && i < n; i++) {
             if (x[i] > ucl || x[i] < lcl) {
                 outX.add(i);
             }

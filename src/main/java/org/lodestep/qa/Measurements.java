@@ -44,6 +44,12 @@ public record Measurements(List<Double> phaseResistancesOhm, double windingTempe
         }
     }
 
+    /** The same values without the capture list (for keys that hash captures separately). */
+    Measurements withoutCaptures() {
+        return new Measurements(phaseResistancesOhm, windingTemperatureC, phaseInductancesH, insulation,
+                backEmfConstantVsPerRad, stepAngleDeg, List.of());
+    }
+
     /** Nothing measured yet. */
     public static Measurements none() {
         return new Measurements(List.of(), Double.NaN, List.of(), List.of(), Double.NaN, Double.NaN, List.of());

@@ -67,9 +67,9 @@ public record Submission(String serial, String lot, String partNumber, String pa
     }
 
     /**
-     * The idempotency key: the same captures of the same serial judged by the same spec are one record, however
-     * often submitted. Values typed in by hand (no capture) are keyed by their start time as well, so a real re-test
-     * with equal readings is kept.
+     * The idempotency key: the same captures and values of the same serial judged by the same spec are one record,
+     * however often submitted. Values typed in by hand alone (no capture) are keyed by their start time as well, so a
+     * real re-test with equal readings is kept.
      */
     public String submissionKey() {
         StringBuilder b = new StringBuilder();
@@ -79,10 +79,12 @@ public record Submission(String serial, String lot, String partNumber, String pa
             hashes.add(c.kind() + ":" + c.sha256());
         }
         if (hashes.isEmpty()) {
-            b.append("manual\u0000").append(startedAtUtc).append('\u0000').append(measurements);
+            b.append("manual\u0000").append(startedAtUtc).append('\u0000');
         } else {
-            b.append(String.join(",", hashes));
+            b.append(String.join(",", hashes)).append('\u0000');
         }
+        // The values too: the same capture with other hand-typed readings beside it is a different test.
+        b.append(measurements.withoutCaptures());
         return Hashes.sha256(b.toString());
     }
 }

@@ -51,4 +51,12 @@ class IndividualsChartTest {
         assertEquals(List.of(20), l.outsideX());
         assertEquals(List.of(20, 21), l.outsideMr());
     }
+
+    @Test
+    void seriesWithoutVariationHasNoPointOutside() {
+        IndividualsChart.Limits l = IndividualsChart.of(new double[] {1.8, 1.8, 1.8, 1.8, 1.8, 1.8, 1.8, 1.8, 1.8, 1.8});
+        assertEquals(0.0, l.movingRangeMean());
+        assertTrue(l.outsideX().isEmpty());
+        assertTrue(l.outsideMr().isEmpty());
+    }
 }

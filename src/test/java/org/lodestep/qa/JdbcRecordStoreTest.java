@@ -62,6 +62,22 @@ class JdbcRecordStoreTest {
 
     @ParameterizedTest
     @MethodSource("backends")
+    void sameCaptureWithOtherTypedReadingsIsANewRecord(String name) throws Exception {
+        try (Backend b = Backend.create(name); RecordStore store = b.open()) {
+            String sha = Fixtures.sha("capture-1");
+            Measurements first = Fixtures.motor(2.02, 2.05, 23.0, sha);
+            Measurements again = new Measurements(first.phaseResistancesOhm(), 23.0, first.phaseInductancesH(),
+                    java.util.List.of(new InsulationReading("A-frame", 1200e6, 500)), Double.NaN, 1.8, first.captures());
+            store.append(Fixtures.submission("KV-1", "L1", first, "2026-07-01T08:00:00.000Z"));
+            RecordStore.Appended second = store.append(Fixtures.submission("KV-1", "L1", again,
+                    "2026-07-02T08:00:00.000Z"));
+            assertTrue(second.created());
+            assertEquals(2, store.find(RecordQuery.all()).size());
+        }
+    }
+
+    @ParameterizedTest
+    @MethodSource("backends")
     void retestIsNewRecordLinkedToTheEarlierOne(String name) throws Exception {
         try (Backend b = Backend.create(name); RecordStore store = b.open()) {
             long first = store.append(Fixtures.submission("KV-7", "L1",
