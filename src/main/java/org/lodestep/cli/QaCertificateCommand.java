@@ -48,7 +48,7 @@ final class QaCertificateCommand implements Callable<Integer> {
     public Integer call() throws Exception {
         List<StoredRecord> history;
         String where;
-        try (RecordStore rs = store.open()) {
+        try (RecordStore rs = store.openExisting()) {
             history = rs.find(new RecordQuery(serial, null, part, null, null));
             where = rs.location();
         }

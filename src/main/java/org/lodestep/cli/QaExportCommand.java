@@ -48,7 +48,7 @@ final class QaExportCommand implements Callable<Integer> {
     @Override
     public Integer call() throws Exception {
         List<StoredRecord> records;
-        try (RecordStore rs = store.open()) {
+        try (RecordStore rs = store.openExisting()) {
             records = rs.find(filter.query());
         }
         writeAtomically(outFile, records);

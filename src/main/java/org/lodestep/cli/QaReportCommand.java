@@ -43,7 +43,7 @@ final class QaReportCommand implements Callable<Integer> {
     public Integer call() throws Exception {
         PrintWriter out = spec.commandLine().getOut();
         List<StoredRecord> records;
-        try (RecordStore rs = store.open()) {
+        try (RecordStore rs = store.openExisting()) {
             records = rs.find(filter.query());
         }
         LotStatistics.Summary summary = LotStatistics.of(records);

@@ -16,6 +16,14 @@ final class QaStoreOption {
                             + "or ~/.pgpass), never from the command line."})
     String db;
 
+    /** Opens a store that must already hold records: reading commands never create an empty file by mistake. */
+    RecordStore openExisting() throws StoreException {
+        RecordStores.sqliteFile(db).filter(f -> !java.nio.file.Files.exists(f)).ifPresent(f -> {
+            throw new UsageException("no QA records at " + f + ": run `lodestep qa check` first, or give --db");
+        });
+        return open();
+    }
+
     RecordStore open() throws StoreException {
         try {
             return RecordStores.open(db, System.getenv());

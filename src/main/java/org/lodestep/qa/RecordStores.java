@@ -57,6 +57,15 @@ public final class RecordStores {
         return openSqlite(Path.of(path));
     }
 
+    /** The SQLite file a location names, or empty for a PostgreSQL (or other JDBC) location. */
+    public static java.util.Optional<Path> sqliteFile(String location) {
+        String loc = location == null || location.isBlank() ? DEFAULT_FILE : location.trim();
+        if (loc.startsWith("jdbc:sqlite:")) {
+            return java.util.Optional.of(Path.of(loc.substring("jdbc:sqlite:".length())));
+        }
+        return loc.startsWith("jdbc:") ? java.util.Optional.empty() : java.util.Optional.of(Path.of(loc));
+    }
+
     private static RecordStore openSqlite(Path file) throws StoreException {
         try {
             Path parent = file.toAbsolutePath().getParent();

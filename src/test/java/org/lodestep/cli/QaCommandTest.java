@@ -161,7 +161,15 @@ class QaCommandTest {
     }
 
     @Test
+    void reportOnMissingStoreFileIsUsageErrorAndCreatesNothing() {
+        assertEquals(ExitCode.USAGE, run("qa", "report", "--db", db));
+        assertTrue(err.contains("no QA records at"), err);
+        assertFalse(Files.exists(Path.of(db)));
+    }
+
+    @Test
     void certificateOfUnknownSerialIsUsageError() {
+        check("SN-0", "1.9,1.9");
         assertEquals(ExitCode.USAGE, run("qa", "certificate", "--db", db, "--serial", "NOPE"));
         assertTrue(err.contains("no record of serial 'NOPE'"), err);
     }
