@@ -156,7 +156,7 @@ class QaCommandTest {
     void unreachableDatabaseExitsFive() {
         int code = run("qa", "report", "--db", "jdbc:postgresql://127.0.0.1:9/none?connectTimeout=2");
         assertEquals(ExitCode.DATABASE, code);
-        assertTrue(err.startsWith("lodestep report: database: "), err);
+        assertTrue(err.startsWith("lodestep qa report: database: "), err);
         assertEquals(1, err.lines().count(), err);
     }
 
