@@ -17,6 +17,7 @@ import java.util.concurrent.Callable;
 import org.lodestep.capture.InputFormatException;
 import org.lodestep.qa.Inspection;
 import org.lodestep.qa.Measurements;
+import org.lodestep.qa.Parameters;
 import org.lodestep.qa.PartSpec;
 import org.lodestep.qa.PartSpecReader;
 import org.lodestep.qa.RecordStore;
@@ -39,9 +40,11 @@ import picocli.CommandLine.Option;
                         + "them) until end of input, with a running tally.",
                 "Exit code 0 only when every motor passed every check; 3 when any check failed or could not be judged."},
         footerHeading = "%nExamples:%n",
-        footer = {"  lodestep qa check --spec kv4218.toml --serial KV24-00117 --phase-ohm 2.03,2.05 --ambient-c 22 \\",
-                "      --insulation A-frame=850 --insulation B-frame=910 --operator 'M. Ortiz'",
-                "  lodestep qa check --spec kv4218.toml --lot L-2607 --resistance-pattern 'caps/{serial}.csv' < serials.txt",
+        footer = {"  lodestep qa check --spec kv4218.toml --serial KV24-00117 \\",
+                "      --phase-ohm 2.03,2.05 --ambient-c 22 --insulation a-frame=850 \\",
+                "      --insulation b-frame=910 --operator 'M. Ortiz'",
+                "  lodestep qa check --spec kv4218.toml --lot L-2607 \\",
+                "      --resistance-pattern 'caps/{serial}.csv' < serials.txt",
                 "",
                 "Safety: insulation testers apply hundreds of volts DC. Disconnect the motor from any driver, test on a "
                         + "non-conductive surface, keep hands off the leads while the tester runs, and discharge the "
@@ -65,7 +68,7 @@ final class QaCheckCommand implements Callable<Integer> {
     @Mixin
     QaReadings readings = new QaReadings();
 
-    @Option(names = "--ambient-c", paramLabel = "°C", description = "Ambient temperature at the bench, °C.")
+    @Option(names = "--ambient-c", paramLabel = "CELSIUS", description = "Ambient temperature at the bench, °C.")
     Double ambientC;
 
     @Option(names = "--operator", paramLabel = "NAME", description = "Who tests (default: the login name).")
@@ -102,6 +105,9 @@ final class QaCheckCommand implements Callable<Integer> {
             throw new UsageException("lot mode takes --resistance-pattern, not one --resistance file for every motor");
         }
         partSpec = PartSpecReader.read(specFile);
+        if (!json && partSpec.limit(Parameters.INSULATION_RESISTANCE).isPresent()) {
+            out.println(caution(partSpec.insulationTestVoltageV()));
+        }
         try (RecordStore records = store.open()) {
             if (serial != null) {
                 RecordStore.Appended a = checkOne(records, serial);
@@ -195,6 +201,13 @@ final class QaCheckCommand implements Callable<Integer> {
             throw new UsageException(e.getMessage());
         }
         return records.append(s);
+    }
+
+    /** The one-line caution printed before checks that include an insulation test. */
+    static String caution(double testVoltageV) {
+        return "Caution: the insulation test applies " + Math.round(testVoltageV) + " V DC. Motor disconnected from any"
+                + " driver, hands off leads and frame while the tester runs, windings discharged afterwards; local"
+                + " electrical-safety rules take precedence.";
     }
 
     private String operator() {

@@ -61,7 +61,7 @@ final class QaReadings {
 
     private MeterLog meterLog;
 
-    @Option(names = "--winding-c", paramLabel = "°C",
+    @Option(names = "--winding-c", paramLabel = "CELSIUS",
             description = "Winding temperature during the resistance reading, °C (default: the CSV's temperature_c, "
                     + "else --ambient-c: a motor that has rested at the bench is at ambient).")
     Double windingC;

@@ -158,6 +158,7 @@ public final class Inspection {
         if (v == Math.rint(v) && Math.abs(v) < 1e7) {
             return String.valueOf((long) v);
         }
-        return String.format(Locale.ROOT, "%.4g", v);
+        String s = String.format(Locale.ROOT, "%.4g", v);
+        return s.contains(".") && !s.contains("e") ? s.replaceAll("0+$", "").replaceAll("\\.$", "") : s;
     }
 }
