@@ -132,7 +132,9 @@ public final class Inspection {
                 continue;
             }
             String note = "raw reading judged (small-motor practice)";
-            if (!Double.isNaN(m.windingTemperatureC())) {
+            if (Double.isInfinite(r.resistanceOhm())) {
+                note = "above the tester's range";
+            } else if (!Double.isNaN(m.windingTemperatureC())) {
                 note += "; " + fmt(InsulationResistance.correctedTo40C(r.resistanceOhm(), m.windingTemperatureC()) / 1e6)
                         + " Mohm at 40 °C for trending (IEEE 43 clause 6.3)";
             }

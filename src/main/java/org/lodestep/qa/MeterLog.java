@@ -28,12 +28,14 @@ import org.lodestep.capture.InputFormatException;
  * <p>CSV with a header; {@code serial} is required, every other column optional, empty cells mean not measured:
  * {@code phase_a_ohm, phase_b_ohm, inductance_a_mh, inductance_b_mh, insulation_<label>_mohm} (any label, e.g.
  * {@code insulation_a_frame_mohm}), {@code insulation_test_v}, {@code ke_v_s_per_rad}, {@code step_angle_deg},
- * {@code winding_c}. Each row is recorded with the SHA-256 of the header and that row, so a log that grows during the
+ * {@code winding_c}. An insulation reading above the tester's range is written {@code over} or {@code OL}. Each row is recorded with the SHA-256 of the header and that row, so a log that grows during the
  * day still matches the records made from its earlier rows.
  */
 public final class MeterLog {
 
     private static final Pattern INSULATION = Pattern.compile("insulation_(.+)_mohm");
+    /** How an insulation cell says the reading was above the tester's range. */
+    private static final List<String> OVER_RANGE = List.of("over", "ol", ">range");
     private static final List<String> KNOWN = List.of("serial", "phase_a_ohm", "phase_b_ohm", "inductance_a_mh",
             "inductance_b_mh", "insulation_test_v", "ke_v_s_per_rad", "step_angle_deg", "winding_c");
 
@@ -110,6 +112,10 @@ public final class MeterLog {
                     }
                     String cell = rec.get(i);
                     if (cell.isEmpty()) {
+                        continue;
+                    }
+                    if (INSULATION.matcher(header.get(i)).matches() && OVER_RANGE.contains(cell.toLowerCase(Locale.ROOT))) {
+                        values.put(header.get(i), Double.POSITIVE_INFINITY);
                         continue;
                     }
                     try {

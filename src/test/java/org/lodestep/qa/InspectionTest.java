@@ -95,4 +95,13 @@ class InspectionTest {
         assertTrue(b.note().contains("open winding"), b.note());
         assertEquals(Verdict.FAIL, j.verdict());
     }
+
+    @Test
+    void insulationAboveTesterRangePasses() {
+        Measurements m = new Measurements(List.of(2.0, 2.0), 25.0, List.of(3.2e-3, 3.2e-3),
+                List.of(new InsulationReading("A-frame", Double.POSITIVE_INFINITY, 500)), Double.NaN, 1.8, List.of());
+        CheckResult a = check(Inspection.judge(Fixtures.spec(), m), Parameters.INSULATION_RESISTANCE, "A-frame");
+        assertEquals(Verdict.PASS, a.verdict());
+        assertEquals("above the tester's range", a.note());
+    }
 }

@@ -47,6 +47,21 @@ class JdbcRecordStoreTest {
 
     @ParameterizedTest
     @MethodSource("backends")
+    void overRangeInsulationSurvivesTheRoundTrip(String name) throws Exception {
+        try (Backend b = Backend.create(name); RecordStore store = b.open()) {
+            Measurements m = new Measurements(List.of(2.0, 2.0), 20.0, List.of(3.2e-3, 3.2e-3),
+                    List.of(new InsulationReading("A-frame", Double.POSITIVE_INFINITY, 500)), Double.NaN, 1.8,
+                    List.of(new CaptureRef("rig sim", "rig", Fixtures.sha("rig"))));
+            Submission s = Fixtures.submission("KV-inf", "L1", m, "2026-07-01T08:00:00.000Z");
+            store.append(s);
+            StoredRecord back = store.find(RecordQuery.serial("KV-inf")).get(0);
+            assertEquals(s, back.submission());
+            assertTrue(back.intact());
+        }
+    }
+
+    @ParameterizedTest
+    @MethodSource("backends")
     void sameCaptureSubmittedTwiceIsOneRecord(String name) throws Exception {
         try (Backend b = Backend.create(name); RecordStore store = b.open()) {
             Measurements m = Fixtures.motor(2.02, 2.05, 23.0, Fixtures.sha("capture-1"));

@@ -30,6 +30,8 @@ class MeterLogTest {
         assertEquals(Map.of("b_frame", 640.0), r2.insulationMohm());
         assertTrue(Double.isNaN(r2.get("inductance_a_mh")));
         assertTrue(log.row("KV-3").isEmpty());
+        MeterLog over = MeterLog.parse("log.csv", LOG.replace("KV-2,,640", "KV-2,,OL"));
+        assertEquals(Double.POSITIVE_INFINITY, over.row("KV-2").orElseThrow().get("insulation_b_frame_mohm"));
     }
 
     @Test
