@@ -28,8 +28,9 @@ import org.lodestep.capture.InputFormatException;
  * <p>CSV with a header; {@code serial} is required, every other column optional, empty cells mean not measured:
  * {@code phase_a_ohm, phase_b_ohm, inductance_a_mh, inductance_b_mh, insulation_<label>_mohm} (any label, e.g.
  * {@code insulation_a_frame_mohm}), {@code insulation_test_v}, {@code ke_v_s_per_rad}, {@code step_angle_deg},
- * {@code winding_c}. An insulation reading above the tester's range is written {@code over} or {@code OL}. Each row is recorded with the SHA-256 of the header and that row, so a log that grows during the
- * day still matches the records made from its earlier rows.
+ * {@code winding_c}. An insulation reading above the tester's range is written {@code over} or {@code OL}. Each row
+ * is recorded with the SHA-256 of the header and that row, so a log that grows during the day still matches the
+ * records made from its earlier rows.
  */
 public final class MeterLog {
 
