@@ -70,9 +70,24 @@ public final class LotStatistics {
         }
     }
 
+    /**
+     * A motor whose latest record did not pass, with the checks that did not.
+     *
+     * @param serial   serial number
+     * @param recordId its latest record
+     * @param verdict  FAIL or INCOMPLETE
+     * @param checks   {@code parameter label} of each check that did not pass
+     */
+    public record NotPassed(String serial, long recordId, Verdict verdict, List<String> checks) {
+        public NotPassed {
+            checks = List.copyOf(checks);
+        }
+    }
+
     /** The whole summary. */
-    public record Summary(Counts counts, List<ParameterStatistics> parameters) {
+    public record Summary(Counts counts, List<NotPassed> notPassed, List<ParameterStatistics> parameters) {
         public Summary {
+            notPassed = List.copyOf(notPassed);
             parameters = List.copyOf(parameters);
         }
     }
@@ -113,7 +128,15 @@ public final class LotStatistics {
         Counts counts = new Counts(records.size(), motors, retests, passed, failed, incomplete,
                 motors == 0 ? Double.NaN : 100.0 * firstPass / motors,
                 motors == 0 ? Double.NaN : 100.0 * passed / motors, notIntact);
-        return new Summary(counts, parameters(List.copyOf(latest.values())));
+        List<NotPassed> notPassed = new ArrayList<>();
+        for (StoredRecord r : latest.values()) {
+            if (r.submission().verdict() != Verdict.PASS) {
+                notPassed.add(new NotPassed(r.submission().serial(), r.id(), r.submission().verdict(),
+                        r.submission().checks().stream().filter(c -> c.verdict() != Verdict.PASS)
+                                .map(c -> (c.parameter() + " " + c.label()).strip()).toList()));
+            }
+        }
+        return new Summary(counts, notPassed, parameters(List.copyOf(latest.values())));
     }
 
     private record Point(String serial, String label, double value) {

@@ -78,6 +78,10 @@ public final class QaText {
                 c.motors(), c.records(), c.retests(), c.passed(), c.failed(), c.incomplete()));
         b.append(String.format(Locale.ROOT, "first-pass yield %s, final yield %s%n", QaFormat.pct(c.firstPassYieldPct()),
                 QaFormat.pct(c.finalYieldPct())));
+        for (LotStatistics.NotPassed n : sum.notPassed()) {
+            b.append(String.format(Locale.ROOT, "  %-10s %s (#%d): %s%n", n.verdict(), QaFormat.visible(n.serial()),
+                    n.recordId(), QaFormat.visible(String.join(", ", n.checks())).replace('_', ' ')));
+        }
         if (c.notIntact() > 0) {
             b.append(String.format(Locale.ROOT, "WARNING: %d record(s) no longer match their SHA-256: the database "
                     + "was changed outside Lodestep; see qa certificate for each%n", c.notIntact()));

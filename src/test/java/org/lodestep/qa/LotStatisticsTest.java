@@ -59,6 +59,9 @@ class LotStatisticsTest {
         assertEquals(1, c.failed());
         assertEquals(100.0 / 3, c.firstPassYieldPct(), 1e-9);
         assertEquals(200.0 / 3, c.finalYieldPct(), 1e-9);
+        assertEquals(1, sum.notPassed().size());
+        assertEquals("S3", sum.notPassed().get(0).serial());
+        assertEquals(List.of("phase_resistance A"), sum.notPassed().get(0).checks());
         LotStatistics.ParameterStatistics p = sum.parameters().get(0);
         assertEquals(3, p.n());
         assertEquals(1, p.outOfSpec());
