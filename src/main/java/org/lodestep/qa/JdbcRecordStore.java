@@ -42,8 +42,10 @@ public final class JdbcRecordStore implements RecordStore {
 
     static JdbcRecordStore connect(String url, Properties props, String location) throws StoreException {
         try {
+            // Autocommit between appends: an idle station (waiting for the next barcode) must hold no lock, so a
+            // transaction is opened only inside append().
             Connection c = DriverManager.getConnection(url, props);
-            c.setAutoCommit(false);
+            c.setAutoCommit(true);
             return new JdbcRecordStore(c, location);
         } catch (SQLException e) {
             throw new StoreException("cannot connect to " + location + ": " + oneLine(e), e);
@@ -66,6 +68,8 @@ public final class JdbcRecordStore implements RecordStore {
         }
         String bodySha = Hashes.sha256(body);
         try {
+            // SQLite (transaction_mode=IMMEDIATE) takes the write lock here, waiting up to the busy timeout.
+            connection.setAutoCommit(false);
             refuseChangedSpec(s);
             Long retestOf = previous(s.serial(), s.partNumber());
             String recordedAt = Timestamps.now();
@@ -106,6 +110,7 @@ public final class JdbcRecordStore implements RecordStore {
             }
             if (id == null) {
                 connection.rollback();
+                connection.setAutoCommit(true);
                 List<StoredRecord> existing = select(" WHERE submission_key = ?", List.of(key));
                 if (existing.isEmpty()) {
                     throw new StoreException("record with key " + key + " vanished in " + location);
@@ -128,6 +133,7 @@ public final class JdbcRecordStore implements RecordStore {
                 }
             }
             connection.commit();
+            connection.setAutoCommit(true);
             return new Appended(new StoredRecord(id, retestOf, recordedAt, bodySha, true, s), true);
         } catch (SQLException e) {
             rollbackQuietly();
@@ -181,11 +187,8 @@ public final class JdbcRecordStore implements RecordStore {
         add(where, args, "started_at >= ?", q.fromUtc() == null ? null : Timestamps.format(Timestamps.parse(q.fromUtc())));
         add(where, args, "started_at < ?", q.toUtc() == null ? null : Timestamps.format(Timestamps.parse(q.toUtc())));
         try {
-            List<StoredRecord> out = select(where.toString(), args);
-            connection.commit();
-            return out;
+            return select(where.toString(), args);
         } catch (SQLException e) {
-            rollbackQuietly();
             throw new StoreException("cannot read records from " + location + ": " + oneLine(e), e);
         }
     }
@@ -241,12 +244,9 @@ public final class JdbcRecordStore implements RecordStore {
             p.setLong(1, recordId);
             try (ResultSet rs = p.executeQuery()) {
                 rs.next();
-                int n = rs.getInt(1);
-                connection.commit();
-                return n;
+                return rs.getInt(1);
             }
         } catch (SQLException e) {
-            rollbackQuietly();
             throw new StoreException("cannot count captures in " + location + ": " + oneLine(e), e);
         }
     }
@@ -255,16 +255,15 @@ public final class JdbcRecordStore implements RecordStore {
     synchronized void executeRaw(String sql) throws SQLException {
         try (var st = connection.createStatement()) {
             st.execute(sql);
-            connection.commit();
-        } catch (SQLException e) {
-            rollbackQuietly();
-            throw e;
         }
     }
 
     private void rollbackQuietly() {
         try {
-            connection.rollback();
+            if (!connection.getAutoCommit()) {
+                connection.rollback();
+                connection.setAutoCommit(true);
+            }
         } catch (SQLException ignored) {
             // The connection is broken; the original error is the one to report.
         }

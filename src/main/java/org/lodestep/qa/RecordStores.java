@@ -30,7 +30,7 @@ public final class RecordStores {
     public static final String DEFAULT_FILE = "lodestep-qa.sqlite";
 
     /** How long a SQLite writer waits for another station's transaction, ms. */
-    static final int SQLITE_BUSY_TIMEOUT_MS = 60_000;
+    static final int SQLITE_BUSY_TIMEOUT_MS = 30_000;
 
     private static final Pattern SCHEMA = Pattern.compile("[?&]currentSchema=([A-Za-z_][A-Za-z0-9_]*)");
 

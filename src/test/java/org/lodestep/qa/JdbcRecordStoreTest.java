@@ -196,6 +196,21 @@ class JdbcRecordStoreTest {
 
     @ParameterizedTest
     @MethodSource("backends")
+    void idleStationHoldsNoLockThatBlocksAnother(String name) throws Exception {
+        try (Backend b = Backend.create(name); RecordStore waiting = b.open(); RecordStore other = b.open()) {
+            // Station 1 recorded a motor and now waits for the next barcode with its store open.
+            waiting.append(Fixtures.submission("IDLE-1", "L1", Fixtures.motor(2, 2, 20, Fixtures.sha("i1")),
+                    "2026-07-01T08:00:00.000Z"));
+            waiting.find(RecordQuery.all());
+            // Station 2 must be able to write meanwhile (a held lock would make this wait out the busy timeout and fail).
+            assertTrue(other.append(Fixtures.submission("IDLE-2", "L1", Fixtures.motor(2, 2, 20, Fixtures.sha("i2")),
+                    "2026-07-01T08:01:00.000Z")).created());
+            assertEquals(2, waiting.find(RecordQuery.all()).size());
+        }
+    }
+
+    @ParameterizedTest
+    @MethodSource("backends")
     void twoStationsWritingAtOnceLoseNothing(String name) throws Exception {
         int perStation = 40;
         try (Backend b = Backend.create(name)) {
