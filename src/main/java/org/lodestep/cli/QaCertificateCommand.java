@@ -25,7 +25,8 @@ import picocli.CommandLine.Option;
                 + "earlier records.",
                 "Exit code 0 when the latest record passed and is intact, 3 otherwise."},
         footerHeading = "%nExample:%n",
-        footer = "  lodestep qa certificate --serial KV24-00117")
+        footer = {"  lodestep qa certificate --serial KV24-00117",
+                "  lodestep qa certificate --serial KV24-00117 --out certificates/KV24-00117.txt"})
 final class QaCertificateCommand implements Callable<Integer> {
 
     @Option(names = "--serial", required = true, paramLabel = "SN", description = "Serial number of the motor.")
@@ -34,6 +35,10 @@ final class QaCertificateCommand implements Callable<Integer> {
     @Option(names = "--part", paramLabel = "PART",
             description = "Part number, when the same serial number exists for several parts.")
     String part;
+
+    @Option(names = "--out", paramLabel = "FILE",
+            description = "Write the certificate to this file (whole or not at all) instead of printing it.")
+    java.nio.file.Path outFile;
 
     @Mixin
     QaStoreOption store = new QaStoreOption();
@@ -62,14 +67,22 @@ final class QaCertificateCommand implements Callable<Integer> {
         }
         StoredRecord latest = history.get(history.size() - 1);
         PrintWriter out = spec.commandLine().getOut();
+        String text;
         if (json) {
             Map<String, Object> doc = new LinkedHashMap<>();
             doc.put("serial", serial);
             doc.put("latest", latest);
             doc.put("history", history.subList(0, history.size() - 1));
-            out.println(Json.write(doc));
+            text = Json.write(doc) + System.lineSeparator();
         } else {
-            out.print(QaText.certificate(history));
+            text = QaText.certificate(history);
+        }
+        if (outFile != null) {
+            QaExportCommand.writeAtomically(outFile, text);
+            out.println("wrote the certificate of " + serial.replaceAll("\\p{Cntrl}", "?") + " (record #" + latest.id()
+                    + ", " + latest.submission().verdict() + ") to " + outFile);
+        } else {
+            out.print(text);
         }
         out.flush();
         return latest.submission().verdict() == Verdict.PASS && latest.intact() ? ExitCode.OK : ExitCode.FINDING;

@@ -51,7 +51,9 @@ final class QaExportCommand implements Callable<Integer> {
         try (RecordStore rs = store.openExisting()) {
             records = rs.find(filter.query());
         }
-        writeAtomically(outFile, records);
+        java.io.StringWriter csv = new java.io.StringWriter();
+        QaCsv.write(records, csv);
+        writeAtomically(outFile, csv.toString());
         int rows = records.stream().mapToInt(r -> r.submission().checks().size()).sum();
         PrintWriter out = spec.commandLine().getOut();
         if (json) {
@@ -68,13 +70,13 @@ final class QaExportCommand implements Callable<Integer> {
     }
 
     /** Temporary file in the same folder, then an atomic move: a reader never sees half a file. */
-    static void writeAtomically(Path target, List<StoredRecord> records) throws IOException {
+    static void writeAtomically(Path target, String text) throws IOException {
         Path dir = target.toAbsolutePath().getParent();
         Files.createDirectories(dir);
         Path tmp = Files.createTempFile(dir, "." + target.getFileName() + ".", ".tmp");
         try {
             try (Writer w = Files.newBufferedWriter(tmp, StandardCharsets.UTF_8)) {
-                QaCsv.write(records, w);
+                w.write(text);
             }
             Files.move(tmp, target, StandardCopyOption.ATOMIC_MOVE, StandardCopyOption.REPLACE_EXISTING);
         } finally {

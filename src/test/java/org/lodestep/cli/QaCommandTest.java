@@ -78,6 +78,18 @@ class QaCommandTest {
         assertEquals(ExitCode.OK, run("qa", "certificate", "--db", db, "--serial", "SN-1"));
         assertTrue(out.contains("operator             tester"), out);
         assertTrue(out.contains("(verified)"), out);
+        Path file = dir.resolve("certs/SN-1.txt");
+        assertEquals(ExitCode.OK, run("qa", "certificate", "--db", db, "--serial", "SN-1", "--out", file.toString()));
+        assertTrue(out.startsWith("wrote the certificate of SN-1 (record #1, PASS)"), out);
+        assertTrue(readString(file).startsWith("INCOMING INSPECTION CERTIFICATE"));
+    }
+
+    private static String readString(Path p) {
+        try {
+            return Files.readString(p, StandardCharsets.UTF_8);
+        } catch (IOException e) {
+            throw new java.io.UncheckedIOException(e);
+        }
     }
 
     @Test
