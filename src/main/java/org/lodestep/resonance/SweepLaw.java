@@ -8,7 +8,7 @@ package org.lodestep.resonance;
  * analysed.
  *
  * @param shape                  linear or logarithmic
- * @param startFullStepsPerS     rate at t = 0, full steps/s, positive
+ * @param startFullStepsPerS     rate at t = 0, full steps/s: zero or more for a linear sweep, positive for a log one
  * @param endFullStepsPerS       rate at t = T, full steps/s, positive and different from the start
  * @param durationS              sweep duration T, s, positive
  */
@@ -24,7 +24,9 @@ public record SweepLaw(Shape shape, double startFullStepsPerS, double endFullSte
         if (shape == null) {
             throw new IllegalArgumentException("sweep shape is missing (linear or log)");
         }
-        NaturalFrequency.requirePositive(startFullStepsPerS, "sweep start rate", "full steps/s");
+        if (shape == Shape.LOG || startFullStepsPerS != 0) {
+            NaturalFrequency.requirePositive(startFullStepsPerS, "sweep start rate", "full steps/s");
+        }
         NaturalFrequency.requirePositive(endFullStepsPerS, "sweep end rate", "full steps/s");
         NaturalFrequency.requirePositive(durationS, "sweep duration", "s");
         if (startFullStepsPerS == endFullStepsPerS) {
