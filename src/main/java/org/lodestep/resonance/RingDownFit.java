@@ -17,7 +17,9 @@ import org.apache.commons.math3.util.Pair;
  * <p>Model: x(t) = A·e^(-σt)·cos(ω_d·t + φ) + c (S. S. Rao, <i>Mechanical Vibrations</i>, 5th ed., 2011, ch. 2,
  * free viscously damped vibration). Starting values come from zero crossings (ω_d) and the logarithmic decrement of
  * the half-period peaks (σ); Levenberg-Marquardt least squares (Commons Math) then refines all five parameters. The
- * fit starts at the largest excursion and ends where the oscillation has decayed into the noise.
+ * fit starts at the first peak of the free oscillation (after a pre-trigger stretch, and for a step response after
+ * the first crossing of the settled value, where the rotor is released from the step) and ends where the oscillation
+ * has decayed into the noise.
  */
 public final class RingDownFit {
     /** The fit stops where the envelope falls below this fraction of the first peak. */
@@ -45,17 +47,34 @@ public final class RingDownFit {
             }
         }
         double settled = mean(x, n - Math.max(4, n / 5), n);
-        int start = 0;
-        double peak = 0;
+        // Onset: where the signal first leaves its initial level (a pre-trigger stretch is skipped).
+        double range = 0;
         for (int i = 0; i < n; i++) {
-            double d = Math.abs(x[i] - settled);
-            if (d > peak) {
-                peak = d;
+            range = Math.max(range, Math.abs(x[i] - x[0]));
+        }
+        if (!(range > 0)) {
+            throw new IllegalArgumentException("the signal is flat: no ring-down to fit");
+        }
+        int onset = 0;
+        while (onset < n - 1 && Math.abs(x[onset] - x[0]) <= 0.1 * range) {
+            onset++;
+        }
+        // A step response starts far from its settled value and only then rings: the fit starts at the first
+        // extremum about the settled value after the onset (the first overshoot), where the free oscillation is.
+        int start = onset;
+        if (Math.abs(x[onset] - settled) > 0.5 * range) {
+            start = nextCrossing(x, onset, settled);
+        }
+        // The extremum of the half-wave that begins here: robust to noise, unlike the first local maximum.
+        int halfWaveEnd = nextCrossing(x, start, settled);
+        for (int i = start; i < halfWaveEnd; i++) {
+            if (Math.abs(x[i] - settled) > Math.abs(x[start] - settled)) {
                 start = i;
             }
         }
+        double peak = Math.abs(x[start] - settled);
         if (!(peak > 0)) {
-            throw new IllegalArgumentException("the signal is flat: no ring-down to fit");
+            throw new IllegalArgumentException("no oscillation about the settled value: no ring-down to fit");
         }
         int end = n;
         for (int i = n - 1; i > start; i--) {
@@ -135,6 +154,16 @@ public final class RingDownFit {
         return new RingDownResult(omegaN / (2 * Math.PI), omegaD / (2 * Math.PI), zeta, sigma, amplitude, p[4],
                 DampedOscillation.qualityFactor(zeta), 1 - ssr / sst, opt.getRMS(), startTimeS + start * dt,
                 duration, duration * omegaD / (2 * Math.PI));
+    }
+
+    /** Index of the first sample after {@code from} on the other side of {@code level}, or x.length. */
+    private static int nextCrossing(double[] x, int from, double level) {
+        boolean above = x[from] >= level;
+        int i = from + 1;
+        while (i < x.length && (x[i] >= level) == above) {
+            i++;
+        }
+        return i;
     }
 
     private static double mean(double[] x, int from, int to) {
