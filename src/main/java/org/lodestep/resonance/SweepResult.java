@@ -31,11 +31,11 @@ public record SweepResult(List<ResponsePoint> response, List<ResonanceBand> band
         Objects.requireNonNull(rateSource, "rateSource");
     }
 
-    /** The band with the largest excess over baseline, or null when there is none. */
+    /** The band with the highest peak level (the loudest vibration), or null when there is none. */
     public ResonanceBand strongestBand() {
         ResonanceBand best = null;
         for (ResonanceBand b : bands) {
-            if (best == null || b.excessDb() > best.excessDb()) {
+            if (best == null || b.peakLevel() > best.peakLevel()) {
                 best = b;
             }
         }

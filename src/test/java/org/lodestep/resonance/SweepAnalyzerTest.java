@@ -77,6 +77,34 @@ class SweepAnalyzerTest {
     }
 
     @Test
+    void longStreamKeepsItsStateBounded() {
+        // Twenty minutes at 8 kS/s (9.6 million samples) of a tone that follows the rate, fed in blocks: the state is
+        // one accumulator per occupied 1 % rate bin and a spectrogram capped at 400 columns, whatever the length.
+        double fs = 8000;
+        double duration = 1200;
+        SweepLaw law = new SweepLaw(SweepLaw.Shape.LOG, 50, 1500, duration);
+        SweepAnalyzer a = SweepAnalyzer.programmed(SweepSettings.forSampleRate(fs), fs, law);
+        double[] block = new double[8192];
+        long n = (long) (fs * duration);
+        double phase = 0;
+        for (long done = 0; done < n; done += block.length) {
+            int len = (int) Math.min(block.length, n - done);
+            for (int i = 0; i < len; i++) {
+                phase += 2 * Math.PI * law.rateFullStepsPerSAt((done + i) / fs) / fs;
+                block[i] = Math.sin(phase);
+            }
+            a.feed(block, null, 0, len);
+        }
+        SweepResult r = a.finish(BandSettings.defaults(), Double.NaN);
+        // ln(1500/50)/ln(1.01) = 342 bins at most (plus one for rounding at each end).
+        assertTrue(a.rateBins().size() <= 344, "rate bins " + a.rateBins().size());
+        assertTrue(r.spectrogram().columnCount() < 400, "columns " + r.spectrogram().columnCount());
+        assertEquals(duration, r.durationS(), 1e-9);
+        // The tone sits at 1× the rate: its tracked order amplitude is the tone's amplitude, 1.0 (within 2 %).
+        assertEquals(1.0, r.response().get(r.response().size() / 2).order1Amplitude(), 0.02);
+    }
+
+    @Test
     void sweepLawThatMissesTheCaptureIsReported() {
         SweepLaw law = new SweepLaw(SweepLaw.Shape.LINEAR, 30, 400, 0.01);
         SweepAnalyzer a = SweepAnalyzer.programmed(SweepSettings.forSampleRate(FS), FS, law);
