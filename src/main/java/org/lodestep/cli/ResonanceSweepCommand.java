@@ -196,16 +196,17 @@ final class ResonanceSweepCommand implements Callable<Integer> {
         SweepAnalyzer analyzer = law != null ? SweepAnalyzer.programmed(settings, sampleRateHz, law)
                 : usage(() -> SweepAnalyzer.fromPulses(settings, sampleRateHz, units.microsteps()));
         SweepResult result;
-        try (SampleStream s = Captures.open(file)) {
-            double[][] buf = new double[s.channels().size()][BLOCK_FRAMES];
-            int got;
-            while ((got = s.read(buf, 0, BLOCK_FRAMES)) >= 0) {
+        try (SampleStream s = Captures.open(file); ResonanceReadAhead ahead = new ResonanceReadAhead(s, BLOCK_FRAMES)) {
+            ResonanceReadAhead.Block b;
+            while ((b = ahead.next()) != null) {
+                double[][] buf = b.data;
                 double[] pulses = pulse >= 0 ? buf[pulse] : null;
-                int n = got;
+                int n = b.frames;
                 analysis(() -> {
                     analyzer.feed(buf[vib], pulses, 0, n);
                     return null;
                 }, source, vibName);
+                ahead.recycle(b);
             }
             result = analysis(() -> analyzer.finish(bands, naturalHz == null ? Double.NaN : naturalHz), source,
                     vibName);
