@@ -4,7 +4,7 @@
 # analysis streams. Prints wall time, samples/s and the peak resident memory of the process.
 set -euo pipefail
 here="$(cd "$(dirname "${BASH_SOURCE[0]}")/.." && pwd)"
-jar="$here/target/lodestep.jar"
+jar="${LODESTEP_JAR:-$here/target/lodestep.jar}"
 dir="${BENCH_DIR:-/tmp/lodestep-bench}"
 mkdir -p "$dir"
 wav="$dir/hour-51k2.wav"

@@ -5,7 +5,7 @@
 # Usage: bench/resonance-vs-scipy.sh [RUNS]   (data goes to ${BENCH_DIR:-/tmp/lodestep-bench}, ~200 MB)
 set -euo pipefail
 here="$(cd "$(dirname "${BASH_SOURCE[0]}")/.." && pwd)"
-jar="$here/target/lodestep.jar"
+jar="${LODESTEP_JAR:-$here/target/lodestep.jar}"
 if [ ! -f "$jar" ]; then
   (cd "$here" && mvn -q -B -o -DskipTests package)
 fi

@@ -5,6 +5,7 @@ process, alternating, and reports the median wall time of each, samples/s and th
 Usage: resonance_bench.py JAR WORKDIR [RUNS]
 """
 import os
+import resource
 import statistics
 import subprocess
 import sys
@@ -50,13 +51,20 @@ def write_files(workdir):
     return csv, wav, dur
 
 
+def cpu_children():
+    u = resource.getrusage(resource.RUSAGE_CHILDREN)
+    return u.ru_utime + u.ru_stime
+
+
 def timed(cmd):
+    """Wall time and CPU time (user + system, all threads) of one process run."""
+    c0 = cpu_children()
     t0 = time.perf_counter()
     r = subprocess.run(cmd, stdout=subprocess.PIPE, stderr=subprocess.PIPE, text=True)
     dt = time.perf_counter() - t0
     if r.returncode != 0:
         sys.exit(f"failed ({r.returncode}): {' '.join(cmd)}\n{r.stderr}")
-    return dt
+    return dt, cpu_children() - c0
 
 
 def main():
@@ -67,17 +75,23 @@ def main():
     here = os.path.dirname(os.path.abspath(__file__))
     ref = os.path.join(here, "resonance_scipy.py")
     print(f"{N} samples at {FS:.0f} Hz ({dur:.1f} s); segment {SEGMENT}, 50 % overlap, Hann; median of {runs} runs")
-    print(f"{'input':6} {'lodestep s':>11} {'numpy/scipy s':>14} {'lodestep MS/s':>14} {'scipy MS/s':>11} "
-          f"{'ratio':>6}")
+    print("wall = elapsed time of the process; cpu = user + system time of all its threads")
+    print(f"{'input':6} {'lodestep wall s':>16} {'scipy wall s':>13} {'lodestep MS/s':>14} {'scipy MS/s':>11} "
+          f"{'wall ratio':>11} {'lodestep cpu s':>15} {'scipy cpu s':>12} {'cpu ratio':>10}")
     for name, path, extra in (("CSV", csv, []),
                               ("WAV", wav, ["--sweep", "linear", "--start", str(START), "--end", str(END),
                                             "--duration", str(dur)])):
         lj, py = [], []
         for _ in range(runs):
-            lj.append(timed(["java", "-jar", jar, "resonance", "sweep", path, "--json"] + extra))
+            lj.append(timed(["java", "-jar", jar, "resonance", "sweep", path] + extra))
             py.append(timed([sys.executable, ref, path, str(SEGMENT)]))
-        a, b = statistics.median(lj), statistics.median(py)
-        print(f"{name:6} {a:11.2f} {b:14.2f} {N / a / 1e6:14.2f} {N / b / 1e6:11.2f} {b / a:6.1f}x")
+        a = statistics.median(t for t, _ in lj)
+        b = statistics.median(t for t, _ in py)
+        ca = statistics.median(c for _, c in lj)
+        cb = statistics.median(c for _, c in py)
+        print(f"{name:6} {a:16.2f} {b:13.2f} {N / a / 1e6:14.2f} {N / b / 1e6:11.2f} {b / a:10.1f}x "
+              f"{ca:15.2f} {cb:12.2f} {cb / ca:9.1f}x")
+    print(f"load average at the end: {os.getloadavg()[0]:.1f} on {os.cpu_count()} cores")
 
 
 if __name__ == "__main__":

@@ -55,10 +55,10 @@ final class ResonanceRingdownCommand implements Callable<Integer> {
         PrintWriter out = spec.commandLine().getOut();
         String source = file.toString();
         SampledSignal sig = Captures.readAll(file);
-        int c = channel == null ? 0 : ResonanceSweepCommand.index(sig.channels(), channel, source, "--channel");
         if (sig.channels().isEmpty()) {
             throw new InputFormatException(source, InputFormatException.NO_LINE, null, null, "has no data channels");
         }
+        int c = channel == null ? 0 : ResonanceSweepCommand.index(sig.channels(), channel, source, "--channel");
         String name = sig.channels().get(c).name();
         double[] x = sig.channel(c);
         double fs = sig.sampleRateHz();

@@ -191,8 +191,10 @@ final class ResonanceSweepCommand implements Callable<Integer> {
             }
         }
         SweepSettings settings = settings(sampleRateHz);
+        BandSettings d = BandSettings.defaults();
         BandSettings bands = usage(() -> new BandSettings(thresholdDb,
-                absoluteLevel == null ? Double.NaN : absoluteLevel, hysteresisDb, 0.4, 0.2, mergeGap, 2));
+                absoluteLevel == null ? Double.NaN : absoluteLevel, hysteresisDb, d.baselineHalfWidth(),
+                d.baselineQuantile(), mergeGap, d.minPoints()));
         SweepAnalyzer analyzer = law != null ? SweepAnalyzer.programmed(settings, sampleRateHz, law)
                 : usage(() -> SweepAnalyzer.fromPulses(settings, sampleRateHz, units.microsteps()));
         SweepResult result;

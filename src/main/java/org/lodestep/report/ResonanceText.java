@@ -73,7 +73,7 @@ public final class ResonanceText {
             out.println("Recommendations: nothing to avoid in the swept range.");
         } else {
             out.printf(Locale.ROOT, "Recommendations (each band widened by %.0f %%; crossing within %s oscillation"
-                    + " periods):%n", a.margin() * 100, num(a.crossingPeriods()));
+                    + " periods):%n", a.margin() * 100, plain(a.crossingPeriods()));
             for (AvoidRange r : a.ranges()) {
                 out.printf(Locale.ROOT, "- Avoid %s full steps/s = %s pulses/s = %s rpm%s.%n",
                         range(r.fromFullStepsPerS(), r.toFullStepsPerS()), range(r.fromPulsesPerS(), r.toPulsesPerS()),
@@ -158,6 +158,11 @@ public final class ResonanceText {
         double a = Math.abs(v);
         return a >= 1000 ? String.format(Locale.ROOT, "%.0f", v) : a >= 10 ? String.format(Locale.ROOT, "%.1f", v)
                 : String.format(Locale.ROOT, "%.3g", v);
+    }
+
+    /** A count-like value without trailing zeros: 5, 2.5. */
+    static String plain(double v) {
+        return v == Math.rint(v) ? String.format(Locale.ROOT, "%.0f", v) : String.valueOf(v);
     }
 
     /** Three significant figures for levels and inertias. */
