@@ -3,6 +3,7 @@
 process, alternating, and reports the median wall time of each, samples/s and the ratio.
 
 Usage: resonance_bench.py JAR WORKDIR [RUNS]
+Environment: JAVA_OPTS, extra JVM options for the Lodestep runs (printed with the results; default none).
 """
 import os
 import resource
@@ -74,6 +75,8 @@ def main():
     csv, wav, dur = write_files(workdir)
     here = os.path.dirname(os.path.abspath(__file__))
     ref = os.path.join(here, "resonance_scipy.py")
+    java_opts = os.environ.get("JAVA_OPTS", "").split()
+    print(f"JVM options for Lodestep: {' '.join(java_opts) or '(none)'}")
     print(f"{N} samples at {FS:.0f} Hz ({dur:.1f} s); segment {SEGMENT}, 50 % overlap, Hann; median of {runs} runs")
     print("wall = elapsed time of the process; cpu = user + system time of all its threads")
     print(f"{'input':6} {'lodestep wall s':>16} {'scipy wall s':>13} {'lodestep MS/s':>14} {'scipy MS/s':>11} "
@@ -83,7 +86,7 @@ def main():
                                             "--duration", str(dur)])):
         lj, py = [], []
         for _ in range(runs):
-            lj.append(timed(["java", "-jar", jar, "resonance", "sweep", path] + extra))
+            lj.append(timed(["java"] + java_opts + ["-jar", jar, "resonance", "sweep", path] + extra))
             py.append(timed([sys.executable, ref, path, str(SEGMENT)]))
         a = statistics.median(t for t, _ in lj)
         b = statistics.median(t for t, _ in py)
