@@ -98,7 +98,7 @@ final class ResonanceSweepCommand implements Callable<Integer> {
             description = "Damping ratio from a ring-down, for the advice.")
     Double dampingRatio;
 
-    @Option(names = "--threshold-db", paramLabel = "DB", defaultValue = "4",
+    @Option(names = "--threshold-db", paramLabel = "DB", defaultValue = "3",
             description = "A band opens this far over the running baseline, dB (default: ${DEFAULT-VALUE}).")
     double thresholdDb;
 
@@ -113,6 +113,11 @@ final class ResonanceSweepCommand implements Callable<Integer> {
     @Option(names = "--merge-gap", paramLabel = "FRACTION", defaultValue = "0.05",
             description = "Bands closer than this fraction of the rate are merged (default: ${DEFAULT-VALUE}).")
     double mergeGap;
+
+    @Option(names = "--edge-drop-db", paramLabel = "DB", defaultValue = "3",
+            description = "A band's edges are where the level is this far below its peak, dB (default: ${DEFAULT-VALUE},"
+                    + " the half-power points).")
+    double edgeDropDb;
 
     @Option(names = "--segment", paramLabel = "SAMPLES",
             description = "Spectral segment length, samples (default: a power of two near 0.1 s).")
@@ -194,7 +199,7 @@ final class ResonanceSweepCommand implements Callable<Integer> {
         BandSettings d = BandSettings.defaults();
         BandSettings bands = usage(() -> new BandSettings(thresholdDb,
                 absoluteLevel == null ? Double.NaN : absoluteLevel, hysteresisDb, d.baselineHalfWidth(),
-                d.baselineQuantile(), mergeGap, d.minPoints()));
+                d.baselineQuantile(), mergeGap, d.minPoints(), edgeDropDb));
         SweepAnalyzer analyzer = law != null ? SweepAnalyzer.programmed(settings, sampleRateHz, law)
                 : usage(() -> SweepAnalyzer.fromPulses(settings, sampleRateHz, units.microsteps()));
         SweepResult result;

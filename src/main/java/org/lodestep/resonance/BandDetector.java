@@ -8,12 +8,13 @@ import java.util.List;
  * Finds spans of a response curve that rise over a robust baseline.
  *
  * <p>The baseline at each rate is a running low quantile (by default the 20th percentile; the median is the textbook
- * choice) of the levels within a relative rate window; the residual
- * noise is estimated by the median absolute deviation scaled to a normal σ (1.4826·MAD: P. J. Huber, E. M.
- * Ronchetti, <i>Robust Statistics</i>, 2nd ed., Wiley 2009, section 5.1). A band opens where the level exceeds
- * the baseline by the larger of the threshold and 3σ (or exceeds an absolute level), closes when it falls
- * below the entry level minus the hysteresis, and bands closer than the merge gap are joined. The default values
- * are common practice (no published source).
+ * choice) of the levels within a relative rate window. The point-to-point noise of the curve is estimated robustly
+ * from its first differences, σ = 1.4826·MAD(Δ)/√2 (the MAD scaled to a normal σ: P. J. Huber, E. M. Ronchetti,
+ * <i>Robust Statistics</i>, 2nd ed., Wiley 2009, section 5.1), so broad humps do not inflate it. A band opens where
+ * the level exceeds the baseline by the larger of the threshold and 3σ (or exceeds an absolute level), closes when
+ * it falls below the entry level minus the hysteresis; bands closer than the merge gap are joined, and each band's
+ * edges are then drawn in to where the level is within the edge drop (3 dB: the half-power points) of its peak. The
+ * default values are common practice (no published source).
  */
 final class BandDetector {
 
@@ -53,11 +54,14 @@ final class BandDetector {
         double[] base = baseline(rates, levelDb, s.baselineHalfWidth(), s.baselineQuantile());
         double[] enter = new double[n];
         if (Double.isNaN(s.absoluteLevel())) {
-            double[] resid = new double[n];
-            for (int i = 0; i < n; i++) {
-                resid[i] = levelDb[i] - base[i];
+            double sigma = 0;
+            if (n > 2) {
+                double[] diff = new double[n - 1];
+                for (int i = 0; i + 1 < n; i++) {
+                    diff[i] = levelDb[i + 1] - levelDb[i];
+                }
+                sigma = 1.4826 * median(absDeviation(diff)) / Math.sqrt(2);
             }
-            double sigma = 1.4826 * median(absDeviation(resid));
             double over = Math.max(s.thresholdDb(), 3 * sigma);
             for (int i = 0; i < n; i++) {
                 enter[i] = base[i] + over;
@@ -95,8 +99,21 @@ final class BandDetector {
             }
             merged.add(sp);
         }
-        merged.removeIf(sp -> sp.last() - sp.first() + 1 < s.minPoints());
-        return merged;
+        List<Span> trimmed = new ArrayList<>();
+        for (Span sp : merged) {
+            double floor = levelDb[sp.peak()] - s.edgeDropDb();
+            int first = sp.peak();
+            while (first > sp.first() && levelDb[first - 1] >= floor) {
+                first--;
+            }
+            int last = sp.peak();
+            while (last < sp.last() && levelDb[last + 1] >= floor) {
+                last++;
+            }
+            trimmed.add(new Span(first, last, sp.peak(), sp.excessDb()));
+        }
+        trimmed.removeIf(sp -> sp.last() - sp.first() + 1 < s.minPoints());
+        return trimmed;
     }
 
     private static Span span(int first, int last, double[] levelDb, double[] base) {

@@ -11,9 +11,12 @@ package org.lodestep.resonance;
  * @param baselineQuantile   which quantile of that window is the baseline, 0.05 ... 0.5 (0.5 = running median)
  * @param mergeGap           bands closer than this fraction of the rate are merged, 0 ... 0.5
  * @param minPoints          response-curve points a band needs, at least 1
+ * @param edgeDropDb         a band's edges are where the level has fallen this far below its peak, dB, positive
+ *                           (3 dB: the half-power points of a resonance, S. S. Rao, <i>Mechanical Vibrations</i>,
+ *                           5th ed., 2011, ch. 3, from memory)
  */
 public record BandSettings(double thresholdDb, double absoluteLevel, double hysteresisDb, double baselineHalfWidth,
-                           double baselineQuantile, double mergeGap, int minPoints) {
+                           double baselineQuantile, double mergeGap, int minPoints, double edgeDropDb) {
     public BandSettings {
         NaturalFrequency.requirePositive(thresholdDb, "threshold over baseline", "dB");
         if (!Double.isNaN(absoluteLevel) && !(absoluteLevel > 0 && Double.isFinite(absoluteLevel))) {
@@ -33,17 +36,19 @@ public record BandSettings(double thresholdDb, double absoluteLevel, double hyst
         if (!(mergeGap >= 0 && mergeGap <= 0.5)) {
             throw new IllegalArgumentException("merge gap must be 0 ... 0.5 (fraction of the rate), got " + mergeGap);
         }
+        NaturalFrequency.requirePositive(edgeDropDb, "band edge drop", "dB");
         if (minPoints < 1) {
             throw new IllegalArgumentException("a band needs at least 1 point, got " + minPoints);
         }
     }
 
     /**
-     * 4 dB over the running 20th percentile from r/1.4 to 1.4·r, 1.5 dB hysteresis, merge within 5 %, at least 2
-     * points. A low quantile rather than the median, because a lightly damped low-speed resonance can span a third of
-     * the window and would lift a median; chosen on simulated sweeps: common practice (no published source).
+     * 3 dB over the running 20th percentile from r/2 to 2·r, 1.5 dB hysteresis, merge within 5 %, at least 2 points,
+     * edges at the half-power points (3 dB below the peak). A low quantile rather than the median, because a lightly
+     * damped low-speed resonance can span a third of the window and would lift a median. Chosen on simulated sweeps
+     * (ours and the virtual rig's): common practice (no published source).
      */
     public static BandSettings defaults() {
-        return new BandSettings(4.0, Double.NaN, 1.5, 0.4, 0.2, 0.05, 2);
+        return new BandSettings(3.0, Double.NaN, 1.5, 1.0, 0.2, 0.05, 2, 3.0);
     }
 }

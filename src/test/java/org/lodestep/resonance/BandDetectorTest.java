@@ -33,6 +33,10 @@ class BandDetectorTest {
         assertEquals(200, c[0][spans.get(0).peak()], 4);
         assertEquals(600, c[0][spans.get(1).peak()], 12);
         assertEquals(12, spans.get(0).excessDb(), 1.0);
+        // Edges at the half-power points: a Gaussian bump of 12 dB with σ = 0.04 in ln(rate) is within 3 dB of its
+        // peak for |ln(r/200)| ≤ 0.04·√(2·ln(12/9)) = 0.0303, i.e. 194.0 ... 206.2 full steps/s.
+        assertEquals(194.0, c[0][spans.get(0).first()], 2.5);
+        assertEquals(206.2, c[0][spans.get(0).last()], 2.5);
     }
 
     @Test
@@ -40,9 +44,9 @@ class BandDetectorTest {
         // Two narrow 10 dB bumps 6 % apart (each above the exit level for about ±1.7 %): a 10 % merge gap joins
         // them, no merge gap keeps them apart.
         double[][] c = curve(new double[][] {{300, 10, 0.01}, {318, 10, 0.01}});
-        BandSettings merge = new BandSettings(4, Double.NaN, 1.5, 0.4, 0.2, 0.1, 1);
+        BandSettings merge = new BandSettings(4, Double.NaN, 1.5, 0.4, 0.2, 0.1, 1, 20);
         assertEquals(1, BandDetector.detect(c[0], c[1], merge).size());
-        BandSettings noMerge = new BandSettings(4, Double.NaN, 1.5, 0.4, 0.2, 0.0, 1);
+        BandSettings noMerge = new BandSettings(4, Double.NaN, 1.5, 0.4, 0.2, 0.0, 1, 20);
         assertEquals(2, BandDetector.detect(c[0], c[1], noMerge).size());
     }
 
@@ -50,7 +54,7 @@ class BandDetectorTest {
     void absoluteLevelReplacesTheRelativeThreshold() {
         // 20·log10(3) = 9.54 dB: only the 12 dB bump passes an absolute RMS level of 3 units.
         double[][] c = curve(new double[][] {{200, 12, 0.04}, {600, 8, 0.03}});
-        BandSettings abs = new BandSettings(4, 3.0, 1.5, 0.4, 0.2, 0.05, 2);
+        BandSettings abs = new BandSettings(4, 3.0, 1.5, 0.4, 0.2, 0.05, 2, 3);
         List<BandDetector.Span> spans = BandDetector.detect(c[0], c[1], abs);
         assertEquals(1, spans.size());
         assertEquals(200, c[0][spans.get(0).peak()], 4);
