@@ -203,17 +203,17 @@ final class ResonanceSweepCommand implements Callable<Integer> {
         SweepAnalyzer analyzer = law != null ? SweepAnalyzer.programmed(settings, sampleRateHz, law)
                 : usage(() -> SweepAnalyzer.fromPulses(settings, sampleRateHz, units.microsteps()));
         SweepResult result;
-        try (SampleStream s = Captures.open(file); ResonanceReadAhead ahead = new ResonanceReadAhead(s, BLOCK_FRAMES)) {
-            ResonanceReadAhead.Block b;
-            while ((b = ahead.next()) != null) {
-                double[][] buf = b.data;
-                double[] pulses = pulse >= 0 ? buf[pulse] : null;
-                int n = b.frames;
+        // Parsing runs on a second thread, a few blocks ahead of the spectra.
+        try (SampleStream s = Captures.readAhead(Captures.open(file), BLOCK_FRAMES)) {
+            double[][] buf = new double[s.channels().size()][BLOCK_FRAMES];
+            double[] pulses = pulse >= 0 ? buf[pulse] : null;
+            int got;
+            while ((got = s.read(buf, 0, BLOCK_FRAMES)) >= 0) {
+                int n = got;
                 analysis(() -> {
                     analyzer.feed(buf[vib], pulses, 0, n);
                     return null;
                 }, source, vibName);
-                ahead.recycle(b);
             }
             result = analysis(() -> analyzer.finish(bands, naturalHz == null ? Double.NaN : naturalHz), source,
                     vibName);
