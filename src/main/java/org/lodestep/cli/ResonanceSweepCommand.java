@@ -174,7 +174,7 @@ final class ResonanceSweepCommand implements Callable<Integer> {
             if (pulse >= 0) {
                 law = null;
                 lawText = "from the rising edges of channel " + chans.get(pulse).name() + " at " + micro
-                        + " pulses per full step";
+                        + (micro == 1 ? " pulse" : " pulses") + " per full step";
             } else {
                 SweepLaw.Shape sh = shape != null ? shape : profile == null ? null
                         : profile.law() == SweepProfile.Law.LINEAR ? SweepLaw.Shape.LINEAR : SweepLaw.Shape.LOG;

@@ -25,7 +25,8 @@ public final class ResonanceText {
         out.printf(Locale.ROOT, "Resonance sweep: %s, channel %s%s, %s Hz, %.1f s analysed%n", h.source(),
                 h.channel(), h.unit().isEmpty() ? "" : " (" + h.unit() + ")", num(h.sampleRateHz()), r.durationS());
         out.printf(Locale.ROOT, "Step rate: %s%n", h.rateLaw());
-        out.printf(Locale.ROOT, "Units: %d pulses per full step, %d full steps/rev%s%n", u.microsteps(),
+        out.printf(Locale.ROOT, "Units: %d step pulse%s per full step, %d full steps/rev%s%n", u.microsteps(),
+                u.microsteps() == 1 ? "" : "s",
                 u.fullStepsPerRev(), u.hasTravel() ? ", " + num(u.travelMmPerRev()) + " mm/rev" : "");
         if (Double.isNaN(r.naturalFrequencyHz())) {
             out.println("Natural frequency: unknown (give --natural-hz to classify the bands)");
