@@ -39,17 +39,17 @@ import picocli.CommandLine.Parameters;
         description = {
             "Find the step-rate bands where the motor and its load resonate, from a vibration or sound capture"
                 + " (CSV, WAV or rig capture) taken during a step-rate sweep.",
-            "The step rate comes from the options --sweep/--start/--end/--duration, else from the file's"
-                + " '# sweep=' metadata, else from a recorded step-pulse channel (--pulse-channel).",
+            "The step rate comes from a recorded step-pulse channel when --pulse-channel is given, else from the"
+                + " options --sweep/--start/--end/--duration, else from the file's '# sweep=' metadata.",
             "Rates are full steps per second unless a name says pulses."},
         footerHeading = "%nExamples:%n",
         footer = {
-            "  lodestep resonance sweep belt-axis-sweep.csv --microsteps 8 --travel-mm-per-rev 40",
-            "  lodestep resonance sweep phone.wav --sweep log --start 40 --end 800 --duration 30 --json",
-            "  lodestep resonance sweep rig.csv --pulse-channel step --avoid-list avoid.json",
+            "  lodestep resonance sweep sweep.csv --microsteps 8 --travel-mm-per-rev 40",
+            "  lodestep resonance sweep phone.wav --sweep log --start 40 --end 800 --json",
+            "  lodestep resonance sweep rig.csv --pulse-channel step --avoid-list a.json",
             "",
-            "Safety: a sweep moves the axis through its whole speed range; clear the travel, fit the guards and keep",
-            "the emergency stop in reach; follow local codes."})
+            "Safety: a sweep moves the axis through its whole speed range; clear the",
+            "travel, fit the guards, keep the emergency stop in reach; follow local codes."})
 final class ResonanceSweepCommand implements Callable<Integer> {
     private static final int BLOCK_FRAMES = 1 << 16;
 
