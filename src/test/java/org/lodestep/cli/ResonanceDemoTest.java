@@ -23,5 +23,7 @@ class ResonanceDemoTest {
         assertTrue(out.toString().contains("low-speed resonance f_n"), out.toString());
         assertTrue(out.toString().contains("natural frequency"), out.toString());
         assertTrue(Files.readString(tmp.resolve("hv420-y-avoid-list.json")).contains("lodestep-avoid-list"));
+        assertTrue(Files.exists(tmp.resolve("gantry-axis-sweep.csv")), "virtual-rig capture written");
+        assertTrue(out.toString().contains("gantry-axis-sweep.csv, channel accel"), out.toString());
     }
 }
