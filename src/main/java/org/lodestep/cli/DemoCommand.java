@@ -40,7 +40,10 @@ final class DemoCommand implements Callable<Integer> {
     public Integer call() throws Exception {
         PrintWriter out = spec.commandLine().getOut();
         PrintWriter err = spec.commandLine().getErr();
-        List<Section> sections = List.of();
+        List<Section> sections = List.of(
+                new LeadsDemo(),
+                new RigDemo(),
+                new ResonanceDemo());
         int worst = ExitCode.OK;
         for (Section s : sections) {
             out.println();
