@@ -123,7 +123,8 @@ final class QaCheckCommand implements Callable<Integer> {
         }
     }
 
-    private int lot(RecordStore records, PrintWriter out) throws IOException, StoreException {
+    private int lot(RecordStore records, PrintWriter out)
+            throws IOException, StoreException {
         PrintWriter err = spec.commandLine().getErr();
         int passed = 0;
         int failed = 0;
@@ -146,7 +147,7 @@ final class QaCheckCommand implements Callable<Integer> {
                 RecordStore.Appended a;
                 try {
                     a = checkOne(records, sn);
-                } catch (InputFormatException | UsageException | IOException e) {
+                } catch (InputFormatException | UsageException | IOException | org.lodestep.rig.RigException e) {
                     // One unreadable capture must not stop the lot: say so, record nothing for it, go on.
                     String msg = e instanceof java.nio.file.NoSuchFileException ? e.getMessage() + ": no such file"
                             : e.getMessage();
@@ -188,10 +189,11 @@ final class QaCheckCommand implements Callable<Integer> {
     }
 
     private RecordStore.Appended checkOne(RecordStore records, String sn)
-            throws IOException, InputFormatException, StoreException {
+            throws IOException, InputFormatException, StoreException, org.lodestep.rig.RigException {
         String started = Timestamps.now();
         double ambient = ambientC == null ? Double.NaN : ambientC;
-        Measurements m = readings.measure(sn, ambient, partSpec.insulationTestVoltageV());
+        Measurements m = readings.measure(sn, ambient, partSpec.insulationTestVoltageV(),
+                json ? spec.commandLine().getErr() : spec.commandLine().getOut());
         Inspection.Judgement j = Inspection.judge(partSpec, m);
         Submission s;
         try {

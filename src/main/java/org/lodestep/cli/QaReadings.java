@@ -53,6 +53,16 @@ final class QaReadings {
     @Option(names = "--step-angle-deg", paramLabel = "DEG", description = "Full-step angle, degrees.")
     Double stepAngleDeg;
 
+    @Option(names = "--rig", paramLabel = "ADDR",
+            description = "Measure through a bench rig (serial port, tcp:HOST:PORT or sim:SCENARIO): lead-pair "
+                    + "resistances until the windings are certain, then each winding to frame at the spec's insulation "
+                    + "test voltage (1-minute reading). In lot mode: connect the next motor, then scan its serial number.")
+    String rig;
+
+    @Option(names = "--yes-i-have-read-the-caution",
+            description = "With --rig and an insulation check: confirm the high-voltage caution (required).")
+    boolean cautionConfirmed;
+
     @Option(names = "--meter-log", paramLabel = "FILE",
             description = "CSV of hand-held meter readings, one row per serial number (columns serial, phase_a_ohm, "
                     + "phase_b_ohm, inductance_a_mh, inductance_b_mh, insulation_<label>_mohm, insulation_test_v, "
@@ -66,11 +76,27 @@ final class QaReadings {
                     + "else --ambient-c: a motor that has rested at the bench is at ambient).")
     Double windingC;
 
-    /** The readings of one motor; {@code serial} fills the pattern in lot mode. */
-    Measurements measure(String serial, double ambientC, double specTestVoltageV)
-            throws IOException, InputFormatException {
+    /** The readings of one motor; {@code serial} fills the pattern in lot mode; {@code log} shows rig progress. */
+    Measurements measure(String serial, double ambientC, double specTestVoltageV, java.io.PrintWriter log)
+            throws IOException, InputFormatException, org.lodestep.rig.RigException {
         List<CaptureRef> captures = new ArrayList<>();
         List<Double> phases = new ArrayList<>(phaseOhm);
+        List<InsulationReading> ins = new ArrayList<>();
+        if (rig != null) {
+            if (!Double.isNaN(specTestVoltageV) && !cautionConfirmed) {
+                throw new UsageException("--rig runs an insulation test at " + Math.round(specTestVoltageV)
+                        + " V DC: read the caution in `lodestep qa check --help` and add --yes-i-have-read-the-caution");
+            }
+            if (!phases.isEmpty() || resistanceFile != null || resistancePattern != null) {
+                throw new UsageException("--rig measures phase resistance itself: give no --phase-ohm or resistance file");
+            }
+            try (org.lodestep.rig.RigClient c = RigCli.connect(rig)) {
+                QaRig.Readings r = QaRig.measure(c, rig, specTestVoltageV, log);
+                phases.addAll(r.phaseResistancesOhm());
+                ins.addAll(r.insulation());
+                captures.add(r.capture());
+            }
+        }
         double temperature = windingC != null ? windingC : Double.NaN;
         Path file = resistanceFile;
         if (resistancePattern != null && serial != null) {
@@ -88,7 +114,6 @@ final class QaReadings {
             captures.add(new CaptureRef(file.toString(), "resistance", Hashes.sha256(file)));
         }
         List<Double> inductances = new ArrayList<>(inductanceMh.stream().map(v -> v / 1000.0).toList());
-        List<InsulationReading> ins = new ArrayList<>();
         double ke = keVsPerRad == null ? Double.NaN : keVsPerRad;
         double step = stepAngleDeg == null ? Double.NaN : stepAngleDeg;
         if (meterLogFile != null) {
@@ -175,7 +200,7 @@ final class QaReadings {
     /** True when any reading source was given. */
     boolean any() {
         return resistanceFile != null || resistancePattern != null || !phaseOhm.isEmpty() || !inductanceMh.isEmpty()
-                || !insulation.isEmpty() || keVsPerRad != null || stepAngleDeg != null || meterLogFile != null;
+                || !insulation.isEmpty() || keVsPerRad != null || stepAngleDeg != null || meterLogFile != null || rig != null;
     }
 
 }

@@ -158,6 +158,22 @@ class QaCommandTest {
     }
 
     @Test
+    void rigMeasuresResistanceAndInsulationAfterTheCautionIsConfirmed() throws Exception {
+        // The virtual rig's bench-4 motor: 4 leads, two 0.75 ohm halves per phase (1.5 ohm), insulation 5 Gohm.
+        Files.writeString(spec, Files.readString(spec).replace("phase_nominal_ohm = 1.90", "phase_nominal_ohm = 1.50"));
+        assertEquals(ExitCode.USAGE, run("qa", "check", "--spec", spec.toString(), "--db", db, "--serial", "KL-1",
+                "--rig", "sim:bench-4"));
+        assertTrue(err.contains("--yes-i-have-read-the-caution"), err);
+        assertEquals(ExitCode.OK, run("qa", "check", "--spec", spec.toString(), "--db", db, "--serial", "KL-1",
+                "--rig", "sim:bench-4", "--yes-i-have-read-the-caution", "--ambient-c", "20", "--json"), err + out);
+        JsonNode doc = json(out);
+        assertEquals("PASS", doc.at("/record/submission/verdict").asText());
+        assertEquals("rig", doc.at("/record/submission/measurements/captures/0/kind").asText());
+        assertEquals(2, doc.at("/record/submission/measurements/insulation").size());
+        assertTrue(err.contains("insulation blk to frame at 500 V DC"), err);
+    }
+
+    @Test
     void passwordInDatabaseUrlIsRefused() {
         int code = run("qa", "report", "--db", "jdbc:postgresql://127.0.0.1:5432/test?user=postgres&password=secret");
         assertEquals(ExitCode.USAGE, code);
