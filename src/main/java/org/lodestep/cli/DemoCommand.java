@@ -47,7 +47,8 @@ final class DemoCommand implements Callable<Integer> {
         List<Section> sections = List.of(
                 new LeadsDemo(),
                 new RigDemo(),
-                new ResonanceDemo());
+                new ResonanceDemo(),
+                new QaDemo());
         int worst = ExitCode.OK;
         for (Section s : sections) {
             out.println();
