@@ -14,9 +14,11 @@ final class AnalyticSignal {
 
     /** Returns {@code {re[], im[]}} of the analytic signal of {@code x} (mean removed by the caller if wanted). */
     static double[][] of(double[] x) {
-        int n = x.length;
+        int len = x.length;
+        // Zero-padded to a power of two: the fast radix-2 path, and less wrap-around at the record ends.
+        int n = Integer.highestOneBit(Math.max(1, len - 1)) << 1;
         double[] a = new double[2 * n];
-        System.arraycopy(x, 0, a, 0, n);
+        System.arraycopy(x, 0, a, 0, len);
         DoubleFFT_1D fft = new DoubleFFT_1D(n);
         fft.realForwardFull(a);
         int half = n / 2;
@@ -33,9 +35,9 @@ final class AnalyticSignal {
             a[2 * k + 1] *= gain;
         }
         fft.complexInverse(a, true);
-        double[] re = new double[n];
-        double[] im = new double[n];
-        for (int k = 0; k < n; k++) {
+        double[] re = new double[len];
+        double[] im = new double[len];
+        for (int k = 0; k < len; k++) {
             re[k] = a[2 * k];
             im[k] = a[2 * k + 1];
         }

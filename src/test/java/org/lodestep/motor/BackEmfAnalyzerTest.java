@@ -10,7 +10,7 @@ import java.util.List;
 import org.junit.jupiter.api.Test;
 
 class BackEmfAnalyzerTest {
-    private static final double FS = 20_000;
+    private static final double FS = 10_000;
 
     // Coils of an 8-lead motor with shuffled labels: 1-2 is phase A (start 1), 5-6 phase A with start 6, 3-4 phase B
     // with start 4, 7-8 phase B (start 7). "Start" follows the sign convention of item 14 for a forward turn.
@@ -27,7 +27,7 @@ class BackEmfAnalyzerTest {
     @Test
     void pairsAndOrientsEightLeadCoilsUnderVaryingSpeed() {
         // 3 revolutions in 2 s, speed from 0 to 3 rev/s and back; Nr = 50 (item 1), Ke = 0.05 V·s/rad per coil.
-        double[] theta = SyntheticMotor.handTurnAngleRad(40_000, FS, 3.0);
+        double[] theta = SyntheticMotor.handTurnAngleRad(20_000, FS, 3.0);
         List<EmfChannel> ch = SyntheticMotor.backEmf(EIGHT_LEAD, theta, FS, 50, 0.05, 0.01, 11);
         BackEmfResult r = new BackEmfAnalyzer(FS).analyze(ch, 3.0, null, 1);
 
@@ -42,7 +42,9 @@ class BackEmfAnalyzerTest {
         // item 14: the phases are 90° electrical apart
         assertEquals(90.0, r.phaseBLagDeg(), 2.0);
         // item 14: f_e = Nr x rev/s -> 150 cycles in 3 revolutions -> 50 teeth (item 1: 1.8°)
-        assertEquals(150.0, r.electricalCycles(), 0.5);
+        // Tolerance 1 cycle: near standstill at both ends the EMF sinks into the 10 mV noise and those few degrees
+        // of travel cannot be counted (our own bound: speed below about 5 % of peak for u < 0.07 at each end).
+        assertEquals(150.0, r.electricalCycles(), 1.0);
         assertEquals(50, r.rotorTeeth());
         assertEquals(0, r.directionReversals());
         // peak speed 2 x mean (1.5 rev/s) = 3 rev/s -> 150 Hz electrical; the slowest blocks are near standstill
@@ -55,7 +57,7 @@ class BackEmfAnalyzerTest {
 
     @Test
     void reverseTurnSwapsTheStartOfPhaseB() {
-        double[] theta = SyntheticMotor.handTurnAngleRad(40_000, FS, 3.0);
+        double[] theta = SyntheticMotor.handTurnAngleRad(20_000, FS, 3.0);
         for (int i = 0; i < theta.length; i++) {
             theta[i] = -theta[i];
         }
@@ -71,7 +73,7 @@ class BackEmfAnalyzerTest {
     @Test
     void countsHundredTeethFromIndexChannel() {
         // item 1: a 0.9° motor has 100 rotor teeth; revolutions counted from one index pulse per turn
-        int n = 40_000;
+        int n = 20_000;
         double[] theta = SyntheticMotor.handTurnAngleRad(n, FS, 4.0);
         List<EmfChannel> ch = SyntheticMotor.backEmf(EIGHT_LEAD.subList(0, 2), theta, FS, 100, 0.05, 0.01, 13);
         double[] index = new double[n];
@@ -86,7 +88,7 @@ class BackEmfAnalyzerTest {
 
     @Test
     void leavesTeethUnknownWithoutRevolutions() {
-        double[] theta = SyntheticMotor.handTurnAngleRad(20_000, FS, 2.0);
+        double[] theta = SyntheticMotor.handTurnAngleRad(10_000, FS, 2.0);
         List<EmfChannel> ch = SyntheticMotor.backEmf(EIGHT_LEAD.subList(0, 2), theta, FS, 50, 0.05, 0.0, 14);
         BackEmfResult r = new BackEmfAnalyzer(FS).analyze(ch, null, null, 1);
         assertNull(r.rotorTeeth());
@@ -97,10 +99,10 @@ class BackEmfAnalyzerTest {
 
     @Test
     void reportsDeadChannelAsError() {
-        double[] theta = SyntheticMotor.handTurnAngleRad(20_000, FS, 2.0);
+        double[] theta = SyntheticMotor.handTurnAngleRad(10_000, FS, 2.0);
         List<EmfChannel> ch = new java.util.ArrayList<>(
                 SyntheticMotor.backEmf(EIGHT_LEAD.subList(0, 2), theta, FS, 50, 0.05, 0.001, 15));
-        ch.add(new EmfChannel(new LeadPair("5", "6"), new double[20_000]));
+        ch.add(new EmfChannel(new LeadPair("5", "6"), new double[10_000]));
         BackEmfResult r = new BackEmfAnalyzer(FS).analyze(ch, 2.0, null, 1);
         assertTrue(r.findings().stream().anyMatch(f -> f.severity() == Severity.ERROR && f.code().equals("no_emf")));
         assertEquals(2, r.coils().size());

@@ -11,7 +11,7 @@ import java.util.List;
 import org.junit.jupiter.api.Test;
 
 class MotorIdentifierTest {
-    private static final double FS = 20_000;
+    private static final double FS = 10_000;
     // 8-lead motor with shuffled labels (see BackEmfAnalyzerTest): A = 1-2 (start 1) and 5-6 (start 6);
     // B = 3-4 (start 4) and 7-8 (start 7). Coils 1.20 ohm, 2.00 mH, kappa 0.95 (REFERENCE-CHECKS item 5 values).
     private static final List<SyntheticMotor.Coil> EIGHT = List.of(
@@ -37,7 +37,7 @@ class MotorIdentifierTest {
     }
 
     private static BackEmfResult eightLeadEmf() {
-        double[] theta = SyntheticMotor.handTurnAngleRad(40_000, FS, 3.0);
+        double[] theta = SyntheticMotor.handTurnAngleRad(20_000, FS, 3.0);
         return new BackEmfAnalyzer(FS).analyze(SyntheticMotor.backEmf(EIGHT, theta, FS, 50, 0.05, 0.01, 21),
                 3.0, null, 1);
     }
@@ -144,7 +144,7 @@ class MotorIdentifierTest {
         List<SyntheticMotor.Coil> coils = List.of(new SyntheticMotor.Coil("1", "2", true, false),
                 new SyntheticMotor.Coil("2", "3", false, false), new SyntheticMotor.Coil("4", "5", true, false),
                 new SyntheticMotor.Coil("5", "6", false, false));
-        double[] theta = SyntheticMotor.handTurnAngleRad(20_000, FS, 2.0);
+        double[] theta = SyntheticMotor.handTurnAngleRad(10_000, FS, 2.0);
         BackEmfResult emf = new BackEmfAnalyzer(FS).analyze(SyntheticMotor.backEmf(coils, theta, FS, 50, 0.05,
                 0.005, 5), 2.0, null, 1);
         MotorCard card = MotorIdentifier.identify(new IdentifyRequest(w, List.of(), emf, null, null, null, null));
