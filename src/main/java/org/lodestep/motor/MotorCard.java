@@ -9,6 +9,7 @@ import java.util.Objects;
  *
  * @param topology                  {@code 4-lead}, {@code 5-lead}, {@code 6-lead}, {@code 8-lead} or {@code unknown}
  * @param leads                     every lead label seen
+ * @param connection                {@code series}, {@code parallel}, {@code half} or {@code unipolar}
  * @param phases                    phases A and B with their half-windings and polarity (empty when not found)
  * @param wiring                    connection to the driver; null when it cannot be given yet
  * @param rotationConvention        what the phase order means for the direction of rotation
@@ -32,6 +33,8 @@ import java.util.Objects;
  * @param naturalFrequencyHz        small-oscillation natural frequency, Hz
  * @param unknowns                  what remains unknown and how to find it
  * @param findings                  every finding of every input, worst first
+ * @param backEmf                   the back-EMF analysis the card used, or null
+ * @param stepResponses             the step-response fits the card used
  */
 public record MotorCard(String topology, List<String> leads, String connection, List<PhaseCard> phases, Wiring wiring,
                         String rotationConvention, Integer rotorTeeth, Integer fullStepsPerRevolution,
@@ -39,7 +42,8 @@ public record MotorCard(String topology, List<String> leads, String connection, 
                         String phaseCurrentBasis, Double holdingTorqueNm, Double ratedCurrentMinA,
                         Double ratedCurrentMaxA, String ratedCurrentAssumption, Double supplyV, String supplyBasis,
                         Double suggestedSupplyV, Double fullCurrentRateFullStepsPerS, Double inertiaKgM2,
-                        Double naturalFrequencyHz, List<String> unknowns, List<Finding> findings) {
+                        Double naturalFrequencyHz, List<String> unknowns, List<Finding> findings,
+                        BackEmfResult backEmf, List<StepInput> stepResponses) {
     public MotorCard {
         Objects.requireNonNull(topology, "topology");
         leads = List.copyOf(leads);
@@ -59,6 +63,7 @@ public record MotorCard(String topology, List<String> leads, String connection, 
         Checks.positiveOrNull(naturalFrequencyHz, "natural frequency", "Hz");
         unknowns = List.copyOf(unknowns);
         findings = List.copyOf(findings);
+        stepResponses = List.copyOf(stepResponses);
     }
 
     /** True when any finding is an error. */

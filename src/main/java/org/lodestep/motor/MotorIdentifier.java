@@ -242,7 +242,8 @@ public final class MotorIdentifier {
         findings.sort(Comparator.comparing((Finding f) -> f.severity()).reversed());
         return new MotorCard(topology.label(), phases.leads(), connection.name().toLowerCase(java.util.Locale.ROOT),
                 cards, wiring, convention, teeth, steps, angle, keHalf, kt, current, currentBasis, torque, iMin, iMax,
-                assumption, supply, supplyBasis, suggested, rate, request.inertiaKgM2(), fn, unknowns, findings);
+                assumption, supply, supplyBasis, suggested, rate, request.inertiaKgM2(), fn, unknowns, findings,
+                emf, request.stepResponses());
     }
 
     /** The phase a step response across a whole phase in series belongs to, or null. */
