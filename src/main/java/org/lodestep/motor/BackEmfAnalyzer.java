@@ -129,8 +129,8 @@ public final class BackEmfAnalyzer {
                 }
             }
         }
-        double[][] za = combine(z, x, live, rms, group, polarity, 0, n);
-        double[][] zb = firstB < 0 ? null : combine(z, x, live, rms, group, polarity, 1, n);
+        double[][] za = combine(z, live, rms, group, polarity, 0, n);
+        double[][] zb = firstB < 0 ? null : combine(z, live, rms, group, polarity, 1, n);
 
         int reversals = 0;
         Double lagDeg = null;
@@ -160,7 +160,7 @@ public final class BackEmfAnalyzer {
                     b[0] = -b[0];
                     b[1] = -b[1];
                 }
-                zb = combine(z, x, live, rms, group, polarity, 1, n);
+                zb = combine(z, live, rms, group, polarity, 1, n);
             }
             double maxAbsIm = 0;
             for (double[] b : blocks) {
@@ -365,7 +365,7 @@ public final class BackEmfAnalyzer {
     }
 
     /** Sum of one group's analytic signals, each with its polarity and scaled to unit RMS. */
-    private static double[][] combine(double[][][] z, double[][] x, List<Integer> live, double[] rms, int[] group,
+    private static double[][] combine(double[][][] z, List<Integer> live, double[] rms, int[] group,
                                       double[] polarity, int which, int n) {
         double[][] out = new double[2][n];
         for (int j = 0; j < z.length; j++) {
