@@ -100,6 +100,11 @@ public final class SampledSignal {
         return -1;
     }
 
+    /** This signal as a stream, for code that reads block by block. */
+    public SampleStream stream() {
+        return ArraySampleStream.of(this);
+    }
+
     /** Channel names, in order; convenient for error messages. */
     public List<String> channelNames() {
         List<String> names = new ArrayList<>();

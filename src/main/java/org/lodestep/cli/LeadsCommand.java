@@ -7,6 +7,8 @@ import picocli.CommandLine.Command;
         mixinStandardHelpOptions = true,
         description = "Identify windings, centre taps and driver connections from lead-pair resistances.",
         subcommands = {
+            LeadsIdentifyCommand.class,
+            LeadsProbeCommand.class
         })
 final class LeadsCommand implements Runnable {
     @picocli.CommandLine.Spec

@@ -1,0 +1,106 @@
+package org.lodestep.cli;
+
+import java.io.PrintWriter;
+import java.nio.file.Path;
+import java.util.ArrayList;
+import java.util.List;
+import java.util.OptionalDouble;
+import java.util.concurrent.Callable;
+
+import org.lodestep.capture.LeadPairArgument;
+import org.lodestep.capture.LeadPairReading;
+import org.lodestep.capture.ResistanceCsvReader;
+import org.lodestep.capture.ResistanceReadings;
+import org.lodestep.report.LeadsJsonView;
+import org.lodestep.report.LeadsTextReport;
+import org.lodestep.wiring.Identification;
+import org.lodestep.wiring.LeadIdentifier;
+import org.lodestep.wiring.ResistanceMatrix;
+
+import picocli.CommandLine.Command;
+import picocli.CommandLine.Mixin;
+import picocli.CommandLine.Option;
+import picocli.CommandLine.Parameters;
+
+/** {@code lodestep leads identify}: windings, taps, findings and driver connections from resistance files. */
+@Command(name = "identify",
+        mixinStandardHelpOptions = true,
+        description = {"Identify windings, centre taps, faults and driver connections from lead-pair resistances.",
+            "Each FILE is one motor: a pair list (header lead_a,lead_b,resistance_ohm) or a square matrix. "
+                + "Missing pairs are fine while the answer is determined; otherwise the pairs to measure next are "
+                + "listed."},
+        footerHeading = "%nExamples:%n",
+        footer = {"  lodestep leads identify sample-captures/leads/hb-m03-6lead.csv",
+            "  lodestep leads identify --pair red-blue=2.4 --pair green-black=2.4 --pair red-green=OL",
+            "  lodestep leads identify --json --ambient-c 31 motor.csv",
+            "Exit code 3 when a motor has an error-severity finding (e.g. open-winding)."})
+final class LeadsIdentifyCommand implements Callable<Integer> {
+
+    @Parameters(paramLabel = "FILE", arity = "0..*", description = "CSV files of lead-pair resistances, one motor each.")
+    List<Path> files = new ArrayList<>();
+
+    @Option(names = "--pair", paramLabel = "A-B=OHMS",
+            description = "A reading on the command line, repeatable: " + LeadPairArgument.FORM
+                    + ". With one FILE, adds to (or replaces) its readings.")
+    List<String> pairs = new ArrayList<>();
+
+    @Mixin
+    LeadsIdentifyOptions options;
+
+    @picocli.CommandLine.Spec
+    picocli.CommandLine.Model.CommandSpec spec;
+
+    @Override
+    public Integer call() throws Exception {
+        if (files.isEmpty() && pairs.isEmpty()) {
+            throw new UsageException("give at least one FILE or --pair (see --help)");
+        }
+        if (files.size() > 1 && !pairs.isEmpty()) {
+            throw new UsageException("--pair adds to one FILE; with several files, put the readings in the files");
+        }
+        List<LeadPairReading> extra = new ArrayList<>();
+        for (String p : pairs) {
+            extra.add(LeadPairArgument.parse(p, "--pair"));
+        }
+        PrintWriter out = spec.commandLine().getOut();
+        List<LeadsJsonView.MotorJson> json = new ArrayList<>();
+        boolean error = false;
+        List<ResistanceReadings> inputs = new ArrayList<>();
+        for (Path f : files) {
+            inputs.add(ResistanceCsvReader.read(f));
+        }
+        if (inputs.isEmpty()) {
+            inputs.add(new ResistanceReadings("--pair", List.of(), List.of(), java.util.Map.of(), List.of()));
+        }
+        for (ResistanceReadings r : inputs) {
+            Identification id = LeadIdentifier.identify(matrix(r, extra), options.settings(r.temperatureC()));
+            error |= id.hasError();
+            String title = r.motor() != null ? "Motor " + r.motor() + " (" + r.source() + ")" : r.source();
+            if (options.json) {
+                json.add(LeadsJsonView.of(r.source(), r.motor(), id, null));
+            } else {
+                LeadsTextReport.write(out, title, id);
+                out.println();
+            }
+        }
+        if (options.json) {
+            out.println(LeadsJsonView.write(json));
+        } else {
+            out.println(LeadsTextReport.CAUTION);
+        }
+        out.flush();
+        return error ? ExitCode.FINDING : ExitCode.OK;
+    }
+
+    /** The readings of a file plus command-line readings (which replace the file's value for the same pair). */
+    static ResistanceMatrix matrix(ResistanceReadings r, List<LeadPairReading> extra) {
+        ResistanceMatrix.Builder b = ResistanceMatrix.builder();
+        r.leads().forEach(b::lead);
+        List<LeadPairReading> all = new ArrayList<>(r.readings());
+        all.addAll(extra);
+        for (LeadPairReading p : all) {
+            b.reading(p.leadA(), p.leadB(), p.open() ? OptionalDouble.empty() : OptionalDouble.of(p.resistanceOhm()));
+        }
+        return b.build();
+    }
+}

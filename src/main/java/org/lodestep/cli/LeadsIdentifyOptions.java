@@ -1,0 +1,64 @@
+package org.lodestep.cli;
+
+import java.util.OptionalDouble;
+
+import org.lodestep.wiring.CopperTemperature;
+import org.lodestep.wiring.IdentifySettings;
+
+import picocli.CommandLine.Option;
+
+/** Options shared by {@code leads identify} and {@code leads probe}: temperatures, tolerance, JSON. */
+final class LeadsIdentifyOptions {
+
+    @Option(names = "--ambient-c", paramLabel = "°C",
+            description = "Winding temperature when measured, in °C (overrides '# temperature_c=' in the file). "
+                    + "Resistances are then also given at the reference temperature.")
+    Double ambientC;
+
+    @Option(names = "--reference-c", paramLabel = "°C", defaultValue = "20",
+            description = "Reference temperature to correct resistances to, in °C (default: ${DEFAULT-VALUE}).")
+    double referenceC;
+
+    @Option(names = "--copper-k", paramLabel = "K", defaultValue = "235",
+            description = "Copper constant for the temperature correction: 235 (IEC 60034-1, default) or 234.5 "
+                    + "(IEEE usage).")
+    String copperK;
+
+    @Option(names = "--imbalance-tolerance", paramLabel = "PERCENT", defaultValue = "10",
+            description = "Largest accepted difference between phase (or half-winding) resistances, in percent of "
+                    + "their mean (default: ${DEFAULT-VALUE}, common practice).")
+    double imbalanceTolerancePercent;
+
+    @Option(names = "--contact-allowance-ohm", paramLabel = "OHMS", defaultValue = "0.3",
+            description = "Largest probe contact resistance expected per reading, in ohms (default: ${DEFAULT-VALUE}); "
+                    + "differences up to this are not reported as faults.")
+    double contactAllowanceOhm;
+
+    @Option(names = "--json", description = "Write JSON instead of text (contract in the README).")
+    boolean json;
+
+    /** The settings, with {@code fileTemperatureC} used when --ambient-c is not given. */
+    IdentifySettings settings(OptionalDouble fileTemperatureC) {
+        CopperTemperature.Constant k = switch (copperK.strip()) {
+            case "235" -> CopperTemperature.Constant.IEC_60034_1;
+            case "234.5" -> CopperTemperature.Constant.IEEE_234_5;
+            default -> throw new UsageException("--copper-k '" + copperK + "': expected 235 (IEC 60034-1) or 234.5"
+                    + " (IEEE usage)");
+        };
+        if (!(imbalanceTolerancePercent > 0 && imbalanceTolerancePercent < 100)) {
+            throw new UsageException("--imbalance-tolerance " + imbalanceTolerancePercent
+                    + ": expected a percentage between 0 and 100");
+        }
+        double ambient = ambientC != null ? ambientC : fileTemperatureC.orElse(Double.NaN);
+        if (Double.isFinite(ambient) && ambient <= -k.kC() || !Double.isFinite(referenceC) || referenceC <= -k.kC()) {
+            throw new UsageException("temperatures must be above " + (-k.kC()) + " °C");
+        }
+        if (!(contactAllowanceOhm >= 0 && contactAllowanceOhm < 1e3)) {
+            throw new UsageException("--contact-allowance-ohm " + contactAllowanceOhm + ": expected 0 to 1000 ohms");
+        }
+        IdentifySettings base = new IdentifySettings(IdentifySettings.DEFAULT.imbalanceTolerance(),
+                contactAllowanceOhm, IdentifySettings.DEFAULT.continuityRatio(), Double.NaN, 20.0, k);
+        return base.withImbalanceTolerance(imbalanceTolerancePercent / 100)
+                .withTemperatures(ambient, referenceC).withCopper(k);
+    }
+}

@@ -1,0 +1,78 @@
+package org.lodestep.report;
+
+import java.util.ArrayList;
+import java.util.List;
+
+import org.lodestep.wiring.Connection;
+import org.lodestep.wiring.Finding;
+import org.lodestep.wiring.Identification;
+import org.lodestep.wiring.LeadPair;
+import org.lodestep.wiring.ReadingUse;
+import org.lodestep.wiring.TemperatureCorrection;
+import org.lodestep.wiring.Winding;
+
+/**
+ * The JSON contract of {@code leads identify --json} and {@code leads probe --json}, as records whose components
+ * become snake_case keys (see the README's "Identifying leads" section).
+ */
+public final class LeadsJsonView {
+
+    /** One motor. */
+    public record MotorJson(String source, String motor, String topology, boolean determined, List<String> leads,
+                            List<WindingJson> windings, List<FindingJson> findings, List<Connection> connections,
+                            List<List<String>> missingPairs, TemperatureCorrection temperature,
+                            List<ReadingJson> readings, int measuredPairs, int totalPairs, ProbeJson probe) {
+    }
+
+    /** A winding; {@code resistanceAtReferenceOhm} is null without a measurement temperature. */
+    public record WindingJson(List<String> ends, String tap, double resistanceOhm, List<Double> halfResistancesOhm,
+                              boolean halfWinding, boolean resistanceMeasured, Double resistanceAtReferenceOhm) {
+    }
+
+    /** A finding. */
+    public record FindingJson(String code, String severity, String message, List<String> leads) {
+    }
+
+    /** A reading: {@code resistance_ohm} null means open. */
+    public record ReadingJson(List<String> leads, double resistanceOhm, String kind) {
+    }
+
+    /** How a guided measurement went. */
+    public record ProbeJson(int readingsTaken, int allPairs) {
+    }
+
+    private LeadsJsonView() {
+    }
+
+    /** The view of one identification; {@code motor} and {@code probe} may be null. */
+    public static MotorJson of(String source, String motor, Identification id, ProbeJson probe) {
+        List<WindingJson> windings = new ArrayList<>();
+        for (int i = 0; i < id.windings().size(); i++) {
+            Winding w = id.windings().get(i);
+            Double atRef = id.windingsAtReferenceOhm().isEmpty() ? null : id.windingsAtReferenceOhm().get(i);
+            windings.add(new WindingJson(w.ends(), w.tap(), w.resistanceOhm(), w.halfResistancesOhm(), w.halfWinding(),
+                    w.resistanceMeasured(), atRef));
+        }
+        List<FindingJson> findings = new ArrayList<>();
+        for (Finding f : id.findings()) {
+            findings.add(new FindingJson(f.code().code(), f.severity().label(), f.message(), f.leads()));
+        }
+        List<ReadingJson> readings = new ArrayList<>();
+        for (ReadingUse u : id.readings()) {
+            readings.add(new ReadingJson(pair(u.pair()), u.resistanceOhm(), u.kind()));
+        }
+        return new MotorJson(source, motor, id.topology().label(), id.determined(), id.leads(), windings, findings,
+                id.connections(), id.missingPairs().stream().map(LeadsJsonView::pair).toList(), id.temperature(),
+                readings, id.measuredPairs(), id.totalPairs(), probe);
+    }
+
+    /** JSON text: one object, or an array when there are several motors. */
+    public static String write(List<MotorJson> motors) {
+        return Json.write(motors.size() == 1 ? motors.get(0) : motors);
+    }
+
+    private static List<String> pair(LeadPair p) {
+        return List.of(p.a(), p.b());
+    }
+
+}

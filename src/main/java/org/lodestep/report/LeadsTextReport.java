@@ -1,0 +1,201 @@
+package org.lodestep.report;
+
+import java.io.PrintWriter;
+import java.util.List;
+import java.util.Locale;
+import java.util.Map;
+
+import org.lodestep.wiring.Connection;
+import org.lodestep.wiring.Finding;
+import org.lodestep.wiring.Identification;
+import org.lodestep.wiring.LeadPair;
+import org.lodestep.wiring.Topology;
+import org.lodestep.wiring.Winding;
+
+/**
+ * Renders a lead identification as text for a technician: topology, an ASCII schematic of windings, taps and labels,
+ * findings with what to do next, driver connections, and the pairs still to measure.
+ */
+public final class LeadsTextReport {
+    /** The one-line caution printed with every lead report. */
+    public static final String CAUTION = "Caution: measure with the motor disconnected from any driver and its shaft"
+            + " still; a hot motor reads high (let it cool or give --ambient-c). Follow local codes and practice.";
+
+    private LeadsTextReport() {
+    }
+
+    /** Full report; {@code title} names the motor or file. */
+    public static void write(PrintWriter out, String title, Identification id) {
+        out.printf(Locale.ROOT, "%s: %d leads, %d of %d pairs measured%n", title, id.leads().size(),
+                id.measuredPairs(), id.totalPairs());
+        out.println("Topology: " + id.topology().label() + describe(id.topology())
+                + (id.determined() ? "" : " (not yet certain)"));
+        out.println();
+        schematic(out, id);
+        if (id.temperature() != null) {
+            out.printf(Locale.ROOT, "  Corrected from %.1f °C to %.1f °C for copper with k = %s °C (%s).%n",
+                    id.temperature().measuredC(), id.temperature().referenceC(), num(id.temperature().constantC()),
+                    id.temperature().standard());
+        }
+        findings(out, id.findings());
+        connections(out, id.connections());
+        if (!id.missingPairs().isEmpty()) {
+            out.println();
+            out.println("Not yet certain. Measure next: " + pairs(id.missingPairs()));
+        }
+    }
+
+    /** A compact summary: one line for the layout, one per finding, the first connection. */
+    public static void writeBrief(PrintWriter out, String title, Identification id) {
+        StringBuilder b = new StringBuilder();
+        for (Winding w : id.windings()) {
+            if (b.length() > 0) {
+                b.append("; ");
+            }
+            b.append(w.ends().get(0)).append('-').append(w.ends().get(1));
+            if (w.tap() != null) {
+                b.append(" tap ").append(w.tap());
+            }
+            b.append(' ').append(ohm(w.resistanceOhm()));
+        }
+        out.printf(Locale.ROOT, "%s: %s  %s%n", title, id.topology().label(), b);
+        for (Finding f : id.findings()) {
+            out.println("  " + f.severity().label().toUpperCase(Locale.ROOT) + " " + f.code().code() + ": "
+                    + f.message());
+        }
+        if (!id.connections().isEmpty()) {
+            Connection c = id.connections().get(0);
+            out.println("  " + c.name() + ": " + terminals(c.terminals())
+                    + (c.verified() ? "" : "  (provisional: back-EMF phasing settles it)"));
+        }
+        if (!id.missingPairs().isEmpty()) {
+            out.println("  measure next: " + pairs(id.missingPairs()));
+        }
+    }
+
+    private static String describe(Topology t) {
+        return switch (t) {
+            case FOUR_LEAD -> " (two separate windings)";
+            case FIVE_LEAD -> " (four half-windings on one common lead)";
+            case SIX_LEAD -> " (two centre-tapped windings)";
+            case EIGHT_LEAD -> " (four separate half-windings)";
+            case UNKNOWN -> " (no two-phase layout fits the readings)";
+        };
+    }
+
+    private static void schematic(PrintWriter out, Identification id) {
+        List<Winding> ws = id.windings();
+        if (ws.isEmpty()) {
+            out.println("  (no winding found)");
+        }
+        boolean common = id.topology() == Topology.FIVE_LEAD;
+        if (common) {
+            String com = ws.get(0).ends().get(0);
+            String pad = " ".repeat(com.length() + 4);
+            for (int i = 0; i < ws.size(); i++) {
+                Winding w = ws.get(i);
+                String head = i == 0 ? "  " + com + " o" : "  " + pad.substring(2);
+                out.printf(Locale.ROOT, "%s%s--[ %s ]--o %s%s%n", head, i == 0 ? "--+" : "  +", ohm(w.resistanceOhm()),
+                        w.ends().get(1), atRef(id, i));
+            }
+            out.println("  " + com + " is the common lead.");
+            return;
+        }
+        for (int i = 0; i < ws.size(); i++) {
+            Winding w = ws.get(i);
+            String a = w.ends().get(0);
+            String b = w.ends().get(1);
+            String label = w.halfWinding() ? "half-winding " : "winding ";
+            if (w.tap() == null) {
+                out.printf(Locale.ROOT, "  %-15s %s o--[ %s ]--o %s%s%n", label + (i + 1) + ":", a,
+                        ohm(w.resistanceOhm()), b, atRef(id, i));
+            } else {
+                String left = String.format(Locale.ROOT, "  %-15s %s o--[ %s ]--", label + (i + 1) + ":", a,
+                        ohm(w.halfResistancesOhm().get(0)));
+                out.printf(Locale.ROOT, "%s+--[ %s ]--o %s   end to end %s%s%n", left,
+                        ohm(w.halfResistancesOhm().get(1)), b, ohm(w.resistanceOhm()), atRef(id, i));
+                out.println(" ".repeat(left.length()) + "|");
+                out.println(" ".repeat(left.length()) + "o " + w.tap() + " (centre tap)");
+            }
+        }
+    }
+
+    private static String atRef(Identification id, int i) {
+        if (id.windingsAtReferenceOhm().isEmpty()) {
+            return "";
+        }
+        return String.format(Locale.ROOT, "   (%s at %s °C)", ohm(id.windingsAtReferenceOhm().get(i)),
+                num(id.temperature().referenceC()));
+    }
+
+    private static void findings(PrintWriter out, List<Finding> findings) {
+        out.println();
+        if (findings.isEmpty()) {
+            out.println("Findings: none; windings balanced and readings consistent.");
+            return;
+        }
+        out.println("Findings:");
+        for (Finding f : findings) {
+            out.println("  " + f.severity().label().toUpperCase(Locale.ROOT) + " " + f.code().code() + ": "
+                    + f.message());
+        }
+    }
+
+    private static void connections(PrintWriter out, List<Connection> cs) {
+        if (cs.isEmpty()) {
+            return;
+        }
+        out.println();
+        out.println("Driver connections (factors relative to one half-winding; current factors are trade convention):");
+        for (Connection c : cs) {
+            out.printf(Locale.ROOT, "  %s: phase %s, inductance x%s, current rating x%s%s%n", c.name(),
+                    ohm(c.phaseResistanceOhm()), num(c.inductanceFactor()), num(c.currentFactor()),
+                    c.verified() ? "" : "  [PROVISIONAL]");
+            out.println("    " + terminals(c.terminals()));
+            for (List<String> j : c.jumpers()) {
+                out.println("    join " + String.join(" + ", j) + " (to nothing else)");
+            }
+            if (!c.insulate().isEmpty()) {
+                out.println("    insulate " + String.join(", ", c.insulate()));
+            }
+            out.println("    " + c.tradeoff());
+            if (!c.note().isEmpty()) {
+                out.println("    " + c.note());
+            }
+        }
+    }
+
+    private static String terminals(Map<String, List<String>> t) {
+        StringBuilder b = new StringBuilder();
+        for (Map.Entry<String, List<String>> e : t.entrySet()) {
+            if (b.length() > 0) {
+                b.append("  ");
+            }
+            b.append(e.getKey()).append('=').append(String.join("+", e.getValue()));
+        }
+        return b.toString();
+    }
+
+    private static String pairs(List<LeadPair> ps) {
+        return String.join(", ", ps.stream().map(LeadPair::toString).toList());
+    }
+
+    static String ohm(double v) {
+        if (Double.isNaN(v)) {
+            return "? Ω";
+        }
+        if (Double.isInfinite(v)) {
+            return "open";
+        }
+        if (v >= 1e3) {
+            return String.format(Locale.ROOT, "%.3g kΩ", v / 1e3);
+        }
+        return String.format(Locale.ROOT, v < 10 ? "%.2f Ω" : "%.1f Ω", v);
+    }
+
+    private static String num(double v) {
+        String s = String.format(Locale.ROOT, "%.3f", v);
+        s = s.replaceAll("0+$", "");
+        return s.endsWith(".") ? s.substring(0, s.length() - 1) : s;
+    }
+}

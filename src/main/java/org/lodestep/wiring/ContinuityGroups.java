@@ -1,0 +1,95 @@
+package org.lodestep.wiring;
+
+import java.util.ArrayList;
+import java.util.LinkedHashMap;
+import java.util.List;
+import java.util.Map;
+
+/**
+ * Sorts readings into continuity, open and leakage, and groups leads that are joined by continuity.
+ *
+ * <p>Continuity through copper is transitive, so groups are the connected components of the continuity readings.
+ * Two groups are known to be separate once any pair between them reads open (or leakage); until then they might
+ * still be one winding.
+ */
+final class ContinuityGroups {
+    final double continuityLimitOhm;
+    final List<List<String>> groups;
+    final List<ReadingUse> uses;
+    /** For each pair of groups (i &lt; j) not yet known to be separate, the first unmeasured pair between them. */
+    final List<LeadPair> undecided;
+
+    ContinuityGroups(ResistanceMatrix m, IdentifySettings s) {
+        double min = Double.POSITIVE_INFINITY;
+        for (double v : m.readings().values()) {
+            if (Double.isFinite(v)) {
+                min = Math.min(min, v);
+            }
+        }
+        // A near-zero lowest reading (probes touching) must not make every winding look like leakage.
+        continuityLimitOhm = Double.isFinite(min) ? Math.max(min, s.contactAllowanceOhm() + 0.1) * s.continuityRatio()
+                : Double.POSITIVE_INFINITY;
+        List<String> leads = m.leads();
+        Map<String, String> parent = new LinkedHashMap<>();
+        for (String l : leads) {
+            parent.put(l, l);
+        }
+        uses = new ArrayList<>();
+        for (Map.Entry<LeadPair, Double> e : m.readings().entrySet()) {
+            String kind = kindOf(e.getValue());
+            uses.add(new ReadingUse(e.getKey(), e.getValue(), kind));
+            if (kind.equals("continuity")) {
+                union(parent, e.getKey().a(), e.getKey().b());
+            }
+        }
+        Map<String, List<String>> byRoot = new LinkedHashMap<>();
+        for (String l : leads) {
+            byRoot.computeIfAbsent(find(parent, l), k -> new ArrayList<>()).add(l);
+        }
+        groups = List.copyOf(byRoot.values());
+        undecided = new ArrayList<>();
+        for (int i = 0; i < groups.size(); i++) {
+            for (int j = i + 1; j < groups.size(); j++) {
+                LeadPair firstUnmeasured = null;
+                boolean separate = false;
+                for (String x : groups.get(i)) {
+                    for (String y : groups.get(j)) {
+                        LeadPair p = LeadPair.of(x, y);
+                        if (m.isMeasured(p)) {
+                            separate = true;
+                        } else if (firstUnmeasured == null) {
+                            firstUnmeasured = p;
+                        }
+                    }
+                }
+                if (!separate) {
+                    undecided.add(firstUnmeasured);
+                }
+            }
+        }
+    }
+
+    /** {@code continuity}, {@code open} or {@code leakage} for a reading in ohms. */
+    String kindOf(double ohms) {
+        if (Double.isInfinite(ohms)) {
+            return "open";
+        }
+        return ohms <= continuityLimitOhm ? "continuity" : "leakage";
+    }
+
+    private static String find(Map<String, String> parent, String x) {
+        String p = parent.get(x);
+        while (!p.equals(parent.get(p))) {
+            p = parent.get(p);
+        }
+        return p;
+    }
+
+    private static void union(Map<String, String> parent, String x, String y) {
+        String rx = find(parent, x);
+        String ry = find(parent, y);
+        if (!rx.equals(ry)) {
+            parent.put(ry, rx);
+        }
+    }
+}
