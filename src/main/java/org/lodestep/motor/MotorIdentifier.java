@@ -79,9 +79,13 @@ public final class MotorIdentifier {
                 }
                 continue;
             }
-            String phase = seriesPhaseOf(s, phases);
-            if (phase != null && s.fit().inductanceH() != null) {
-                fullPhaseL.put(phase, s.fit().inductanceH());
+            SeriesMatch match = seriesPhaseOf(s, phases);
+            if (match != null && s.fit().inductanceH() != null && match.aiding()) {
+                fullPhaseL.put(match.phase(), s.fit().inductanceH());
+            } else if (match != null && s.fit().inductanceH() != null) {
+                findings.add(Finding.warning("series_opposing", where + ": the two coils of phase " + match.phase()
+                        + " were joined start to start (or end to end), so their fluxes cancel; join the end of one "
+                        + "to the start of the other (see the series wiring) to measure the coupling"));
             } else {
                 findings.add(Finding.warning("step_unmatched", where + " is not across one coil or one whole "
                         + "phase in series; ignored"));
@@ -106,7 +110,16 @@ public final class MotorIdentifier {
                     + "direction (swap A+ and A- to reverse); a back-EMF capture fixes it");
         }
 
-        boolean kappaAssumed = false;
+        // A coupling measured on one phase stands for the other (same construction); kappa = 1 is the upper bound.
+        List<String> kappaAssumedIn = new ArrayList<>();
+        Double sharedKappa = null;
+        for (String name : fullPhaseL.keySet()) {
+            List<OrientedCoil> coils = name.equals("A") ? phases.phaseA() : phases.phaseB();
+            Double lc = mean(coils.stream().map(c -> coilL.get(c.key())).toList());
+            if (lc != null) {
+                sharedKappa = CoupledCoils.couplingFactor(lc, fullPhaseL.get(name));
+            }
+        }
         List<PhaseCard> cards = new ArrayList<>();
         for (String name : List.of("A", "B")) {
             List<OrientedCoil> coils = name.equals("A") ? phases.phaseA() : phases.phaseB();
@@ -140,16 +153,19 @@ public final class MotorIdentifier {
                     if (fullPhaseL.containsKey(name)) {
                         phaseL = fullPhaseL.get(name);
                     } else if (lc != null) {
-                        kappaAssumed |= kappa == null;
-                        phaseL = CoupledCoils.seriesInductanceH(lc, kappa == null ? 1.0 : kappa);
+                        kappaAssumedIn.add(name);
+                        phaseL = CoupledCoils.seriesInductanceH(lc, sharedKappa == null ? 1.0 : sharedKappa);
                     }
                     phaseKe = ke == null ? null : 2 * ke;
                 }
                 case PARALLEL -> {
                     phaseR = r == null ? null : CoupledCoils.parallelResistanceOhm(r);
                     if (lc != null) {
-                        kappaAssumed |= kappa == null;
-                        phaseL = CoupledCoils.parallelInductanceH(lc, kappa == null ? 1.0 : kappa);
+                        if (kappa == null) {
+                            kappaAssumedIn.add(name);
+                        }
+                        double k = kappa != null ? kappa : sharedKappa != null ? sharedKappa : 1.0;
+                        phaseL = CoupledCoils.parallelInductanceH(lc, k);
                     }
                     phaseKe = ke;
                 }
@@ -162,10 +178,15 @@ public final class MotorIdentifier {
             Double tau = phaseR != null && phaseL != null ? RlStep.timeConstantS(phaseL, phaseR) : null;
             cards.add(new PhaseCard(name, hws, phases.polarityKnown(), phaseR, phaseL, kappa, tau, phaseKe));
         }
-        if (kappaAssumed) {
-            unknowns.add("coupling of the two coils of a phase: the " + connection.name().toLowerCase()
-                    + " inductance assumes kappa = 1 (an upper bound); a step response across a whole phase in "
-                    + "series measures it");
+        if (!kappaAssumedIn.isEmpty()) {
+            String phasesText = "phase" + (kappaAssumedIn.size() > 1 ? "s " : " ") + String.join(" and ",
+                    kappaAssumedIn);
+            unknowns.add(sharedKappa == null
+                    ? "coupling of the two coils of a phase: the " + connection.name().toLowerCase(java.util.Locale.ROOT)
+                            + " inductance of " + phasesText + " assumes kappa = 1 (an upper bound); a step response "
+                            + "across a whole phase in series measures it"
+                    : String.format(java.util.Locale.ROOT, "coupling of %s not measured: the coupling %.3f of the "
+                            + "other phase is used", phasesText, sharedKappa));
         }
 
         Integer teeth = emf == null ? null : emf.rotorTeeth();
@@ -246,8 +267,17 @@ public final class MotorIdentifier {
                 emf, request.stepResponses());
     }
 
-    /** The phase a step response across a whole phase in series belongs to, or null. */
-    private static String seriesPhaseOf(StepInput s, PhaseAssignment.Result phases) {
+    /** A step response across both coils of one phase: which phase, and whether the coils aided each other. */
+    private record SeriesMatch(String phase, boolean aiding) {
+    }
+
+    /**
+     * Matches a step response across a whole phase in series: a centre-tapped winding end to end, or two 8-lead
+     * coils with one lead of each joined. Joining the end of one coil to the start of the other adds their fluxes
+     * (aiding); joining two starts or two ends opposes them.
+     */
+    private static SeriesMatch seriesPhaseOf(StepInput s, PhaseAssignment.Result phases) {
+        Set<String> across = key(s.leads());
         for (String name : List.of("A", "B")) {
             List<OrientedCoil> coils = name.equals("A") ? phases.phaseA() : phases.phaseB();
             if (coils.size() != 2) {
@@ -255,23 +285,26 @@ public final class MotorIdentifier {
             }
             OrientedCoil c1 = coils.get(0);
             OrientedCoil c2 = coils.get(1);
-            Set<String> ends = Set.of(c1.start(), c2.end());
-            boolean tapped = c1.end().equals(c2.start());
-            if (!key(s.leads()).equals(ends) && !(key(s.leads()).equals(Set.of(c1.start(), c2.start())))
-                    && !(key(s.leads()).equals(Set.of(c1.end(), c2.end())))) {
+            if (c1.end().equals(c2.start())) {
+                if (s.joinedLeads().isEmpty() && across.equals(Set.of(c1.start(), c2.end()))) {
+                    return new SeriesMatch(name, true);
+                }
                 continue;
             }
-            if (tapped && s.joinedLeads().isEmpty() && key(s.leads()).equals(ends)) {
-                return name;
+            if (s.joinedLeads().size() != 2) {
+                continue;
             }
-            if (!tapped && s.joinedLeads().size() == 2) {
-                Set<String> joined = Set.copyOf(s.joinedLeads());
-                Set<String> rest = new java.util.HashSet<>(Set.of(c1.start(), c1.end(), c2.start(), c2.end()));
-                rest.removeAll(key(s.leads()));
-                if (rest.equals(joined)) {
-                    return name;
-                }
+            Set<String> joined = Set.copyOf(s.joinedLeads());
+            boolean oneEach = across.stream().filter(c1.key()::contains).count() == 1
+                    && across.stream().filter(c2.key()::contains).count() == 1
+                    && joined.stream().filter(c1.key()::contains).count() == 1
+                    && joined.stream().filter(c2.key()::contains).count() == 1
+                    && across.stream().noneMatch(joined::contains);
+            if (!oneEach) {
+                continue;
             }
+            boolean aiding = joined.equals(Set.of(c1.end(), c2.start())) || joined.equals(Set.of(c1.start(), c2.end()));
+            return new SeriesMatch(name, aiding);
         }
         return null;
     }

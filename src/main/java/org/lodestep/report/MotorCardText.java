@@ -109,7 +109,7 @@ public final class MotorCardText {
         }
         if (card.naturalFrequencyHz() != null) {
             b.append(String.format(Locale.ROOT, "  natural frequency      %s Hz with %s kg·m² (full-step resonance near "
-                    + "%s full steps/s)%n", num(card.naturalFrequencyHz(), 4), num(card.inertiaKgM2(), 3),
+                    + "%s full steps/s)%n", num(card.naturalFrequencyHz(), 4), String.format(Locale.ROOT, "%.3g", card.inertiaKgM2()),
                     num(card.naturalFrequencyHz(), 4)));
         }
         b.append('\n');
