@@ -102,6 +102,11 @@ public final class MotorIdentifier {
         } else if (topology == Topology.EIGHT_LEAD && emf == null) {
             unknowns.add("which coils share a phase, and their polarity: an 8-lead motor needs a back-EMF capture "
                     + "(--back-emf) before it can be wired in series or parallel");
+        } else if (topology == Topology.FIVE_LEAD && emf == null) {
+            unknowns.add("which coils form phases A and B: the four coils of a 5-lead motor share one lead, so only a "
+                    + "back-EMF capture can pair them");
+        } else if (windings != null && topology == Topology.UNKNOWN) {
+            unknowns.add("the phases: the resistances fit no 4-, 5-, 6- or 8-lead layout (see the findings)");
         } else {
             unknowns.add("the phases: give a resistance matrix and/or a back-EMF capture");
         }
@@ -216,7 +221,7 @@ public final class MotorIdentifier {
                     + "temperature-rise test (case below about 80 °C)", DriveLimits.LOW_LOSS_PER_PHASE_W,
                     DriveLimits.HIGH_LOSS_PER_PHASE_W);
         } else {
-            unknowns.add("rated current: needs the coil resistances");
+            unknowns.add("rated current: needs the phases and their coil resistances");
         }
         Double current = request.phaseCurrentA();
         String currentBasis = current != null ? "given" : null;
@@ -258,7 +263,7 @@ public final class MotorIdentifier {
                     + "back-EMF capture; a driver whose B current lags its A current (A+, B+, A-, B- for full steps) "
                     + "turns it that same way; swap A+ and A- to reverse";
         } else {
-            convention = "direction not measured: if the motor turns the wrong way, swap A+ and A-";
+            convention = "not measured: if the motor turns the wrong way, swap A+ and A-";
         }
         findings.sort(Comparator.comparing((Finding f) -> f.severity()).reversed());
         return new MotorCard(topology.label(), phases.leads(), connection.name().toLowerCase(java.util.Locale.ROOT),

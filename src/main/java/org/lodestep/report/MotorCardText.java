@@ -75,6 +75,7 @@ public final class MotorCardText {
         }
 
         b.append("Constants and drive\n");
+        int before = b.length();
         if (card.keVsPerRad() != null) {
             b.append(String.format(Locale.ROOT, "  Ke per half-winding   %s V·s/rad peak (%s V/krpm); a full phase in "
                     + "series has twice this%n", num(card.keVsPerRad(), 4), num(card.keVsPerRad() * 104.71975512, 4)));
@@ -111,6 +112,9 @@ public final class MotorCardText {
             b.append(String.format(Locale.ROOT, "  natural frequency      %s Hz with %s kg·m² (full-step resonance near "
                     + "%s full steps/s)%n", num(card.naturalFrequencyHz(), 4), String.format(Locale.ROOT, "%.3g", card.inertiaKgM2()),
                     num(card.naturalFrequencyHz(), 4)));
+        }
+        if (b.length() == before) {
+            b.append("  nothing known yet\n");
         }
         b.append('\n');
 

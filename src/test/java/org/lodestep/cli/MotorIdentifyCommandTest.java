@@ -135,6 +135,23 @@ class MotorIdentifyCommandTest {
     }
 
     @Test
+    void openCoilInResistanceMatrixExitsWithFinding(@TempDir Path tmp) throws Exception {
+        // REFERENCE-CHECKS item 4: an 8-lead motor reads 4 coils; here 7-8 reads open, so one coil is broken.
+        StringBuilder b = new StringBuilder("lead_a,lead_b,resistance_ohm\n");
+        for (int i = 1; i <= 8; i++) {
+            for (int j = i + 1; j <= 8; j++) {
+                boolean coil = j == i + 1 && i % 2 == 1 && i < 7;
+                b.append(i).append(',').append(j).append(',').append(coil ? "1.20" : "OL").append('\n');
+            }
+        }
+        Path f = tmp.resolve("open.csv");
+        Files.writeString(f, b.toString());
+        Run r = run("motor", "identify", "--resistance", f.toString());
+        assertEquals(ExitCode.FINDING, r.code(), r.out() + r.err());
+        assertTrue(r.out().contains("ERROR") && r.out().contains("7 and 8"), r.out());
+    }
+
+    @Test
     void helpDescribesOptionsWithUnits() {
         Run r = run("motor", "identify", "--help");
         assertEquals(ExitCode.OK, r.code());
