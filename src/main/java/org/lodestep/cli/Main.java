@@ -121,8 +121,7 @@ public final class Main implements Runnable {
             code = ExitCode.INTERNAL;
             message = "internal error: " + t + (verbose ? "" : " (rerun with --verbose for details)");
         }
-        err.println(cmd.getCommandName().equals("lodestep") ? "lodestep: " + message
-                : "lodestep " + cmd.getCommandName() + ": " + message);
+        err.println(cmd.getCommandSpec().qualifiedName() + ": " + message);
         if (verbose) {
             t.printStackTrace(err);
         }
