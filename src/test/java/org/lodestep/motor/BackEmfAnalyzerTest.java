@@ -71,6 +71,30 @@ class BackEmfAnalyzerTest {
     }
 
     @Test
+    void keepsPairingWhenShaftIsTurnedBackPartWay() {
+        // 2 turns forward, then 1 turn back (each a start-stop hand turn): the pairing and the orientation follow the
+        // main direction, and the reversal is reported.
+        double[] fwd = SyntheticMotor.handTurnAngleRad(10_000, FS, 2.0);
+        double[] back = SyntheticMotor.handTurnAngleRad(5_000, FS, 1.0);
+        double[] theta = new double[15_000];
+        for (int i = 0; i < 10_000; i++) {
+            theta[i] = fwd[i];
+        }
+        for (int i = 0; i < 5_000; i++) {
+            theta[10_000 + i] = fwd[9_999] - back[i];
+        }
+        BackEmfResult r = new BackEmfAnalyzer(FS).analyze(SyntheticMotor.backEmf(EIGHT_LEAD, theta, FS, 50, 0.05,
+                0.005, 16), null, null, 1);
+        assertEquals(new LeadPair("6", "5"), coil(r, "5").oriented());
+        assertEquals(new LeadPair("4", "3"), coil(r, "3").oriented());
+        assertEquals(new LeadPair("7", "8"), coil(r, "7").oriented());
+        assertEquals(1, r.directionReversals());
+        assertTrue(r.findings().stream().anyMatch(f -> f.code().equals("direction_reversed")));
+        // item 14: net travel 1 turn = 50 electrical cycles (the angle from both phases follows the direction)
+        assertEquals(50.0, r.electricalCycles(), 1.0);
+    }
+
+    @Test
     void countsHundredTeethFromIndexChannel() {
         // item 1: a 0.9° motor has 100 rotor teeth; revolutions counted from one index pulse per turn
         int n = 20_000;
