@@ -73,31 +73,40 @@ final class MotorInputs {
         int voltage = s.indexOf("voltage");
         if (supply == null && voltage >= 0 && s.channels().get(voltage).unit().equals("v")) {
             // a recorded drive voltage: its level over the last half of the record is the step voltage
-            double[] v = s.channel(voltage);
-            double sum = 0;
-            for (int k = v.length / 2; k < v.length; k++) {
-                sum += v[k];
-            }
-            double level = sum / (v.length - v.length / 2);
-            supply = level > 0 ? level : null;
+            supply = settledLevel(s.channel(voltage));
         }
         Double series = number(s, "series_ohm", "ohms", true);
         if (series == null) {
             series = seriesFlagOhm == null ? 0.0 : seriesFlagOhm;
         }
+        try {
+            return fit(s, current, new LeadPair(leads.get(0), leads.get(1)), joined, supply, series,
+                    joined.isEmpty() ? knownWindingOhm : null);
+        } catch (IllegalArgumentException e) {
+            throw new InputFormatException(src, InputFormatException.NO_LINE, null, null, e.getMessage());
+        }
+    }
+
+    /** Fits channel {@code current} of {@code s} as a step across {@code pair}. */
+    static StepInput fit(SampledSignal s, int current, LeadPair pair, List<String> joined, Double supplyV,
+                         double seriesOhm, Double knownWindingOhm) {
         double[] i = s.channel(current);
         double[] t = new double[i.length];
         for (int k = 0; k < t.length; k++) {
             t[k] = s.startTimeS() + k / s.sampleRateHz();
         }
-        try {
-            LeadPair pair = new LeadPair(leads.get(0), leads.get(1));
-            StepResponseFit fit = new StepResponseFitter(supply, series, joined.isEmpty() ? knownWindingOhm : null)
-                    .fit(t, i);
-            return new StepInput(pair, joined, fit);
-        } catch (IllegalArgumentException e) {
-            throw new InputFormatException(src, InputFormatException.NO_LINE, null, null, e.getMessage());
+        StepResponseFit fit = new StepResponseFitter(supplyV, seriesOhm, knownWindingOhm).fit(t, i);
+        return new StepInput(pair, joined, fit);
+    }
+
+    /** The level of a recorded drive voltage over the last half of the record, V; null when not positive. */
+    static Double settledLevel(double[] v) {
+        double sum = 0;
+        for (int k = v.length / 2; k < v.length; k++) {
+            sum += v[k];
         }
+        double level = sum / (v.length - v.length / 2);
+        return level > 0 ? level : null;
     }
 
     /**
