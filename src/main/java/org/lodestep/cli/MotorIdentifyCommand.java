@@ -33,11 +33,14 @@ import picocli.CommandLine.Spec;
                     + "columns are named after the lead pair, + on the first lead: emf_1_2_v."},
         footerHeading = "%nExamples:%n",
         footer = {
-            "  lodestep motor identify --resistance sample-captures/motor/resistance.csv \\",
-            "      --step-response sample-captures/motor/step-1-7.csv --back-emf sample-captures/motor/back-emf.csv",
-            "  lodestep motor identify --back-emf emf.csv --revolutions 2 --connection parallel --json",
+            "  lodestep motor identify --resistance res.csv \\",
+            "      --step-response step-1-2.csv --step-response step-3-4.csv \\",
+            "      --back-emf emf.csv --revolutions 3",
+            "  lodestep motor identify --back-emf emf.csv --revolutions 2 \\",
+            "      --connection parallel --json",
             "",
-            "Exit code 3 when an error-severity finding is present (open coil, phases that contradict the resistances)."
+            "Exit code 3 when an error-severity finding is present",
+            "(an open coil, phases that contradict the resistances)."
         })
 final class MotorIdentifyCommand implements Callable<Integer> {
 
