@@ -198,6 +198,10 @@ public final class ResistanceCsvReader {
         List<String> header = rows.get(0).cells;
         String corner = header.get(0).strip();
         double factor = corner.isEmpty() ? 1.0 : ResistanceValues.unitFactor(corner);
+        // A word such as "leads" in the corner is a title, not a unit: ohms, as for an empty corner.
+        if (Double.isNaN(factor) && !corner.toLowerCase(Locale.ROOT).contains("ohm") && !corner.contains("Ω")) {
+            factor = 1.0;
+        }
         if (Double.isNaN(factor)) {
             throw new InputFormatException(r.source, rows.get(0).line, "1", corner, "is not a unit: " + EXPECTED_HEADER
                     + " (top-left cell empty for ohms, or ohm, mohm, kohm, Mohm, [Ω], [kΩ] ...)");
@@ -212,6 +216,11 @@ public final class ResistanceCsvReader {
             labels.add(l);
         }
         int n = labels.size();
+        // Not a pair-list header, and the next row does not start with the first label: not a matrix either.
+        if (rows.size() < 2 || !rows.get(1).cells.get(0).strip().equals(labels.get(0))) {
+            throw new InputFormatException(r.source, rows.get(0).line, null, String.join(",", header),
+                    EXPECTED_HEADER);
+        }
         if (rows.size() - 1 != n) {
             throw new InputFormatException(r.source, rows.get(rows.size() - 1).line, null, null,
                     "ends after " + (rows.size() - 1) + " rows: expected a square matrix, one row per lead (" + n + ")");

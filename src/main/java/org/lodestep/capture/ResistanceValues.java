@@ -55,6 +55,9 @@ final class ResistanceValues {
 
     private static double factor(String u) {
         String unit = u.replace("Ω", "ohm").replace("Ohm", "ohm").replace("OHM", "ohm");
+        if (unit.endsWith("ohms")) {
+            unit = unit.substring(0, unit.length() - 1);
+        }
         return switch (unit) {
             case "ohm" -> 1.0;
             case "mohm" -> 1e-3;

@@ -30,7 +30,7 @@ import picocli.CommandLine.Parameters;
                 + "Missing pairs are fine while the answer is determined; otherwise the pairs to measure next are "
                 + "listed."},
         footerHeading = "%nExamples:%n",
-        footer = {"  lodestep leads identify sample-captures/leads/hb-m03-6lead.csv",
+        footer = {"  lodestep leads identify sample-captures/leads/kl-03-microscope-stage-6lead.tsv",
             "  lodestep leads identify --pair red-blue=2.4 --pair green-black=2.4 --pair red-green=OL",
             "  lodestep leads identify --json --ambient-c 31 motor.csv",
             "Exit code 3 when a motor has an error-severity finding (e.g. open-winding)."})
@@ -75,7 +75,8 @@ final class LeadsIdentifyCommand implements Callable<Integer> {
         for (ResistanceReadings r : inputs) {
             Identification id = LeadIdentifier.identify(matrix(r, extra), options.settings(r.temperatureC()));
             error |= id.hasError();
-            String title = r.motor() != null ? "Motor " + r.motor() + " (" + r.source() + ")" : r.source();
+            String title = r.motor() != null ? "Motor " + r.motor() + " (" + r.source() + ")"
+                    : files.isEmpty() ? "Readings from --pair" : r.source();
             if (options.json) {
                 json.add(LeadsJsonView.of(r.source(), r.motor(), id, null));
             } else {

@@ -10,12 +10,12 @@ import picocli.CommandLine.Option;
 /** Options shared by {@code leads identify} and {@code leads probe}: temperatures, tolerance, JSON. */
 final class LeadsIdentifyOptions {
 
-    @Option(names = "--ambient-c", paramLabel = "°C",
-            description = "Winding temperature when measured, in °C (overrides '# temperature_c=' in the file). "
-                    + "Resistances are then also given at the reference temperature.")
+    @Option(names = "--ambient-c", paramLabel = "DEG_C",
+            description = "Winding temperature when measured, in °C (identify: overrides '# temperature_c=' in the "
+                    + "file). Resistances are then also given at the reference temperature.")
     Double ambientC;
 
-    @Option(names = "--reference-c", paramLabel = "°C", defaultValue = "20",
+    @Option(names = "--reference-c", paramLabel = "DEG_C", defaultValue = "20",
             description = "Reference temperature to correct resistances to, in °C (default: ${DEFAULT-VALUE}).")
     double referenceC;
 

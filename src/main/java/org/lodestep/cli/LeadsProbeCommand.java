@@ -44,7 +44,7 @@ final class LeadsProbeCommand implements Callable<Integer> {
             + "--labels is given.")
     Integer leadCount;
 
-    @Option(names = "--labels", paramLabel = "A,B,...", split = ",",
+    @Option(names = "--labels", paramLabel = "LABEL", split = ",",
             description = "Lead labels (wire colours or terminal numbers), comma separated.")
     List<String> labels;
 
@@ -66,7 +66,7 @@ final class LeadsProbeCommand implements Callable<Integer> {
         // Prompts go to stderr in JSON mode so that standard output stays one JSON document.
         PrintWriter prompts = options.json ? spec.commandLine().getErr() : out;
         int all = leads.size() * (leads.size() - 1) / 2;
-        prompts.printf(Locale.ROOT, "Probing %d leads (%s); up to %d pairs. %s%n", leads.size(), String.join(", ",
+        prompts.printf(Locale.ROOT, "Probing %d leads (%s); up to %d pairs.%n%s%n", leads.size(), String.join(", ",
                 leads), all, LeadsTextReport.CAUTION);
         boolean scripted = answers != null || System.console() == null;
         try (BufferedReader in = answers != null ? Files.newBufferedReader(answers, StandardCharsets.UTF_8)
@@ -78,8 +78,10 @@ final class LeadsProbeCommand implements Callable<Integer> {
                     break;
                 }
                 LeadPair p = next.get();
+                // In the user's label order (red-blue as listed), not the pair's canonical order.
+                String shown = leads.indexOf(p.a()) < leads.indexOf(p.b()) ? p.a() + "-" + p.b() : p.b() + "-" + p.a();
                 prompts.printf(Locale.ROOT, "Reading %d: measure %s (ohms, OL, undo, quit): ",
-                        session.readingCount() + 1, p);
+                        session.readingCount() + 1, shown);
                 prompts.flush();
                 String line = in.readLine();
                 if (line == null) {

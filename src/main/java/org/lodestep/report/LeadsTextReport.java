@@ -28,8 +28,8 @@ public final class LeadsTextReport {
     public static void write(PrintWriter out, String title, Identification id) {
         out.printf(Locale.ROOT, "%s: %d leads, %d of %d pairs measured%n", title, id.leads().size(),
                 id.measuredPairs(), id.totalPairs());
-        out.println("Topology: " + id.topology().label() + describe(id.topology())
-                + (id.determined() ? "" : " (not yet certain)"));
+        out.println("Topology: " + id.topology().label()
+                + (id.determined() ? describe(id.topology()) : " (not yet certain: more pairs needed)"));
         out.println();
         schematic(out, id);
         if (id.temperature() != null) {
@@ -37,7 +37,7 @@ public final class LeadsTextReport {
                     id.temperature().measuredC(), id.temperature().referenceC(), num(id.temperature().constantC()),
                     id.temperature().standard());
         }
-        findings(out, id.findings());
+        findings(out, id.findings(), id.determined());
         connections(out, id.connections());
         if (!id.missingPairs().isEmpty()) {
             out.println();
@@ -65,7 +65,9 @@ public final class LeadsTextReport {
         }
         if (!id.connections().isEmpty()) {
             Connection c = id.connections().get(0);
-            out.println("  " + c.name() + ": " + terminals(c.terminals())
+            String joins = c.jumpers().isEmpty() ? "" : "  join " + String.join(", ",
+                    c.jumpers().stream().map(j -> String.join("+", j)).toList());
+            out.println("  " + c.name() + ": " + terminals(c.terminals()) + joins
                     + (c.verified() ? "" : "  (provisional: back-EMF phasing settles it)"));
         }
         if (!id.missingPairs().isEmpty()) {
@@ -128,10 +130,11 @@ public final class LeadsTextReport {
                 num(id.temperature().referenceC()));
     }
 
-    private static void findings(PrintWriter out, List<Finding> findings) {
+    private static void findings(PrintWriter out, List<Finding> findings, boolean determined) {
         out.println();
         if (findings.isEmpty()) {
-            out.println("Findings: none; windings balanced and readings consistent.");
+            out.println(determined ? "Findings: none; windings balanced and readings consistent."
+                    : "Findings so far: none.");
             return;
         }
         out.println("Findings:");
@@ -146,7 +149,8 @@ public final class LeadsTextReport {
             return;
         }
         out.println();
-        out.println("Driver connections (factors relative to one half-winding; current factors are trade convention):");
+        out.println("Driver connections (factors relative to one half-winding, or to the whole winding of a 4-lead"
+                + " motor; current factors are trade convention):");
         for (Connection c : cs) {
             out.printf(Locale.ROOT, "  %s: phase %s, inductance x%s, current rating x%s%s%n", c.name(),
                     ohm(c.phaseResistanceOhm()), num(c.inductanceFactor()), num(c.currentFactor()),

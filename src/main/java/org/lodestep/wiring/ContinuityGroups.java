@@ -13,6 +13,12 @@ import java.util.Map;
  * still be one winding.
  */
 final class ContinuityGroups {
+    /**
+     * Highest reading taken as winding continuity whatever the other readings, ohms: two-phase hybrid windings read
+     * from a fraction of an ohm to a few hundred ohms (common practice, no published source).
+     */
+    static final double MAX_WINDING_OHM = 2_000.0;
+
     final double continuityLimitOhm;
     final List<List<String>> groups;
     final List<ReadingUse> uses;
@@ -26,9 +32,11 @@ final class ContinuityGroups {
                 min = Math.min(min, v);
             }
         }
-        // A near-zero lowest reading (probes touching) must not make every winding look like leakage.
-        continuityLimitOhm = Double.isFinite(min) ? Math.max(min, s.contactAllowanceOhm() + 0.1) * s.continuityRatio()
-                : Double.POSITIVE_INFINITY;
+        // A near-zero lowest reading (probes touching) must not make every winding look like leakage; and no
+        // stepper winding reads kilo-ohms, so a lone leakage reading is not taken for continuity either.
+        continuityLimitOhm = Double.isFinite(min)
+                ? Math.min(Math.max(min, s.contactAllowanceOhm() + 0.1) * s.continuityRatio(), MAX_WINDING_OHM)
+                : MAX_WINDING_OHM;
         List<String> leads = m.leads();
         Map<String, String> parent = new LinkedHashMap<>();
         for (String l : leads) {

@@ -16,10 +16,15 @@ import org.apache.commons.math3.linear.RealVector;
  * hub-to-end reading is h_i and an end-to-end reading is h_i + h_j. For each candidate hub the coil resistances are
  * fitted to the readings by least squares (Commons Math QR). A motor's coils are nominally equal, so the right hub
  * gives positive, similar coils; a wrong hub gives a coil near zero or negative, or readings the model cannot fit.
+ *
+ * <p>Decision: a hub is accepted when it is the only one for which equal coils (within
+ * {@link HealthyGroupFeasibility#COIL_SPREAD}) and per-reading contact resistance within the allowance explain every
+ * reading. When no hub passes that test and the group is fully measured (a faulty motor), the least-squares fit
+ * decides, so that the findings can name the fault.
  */
 final class HubFit {
     /** Largest (max − min)/mean of fitted coils for a plausible hub; wide, so that faults are reported, not hidden. */
-    static final double MAX_SPREAD = 0.6;
+    static final double MAX_SPREAD = 0.5;
     /** Largest RMS misfit relative to the mean reading for a plausible hub. */
     static final double MAX_MISFIT = 0.2;
 
@@ -36,21 +41,38 @@ final class HubFit {
     /** True when every candidate fails: the readings contradict the series model. */
     final boolean nothingFits;
 
-    HubFit(List<String> group, ResistanceMatrix m) {
+    HubFit(List<String> group, ResistanceMatrix m, double contactAllowanceOhm) {
         candidates = new ArrayList<>();
+        List<Candidate> healthy = new ArrayList<>();
         for (String hub : group) {
-            candidates.add(evaluate(hub, group, m));
+            Candidate c = evaluate(hub, group, m);
+            candidates.add(c);
+            if (HealthyGroupFeasibility.feasible(hub, group, m, contactAllowanceOhm)) {
+                healthy.add(c);
+            }
+        }
+        boolean complete = true;
+        for (int i = 0; i < group.size(); i++) {
+            for (int j = i + 1; j < group.size(); j++) {
+                complete &= m.isMeasured(LeadPair.of(group.get(i), group.get(j)));
+            }
         }
         List<Candidate> fitting = candidates.stream().filter(Candidate::fits)
                 .sorted(java.util.Comparator.comparingDouble(Candidate::score)).toList();
-        nothingFits = fitting.isEmpty();
-        if (fitting.size() == 1) {
+        if (healthy.size() == 1) {
+            // Only one hub explains the readings with equal coils and contact resistance within the allowance.
+            best = healthy.get(0);
+        } else if (healthy.isEmpty() && complete && fitting.size() == 1) {
+            // A faulty group (say shorted turns), fully measured: the best least-squares fit names the tap so the
+            // findings can describe the fault.
             best = fitting.get(0);
-        } else if (fitting.size() > 1 && fitting.get(0).score() * 3 < fitting.get(1).score()) {
+        } else if (healthy.isEmpty() && complete && fitting.size() > 1
+                && fitting.get(0).score() * 2 < fitting.get(1).score()) {
             best = fitting.get(0);
         } else {
             best = null;
         }
+        nothingFits = healthy.isEmpty() && fitting.isEmpty();
     }
 
     private static Candidate evaluate(String hub, List<String> group, ResistanceMatrix m) {

@@ -35,7 +35,7 @@ public final class LeadIdentifier {
                 case 2 -> windings.add(new Winding(g, null, m.ohms(LeadPair.of(g.get(0), g.get(1))).getAsDouble(),
                         List.of(), false, true));
                 case 3, 5 -> {
-                    HubFit fit = new HubFit(g, m);
+                    HubFit fit = new HubFit(g, m, s.contactAllowanceOhm());
                     if (fit.best != null) {
                         windings.addAll(WindingChecks.windingsOf(fit.best, m));
                         findings.addAll(WindingChecks.seriesChecks(fit.best, m, s));

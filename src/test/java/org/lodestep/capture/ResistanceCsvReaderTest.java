@@ -86,6 +86,12 @@ class ResistanceCsvReaderTest {
         assertTrue(Double.isInfinite(ohm(r, "b", "c")));
     }
 
+    @Test
+    void titleWordInMatrixCornerMeansOhms() throws Exception {
+        ResistanceReadings r = ResistanceCsvReader.read(fixture("good/matrix-title-corner.csv"));
+        assertEquals(1.2, ohm(r, "a", "b"));
+    }
+
     private static InputFormatException bad(String name) {
         return assertThrows(InputFormatException.class, () -> ResistanceCsvReader.read(fixture("bad/" + name)));
     }
@@ -141,6 +147,7 @@ class ResistanceCsvReaderTest {
         assertTrue(bad("no-unit.csv").expected().contains("unit"));
         assertEquals(1, bad("bad-temperature.csv").line());
         assertTrue(bad("utf16.csv").expected().contains("UTF-8"));
+        assertEquals(1, bad("matrix-bad-unit.csv").line());
     }
 
     @Test

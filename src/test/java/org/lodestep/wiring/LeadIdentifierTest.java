@@ -103,8 +103,9 @@ class LeadIdentifierTest {
 
     @Test
     void ambiguousTapAsksForTheThirdReading() {
-        // Two readings at ratio 1.5: tap in the middle (halves 1.0 and 1.5) or at an end (half 1.0, whole 1.5).
-        ResistanceMatrix m = ResistanceMatrix.builder().reading("a", "b", 1.0).reading("a", "c", 1.55)
+        // 1.0 and 1.3 Ω with up to 0.3 Ω contact per reading: halves 1.0 and 1.3 (tap a) or half 0.7-1.0 and whole
+        // 1.3 (tap b) both fit equal coils, so only the third reading b-c can decide.
+        ResistanceMatrix m = ResistanceMatrix.builder().reading("a", "b", 1.0).reading("a", "c", 1.3)
                 .reading("d", "e", 1.0).reading("d", "f", 2.0).reading("e", "f", 1.0).open("a", "d").build();
         Identification id = identify(m);
         assertFalse(id.determined());
@@ -234,6 +235,15 @@ class LeadIdentifierTest {
         assertEquals(Set.of("phase-leakage"), codes(id));
         assertTrue(id.hasError());
         assertEquals(List.of("1", "3"), id.findings().get(0).leads());
+    }
+
+    @Test
+    void loneKiloohmReadingIsLeakageNotAWinding() {
+        ResistanceMatrix m = ResistanceMatrix.builder().reading("1", "2", 48_000).lead("3").lead("4").build();
+        Identification id = identify(m);
+        assertEquals("leakage", id.readings().get(0).kind());
+        assertTrue(id.windings().isEmpty());
+        assertEquals(Set.of("phase-leakage"), codes(id));
     }
 
     @Test
