@@ -16,14 +16,14 @@ import java.util.Objects;
  * @param revolutionSource           where {@code revolutions} came from
  * @param cyclesPerRevolution        electrical cycles per revolution before rounding; null when unknown
  * @param rotorTeeth                 rotor teeth; null when unknown
- * @param phaseBLagDeg               how far phase B lags phase A, electrical degrees (about 90); null with one phase
+ * @param quadratureLagDeg           how far phase B lags phase A, electrical degrees (about 90); null with one phase
  * @param directionReversals         times the turning direction changed during the capture
  * @param findings                   warnings and errors about the capture
  */
 public record BackEmfResult(List<EmfCoil> coils, double electricalCycles, double movingDurationS,
                             double meanElectricalFrequencyHz, double minElectricalFrequencyHz,
                             double maxElectricalFrequencyHz, Double revolutions, RevolutionSource revolutionSource,
-                            Double cyclesPerRevolution, Integer rotorTeeth, Double phaseBLagDeg,
+                            Double cyclesPerRevolution, Integer rotorTeeth, Double quadratureLagDeg,
                             int directionReversals, List<Finding> findings) {
     public BackEmfResult {
         coils = List.copyOf(coils);
@@ -38,7 +38,7 @@ public record BackEmfResult(List<EmfCoil> coils, double electricalCycles, double
         if (rotorTeeth != null && rotorTeeth < 1) {
             throw new IllegalArgumentException("rotor teeth must be at least 1, got " + rotorTeeth);
         }
-        Checks.finiteOrNull(phaseBLagDeg, "phase B lag", "deg");
+        Checks.finiteOrNull(quadratureLagDeg, "phase B lag", "deg");
         if (directionReversals < 0) {
             throw new IllegalArgumentException("direction reversals must be zero or more, got " + directionReversals);
         }

@@ -128,9 +128,9 @@ public final class MotorCardText {
                                     .replace('_', ' ')),
                     num(e.movingDurationS(), 3), num(e.minElectricalFrequencyHz(), 3),
                     num(e.maxElectricalFrequencyHz(), 3), num(e.meanElectricalFrequencyHz(), 3)));
-            if (e.phaseBLagDeg() != null) {
+            if (e.quadratureLagDeg() != null) {
                 b.append(String.format(Locale.ROOT, "  phase B lags phase A by %s° electrical%n",
-                        num(e.phaseBLagDeg(), 3)));
+                        num(e.quadratureLagDeg(), 3)));
             }
         }
         for (StepInput s : card.stepResponses()) {

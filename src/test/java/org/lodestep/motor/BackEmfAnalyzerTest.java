@@ -40,7 +40,7 @@ class BackEmfAnalyzerTest {
         assertEquals(new LeadPair("4", "3"), coil(r, "3").oriented());
         assertEquals(new LeadPair("7", "8"), coil(r, "7").oriented());
         // item 14: the phases are 90° electrical apart
-        assertEquals(90.0, r.phaseBLagDeg(), 2.0);
+        assertEquals(90.0, r.quadratureLagDeg(), 2.0);
         // item 14: f_e = Nr x rev/s -> 150 cycles in 3 revolutions -> 50 teeth (item 1: 1.8°)
         // Tolerance 1 cycle: near standstill at both ends the EMF sinks into the 10 mV noise and those few degrees
         // of travel cannot be counted (our own bound: speed below about 5 % of peak for u < 0.07 at each end).
