@@ -80,6 +80,11 @@ public final class ArraySampleStream implements SampleStream {
     }
 
     @Override
+    public long knownFrameCount() {
+        return length;
+    }
+
+    @Override
     public String source() {
         return source;
     }

@@ -95,7 +95,13 @@ public final class CaptureReader implements SampleStream {
             throw new InputFormatException(path.toString(), InputFormatException.NO_LINE, null, null,
                     "has no capture sidecar beside it: expected " + withExtension(path, ".json"));
         }
-        return new CaptureReader(sidecarPath, CaptureSidecar.read(sidecarPath), incomplete);
+        CaptureSidecar sidecar = CaptureSidecar.read(sidecarPath);
+        if (!sidecarPath.equals(path) && !path.getFileName().toString().equals(sidecar.dataFile())) {
+            throw new InputFormatException(sidecarPath.toString(), InputFormatException.NO_LINE, "data_file",
+                    sidecar.dataFile(), "is the data file this sidecar belongs to, not " + path.getFileName()
+                            + " (renamed files? rename the pair together and keep data_file in step)");
+        }
+        return new CaptureReader(sidecarPath, sidecar, incomplete);
     }
 
     /** The sidecar of a capture given by either file, or null when a CSV has no sidecar beside it. */
@@ -136,6 +142,12 @@ public final class CaptureReader implements SampleStream {
         } catch (NoSuchAlgorithmException e) {
             throw new IllegalStateException("every Java runtime has SHA-256", e);
         }
+    }
+
+    /** The row count the sidecar recorded (checked when the read reaches the end). */
+    @Override
+    public long knownFrameCount() {
+        return sidecar.frames();
     }
 
     /** What the sidecar says. */

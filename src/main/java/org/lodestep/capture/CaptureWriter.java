@@ -51,6 +51,8 @@ public final class CaptureWriter implements Closeable {
         DISCARD
     }
 
+    private static final java.security.SecureRandom RANDOM = new java.security.SecureRandom();
+
     private final Path csvPath;
     private final Path sidecarPath;
     private final Path tempCsv;
@@ -85,8 +87,8 @@ public final class CaptureWriter implements Closeable {
         } catch (NoSuchAlgorithmException e) {
             throw new IllegalStateException("every Java runtime has SHA-256", e);
         }
-        this.tempCsv = Files.createTempFile(this.csvPath.getParent(), "." + name + ".", ".part");
-        this.channel = FileChannel.open(tempCsv, StandardOpenOption.WRITE);
+        this.tempCsv = tempSibling(this.csvPath);
+        this.channel = FileChannel.open(tempCsv, StandardOpenOption.WRITE, StandardOpenOption.CREATE_NEW);
         OutputStream os = new DigestOutputStream(Channels.newOutputStream(channel), digest);
         this.out = new BufferedWriter(new OutputStreamWriter(os, StandardCharsets.UTF_8), 1 << 16);
         // Enough decimals that consecutive time stamps differ by a hundred or more in the last digit.
@@ -248,8 +250,8 @@ public final class CaptureWriter implements Closeable {
                     info.rig(), info.firmwareVersion(), info.scenario(), info.serialNumber(), info.toolVersion(),
                     info.startedAt(), Instant.now(clock), info.sampleRateHz(), info.startTimeS(), frames,
                     info.channels(), info.sweep(), info.metadata(), sha);
-            tempJson = Files.createTempFile(sidecarPath.getParent(), "." + sidecarPath.getFileName() + ".", ".part");
-            try (FileChannel jc = FileChannel.open(tempJson, StandardOpenOption.WRITE)) {
+            tempJson = tempSibling(sidecarPath);
+            try (FileChannel jc = FileChannel.open(tempJson, StandardOpenOption.WRITE, StandardOpenOption.CREATE_NEW)) {
                 jc.write(StandardCharsets.UTF_8.encode(sidecar.toJson()));
                 jc.force(true);
             }
@@ -269,6 +271,14 @@ public final class CaptureWriter implements Closeable {
             }
             throw e;
         }
+    }
+
+    /**
+     * A hidden name beside {@code target} for its temporary file. Opened with CREATE_NEW rather than made by
+     * {@code Files.createTempFile}, whose owner-only permissions would stay on the capture after the move.
+     */
+    private static Path tempSibling(Path target) {
+        return target.resolveSibling("." + target.getFileName() + "." + Long.toHexString(RANDOM.nextLong()) + ".part");
     }
 
     private void syncFolder() {

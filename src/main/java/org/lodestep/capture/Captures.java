@@ -33,8 +33,43 @@ public final class Captures {
             case CAPTURE:
                 return CaptureReader.open(path, incomplete);
             default:
-                return TimeSeriesCsvReader.open(path);
+                return plainCsv(path);
         }
+    }
+
+    /**
+     * A CSV without a sidecar; refused when its own header says it is a rig capture, because then nothing can tell
+     * whether it is complete and unchanged.
+     */
+    private static SampleStream plainCsv(Path path) throws IOException, InputFormatException {
+        TimeSeriesCsvReader csv = TimeSeriesCsvReader.open(path);
+        if (csv.metadata().containsKey("lodestep_capture")) {
+            csv.close();
+            String name = path.getFileName().toString();
+            int dot = name.lastIndexOf('.');
+            throw new InputFormatException(path.toString(), InputFormatException.NO_LINE, null, null,
+                    "is a rig capture whose sidecar is missing: expected " + (dot > 0 ? name.substring(0, dot) : name)
+                            + ".json beside it, to check that the data are complete and unchanged");
+        }
+        return csv;
+    }
+
+    /**
+     * Wraps a stream so a background thread reads (parses, decodes) ahead while the caller computes: on a machine
+     * with a second core the analysis of a large CSV then costs about the larger of parsing and computing instead of
+     * their sum. Same frames, same errors at the same place. With one core the stream is returned as it is.
+     * Closing the returned stream stops the thread and closes {@code in}.
+     *
+     * @param blockFrames frames per block handed over (e.g. 65536); three blocks are in flight at most
+     */
+    public static SampleStream readAhead(SampleStream in, int blockFrames) {
+        if (blockFrames < 1) {
+            throw new IllegalArgumentException("block must hold at least one frame, got " + blockFrames);
+        }
+        if (Runtime.getRuntime().availableProcessors() < 2 || in instanceof ArraySampleStream) {
+            return in;
+        }
+        return new ReadAheadSampleStream(in, blockFrames, 3);
     }
 
     /** Reads a whole file into memory: for short captures (step responses, ring-downs, hand-turned back-EMF). */

@@ -114,6 +114,11 @@ final class CsvColumns {
                 throw new InputFormatException(source, lineNumber, column, headerLine,
                         "has an empty column name: expected time_s or <channel>_<unit> in every column");
             }
+            char first = name.charAt(0);
+            if (Character.isDigit(first) || first == '-' || first == '+' || first == '.') {
+                throw new InputFormatException(source, lineNumber, column, name,
+                        "looks like a number: expected a header line of column names first, e.g. time_s,accel_g");
+            }
             if (!seen.add(name.toLowerCase(Locale.ROOT))) {
                 throw new InputFormatException(source, lineNumber, name, headerLine,
                         "names this column twice: expected each column once");

@@ -27,6 +27,14 @@ public interface SampleStream extends Closeable {
         return 0.0;
     }
 
+    /**
+     * The number of frames when the source states it before any read (a WAV header, a capture sidecar, arrays in
+     * memory), so a caller can skip a counting pass; -1 when only reading to the end tells (a plain CSV).
+     */
+    default long knownFrameCount() {
+        return -1;
+    }
+
     /** Metadata from the source ({@code # key=value} comments, WAV info, capture sidecar), keys in lower case. */
     Map<String, String> metadata();
 

@@ -22,9 +22,9 @@ import ch.randelshofer.fastdoubleparser.JavaDoubleParser;
  * blank lines are skipped. Fields may be quoted.
  *
  * <p><b>Speed.</b> Rows of the plain shape are parsed in place in the read buffer: plain decimals exactly by
- * {@link PlainDecimal}, other numbers by FastDoubleParser. Any other row (spaces, quotes, comments, errors) takes a
- * general path that splits the line first; a row holding a quote character goes through Commons CSV. Memory is bounded by one read buffer and the caller's
- * block, whatever the file's length.
+ * {@link PlainDecimal}, other numbers by FastDoubleParser. Any other row (quotes, comments, errors) takes a
+ * general path that splits the line first; a row holding a quote character goes through Commons CSV. Memory is
+ * bounded by one read buffer and the caller's block, whatever the file's length.
  *
  * <p><b>Errors.</b> A cell that is empty, not a number, NaN or infinite, a row with the wrong number of fields, and a
  * time stamp that breaks the sample clock (see {@link TimeAxis}: gaps, repeats, backwards steps, drift) end the read
@@ -47,6 +47,8 @@ public final class TimeSeriesCsvReader implements SampleStream {
     private final double[][] pending;
     private int pendingCount;
     private int pendingPos;
+    private int pendingStart;
+    private InputFormatException pendingError;
     private long frameIndex;
     private double rowTimeS;
     private final byte[] scratch = new byte[64];
@@ -362,11 +364,37 @@ public final class TimeSeriesCsvReader implements SampleStream {
         return metadata;
     }
 
+    /**
+     * {@inheritDoc}
+     *
+     * <p>Rows before a malformed one are always delivered: a read that meets an error returns the frames before it,
+     * and the next read throws.
+     */
     @Override
     public int read(double[][] dest, int offset, int maxFrames) throws IOException, InputFormatException {
         if (closed) {
             throw new IOException(source + ": read after close");
         }
+        if (pendingError != null) {
+            InputFormatException e = pendingError;
+            pendingError = null;
+            throw e;
+        }
+        long firstFrame = frameIndex;
+        try {
+            return readRows(dest, offset, maxFrames);
+        } catch (InputFormatException e) {
+            int delivered = (pendingPos - pendingStart) + (int) (frameIndex - firstFrame);
+            if (delivered > 0) {
+                pendingError = e;
+                return delivered;
+            }
+            throw e;
+        }
+    }
+
+    private int readRows(double[][] dest, int offset, int maxFrames) throws IOException, InputFormatException {
+        pendingStart = pendingPos;
         int k = 0;
         if (pendingPos < pendingCount) {
             int take = Math.min(maxFrames, pendingCount - pendingPos);
@@ -398,8 +426,8 @@ public final class TimeSeriesCsvReader implements SampleStream {
     }
 
     /**
-     * The fast path: parses rows of the plain shape (unquoted numbers separated by the delimiter, no spaces, ending
-     * in a newline) straight from the read buffer. Stops before the first row that is not whole in the buffer or
+     * The fast path: parses rows of the plain shape (unquoted numbers separated by the delimiter, spaces allowed
+     * around them, ending in a newline) straight from the read buffer. Stops before the first row that is not whole in the buffer or
      * not plain, leaving it to {@link #parseRow}, which reads every shape and words every error.
      *
      * @return the number of rows parsed
@@ -419,6 +447,9 @@ public final class TimeSeriesCsvReader implements SampleStream {
             int q = p;
             double timeS = 0;
             for (int col = 0; col < width; col++) {
+                while (b[q] == ' ') {
+                    q++;   // "0.001, 0.5": spaces around fields are common in hand-made and logger files
+                }
                 double v = PlainDecimal.parse(b, q, decimalComma, end);
                 if (Double.isNaN(v)) {
                     v = generalNumber(b, q, delim);
@@ -427,6 +458,9 @@ public final class TimeSeriesCsvReader implements SampleStream {
                     }
                 }
                 q = end[0];
+                while (b[q] == ' ') {
+                    q++;
+                }
                 byte c = b[q];
                 if (col < width - 1) {
                     if (c != delim) {

@@ -59,10 +59,12 @@ public final class WavReader implements SampleStream {
     private final int bits;
     private final int blockAlign;
     private final long dataStart;
+    private final long frameCount;
     /** Bytes of sample data still to read, or -1 to read to the end of the input. */
     private long remaining;
     private long position;
     private byte[] buf = new byte[0];
+    private InputFormatException pendingError;
     private boolean closed;
 
     private WavReader(InputStream in, String source, long totalBytes) throws IOException, InputFormatException {
@@ -156,6 +158,7 @@ public final class WavReader implements SampleStream {
             }
         }
         this.dataStart = position;
+        this.frameCount = remaining < 0 ? -1 : remaining / fmtBlockAlign;
         this.format = fmtFormat;
         this.bits = fmtBits;
         this.blockAlign = fmtBlockAlign;
@@ -334,6 +337,12 @@ public final class WavReader implements SampleStream {
         return metadata;
     }
 
+    /** Frames declared by the data chunk; -1 when its size was written as unknown and the file length is unknown. */
+    @Override
+    public long knownFrameCount() {
+        return frameCount;
+    }
+
     /** Byte offset of the first sample in the file. */
     long dataStart() {
         return dataStart;
@@ -341,6 +350,12 @@ public final class WavReader implements SampleStream {
 
     @Override
     public int read(double[][] dest, int offset, int maxFrames) throws IOException, InputFormatException {
+        if (pendingError != null) {
+            InputFormatException e = pendingError;
+            pendingError = null;
+            closed = true;
+            throw e;
+        }
         if (closed) {
             throw new IOException(source + ": read after close");
         }
@@ -366,6 +381,21 @@ public final class WavReader implements SampleStream {
         if (got == 0) {
             return -1;
         }
+        if (format == FORMAT_FLOAT) {
+            // Frames before a non-finite sample are delivered; the next read reports it.
+            int good = finiteFrames(frames);
+            if (good < frames) {
+                pendingError = at(position + (long) good * blockAlign, null, "holds a non-finite sample in frame "
+                        + ((position - dataStart) / blockAlign + good) + ": expected finite float samples");
+                if (good == 0) {
+                    InputFormatException e = pendingError;
+                    pendingError = null;
+                    closed = true;
+                    throw e;
+                }
+                frames = good;
+            }
+        }
         decode(dest, offset, frames);
         position += got;
         if (remaining >= 0) {
@@ -374,7 +404,21 @@ public final class WavReader implements SampleStream {
         return frames;
     }
 
-    private void decode(double[][] dest, int offset, int frames) throws InputFormatException {
+    /** Number of leading frames in the buffer whose float samples are all finite. */
+    private int finiteFrames(int frames) {
+        int bytesPerSample = bits / 8;
+        int samples = frames * channels.size();
+        for (int k = 0; k < samples; k++) {
+            int p = k * bytesPerSample;
+            double v = bits == 32 ? (float) FLOAT_LE.get(buf, p) : (double) DOUBLE_LE.get(buf, p);
+            if (!Double.isFinite(v)) {
+                return k / channels.size();
+            }
+        }
+        return frames;
+    }
+
+    private void decode(double[][] dest, int offset, int frames) {
         int nc = channels.size();
         byte[] b = buf;
         int bytesPerSample = bits / 8;
@@ -383,12 +427,7 @@ public final class WavReader implements SampleStream {
             int p = c * bytesPerSample;
             if (format == FORMAT_FLOAT) {
                 for (int i = 0; i < frames; i++, p += blockAlign) {
-                    double v = bits == 32 ? (float) FLOAT_LE.get(b, p) : (double) DOUBLE_LE.get(b, p);
-                    if (!Double.isFinite(v)) {
-                        throw at(position + p, Double.toString(v), "is a " + channels.get(c).name()
-                                + " sample: expected a finite float");
-                    }
-                    d[offset + i] = v;
+                    d[offset + i] = bits == 32 ? (float) FLOAT_LE.get(b, p) : (double) DOUBLE_LE.get(b, p);
                 }
                 continue;
             }

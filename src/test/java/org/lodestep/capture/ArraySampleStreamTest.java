@@ -18,6 +18,7 @@ class ArraySampleStreamTest {
         ArraySampleStream s = new ArraySampleStream("mem", TWO, 100, 0.25, Map.of("k", "v"),
                 new double[][] {a, {5, 4, 3, 2, 1}});
         a[0] = 99;   // the stream took a copy
+        assertEquals(5, s.knownFrameCount());
         double[][] buf = new double[2][3];
         assertEquals(3, s.read(buf, 0, 3));
         assertArrayEquals(new double[] {1, 2, 3}, buf[0]);

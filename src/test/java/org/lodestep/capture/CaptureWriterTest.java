@@ -85,6 +85,7 @@ class CaptureWriterTest {
                 assertTrue(s instanceof CaptureReader, open.toString());
                 assertEquals(CHANNELS, s.channels());
                 assertEquals(51200.0, s.sampleRateHz());
+                assertEquals(n, s.knownFrameCount());
                 assertEquals("HS-23-00917", s.metadata().get("serial_number"));
                 assertEquals("gantry-x", s.metadata().get("scenario"));
                 assertEquals("R. Okafor", s.metadata().get("operator"));
@@ -100,6 +101,34 @@ class CaptureWriterTest {
             }
         }
         assertEquals(sidecar, CaptureReader.verify(csv));
+        // Permissions like any other file the user writes (umask applies), not owner-only like a temp file.
+        Path plain = Files.writeString(dir.resolve("plain.txt"), "x");
+        assertEquals(Files.getPosixFilePermissions(plain), Files.getPosixFilePermissions(csv));
+        assertEquals(Files.getPosixFilePermissions(plain), Files.getPosixFilePermissions(dir.resolve("sweep-017.json")));
+    }
+
+    @Test
+    void refusesCaptureCsvWhoseSidecarIsMissing() throws Exception {
+        Path csv = dir.resolve("lost.csv");
+        try (CaptureWriter w = CaptureWriter.create(csv, info(1000), CaptureWriter.Interrupted.KEEP_INCOMPLETE)) {
+            w.append(block(0, 10), 0, 10);
+        }
+        Files.delete(dir.resolve("lost.json"));
+        InputFormatException e = assertThrows(InputFormatException.class, () -> Captures.open(csv));
+        assertTrue(e.expected().contains("lost.json"), e.getMessage());
+    }
+
+    @Test
+    void refusesSidecarThatBelongsToAnotherDataFile() throws Exception {
+        try (CaptureWriter w = CaptureWriter.create(dir.resolve("one.csv"), info(1000),
+                CaptureWriter.Interrupted.DISCARD)) {
+            w.append(block(0, 10), 0, 10);
+            w.commit();
+        }
+        Files.move(dir.resolve("one.csv"), dir.resolve("two.csv"));
+        Files.move(dir.resolve("one.json"), dir.resolve("two.json"));
+        InputFormatException e = assertThrows(InputFormatException.class, () -> Captures.open(dir.resolve("two.csv")));
+        assertEquals("data_file", e.column());
     }
 
     @Test

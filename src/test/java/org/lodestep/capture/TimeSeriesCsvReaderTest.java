@@ -34,6 +34,7 @@ class TimeSeriesCsvReaderTest {
     void readsCommaFileWithUnitsMetadataAndRate() throws Exception {
         try (TimeSeriesCsvReader r = TimeSeriesCsvReader.open(TestStreams.fixture("comma.csv"))) {
             assertEquals(List.of(new Channel("accel", "g"), new Channel("current", "a")), r.channels());
+            assertEquals(-1, r.knownFrameCount());
             // Time stamps 0.000, 0.001, ... s: 1000 Hz by definition of the fixture.
             assertEquals(1000.0, r.sampleRateHz());
             assertEquals(0.0, r.startTimeS());
@@ -207,6 +208,9 @@ class TimeSeriesCsvReaderTest {
         assertEquals("time", failureOf("time,a_g\n0,1\n").column());
         assertEquals("a_g", failureOf("time_s,a_g,a_g\n0,1,1\n").column());
         assertTrue(failureOf("time_s\n0\n1\n").expected().contains("no data column"));
+        InputFormatException noHeader = failureOf("0.000,1.5\n0.001,1.5\n");
+        assertEquals(1, noHeader.line());
+        assertTrue(noHeader.expected().contains("header"), noHeader.getMessage());
     }
 
     @Test
@@ -278,5 +282,21 @@ class TimeSeriesCsvReaderTest {
         assertEquals(8002, e.line());
         assertEquals("a_g", e.column());
         assertEquals("1e", e.text());
+    }
+
+    @Test
+    void deliversEveryRowBeforeABadOneThenFails() throws Exception {
+        StringBuilder sb = new StringBuilder("time_s,a_g\n");
+        for (int i = 0; i < 5000; i++) {
+            sb.append(TestStreams.fixed(i / 1000.0, 3)).append(',').append(i == 4500 ? "?" : "1").append('\n');
+        }
+        try (TimeSeriesCsvReader r = TimeSeriesCsvReader.open(TestStreams.text(sb.toString()), "late.csv")) {
+            double[][] buf = new double[1][4096];
+            assertEquals(4096, r.read(buf, 0, 4096));
+            // Rows 4096..4499 are good: they come first, the error with the next read.
+            assertEquals(404, r.read(buf, 0, 4096));
+            InputFormatException e = assertThrows(InputFormatException.class, () -> r.read(buf, 0, 4096));
+            assertEquals(4502, e.line());
+        }
     }
 }

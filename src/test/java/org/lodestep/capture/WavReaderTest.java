@@ -52,6 +52,7 @@ class WavReaderTest {
             assertEquals(48000.0, r.sampleRateHz());
             assertEquals(List.of(new Channel("ch1", "")), r.channels());
             assertEquals(44, r.dataStart());
+            assertEquals(48000, r.knownFrameCount());
             double[] d = TestStreams.readAll(r, 10_000)[0];
             assertEquals(48000, d.length);
             assertEquals(-1.0, d[0]);
@@ -211,6 +212,7 @@ class WavReaderTest {
         file[file.length - 6] = (byte) 0xFF;
         file[file.length - 5] = (byte) 0xFF;
         try (WavReader r = read(file)) {
+            assertEquals(-1, r.knownFrameCount());
             assertArrayEquals(new double[] {0.5, -0.5}, TestStreams.readAll(r, 8)[0]);
         }
     }
@@ -238,8 +240,13 @@ class WavReaderTest {
     void rejectsNonFiniteFloatSample() throws Exception {
         byte[] data = ByteBuffer.allocate(8).order(ByteOrder.LITTLE_ENDIAN).putFloat(0.5f).putFloat(Float.NaN).array();
         try (WavReader r = read(wav(fmt(3, 1, 1000, 32), data))) {
-            InputFormatException e = assertThrows(InputFormatException.class, () -> TestStreams.readAll(r, 8));
-            assertTrue(e.expected().contains("finite"), e.getMessage());
+            double[][] buf = new double[1][8];
+            // The good frame comes first, the error with the next read.
+            assertEquals(1, r.read(buf, 0, 8));
+            assertEquals(0.5, buf[0][0]);
+            InputFormatException e = assertThrows(InputFormatException.class, () -> r.read(buf, 0, 8));
+            assertTrue(e.expected().contains("non-finite sample in frame 1"), e.getMessage());
+            assertEquals("byte " + (44 + 4), e.column());
         }
     }
 }
