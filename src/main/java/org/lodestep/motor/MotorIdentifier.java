@@ -73,9 +73,16 @@ public final class MotorIdentifier {
                     unknowns.add(where + ": inductance needs the supply voltage (--supply-v or '# supply_v=') or "
                             + "the coil resistance");
                 }
-                if (!coilR.containsKey(k) && s.fit().windingResistanceOhm() != null
-                        && s.fit().windingResistanceOhm() > 0) {
-                    coilR.put(k, s.fit().windingResistanceOhm());
+                Double fromStep = s.fit().windingResistanceOhm();
+                if (!coilR.containsKey(k) && fromStep != null && fromStep > 0) {
+                    coilR.put(k, fromStep);
+                } else if (coilR.containsKey(k) && fromStep != null
+                        && Math.abs(fromStep - coilR.get(k)) > Math.max(0.05 * coilR.get(k), 0.05)) {
+                    // 5 % or 50 mOhm: meter and probe scatter (common practice); beyond that the loop is misdescribed
+                    findings.add(Finding.info("step_resistance", String.format(java.util.Locale.ROOT, "%s gives "
+                            + "%.3g ohm for the coil, the resistance matrix %.3g ohm: the series resistance or the "
+                            + "step voltage may be stated wrongly (the inductance uses the loop as measured)", where,
+                            fromStep, coilR.get(k))));
                 }
                 continue;
             }

@@ -105,6 +105,18 @@ class MotorIdentifierTest {
     }
 
     @Test
+    void notesStepResistanceThatDisagreesWithMatrix() {
+        // loop of 1.6 ohm with the series resistance not stated: the step says 1.6 ohm, the matrix 1.20 ohm
+        List<StepInput> steps = List.of(coilStep("1", "2", 2.0e-3, List.of(), 1.6));
+        MotorCard card = MotorIdentifier.identify(new IdentifyRequest(eightLeadResistances(), steps, null, null,
+                null, null, null));
+        assertTrue(card.findings().stream().anyMatch(f -> f.code().equals("step_resistance")), card.findings()
+                .toString());
+        // the inductance still uses the loop as measured: tau·R_loop = 2.00 mH (item 10)
+        assertEquals(2.0e-3, card.stepResponses().get(0).fit().inductanceH(), 2.0e-3 * 5e-3);
+    }
+
+    @Test
     void eightLeadWithoutBackEmfCannotBeWired() {
         MotorCard card = MotorIdentifier.identify(new IdentifyRequest(eightLeadResistances(), List.of(), null,
                 null, null, null, null));
