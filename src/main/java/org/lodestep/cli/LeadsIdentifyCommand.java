@@ -33,6 +33,7 @@ import picocli.CommandLine.Parameters;
         footer = {"  lodestep leads identify sample-captures/leads/kl-03-microscope-stage-6lead.tsv",
             "  lodestep leads identify --pair red-blue=2.4 --pair green-black=2.4 --pair red-green=OL",
             "  lodestep leads identify --json --ambient-c 31 motor.csv",
+            "  lodestep leads identify --rig sim:salvage-8          (the rig measures, in the order needed)",
             "Exit code 3 when a motor has an error-severity finding (e.g. open-winding)."})
 final class LeadsIdentifyCommand implements Callable<Integer> {
 
@@ -44,6 +45,11 @@ final class LeadsIdentifyCommand implements Callable<Integer> {
                     + ". With one FILE, adds to (or replaces) its readings.")
     List<String> pairs = new ArrayList<>();
 
+    @Option(names = "--rig", paramLabel = "ADDR",
+            description = "Measure through a bench rig instead of reading files: the rig takes the pairs in the "
+                    + "order the identification asks for them. " + RigCli.ADDRESS_HELP)
+    String rig;
+
     @Mixin
     LeadsIdentifyOptions options;
 
@@ -52,6 +58,13 @@ final class LeadsIdentifyCommand implements Callable<Integer> {
 
     @Override
     public Integer call() throws Exception {
+        if (rig != null) {
+            if (!files.isEmpty() || !pairs.isEmpty()) {
+                throw new UsageException("--rig measures the motor itself: give no FILE or --pair with it");
+            }
+            PrintWriter out = spec.commandLine().getOut();
+            return RigLeadsIdentify.run(rig, options, out, options.json ? spec.commandLine().getErr() : out);
+        }
         if (files.isEmpty() && pairs.isEmpty()) {
             throw new UsageException("give at least one FILE or --pair (see --help)");
         }

@@ -7,6 +7,11 @@ import picocli.CommandLine.Command;
         mixinStandardHelpOptions = true,
         description = "Talk to a bench rig (serial, TCP or the virtual rig): list ports, query, measure, capture, serve.",
         subcommands = {
+            RigPortsCommand.class,
+            RigInfoCommand.class,
+            RigMeasureCommand.class,
+            RigCaptureCommand.class,
+            RigServeCommand.class
         })
 final class RigCommand implements Runnable {
     @picocli.CommandLine.Spec

@@ -1,0 +1,46 @@
+package org.lodestep.cli;
+
+import java.io.PrintWriter;
+import java.util.concurrent.Callable;
+
+import org.lodestep.report.Json;
+import org.lodestep.report.RigText;
+import org.lodestep.rig.RigClient;
+import org.lodestep.rig.Scenarios;
+
+import picocli.CommandLine.Command;
+import picocli.CommandLine.Option;
+import picocli.CommandLine.Parameters;
+import picocli.CommandLine.Spec;
+import picocli.CommandLine.Model.CommandSpec;
+
+/** {@code lodestep rig info ADDR}: handshake and capability listing; {@code sim:} alone lists the scenarios. */
+@Command(name = "info", mixinStandardHelpOptions = true,
+        description = "Connect to a rig and show its identity, firmware, lead count and what it can measure. "
+                + "With the address sim: alone, list the virtual rig's scenarios.",
+        footer = {"%nExamples:%n  lodestep rig info sim:%n  lodestep rig info sim:salvage-8%n"
+                + "  lodestep rig info serial:/dev/ttyUSB0?baud=921600"})
+final class RigInfoCommand implements Callable<Integer> {
+    @Parameters(index = "0", paramLabel = "ADDR", description = RigCli.ADDRESS_HELP)
+    String address;
+
+    @Option(names = "--json", description = "Print JSON instead of text.")
+    boolean json;
+
+    @Spec
+    CommandSpec spec;
+
+    @Override
+    public Integer call() throws Exception {
+        PrintWriter out = spec.commandLine().getOut();
+        if (address.equals("sim:")) {
+            out.print(json ? Json.write(Scenarios.all()) + "\n" : RigText.scenarios(Scenarios.all()));
+        } else {
+            try (RigClient c = RigCli.connect(address)) {
+                out.print(json ? Json.write(c.info()) + "\n" : RigText.info(c.info()));
+            }
+        }
+        out.flush();
+        return ExitCode.OK;
+    }
+}
