@@ -95,6 +95,12 @@ final class MotorIdentifyCommand implements Callable<Integer> {
                     + "prediction.")
     Double inertiaKgM2;
 
+    @Option(names = "--rig", paramLabel = "ADDR",
+            description = "Measure everything on a bench rig instead of reading files: every lead-pair resistance, "
+                    + "a 0.5 A current step on each coil, then a back-EMF capture while you turn the shaft by hand "
+                    + "(serial:DEVICE, tcp:HOST:PORT or sim:SCENARIO for the virtual rig). Give --revolutions.")
+    String rig;
+
     @Option(names = "--json", description = "Write the motor card as JSON instead of text.")
     boolean json;
 
@@ -103,8 +109,13 @@ final class MotorIdentifyCommand implements Callable<Integer> {
 
     @Override
     public Integer call() throws Exception {
-        if (resistance == null && stepResponses.isEmpty() && backEmf == null) {
-            throw new UsageException("nothing to identify: give --resistance, --step-response and/or --back-emf");
+        boolean files = resistance != null || !stepResponses.isEmpty() || backEmf != null;
+        if (!files && rig == null) {
+            throw new UsageException("nothing to identify: give --resistance, --step-response and/or --back-emf, "
+                    + "or --rig");
+        }
+        if (files && rig != null) {
+            throw new UsageException("--rig measures everything itself; give either --rig or files, not both");
         }
         positive(revolutions, "--revolutions");
         positive(phaseCurrentA, "--phase-current-a");
@@ -117,15 +128,29 @@ final class MotorIdentifyCommand implements Callable<Integer> {
         if (pulsesPerRev != null && pulsesPerRev < 1) {
             throw new UsageException("--pulses-per-rev must be at least 1, got " + pulsesPerRev);
         }
-        WindingInput windings = resistance == null ? null : MotorWindings.read(resistance);
+        PrintWriter out = spec.commandLine().getOut();
+        WindingInput windings;
         List<StepInput> steps = new ArrayList<>();
-        for (Path p : stepResponses) {
-            steps.add(MotorInputs.stepResponse(p, stepSupplyV, seriesOhm, null));
+        BackEmfResult emf;
+        if (rig != null) {
+            if (!json) {
+                SAFETY.forEach(out::println);
+                out.println();
+            }
+            MotorRigSequence.Measurements m = MotorRigSequence.run(rig, revolutions,
+                    json ? spec.commandLine().getErr() : out);
+            windings = m.windings();
+            steps.addAll(m.steps());
+            emf = m.backEmf();
+        } else {
+            windings = resistance == null ? null : MotorWindings.read(resistance);
+            for (Path p : stepResponses) {
+                steps.add(MotorInputs.stepResponse(p, stepSupplyV, seriesOhm, null));
+            }
+            emf = backEmf == null ? null : MotorInputs.backEmf(backEmf, revolutions, pulsesPerRev);
         }
-        BackEmfResult emf = backEmf == null ? null : MotorInputs.backEmf(backEmf, revolutions, pulsesPerRev);
         MotorCard card = MotorIdentifier.identify(new IdentifyRequest(windings, steps, emf, connection,
                 phaseCurrentA, supplyV, inertiaKgM2));
-        PrintWriter out = spec.commandLine().getOut();
         if (json) {
             out.println(MotorJson.write(card));
         } else {

@@ -32,12 +32,4 @@ class DriveLimitsTest {
         // P = I²R: 2 W in 2.0 ohm -> 1.000 A
         assertEquals(1.0, DriveLimits.currentForLossA(2.0, 2.0), 1e-12);
     }
-
-    @Test
-    void naturalFrequencyMatchesReferenceCheck() {
-        // REFERENCE-CHECKS item 11 (Acarnley, ch. 4; from memory there): Th = 0.4 N·m, J = 5.4e-6 kg·m², Nr = 50
-        // -> 306.294 Hz; Nr = 100 -> 433.165 Hz (rel 1e-4)
-        assertEquals(306.294, RotorNaturalFrequency.frequencyHz(50, 0.4, 5.4e-6), 306.294 * 1e-4);
-        assertEquals(433.165, RotorNaturalFrequency.frequencyHz(100, 0.4, 5.4e-6), 433.165 * 1e-4);
-    }
 }
