@@ -47,6 +47,7 @@ final class DemoCommand implements Callable<Integer> {
         List<Section> sections = List.of(
                 new LeadsDemo(),
                 new RigDemo(),
+                new MotorDemo(),
                 new ResonanceDemo(),
                 new QaDemo());
         int worst = ExitCode.OK;

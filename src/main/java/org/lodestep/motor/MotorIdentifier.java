@@ -258,7 +258,7 @@ public final class MotorIdentifier {
         Double fn = null;
         if (request.inertiaKgM2() != null) {
             if (teeth != null && torque != null) {
-                fn = org.lodestep.resonance.NaturalFrequency.naturalHz(torque, teeth, request.inertiaKgM2());
+                fn = NaturalFrequency.naturalHz(torque, teeth, request.inertiaKgM2());
             } else {
                 unknowns.add("natural frequency: needs the rotor teeth and Ke (back-EMF with revolutions)");
             }

@@ -37,6 +37,11 @@ public final class StepGeometry {
         return fullStepsPerRevolution(rotorTeeth) * microsteps;
     }
 
+    /** Electrical (phase-current) frequency in Hz at a full-step rate: four full steps per electrical cycle. */
+    public static double electricalHz(double rateFullStepsPerS) {
+        return rateFullStepsPerS / 4.0;
+    }
+
     /** Electrical cycles per mechanical revolution, not yet rounded: {@code cycles / revolutions}. */
     public static double cyclesPerRevolution(double electricalCycles, double revolutions) {
         if (!(revolutions > 0) || !Double.isFinite(revolutions)) {
@@ -45,7 +50,7 @@ public final class StepGeometry {
         return electricalCycles / revolutions;
     }
 
-    private static void requireTeeth(int rotorTeeth) {
+    static void requireTeeth(int rotorTeeth) {
         if (rotorTeeth < 1) {
             throw new IllegalArgumentException("rotor teeth must be at least 1, got " + rotorTeeth);
         }

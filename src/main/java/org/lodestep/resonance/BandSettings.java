@@ -18,7 +18,7 @@ package org.lodestep.resonance;
 public record BandSettings(double thresholdDb, double absoluteLevel, double hysteresisDb, double baselineHalfWidth,
                            double baselineQuantile, double mergeGap, int minPoints, double edgeDropDb) {
     public BandSettings {
-        NaturalFrequency.requirePositive(thresholdDb, "threshold over baseline", "dB");
+        Require.positive(thresholdDb, "threshold over baseline", "dB");
         if (!Double.isNaN(absoluteLevel) && !(absoluteLevel > 0 && Double.isFinite(absoluteLevel))) {
             throw new IllegalArgumentException("absolute level must be a positive RMS, got " + absoluteLevel);
         }
@@ -36,7 +36,7 @@ public record BandSettings(double thresholdDb, double absoluteLevel, double hyst
         if (!(mergeGap >= 0 && mergeGap <= 0.5)) {
             throw new IllegalArgumentException("merge gap must be 0 ... 0.5 (fraction of the rate), got " + mergeGap);
         }
-        NaturalFrequency.requirePositive(edgeDropDb, "band edge drop", "dB");
+        Require.positive(edgeDropDb, "band edge drop", "dB");
         if (minPoints < 1) {
             throw new IllegalArgumentException("a band needs at least 1 point, got " + minPoints);
         }

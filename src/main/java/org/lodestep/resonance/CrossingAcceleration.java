@@ -18,8 +18,8 @@ public final class CrossingAcceleration {
      * @return acceleration in full steps/s²
      */
     public static double minimumFullStepsPerS2(double spanFullStepsPerS, double oscillationHz, double periods) {
-        NaturalFrequency.requirePositive(oscillationHz, "oscillation frequency", "Hz");
-        NaturalFrequency.requirePositive(periods, "crossing periods", "");
+        Require.positive(oscillationHz, "oscillation frequency", "Hz");
+        Require.positive(periods, "crossing periods", "");
         if (!(spanFullStepsPerS >= 0)) {
             throw new IllegalArgumentException("rate span must be non-negative, got " + spanFullStepsPerS
                     + " full steps/s");

@@ -13,8 +13,8 @@ public final class DampedOscillation {
 
     /** Logarithmic decrement from two peaks {@code periods} apart. */
     public static double logDecrement(double firstPeak, double laterPeak, int periods) {
-        NaturalFrequency.requirePositive(firstPeak, "first peak", "");
-        NaturalFrequency.requirePositive(laterPeak, "later peak", "");
+        Require.positive(firstPeak, "first peak", "");
+        Require.positive(laterPeak, "later peak", "");
         if (periods < 1) {
             throw new IllegalArgumentException("periods must be at least 1, got " + periods);
         }

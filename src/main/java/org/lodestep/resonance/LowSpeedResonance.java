@@ -16,7 +16,7 @@ public final class LowSpeedResonance {
 
     /** The risky full-step rates f_n/k for k = 1 ... maxK, in full steps/s, highest first. */
     public static List<Double> riskyRatesFullStepsPerS(double naturalHz, int maxK) {
-        NaturalFrequency.requirePositive(naturalHz, "natural frequency", "Hz");
+        Require.positive(naturalHz, "natural frequency", "Hz");
         if (maxK < 1) {
             throw new IllegalArgumentException("subharmonic count must be at least 1, got " + maxK);
         }

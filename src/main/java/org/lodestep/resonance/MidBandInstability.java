@@ -14,8 +14,8 @@ public final class MidBandInstability {
 
     /** Full-step rate where the electrical angular frequency equals R/L, in full steps/s. */
     public static double centreFullStepsPerS(double phaseResistanceOhm, double phaseInductanceH) {
-        NaturalFrequency.requirePositive(phaseResistanceOhm, "phase resistance", "ohm");
-        NaturalFrequency.requirePositive(phaseInductanceH, "phase inductance", "H");
+        Require.positive(phaseResistanceOhm, "phase resistance", "ohm");
+        Require.positive(phaseInductanceH, "phase inductance", "H");
         double electricalHz = phaseResistanceOhm / phaseInductanceH / (2 * Math.PI);
         return 4 * electricalHz;
     }

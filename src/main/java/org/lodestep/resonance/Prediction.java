@@ -2,6 +2,8 @@ package org.lodestep.resonance;
 
 import java.util.List;
 
+import org.lodestep.motor.NaturalFrequency;
+
 /**
  * Natural frequency predicted from motor data, with the risky full-step rates, or the inertia inferred from a
  * measured natural frequency.
@@ -23,8 +25,8 @@ public record Prediction(double holdingTorqueNm, int rotorTeeth, double stiffnes
                          boolean inferred, List<RateUnits.Rate> riskyRates, double midBandCentreFullStepsPerS) {
     public Prediction {
         riskyRates = List.copyOf(riskyRates);
-        NaturalFrequency.requirePositive(naturalFrequencyHz, "natural frequency", "Hz");
-        NaturalFrequency.requirePositive(totalInertiaKgm2, "total inertia", "kg·m²");
+        Require.positive(naturalFrequencyHz, "natural frequency", "Hz");
+        Require.positive(totalInertiaKgm2, "total inertia", "kg·m²");
     }
 
     /**

@@ -1,5 +1,7 @@
 package org.lodestep.resonance;
 
+import org.lodestep.motor.StepGeometry;
+
 /**
  * The units a user programs: converts a full-step rate to step pulses/s at the microstep setting, rpm, and axis
  * speed in mm/s when the travel per revolution is known.
@@ -13,7 +15,7 @@ public record RateUnits(int microsteps, int rotorTeeth, double travelMmPerRev) {
         if (microsteps < 1) {
             throw new IllegalArgumentException("microsteps must be at least 1 pulse per full step, got " + microsteps);
         }
-        StepGeometry.requireTeeth(rotorTeeth);
+        StepGeometry.fullStepsPerRevolution(rotorTeeth); // rejects a tooth count below 1
         if (!Double.isNaN(travelMmPerRev) && !(travelMmPerRev > 0 && Double.isFinite(travelMmPerRev))) {
             throw new IllegalArgumentException("travel per revolution must be positive, got " + travelMmPerRev + " mm");
         }
@@ -25,7 +27,7 @@ public record RateUnits(int microsteps, int rotorTeeth, double travelMmPerRev) {
     }
 
     public int fullStepsPerRev() {
-        return StepGeometry.fullStepsPerRev(rotorTeeth);
+        return StepGeometry.fullStepsPerRevolution(rotorTeeth);
     }
 
     public double pulsesPerS(double rateFullStepsPerS) {

@@ -34,7 +34,7 @@ public final class Recommendations {
         if (!(margin >= 0 && margin <= 0.5)) {
             throw new IllegalArgumentException("margin must be 0 ... 0.5 (fraction of the rate), got " + margin);
         }
-        NaturalFrequency.requirePositive(crossingPeriods, "crossing periods", "");
+        Require.positive(crossingPeriods, "crossing periods", "");
         List<AvoidRange> ranges = new ArrayList<>();
         for (ResonanceBand b : bands) {
             double from = b.startFullStepsPerS() * (1 - margin);

@@ -17,7 +17,7 @@ public record ResonanceBand(double startFullStepsPerS, double endFullStepsPerS, 
                             double peakLevel, double peakLevelDb, double excessDb, double mechanicalFrequencyHz,
                             BandClass bandClass, int subharmonic) {
     public ResonanceBand {
-        NaturalFrequency.requirePositive(startFullStepsPerS, "band start", "full steps/s");
+        Require.positive(startFullStepsPerS, "band start", "full steps/s");
         if (!(endFullStepsPerS >= startFullStepsPerS)) {
             throw new IllegalArgumentException("band ends (" + endFullStepsPerS + " full steps/s) before it starts ("
                     + startFullStepsPerS + " full steps/s)");

@@ -16,7 +16,7 @@ package org.lodestep.resonance;
 public record ResponsePoint(double rateFullStepsPerS, double rms, double levelDb, double electricalAmplitude,
                             double order1Amplitude, double order2Amplitude, double order4Amplitude, int segments) {
     public ResponsePoint {
-        NaturalFrequency.requirePositive(rateFullStepsPerS, "rate", "full steps/s");
+        Require.positive(rateFullStepsPerS, "rate", "full steps/s");
         if (!(rms >= 0)) {
             throw new IllegalArgumentException("RMS must be non-negative, got " + rms);
         }

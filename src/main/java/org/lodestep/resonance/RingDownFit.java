@@ -36,7 +36,7 @@ public final class RingDownFit {
      *                                  growing), with a message saying what was found
      */
     public static RingDownResult fit(double[] x, double sampleRateHz, double startTimeS) {
-        NaturalFrequency.requirePositive(sampleRateHz, "sample rate", "Hz");
+        Require.positive(sampleRateHz, "sample rate", "Hz");
         int n = x.length;
         if (n < 16) {
             throw new IllegalArgumentException("a ring-down needs at least 16 samples, got " + n);

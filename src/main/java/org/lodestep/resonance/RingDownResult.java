@@ -21,8 +21,8 @@ public record RingDownResult(double naturalFrequencyHz, double dampedFrequencyHz
                              double rSquared, double rmsResidual, double startTimeS, double fittedDurationS,
                              double periodsFitted) {
     public RingDownResult {
-        NaturalFrequency.requirePositive(naturalFrequencyHz, "natural frequency", "Hz");
-        NaturalFrequency.requirePositive(dampedFrequencyHz, "damped frequency", "Hz");
+        Require.positive(naturalFrequencyHz, "natural frequency", "Hz");
+        Require.positive(dampedFrequencyHz, "damped frequency", "Hz");
         if (!(dampingRatio >= 0 && dampingRatio < 1)) {
             throw new IllegalArgumentException("damping ratio must be 0 ... 1, got " + dampingRatio);
         }

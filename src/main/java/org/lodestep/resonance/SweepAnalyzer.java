@@ -53,7 +53,7 @@ public final class SweepAnalyzer {
 
     /** An analyzer for a sweep whose rate followed a programmed law. */
     public static SweepAnalyzer programmed(SweepSettings settings, double sampleRateHz, SweepLaw law) {
-        NaturalFrequency.requirePositive(sampleRateHz, "sample rate", "Hz");
+        Require.positive(sampleRateHz, "sample rate", "Hz");
         return new SweepAnalyzer(settings, sampleRateHz, java.util.Objects.requireNonNull(law, "law"), 1);
     }
 
@@ -63,7 +63,7 @@ public final class SweepAnalyzer {
      * @param microsteps step pulses per full step at the driver
      */
     public static SweepAnalyzer fromPulses(SweepSettings settings, double sampleRateHz, int microsteps) {
-        NaturalFrequency.requirePositive(sampleRateHz, "sample rate", "Hz");
+        Require.positive(sampleRateHz, "sample rate", "Hz");
         if (microsteps < 1) {
             throw new IllegalArgumentException("microsteps must be at least 1 pulse per full step, got " + microsteps);
         }

@@ -25,10 +25,10 @@ public record SweepLaw(Shape shape, double startFullStepsPerS, double endFullSte
             throw new IllegalArgumentException("sweep shape is missing (linear or log)");
         }
         if (shape == Shape.LOG || startFullStepsPerS != 0) {
-            NaturalFrequency.requirePositive(startFullStepsPerS, "sweep start rate", "full steps/s");
+            Require.positive(startFullStepsPerS, "sweep start rate", "full steps/s");
         }
-        NaturalFrequency.requirePositive(endFullStepsPerS, "sweep end rate", "full steps/s");
-        NaturalFrequency.requirePositive(durationS, "sweep duration", "s");
+        Require.positive(endFullStepsPerS, "sweep end rate", "full steps/s");
+        Require.positive(durationS, "sweep duration", "s");
         if (startFullStepsPerS == endFullStepsPerS) {
             throw new IllegalArgumentException("sweep start and end rates are equal (" + startFullStepsPerS
                     + " full steps/s): that is a dwell, not a sweep");

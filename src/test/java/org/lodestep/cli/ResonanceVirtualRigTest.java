@@ -7,7 +7,7 @@ import static org.junit.jupiter.api.Assertions.assertTrue;
 import org.junit.jupiter.api.Test;
 import org.lodestep.capture.SampledSignal;
 import org.lodestep.resonance.BandSettings;
-import org.lodestep.resonance.NaturalFrequency;
+import org.lodestep.motor.NaturalFrequency;
 import org.lodestep.resonance.ResonanceBand;
 import org.lodestep.resonance.SweepAnalyzer;
 import org.lodestep.resonance.SweepLaw;

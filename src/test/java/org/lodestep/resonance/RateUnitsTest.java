@@ -1,5 +1,7 @@
 package org.lodestep.resonance;
 
+import org.lodestep.motor.StepGeometry;
+
 import static org.junit.jupiter.api.Assertions.assertEquals;
 import static org.junit.jupiter.api.Assertions.assertThrows;
 import static org.junit.jupiter.api.Assertions.assertTrue;

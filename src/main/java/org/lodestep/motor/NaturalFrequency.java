@@ -1,4 +1,4 @@
-package org.lodestep.resonance;
+package org.lodestep.motor;
 
 /**
  * Small-oscillation natural frequency of a hybrid stepper's rotor and load about a detent of the energised phases,
@@ -34,7 +34,7 @@ public final class NaturalFrequency {
         return stiffnessNmPerRad(holdingTorqueNm, rotorTeeth) / (w * w);
     }
 
-    static void requirePositive(double v, String what, String unit) {
+    private static void requirePositive(double v, String what, String unit) {
         if (!(v > 0) || !Double.isFinite(v)) {
             throw new IllegalArgumentException(what + " must be positive and finite, got " + v + " " + unit);
         }

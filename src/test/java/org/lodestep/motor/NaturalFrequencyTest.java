@@ -1,4 +1,4 @@
-package org.lodestep.resonance;
+package org.lodestep.motor;
 
 import static org.junit.jupiter.api.Assertions.assertEquals;
 import static org.junit.jupiter.api.Assertions.assertThrows;
