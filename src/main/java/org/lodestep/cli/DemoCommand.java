@@ -1,6 +1,7 @@
 package org.lodestep.cli;
 
 import java.io.PrintWriter;
+import java.nio.file.Files;
 import java.nio.file.Path;
 import java.util.List;
 import java.util.concurrent.Callable;
@@ -40,14 +41,47 @@ final class DemoCommand implements Callable<Integer> {
     public Integer call() throws Exception {
         PrintWriter out = spec.commandLine().getOut();
         PrintWriter err = spec.commandLine().getErr();
-        List<Section> sections = List.of();
+        Path captures = locate(this.captures);
+        Files.createDirectories(outDir);
+        out.println("Lodestep demo: sample captures from " + captures + ", outputs to " + outDir);
+        List<Section> sections = List.of(
+                new LeadsDemo(),
+                new RigDemo(),
+                new MotorDemo(),
+                new ResonanceDemo(),
+                new QaDemo());
         int worst = ExitCode.OK;
         for (Section s : sections) {
             out.println();
             out.println("=== " + s.title() + " ===");
             worst = Math.max(worst, s.run(captures, outDir, out, err));
         }
+        out.println();
+        out.println("Demo finished; its outputs are in " + outDir.toAbsolutePath().normalize());
         out.flush();
         return worst;
+    }
+
+    /**
+     * The sample-captures folder: as given when it exists, else beside the checkout the jar was built in
+     * ({@code target/lodestep.jar}), so the demo works from any working directory.
+     */
+    private static Path locate(Path given) {
+        if (Files.isDirectory(given) || given.isAbsolute()) {
+            if (!Files.isDirectory(given)) {
+                throw new UsageException(given + ": no such folder (give --captures DIR)");
+            }
+            return given;
+        }
+        try {
+            Path jar = Path.of(DemoCommand.class.getProtectionDomain().getCodeSource().getLocation().toURI());
+            Path checkout = jar.getParent() == null ? null : jar.getParent().getParent();
+            if (checkout != null && Files.isDirectory(checkout.resolve(given))) {
+                return checkout.resolve(given);
+            }
+        } catch (java.net.URISyntaxException | SecurityException | IllegalArgumentException e) {
+            // fall through to the message below
+        }
+        throw new UsageException(given + ": no such folder here or in the Lodestep checkout (give --captures DIR)");
     }
 }

@@ -7,6 +7,7 @@ import picocli.CommandLine.Command;
         mixinStandardHelpOptions = true,
         description = "Identify an unlabeled motor: inductance, phasing, polarity, step angle, constants, motor card.",
         subcommands = {
+            MotorIdentifyCommand.class
         })
 final class MotorCommand implements Runnable {
     @picocli.CommandLine.Spec

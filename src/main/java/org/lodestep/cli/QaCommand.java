@@ -7,6 +7,10 @@ import picocli.CommandLine.Command;
         mixinStandardHelpOptions = true,
         description = "Incoming inspection: check motors against part specs, keep traceable records, report lot statistics.",
         subcommands = {
+            QaCheckCommand.class,
+            QaReportCommand.class,
+            QaExportCommand.class,
+            QaCertificateCommand.class
         })
 final class QaCommand implements Runnable {
     @picocli.CommandLine.Spec

@@ -7,6 +7,9 @@ import picocli.CommandLine.Command;
         mixinStandardHelpOptions = true,
         description = "Find the step rates where a motor and its load resonate, and the rates to avoid.",
         subcommands = {
+            ResonanceSweepCommand.class,
+            ResonanceRingdownCommand.class,
+            ResonancePredictCommand.class
         })
 final class ResonanceCommand implements Runnable {
     @picocli.CommandLine.Spec

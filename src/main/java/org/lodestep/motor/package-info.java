@@ -1,5 +1,6 @@
 /**
- * Electrical and magnetic identification of a motor: inductance, back-EMF phasing, step angle and constants.
- * May use {@code signal} and {@code wiring}; never reads files or talks to a rig.
+ * Electrical, magnetic and mechanical constants of a motor: inductance, back-EMF phasing, step geometry, constants,
+ * the rotor's natural frequency and the motor card. May use {@code signal} and {@code wiring}; never reads files or
+ * talks to a rig.
  */
 package org.lodestep.motor;

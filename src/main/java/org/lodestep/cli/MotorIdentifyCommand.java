@@ -1,0 +1,179 @@
+package org.lodestep.cli;
+
+import java.io.PrintWriter;
+import java.nio.file.Path;
+import java.util.ArrayList;
+import java.util.List;
+import java.util.concurrent.Callable;
+
+import org.lodestep.motor.BackEmfResult;
+import org.lodestep.motor.Connection;
+import org.lodestep.motor.IdentifyRequest;
+import org.lodestep.motor.MotorCard;
+import org.lodestep.motor.MotorIdentifier;
+import org.lodestep.motor.StepInput;
+import org.lodestep.motor.WindingInput;
+import org.lodestep.report.MotorJson;
+import org.lodestep.report.MotorCardText;
+
+import picocli.CommandLine.Command;
+import picocli.CommandLine.Model.CommandSpec;
+import picocli.CommandLine.Option;
+import picocli.CommandLine.Spec;
+
+/** {@code lodestep motor identify}: combines resistances, step responses and back-EMF into a motor card. */
+@Command(name = "identify",
+        mixinStandardHelpOptions = true,
+        description = {
+            "Combine whatever is given (resistance matrix, current step responses, a hand-turned back-EMF capture) "
+                    + "into a motor card: topology and leads, complete A+/A-/B+/B- wiring for the chosen "
+                    + "connection, step angle, R, L, Ke, estimated torque, and what remains unknown.",
+            "Step-response files need '# leads=1,2' (and '# joined=2,5' when two coils were joined in series); "
+                    + "'# supply_v=' and '# series_ohm=' give the step voltage and the sense resistance. Back-EMF "
+                    + "columns are named after the lead pair, + on the first lead: emf_1_2_v."},
+        footerHeading = "%nExamples:%n",
+        footer = {
+            "  lodestep motor identify --resistance res.csv \\",
+            "      --step-response step-1-2.csv --step-response step-3-4.csv \\",
+            "      --back-emf emf.csv --revolutions 3",
+            "  lodestep motor identify --back-emf emf.csv --revolutions 2 \\",
+            "      --connection parallel --json",
+            "",
+            "Exit code 3 when an error-severity finding is present",
+            "(an open coil, phases that contradict the resistances)."
+        })
+final class MotorIdentifyCommand implements Callable<Integer> {
+
+    @Option(names = "--resistance", paramLabel = "FILE",
+            description = "Lead-pair resistances (CSV pair list or matrix, ohms), as for 'lodestep leads'.")
+    Path resistance;
+
+    @Option(names = "--step-response", paramLabel = "FILE", arity = "1..*",
+            description = "Current step response of a coil or of a whole phase in series (CSV: time_s, current_a); "
+                    + "repeatable.")
+    List<Path> stepResponses = new ArrayList<>();
+
+    @Option(names = "--back-emf", paramLabel = "FILE",
+            description = "Back-EMF capture taken while the shaft is turned by hand (CSV or WAV, channels emf_<lead>_"
+                    + "<lead>_v in volts; optional index or tach channel).")
+    Path backEmf;
+
+    @Option(names = "--revolutions", paramLabel = "N",
+            description = "Mechanical revolutions turned during the back-EMF capture (overrides '# revolutions=').")
+    Double revolutions;
+
+    @Option(names = "--pulses-per-rev", paramLabel = "N",
+            description = "Pulses per revolution of the index or tach channel (default 1, or '# pulses_per_rev=').")
+    Integer pulsesPerRev;
+
+    @Option(names = "--connection", paramLabel = "KIND",
+            description = "Connection to wire: series, parallel, half or unipolar (default: series; unipolar for "
+                    + "5-lead).")
+    Connection connection;
+
+    @Option(names = "--phase-current-a", paramLabel = "A",
+            description = "Phase current for the torque and step-rate figures, in amperes (default: middle of the "
+                    + "estimated rated range).")
+    Double phaseCurrentA;
+
+    @Option(names = "--supply-v", paramLabel = "V",
+            description = "Driver supply voltage for the step-rate figure, in volts (default: the rule-of-thumb "
+                    + "suggestion).")
+    Double supplyV;
+
+    @Option(names = "--step-supply-v", paramLabel = "V",
+            description = "Voltage of the step responses, in volts, for files without '# supply_v='.")
+    Double stepSupplyV;
+
+    @Option(names = "--series-ohm", paramLabel = "OHM",
+            description = "Resistance in series with the coil during the step responses (sense resistor, source), "
+                    + "in ohms, for files without '# series_ohm=' (default 0).")
+    Double seriesOhm;
+
+    @Option(names = "--inertia-kgm2", paramLabel = "KGM2",
+            description = "Rotor plus load inertia in kg·m² (1 g·cm² = 1e-7 kg·m²), for the natural-frequency "
+                    + "prediction.")
+    Double inertiaKgM2;
+
+    @Option(names = "--rig", paramLabel = "ADDR",
+            description = "Measure everything on a bench rig instead of reading files: every lead-pair resistance, "
+                    + "a 0.5 A current step on each coil, then a back-EMF capture while you turn the shaft by hand "
+                    + "(serial:DEVICE, tcp:HOST:PORT or sim:SCENARIO for the virtual rig). Give --revolutions.")
+    String rig;
+
+    @Option(names = "--json", description = "Write the motor card as JSON instead of text.")
+    boolean json;
+
+    @Spec
+    CommandSpec spec;
+
+    @Override
+    public Integer call() throws Exception {
+        boolean files = resistance != null || !stepResponses.isEmpty() || backEmf != null;
+        if (!files && rig == null) {
+            throw new UsageException("nothing to identify: give --resistance, --step-response and/or --back-emf, "
+                    + "or --rig");
+        }
+        if (files && rig != null) {
+            throw new UsageException("--rig measures everything itself; give either --rig or files, not both");
+        }
+        positive(revolutions, "--revolutions");
+        positive(phaseCurrentA, "--phase-current-a");
+        positive(supplyV, "--supply-v");
+        positive(stepSupplyV, "--step-supply-v");
+        positive(inertiaKgM2, "--inertia-kgm2");
+        if (seriesOhm != null && !(seriesOhm >= 0)) {
+            throw new UsageException("--series-ohm must be 0 or more, got " + seriesOhm);
+        }
+        if (pulsesPerRev != null && pulsesPerRev < 1) {
+            throw new UsageException("--pulses-per-rev must be at least 1, got " + pulsesPerRev);
+        }
+        PrintWriter out = spec.commandLine().getOut();
+        WindingInput windings;
+        List<StepInput> steps = new ArrayList<>();
+        BackEmfResult emf;
+        if (rig != null) {
+            if (!json) {
+                SAFETY.forEach(out::println);
+                out.println();
+            }
+            MotorRigSequence.Measurements m = MotorRigSequence.run(rig, revolutions,
+                    json ? spec.commandLine().getErr() : out);
+            windings = m.windings();
+            steps.addAll(m.steps());
+            emf = m.backEmf();
+        } else {
+            windings = resistance == null ? null : MotorWindings.read(resistance);
+            for (Path p : stepResponses) {
+                steps.add(MotorInputs.stepResponse(p, stepSupplyV, seriesOhm, null));
+            }
+            emf = backEmf == null ? null : MotorInputs.backEmf(backEmf, revolutions, pulsesPerRev);
+        }
+        MotorCard card = MotorIdentifier.identify(new IdentifyRequest(windings, steps, emf, connection,
+                phaseCurrentA, supplyV, inertiaKgM2));
+        if (json) {
+            out.println(MotorJson.write(card));
+        } else {
+            out.print(MotorCardText.render(card));
+            out.println();
+            SAFETY.forEach(out::println);
+        }
+        out.flush();
+        return card.hasError() ? ExitCode.FINDING : ExitCode.OK;
+    }
+
+    /** The cautions printed under every text card. */
+    static final List<String> SAFETY = List.of(
+            "Safety: a step-response test energises the coil; the current keeps flowing for a moment after the "
+                    + "supply is cut and an interrupted coil can kick back a high voltage: switch off before "
+                    + "touching leads. A shaft turned by hand generates voltage at the leads, more the faster it "
+                    + "turns, and a coil shorted by a low-resistance meter or a joint brakes the shaft. A motor run "
+                    + "near its rated current gets hot enough to burn (often 80 °C on the case). Follow your local "
+                    + "electrical codes and workshop practice.");
+
+    private static void positive(Double v, String option) {
+        if (v != null && !(v > 0 && Double.isFinite(v))) {
+            throw new UsageException(option + " must be a positive number, got " + v);
+        }
+    }
+}

@@ -1,0 +1,191 @@
+package org.lodestep.cli;
+
+import java.io.IOException;
+import java.nio.file.Path;
+import java.util.ArrayList;
+import java.util.List;
+import java.util.Locale;
+
+import org.lodestep.capture.Captures;
+import org.lodestep.capture.Channel;
+import org.lodestep.capture.InputFormatException;
+import org.lodestep.capture.SampledSignal;
+import org.lodestep.motor.BackEmfAnalyzer;
+import org.lodestep.motor.BackEmfResult;
+import org.lodestep.motor.EmfChannel;
+import org.lodestep.motor.LeadPair;
+import org.lodestep.motor.StepInput;
+import org.lodestep.motor.StepResponseFit;
+import org.lodestep.motor.StepResponseFitter;
+
+/** Turns step-response and back-EMF files into motor inputs: picks channels, reads metadata, runs the fits. */
+final class MotorInputs {
+    private MotorInputs() {
+    }
+
+    /**
+     * Reads and fits one step response. Metadata: {@code # leads=1,2} (required), {@code # joined=2,5},
+     * {@code # supply_v=}, {@code # series_ohm=}; the flags are used where the file has none, and a recorded
+     * {@code voltage_v} channel where neither gives the step voltage.
+     */
+    static StepInput stepResponse(Path file, Double supplyFlagV, Double seriesFlagOhm, Double knownWindingOhm)
+            throws IOException, InputFormatException {
+        return stepResponse(Captures.readAll(file), supplyFlagV, seriesFlagOhm, knownWindingOhm);
+    }
+
+    /** As {@link #stepResponse(Path, Double, Double, Double)}, for a signal already in memory (a rig capture). */
+    static StepInput stepResponse(SampledSignal s, Double supplyFlagV, Double seriesFlagOhm, Double knownWindingOhm)
+            throws InputFormatException {
+        String src = s.source();
+        int current = -1;
+        for (int c = 0; c < s.channels().size(); c++) {
+            Channel ch = s.channels().get(c);
+            if (ch.unit().equals("a") && (current < 0 || ch.name().startsWith("current"))) {
+                current = c;
+            }
+        }
+        if (current < 0) {
+            throw new InputFormatException(src, InputFormatException.NO_LINE, null, String.join(",",
+                    s.channelNames()), "has no current column: expected a column such as current_a (amperes)");
+        }
+        String leadsText = s.metadata().get("leads");
+        if (leadsText == null) {
+            throw new InputFormatException(src, InputFormatException.NO_LINE, null, null,
+                    "has no '# leads=' line: expected the two leads the step was applied across, e.g. '# leads=1,2'");
+        }
+        List<String> leads = labels(src, "leads", leadsText);
+        if (leads.size() != 2) {
+            throw new InputFormatException(src, InputFormatException.NO_LINE, "leads", leadsText,
+                    "expected two lead labels, e.g. '# leads=1,2'");
+        }
+        List<String> joined = List.of();
+        if (s.metadata().containsKey("joined")) {
+            joined = labels(src, "joined", s.metadata().get("joined"));
+            if (joined.size() != 2) {
+                throw new InputFormatException(src, InputFormatException.NO_LINE, "joined", s.metadata().get("joined"),
+                        "expected the two leads joined during the test, e.g. '# joined=2,5'");
+            }
+        }
+        Double supply = number(s, "supply_v", "volts");
+        if (supply == null) {
+            supply = supplyFlagV;
+        }
+        int voltage = s.indexOf("voltage");
+        if (supply == null && voltage >= 0 && s.channels().get(voltage).unit().equals("v")) {
+            // a recorded drive voltage: its level over the last half of the record is the step voltage
+            supply = settledLevel(s.channel(voltage));
+        }
+        Double series = number(s, "series_ohm", "ohms", true);
+        if (series == null) {
+            series = seriesFlagOhm == null ? 0.0 : seriesFlagOhm;
+        }
+        try {
+            return fit(s, current, new LeadPair(leads.get(0), leads.get(1)), joined, supply, series,
+                    joined.isEmpty() ? knownWindingOhm : null);
+        } catch (IllegalArgumentException e) {
+            throw new InputFormatException(src, InputFormatException.NO_LINE, null, null, e.getMessage());
+        }
+    }
+
+    /** Fits channel {@code current} of {@code s} as a step across {@code pair}. */
+    static StepInput fit(SampledSignal s, int current, LeadPair pair, List<String> joined, Double supplyV,
+                         double seriesOhm, Double knownWindingOhm) {
+        double[] i = s.channel(current);
+        double[] t = new double[i.length];
+        for (int k = 0; k < t.length; k++) {
+            t[k] = s.startTimeS() + k / s.sampleRateHz();
+        }
+        StepResponseFit fit = new StepResponseFitter(supplyV, seriesOhm, knownWindingOhm).fit(t, i);
+        return new StepInput(pair, joined, fit);
+    }
+
+    /** The level of a recorded drive voltage over the last half of the record, V; null when not positive. */
+    static Double settledLevel(double[] v) {
+        double sum = 0;
+        for (int k = v.length / 2; k < v.length; k++) {
+            sum += v[k];
+        }
+        double level = sum / (v.length - v.length / 2);
+        return level > 0 ? level : null;
+    }
+
+    /**
+     * Reads and analyses a back-EMF capture: channels {@code emf_<lead>_<lead>} in volts, optionally an index or
+     * tachometer channel ({@code index}, {@code tach}); {@code # revolutions=} and {@code # pulses_per_rev=}
+     * metadata, overridden by the flags.
+     */
+    static BackEmfResult backEmf(Path file, Double revolutionsFlag, Integer pulsesFlag)
+            throws IOException, InputFormatException {
+        return backEmf(Captures.readAll(file), revolutionsFlag, pulsesFlag);
+    }
+
+    /** As {@link #backEmf(Path, Double, Integer)}, for a signal already in memory (a rig capture). */
+    static BackEmfResult backEmf(SampledSignal s, Double revolutionsFlag, Integer pulsesFlag)
+            throws InputFormatException {
+        String src = s.source();
+        List<EmfChannel> channels = new ArrayList<>();
+        double[] index = null;
+        for (int c = 0; c < s.channels().size(); c++) {
+            Channel ch = s.channels().get(c);
+            LeadPair pair = LeadPair.fromChannelName(ch.name());
+            if (pair != null) {
+                if (!ch.unit().isEmpty() && !ch.unit().equals("v")) {
+                    throw new InputFormatException(src, InputFormatException.NO_LINE, ch.header(), ch.unit(),
+                            "is not a voltage: expected back-EMF columns in volts, e.g. emf_1_2_v");
+                }
+                channels.add(new EmfChannel(pair, s.channel(c)));
+            } else if (ch.name().equals("index") || ch.name().equals("tach")) {
+                index = s.channel(c);
+            }
+        }
+        if (channels.isEmpty()) {
+            throw new InputFormatException(src, InputFormatException.NO_LINE, null, String.join(",",
+                    s.channelNames()), "has no back-EMF column: expected columns named emf_<lead>_<lead>_v, "
+                    + "+ on the first lead, e.g. emf_1_2_v");
+        }
+        Double revs = revolutionsFlag != null ? revolutionsFlag : number(s, "revolutions", "revolutions");
+        Double pulses = pulsesFlag != null ? Double.valueOf(pulsesFlag) : number(s, "pulses_per_rev", "pulses");
+        try {
+            return new BackEmfAnalyzer(s.sampleRateHz()).analyze(channels, revs, index,
+                    pulses == null ? 1 : (int) Math.round(pulses));
+        } catch (IllegalArgumentException e) {
+            throw new InputFormatException(src, InputFormatException.NO_LINE, null, null, e.getMessage());
+        }
+    }
+
+    private static List<String> labels(String src, String key, String text) throws InputFormatException {
+        List<String> out = new ArrayList<>();
+        for (String part : text.split("[,;\\s]+")) {
+            if (!part.isBlank()) {
+                out.add(part.trim());
+            }
+        }
+        if (out.stream().distinct().count() != out.size()) {
+            throw new InputFormatException(src, InputFormatException.NO_LINE, key, text,
+                    "names the same lead twice: expected different lead labels");
+        }
+        return out;
+    }
+
+    private static Double number(SampledSignal s, String key, String unit) throws InputFormatException {
+        return number(s, key, unit, false);
+    }
+
+    private static Double number(SampledSignal s, String key, String unit, boolean zeroAllowed)
+            throws InputFormatException {
+        String text = s.metadata().get(key);
+        if (text == null) {
+            return null;
+        }
+        try {
+            double v = Double.parseDouble(text.trim());
+            if (!(v > 0 || zeroAllowed && v == 0) || !Double.isFinite(v)) {
+                throw new NumberFormatException();
+            }
+            return v;
+        } catch (NumberFormatException e) {
+            throw new InputFormatException(s.source(), InputFormatException.NO_LINE, key, text,
+                    "is not a " + (zeroAllowed ? "non-negative" : "positive") + " number (" + unit.toLowerCase(Locale.ROOT) + " expected)");
+        }
+    }
+}

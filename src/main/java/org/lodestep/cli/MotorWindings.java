@@ -1,0 +1,64 @@
+package org.lodestep.cli;
+
+import java.io.IOException;
+import java.nio.file.Path;
+import java.util.ArrayList;
+import java.util.List;
+
+import org.lodestep.capture.InputFormatException;
+import org.lodestep.capture.ResistanceCsvReader;
+import org.lodestep.capture.ResistanceReadings;
+import org.lodestep.motor.CoilResistance;
+import org.lodestep.motor.Finding;
+import org.lodestep.motor.LeadPair;
+import org.lodestep.motor.Severity;
+import org.lodestep.motor.Topology;
+import org.lodestep.motor.WindingInput;
+import org.lodestep.wiring.Identification;
+import org.lodestep.wiring.IdentifySettings;
+import org.lodestep.wiring.LeadIdentifier;
+import org.lodestep.wiring.Winding;
+
+/**
+ * Reads a resistance file and hands the lead identification to the motor package as coils: a tapped winding becomes
+ * its two end-to-tap halves, any other winding (or 8-lead half-winding) one coil.
+ */
+final class MotorWindings {
+    private MotorWindings() {
+    }
+
+    static WindingInput read(Path file) throws IOException, InputFormatException {
+        ResistanceReadings r = ResistanceCsvReader.read(file);
+        Identification id = LeadIdentifier.identify(LeadsIdentifyCommand.matrix(r, List.of()),
+                IdentifySettings.DEFAULT);
+        return of(id);
+    }
+
+    /** The coils, topology and findings of one identification. */
+    static WindingInput of(Identification id) {
+        List<CoilResistance> coils = new ArrayList<>();
+        List<Finding> findings = new ArrayList<>();
+        for (org.lodestep.wiring.Finding f : id.findings()) {
+            findings.add(new Finding(Severity.valueOf(f.severity().name()), f.code().code(), "resistance: "
+                    + f.message()));
+        }
+        for (Winding w : id.windings()) {
+            if (w.tap() != null) {
+                add(coils, findings, w.ends().get(0), w.tap(), w.halfResistancesOhm().get(0));
+                add(coils, findings, w.tap(), w.ends().get(1), w.halfResistancesOhm().get(1));
+            } else {
+                add(coils, findings, w.ends().get(0), w.ends().get(1), w.resistanceOhm());
+            }
+        }
+        return new WindingInput(Topology.valueOf(id.topology().name()), id.leads(), coils, findings);
+    }
+
+    private static void add(List<CoilResistance> coils, List<Finding> findings, String a, String b, double ohm) {
+        if (ohm > 0 && Double.isFinite(ohm)) {
+            coils.add(new CoilResistance(new LeadPair(a, b), ohm));
+        } else {
+            findings.add(new Finding(Severity.WARNING, "coil_resistance", "resistance: coil " + a + "-" + b
+                    + " reads " + ohm + " ohm; it is left out of the electrical figures"));
+        }
+    }
+}

@@ -1,0 +1,90 @@
+package org.lodestep.cli;
+
+import java.io.PrintWriter;
+import java.util.LinkedHashMap;
+import java.util.List;
+import java.util.Map;
+import java.util.concurrent.Callable;
+
+import org.lodestep.qa.RecordQuery;
+import org.lodestep.qa.RecordStore;
+import org.lodestep.qa.StoredRecord;
+import org.lodestep.qa.Verdict;
+import org.lodestep.report.Json;
+import org.lodestep.report.QaText;
+
+import picocli.CommandLine.Command;
+import picocli.CommandLine.Mixin;
+import picocli.CommandLine.Option;
+
+/** {@code lodestep qa certificate}: the test certificate of one motor from its records. */
+@Command(name = "certificate",
+        mixinStandardHelpOptions = true,
+        description = {"Print the test certificate of one motor: its latest record in full (spec version and hash, "
+                + "values, limits, verdicts, operator, station, times, capture hashes, record hash verified) and its "
+                + "earlier records.",
+                "Exit code 0 when the latest record passed and is intact, 3 otherwise."},
+        footerHeading = "%nExample:%n",
+        footer = {"  lodestep qa certificate --serial KV24-00117",
+                "  lodestep qa certificate --serial KV24-00117 --out certificates/KV24-00117.txt"})
+final class QaCertificateCommand implements Callable<Integer> {
+
+    @Option(names = "--serial", required = true, paramLabel = "SN", description = "Serial number of the motor.")
+    String serial;
+
+    @Option(names = "--part", paramLabel = "PART",
+            description = "Part number, when the same serial number exists for several parts.")
+    String part;
+
+    @Option(names = "--out", paramLabel = "FILE",
+            description = "Write the certificate to this file (whole or not at all) instead of printing it.")
+    java.nio.file.Path outFile;
+
+    @Mixin
+    QaStoreOption store = new QaStoreOption();
+
+    @Option(names = "--json", description = "Print the latest record and the history as JSON.")
+    boolean json;
+
+    @picocli.CommandLine.Spec
+    picocli.CommandLine.Model.CommandSpec spec;
+
+    @Override
+    public Integer call() throws Exception {
+        List<StoredRecord> history;
+        String where;
+        try (RecordStore rs = store.openExisting()) {
+            history = rs.find(new RecordQuery(serial, null, part, null, null));
+            where = rs.location();
+        }
+        if (history.isEmpty()) {
+            throw new UsageException("no record of serial '" + serial.replaceAll("\\p{Cntrl}", "?") + "'"
+                    + (part == null ? "" : " for part " + part) + " in " + where);
+        }
+        List<String> parts = history.stream().map(r -> r.submission().partNumber()).distinct().toList();
+        if (parts.size() > 1) {
+            throw new UsageException("serial '" + serial + "' was tested as several parts " + parts + ": add --part");
+        }
+        StoredRecord latest = history.get(history.size() - 1);
+        PrintWriter out = spec.commandLine().getOut();
+        String text;
+        if (json) {
+            Map<String, Object> doc = new LinkedHashMap<>();
+            doc.put("serial", serial);
+            doc.put("latest", latest);
+            doc.put("history", history.subList(0, history.size() - 1));
+            text = Json.write(doc) + System.lineSeparator();
+        } else {
+            text = QaText.certificate(history);
+        }
+        if (outFile != null) {
+            QaExportCommand.writeAtomically(outFile, text);
+            out.println("wrote the certificate of " + serial.replaceAll("\\p{Cntrl}", "?") + " (record #" + latest.id()
+                    + ", " + latest.submission().verdict() + ") to " + outFile);
+        } else {
+            out.print(text);
+        }
+        out.flush();
+        return latest.submission().verdict() == Verdict.PASS && latest.intact() ? ExitCode.OK : ExitCode.FINDING;
+    }
+}

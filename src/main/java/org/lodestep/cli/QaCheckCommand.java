@@ -1,0 +1,233 @@
+package org.lodestep.cli;
+
+import java.io.BufferedReader;
+import java.io.IOException;
+import java.io.InputStreamReader;
+import java.io.PrintWriter;
+import java.net.InetAddress;
+import java.nio.charset.StandardCharsets;
+import java.nio.file.Files;
+import java.nio.file.Path;
+import java.util.ArrayList;
+import java.util.LinkedHashMap;
+import java.util.List;
+import java.util.Map;
+import java.util.concurrent.Callable;
+
+import org.lodestep.capture.InputFormatException;
+import org.lodestep.qa.Inspection;
+import org.lodestep.qa.Measurements;
+import org.lodestep.qa.Parameters;
+import org.lodestep.qa.PartSpec;
+import org.lodestep.qa.PartSpecReader;
+import org.lodestep.qa.RecordStore;
+import org.lodestep.qa.StoreException;
+import org.lodestep.qa.Submission;
+import org.lodestep.qa.Timestamps;
+import org.lodestep.qa.Verdict;
+import org.lodestep.report.Json;
+import org.lodestep.report.QaText;
+
+import picocli.CommandLine.Command;
+import picocli.CommandLine.Mixin;
+import picocli.CommandLine.Option;
+
+/** {@code lodestep qa check}: judge one motor, or a lot of motors scanned one by one, and record each verdict. */
+@Command(name = "check",
+        mixinStandardHelpOptions = true,
+        description = {"Judge a motor against its part spec, print the verdict and record it (append-only).",
+                "With --lot and no --serial, reads serial numbers one per line from stdin (a barcode scanner types "
+                        + "them) until end of input, with a running tally.",
+                "Exit code 0 only when every motor passed every check; 3 when any check failed or could not be judged."},
+        footerHeading = "%nExamples:%n",
+        footer = {"  lodestep qa check --spec kv4218.toml --serial KV24-00117 \\",
+                "      --phase-ohm 2.03,2.05 --ambient-c 22 --insulation a-frame=850 \\",
+                "      --insulation b-frame=910 --operator 'M. Ortiz'",
+                "  lodestep qa check --spec kv4218.toml --lot L-2607 \\",
+                "      --resistance-pattern 'caps/{serial}.csv' < serials.txt",
+                "",
+                "Safety: insulation testers apply hundreds of volts DC. Disconnect the motor from any driver, test on a "
+                        + "non-conductive surface, keep hands off the leads while the tester runs, and discharge the "
+                        + "windings afterwards. Local electrical-safety rules and your site's procedures take precedence."})
+final class QaCheckCommand implements Callable<Integer> {
+
+    @Option(names = "--spec", required = true, paramLabel = "FILE", description = "Part spec (TOML).")
+    Path specFile;
+
+    @Option(names = "--serial", paramLabel = "SN", description = "Serial number of the motor (exactly as labelled).")
+    String serial;
+
+    @Option(names = "--lot", paramLabel = "LOT",
+            description = "Delivery lot. Without --serial: lot mode, serial numbers from stdin (or --serials).")
+    String lot;
+
+    @Option(names = "--serials", paramLabel = "FILE",
+            description = "Lot mode: read serial numbers from this file instead of stdin ('-' for stdin).")
+    String serialsFile;
+
+    @Mixin
+    QaReadings readings = new QaReadings();
+
+    @Option(names = "--ambient-c", paramLabel = "CELSIUS", description = "Ambient temperature at the bench, °C.")
+    Double ambientC;
+
+    @Option(names = "--operator", paramLabel = "NAME", description = "Who tests (default: the login name).")
+    String operator;
+
+    @Option(names = "--station", paramLabel = "NAME",
+            description = "Test station (default: $LODESTEP_STATION, else the host name).")
+    String station;
+
+    @Mixin
+    QaStoreOption store = new QaStoreOption();
+
+    @Option(names = "--json", description = "Print the recorded result(s) as JSON instead of text.")
+    boolean json;
+
+    @picocli.CommandLine.Spec
+    picocli.CommandLine.Model.CommandSpec spec;
+
+    private PartSpec partSpec;
+
+    @Override
+    public Integer call() throws Exception {
+        PrintWriter out = spec.commandLine().getOut();
+        if (serial == null && lot == null) {
+            throw new UsageException("give --serial SN for one motor, or --lot LOT to read serial numbers from stdin");
+        }
+        if (serial != null && serial.isEmpty()) {
+            throw new UsageException("--serial is empty");
+        }
+        if (serial != null && (serialsFile != null || readings.resistancePattern != null)) {
+            throw new UsageException("--serials and --resistance-pattern are for lot mode (--lot without --serial)");
+        }
+        if (serial == null && readings.resistanceFile != null) {
+            throw new UsageException("lot mode takes --resistance-pattern, not one --resistance file for every motor");
+        }
+        partSpec = PartSpecReader.read(specFile);
+        if (!json && partSpec.limit(Parameters.INSULATION_RESISTANCE).isPresent()) {
+            out.println(caution(partSpec.insulationTestVoltageV()));
+        }
+        try (RecordStore records = store.open()) {
+            if (serial != null) {
+                RecordStore.Appended a = checkOne(records, serial);
+                if (json) {
+                    out.println(Json.write(a));
+                } else {
+                    out.print(QaText.check(a.record(), a.created(), records.location()));
+                }
+                out.flush();
+                return a.record().submission().verdict() == Verdict.PASS ? ExitCode.OK : ExitCode.FINDING;
+            }
+            return lot(records, out);
+        }
+    }
+
+    private int lot(RecordStore records, PrintWriter out)
+            throws IOException, StoreException {
+        PrintWriter err = spec.commandLine().getErr();
+        int passed = 0;
+        int failed = 0;
+        int incomplete = 0;
+        List<RecordStore.Appended> results = new ArrayList<>();
+        List<Map<String, String>> errors = new ArrayList<>();
+        try (BufferedReader in = serialsFile == null || serialsFile.equals("-")
+                ? new BufferedReader(new InputStreamReader(System.in, StandardCharsets.UTF_8))
+                : Files.newBufferedReader(Path.of(serialsFile), StandardCharsets.UTF_8)) {
+            if (!json) {
+                out.println("lot " + lot + ": scan or type serial numbers, one per line; end of input (Ctrl-D) ends the lot");
+                out.flush();
+            }
+            String line;
+            while ((line = in.readLine()) != null) {
+                String sn = line.strip();
+                if (sn.isEmpty() || sn.startsWith("#")) {
+                    continue;
+                }
+                RecordStore.Appended a;
+                try {
+                    a = checkOne(records, sn);
+                } catch (InputFormatException | UsageException | IOException | org.lodestep.rig.RigException e) {
+                    // One unreadable capture must not stop the lot: say so, record nothing for it, go on.
+                    String msg = e instanceof java.nio.file.NoSuchFileException ? e.getMessage() + ": no such file"
+                            : e.getMessage();
+                    err.println("lodestep qa check: serial " + sn.replaceAll("\\p{Cntrl}", "?") + " not recorded: " + msg);
+                    err.flush();
+                    errors.add(Map.of("serial", sn, "message", msg));
+                    incomplete++;
+                    continue;
+                }
+                results.add(a);
+                switch (a.record().submission().verdict()) {
+                    case PASS -> passed++;
+                    case FAIL -> failed++;
+                    default -> incomplete++;
+                }
+                if (!json) {
+                    out.print(QaText.check(a.record(), a.created(), records.location()));
+                    out.println(QaText.tally(passed + failed + incomplete, passed, failed, incomplete));
+                    out.println();
+                    out.flush();
+                }
+            }
+        }
+        if (json) {
+            Map<String, Object> doc = new LinkedHashMap<>();
+            doc.put("lot", lot);
+            doc.put("tested", passed + failed + incomplete);
+            doc.put("passed", passed);
+            doc.put("failed", failed);
+            doc.put("incomplete", incomplete);
+            doc.put("results", results);
+            doc.put("errors", errors);
+            out.println(Json.write(doc));
+        } else {
+            out.println("lot " + lot + " done: " + QaText.tally(passed + failed + incomplete, passed, failed, incomplete));
+        }
+        out.flush();
+        return failed + incomplete == 0 ? ExitCode.OK : ExitCode.FINDING;
+    }
+
+    private RecordStore.Appended checkOne(RecordStore records, String sn)
+            throws IOException, InputFormatException, StoreException, org.lodestep.rig.RigException {
+        String started = Timestamps.now();
+        double ambient = ambientC == null ? Double.NaN : ambientC;
+        Measurements m = readings.measure(sn, ambient, partSpec.insulationTestVoltageV(),
+                json ? spec.commandLine().getErr() : spec.commandLine().getOut());
+        Inspection.Judgement j = Inspection.judge(partSpec, m);
+        Submission s;
+        try {
+            s = Submission.of(sn, lot == null ? "" : lot, partSpec, j, m, ambient, operator(), station(), started,
+                    Timestamps.now(), VersionProvider.version());
+        } catch (IllegalArgumentException e) {
+            throw new UsageException(e.getMessage());
+        }
+        return records.append(s);
+    }
+
+    /** The one-line caution printed before checks that include an insulation test. */
+    static String caution(double testVoltageV) {
+        return "Caution: the insulation test applies " + Math.round(testVoltageV) + " V DC. Motor disconnected from any"
+                + " driver, hands off leads and frame while the tester runs, windings discharged afterwards; local"
+                + " electrical-safety rules take precedence.";
+    }
+
+    private String operator() {
+        return operator != null ? operator : System.getProperty("user.name", "");
+    }
+
+    private String station() {
+        if (station != null) {
+            return station;
+        }
+        String env = System.getenv("LODESTEP_STATION");
+        if (env != null && !env.isBlank()) {
+            return env;
+        }
+        try {
+            return InetAddress.getLocalHost().getHostName();
+        } catch (IOException e) {
+            return "";
+        }
+    }
+}

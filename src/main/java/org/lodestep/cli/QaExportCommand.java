@@ -1,0 +1,86 @@
+package org.lodestep.cli;
+
+import java.io.IOException;
+import java.io.PrintWriter;
+import java.io.Writer;
+import java.nio.charset.StandardCharsets;
+import java.nio.file.Files;
+import java.nio.file.Path;
+import java.nio.file.StandardCopyOption;
+import java.util.LinkedHashMap;
+import java.util.List;
+import java.util.Map;
+import java.util.concurrent.Callable;
+
+import org.lodestep.qa.RecordStore;
+import org.lodestep.qa.StoredRecord;
+import org.lodestep.report.Json;
+import org.lodestep.report.QaCsv;
+
+import picocli.CommandLine.Command;
+import picocli.CommandLine.Mixin;
+import picocli.CommandLine.Option;
+
+/** {@code lodestep qa export}: recorded checks as CSV, one row per check result. */
+@Command(name = "export",
+        mixinStandardHelpOptions = true,
+        description = {"Write recorded checks as CSV (one row per check result, SI units, every record's SHA-256).",
+                "The file is written whole or not at all."},
+        footerHeading = "%nExample:%n",
+        footer = "  lodestep qa export --lot L-2607 --out L-2607.csv")
+final class QaExportCommand implements Callable<Integer> {
+
+    @Option(names = "--out", required = true, paramLabel = "FILE.csv", description = "CSV file to write.")
+    Path outFile;
+
+    @Mixin
+    QaFilterOptions filter = new QaFilterOptions();
+
+    @Mixin
+    QaStoreOption store = new QaStoreOption();
+
+    @Option(names = "--json", description = "Print what was written as JSON.")
+    boolean json;
+
+    @picocli.CommandLine.Spec
+    picocli.CommandLine.Model.CommandSpec spec;
+
+    @Override
+    public Integer call() throws Exception {
+        List<StoredRecord> records;
+        try (RecordStore rs = store.openExisting()) {
+            records = rs.find(filter.query());
+        }
+        java.io.StringWriter csv = new java.io.StringWriter();
+        QaCsv.write(records, csv);
+        writeAtomically(outFile, csv.toString());
+        int rows = records.stream().mapToInt(r -> r.submission().checks().size()).sum();
+        PrintWriter out = spec.commandLine().getOut();
+        if (json) {
+            Map<String, Object> doc = new LinkedHashMap<>();
+            doc.put("out", outFile.toString());
+            doc.put("records", records.size());
+            doc.put("rows", rows);
+            out.println(Json.write(doc));
+        } else {
+            out.println("wrote " + rows + " rows from " + records.size() + " records to " + outFile);
+        }
+        out.flush();
+        return ExitCode.OK;
+    }
+
+    /** Temporary file in the same folder, then an atomic move: a reader never sees half a file. */
+    static void writeAtomically(Path target, String text) throws IOException {
+        Path dir = target.toAbsolutePath().getParent();
+        Files.createDirectories(dir);
+        Path tmp = Files.createTempFile(dir, "." + target.getFileName() + ".", ".tmp");
+        try {
+            try (Writer w = Files.newBufferedWriter(tmp, StandardCharsets.UTF_8)) {
+                w.write(text);
+            }
+            Files.move(tmp, target, StandardCopyOption.ATOMIC_MOVE, StandardCopyOption.REPLACE_EXISTING);
+        } finally {
+            Files.deleteIfExists(tmp);
+        }
+    }
+}

@@ -1,0 +1,100 @@
+package org.lodestep.cli;
+
+import java.io.PrintWriter;
+import java.util.concurrent.Callable;
+
+import org.lodestep.report.ResonanceJson;
+import org.lodestep.report.ResonanceText;
+import org.lodestep.resonance.Prediction;
+import org.lodestep.resonance.RateUnits;
+
+import picocli.CommandLine.Command;
+import picocli.CommandLine.Option;
+
+/** {@code lodestep resonance predict}: natural frequency from motor data, or the load inertia from a measured one. */
+@Command(name = "predict",
+        mixinStandardHelpOptions = true,
+        description = {
+            "Predict the natural frequency f_n = (1/2π)·√(N_r·T_h/J) of rotor plus load and the risky full-step"
+                + " rates f_n/k; or, with --measured-natural-hz, infer the inertia (and the load inertia) from a"
+                + " measured f_n.",
+            "Inertia in kg·m² (1 g·cm² = 1e-7 kg·m²); torque in N·m (1 N·cm = 0.01 N·m)."},
+        footerHeading = "%nExamples:%n",
+        footer = {
+            "  lodestep resonance predict --holding-torque-nm 0.45 --inertia-kgm2 5.4e-6 --load-inertia-kgm2 3e-5",
+            "  lodestep resonance predict --holding-torque-nm 0.45 --inertia-kgm2 5.4e-6 --measured-natural-hz 118"})
+final class ResonancePredictCommand implements Callable<Integer> {
+
+    @Option(names = "--holding-torque-nm", paramLabel = "NM", required = true,
+            description = "Holding torque at the running current, N·m.")
+    double holdingTorqueNm;
+
+    @Option(names = "--inertia-kgm2", paramLabel = "KGM2",
+            description = "Rotor inertia, kg·m² (required for a prediction; for the inverse it gives the load"
+                    + " inertia).")
+    Double rotorInertiaKgm2;
+
+    @Option(names = "--load-inertia-kgm2", paramLabel = "KGM2", defaultValue = "0",
+            description = "Load inertia reflected to the motor shaft, kg·m² (default: ${DEFAULT-VALUE}).")
+    double loadInertiaKgm2;
+
+    @Option(names = "--rotor-teeth", paramLabel = "N", defaultValue = "50",
+            description = "Rotor teeth N_r (default: ${DEFAULT-VALUE}, a 1.8° motor).")
+    int rotorTeeth;
+
+    @Option(names = "--measured-natural-hz", paramLabel = "HZ",
+            description = "Measured f_n (from a ring-down or a sweep): infer the inertia instead.")
+    Double measuredNaturalHz;
+
+    @Option(names = "--microsteps", paramLabel = "N", defaultValue = "1",
+            description = "Step pulses per full step, for the pulses/s figures (default: ${DEFAULT-VALUE}).")
+    int microsteps;
+
+    @Option(names = "--travel-mm-per-rev", paramLabel = "MM", description = "Axis travel per revolution, mm.")
+    Double travelMmPerRev;
+
+    @Option(names = "--phase-resistance-ohm", paramLabel = "OHM",
+            description = "Phase resistance, ohm; with --phase-inductance-h gives the mid-band instability centre.")
+    Double phaseResistanceOhm;
+
+    @Option(names = "--phase-inductance-h", paramLabel = "H", description = "Phase inductance, H.")
+    Double phaseInductanceH;
+
+    @Option(names = "--json", description = "Print JSON instead of text.")
+    boolean json;
+
+    @picocli.CommandLine.Spec
+    picocli.CommandLine.Model.CommandSpec spec;
+
+    @Override
+    public Integer call() {
+        PrintWriter out = spec.commandLine().getOut();
+        if ((phaseResistanceOhm == null) != (phaseInductanceH == null)) {
+            throw new UsageException("--phase-resistance-ohm and --phase-inductance-h go together");
+        }
+        double r = phaseResistanceOhm == null ? Double.NaN : phaseResistanceOhm;
+        double l = phaseInductanceH == null ? Double.NaN : phaseInductanceH;
+        RateUnits units = ResonanceSweepCommand.usage(() -> new RateUnits(microsteps, rotorTeeth,
+                travelMmPerRev == null ? Double.NaN : travelMmPerRev));
+        Prediction p;
+        if (measuredNaturalHz != null) {
+            double rotor = rotorInertiaKgm2 == null ? Double.NaN : rotorInertiaKgm2;
+            p = ResonanceSweepCommand.usage(() -> Prediction.inverse(measuredNaturalHz, holdingTorqueNm, rotorTeeth,
+                    rotor, units, r, l));
+        } else {
+            if (rotorInertiaKgm2 == null) {
+                throw new UsageException("a prediction needs --inertia-kgm2 (rotor inertia, kg·m²); or give"
+                        + " --measured-natural-hz to infer the inertia");
+            }
+            p = ResonanceSweepCommand.usage(() -> Prediction.forward(holdingTorqueNm, rotorTeeth, rotorInertiaKgm2,
+                    loadInertiaKgm2, units, r, l));
+        }
+        if (json) {
+            out.println(ResonanceJson.prediction(p));
+        } else {
+            ResonanceText.prediction(out, p, units);
+        }
+        out.flush();
+        return ExitCode.OK;
+    }
+}

@@ -1,0 +1,410 @@
+package org.lodestep.motor;
+
+import java.util.ArrayList;
+import java.util.Arrays;
+import java.util.List;
+
+/**
+ * Phases the coils of a motor from a multi-channel back-EMF capture taken while the shaft is turned by hand, tracks
+ * the electrical frequency through the varying speed, and counts rotor teeth.
+ *
+ * <p>Model (Acarnley, <i>Stepping Motors</i>, 4th ed., hybrid-motor chapters; REFERENCE-CHECKS item 14, from memory
+ * there): {@code eA = -Ke·omega·sin(Nr·theta)}, {@code eB = Ke·omega·cos(Nr·theta)}. Coils of one phase are in phase
+ * or in antiphase; the two phases are 90° apart and which one leads depends on the direction turned. Method:
+ * <ol>
+ *   <li>the analytic signal of each channel ({@link AnalyticSignal}) gives an amplitude and phase that follow the
+ *       speed; the normalised correlation of two channels is the cosine of their phase difference and does not depend
+ *       on the direction, so it groups channels into phases and gives each coil's polarity;</li>
+ *   <li>phase B is oriented to lag phase A while the shaft turned the way it turned most of the time, so a driver whose
+ *       B current lags its A current turns the shaft that same way;</li>
+ *   <li>with both phases present the electrical angle is {@code atan2(eA, -eB)}, defined at any speed, so cycles are
+ *       counted through slow parts and direction changes; with one phase the analytic phase is used;</li>
+ *   <li>Ke (peak volts per electrical rad/s) is the least-squares slope through the origin of each channel's
+ *       envelope against the electrical angular speed, block by block (20 ms blocks).</li>
+ * </ol>
+ */
+public final class BackEmfAnalyzer {
+    /** A channel with less than this fraction of the strongest channel's RMS is taken as dead. */
+    static final double DEAD_FRACTION = 0.05;
+    /** Upper bound of the amplitude, as a fraction of the high (95th percentile) one, below which the shaft is
+     *  treated as not turning. */
+    static final double MOVING_FRACTION = 0.10;
+    /** Length of the blocks for frequency and Ke, s. */
+    static final double BLOCK_S = 0.020;
+
+    private final double sampleRateHz;
+
+    /** @param sampleRateHz sample rate of every channel, Hz */
+    public BackEmfAnalyzer(double sampleRateHz) {
+        Checks.positive(sampleRateHz, "sample rate", "Hz");
+        this.sampleRateHz = sampleRateHz;
+    }
+
+    /**
+     * Analyses one capture.
+     *
+     * @param channels            back-EMF channels of equal length; at least one
+     * @param revolutions         mechanical revolutions turned during the capture, or null
+     * @param indexChannel        samples of an index or tachometer channel of the same length, or null
+     * @param pulsesPerRevolution pulses of that channel per revolution (1 for an index mark)
+     */
+    public BackEmfResult analyze(List<EmfChannel> channels, Double revolutions, double[] indexChannel,
+                                 int pulsesPerRevolution) {
+        if (channels.isEmpty()) {
+            throw new IllegalArgumentException("no back-EMF channels (expected columns named emf_<lead>_<lead>_v)");
+        }
+        int n = channels.get(0).length();
+        for (EmfChannel c : channels) {
+            if (c.length() != n) {
+                throw new IllegalArgumentException("channel " + c.pair() + " has " + c.length() + " samples, expected "
+                        + n);
+            }
+        }
+        if (n < 256) {
+            throw new IllegalArgumentException("a back-EMF capture needs at least 256 samples, got " + n);
+        }
+        Checks.positiveOrNull(revolutions, "revolutions", "rev");
+        if (indexChannel != null && indexChannel.length != n) {
+            throw new IllegalArgumentException("index channel has " + indexChannel.length + " samples, expected " + n);
+        }
+        if (pulsesPerRevolution < 1) {
+            throw new IllegalArgumentException("pulses per revolution must be at least 1, got " + pulsesPerRevolution);
+        }
+        List<Finding> findings = new ArrayList<>();
+
+        // Mean removed: a DC offset of the recorder would bias the correlations.
+        double[][] x = new double[channels.size()][];
+        double[] rms = new double[channels.size()];
+        double maxRms = 0;
+        for (int k = 0; k < channels.size(); k++) {
+            x[k] = channels.get(k).voltageV();
+            double mean = Arrays.stream(x[k]).average().orElse(0);
+            double ss = 0;
+            for (int i = 0; i < n; i++) {
+                x[k][i] -= mean;
+                ss += x[k][i] * x[k][i];
+            }
+            rms[k] = Math.sqrt(ss / n);
+            maxRms = Math.max(maxRms, rms[k]);
+        }
+        if (!(maxRms > 0)) {
+            throw new IllegalArgumentException("every back-EMF channel is flat: was the shaft turned?");
+        }
+        List<Integer> live = new ArrayList<>();
+        for (int k = 0; k < channels.size(); k++) {
+            if (rms[k] < DEAD_FRACTION * maxRms) {
+                findings.add(Finding.error("no_emf", String.format("channel %s shows no back-EMF (%.3g V RMS against "
+                        + "%.3g V on the strongest): an open coil, a broken lead, or two leads that are not one coil",
+                        channels.get(k).pair(), rms[k], maxRms)));
+            } else {
+                live.add(k);
+            }
+        }
+        int m = live.size();
+        double[][][] z = new double[m][][];
+        for (int j = 0; j < m; j++) {
+            z[j] = AnalyticSignal.of(x[live.get(j)]);
+        }
+        int margin = Math.max(1, n / 50); // FFT-based analytic signals are distorted at the record ends
+        int from = margin;
+        int to = n - margin;
+
+        // Group into phases by the direction-independent correlation with the first live channel.
+        int[] group = new int[m];
+        double[] polarity = new double[m];
+        int firstB = -1;
+        for (int j = 0; j < m; j++) {
+            double c = correlation(z[j], z[0], from, to);
+            if (Math.abs(c) >= 0.5) {
+                group[j] = 0;
+                polarity[j] = Math.signum(c);
+            } else {
+                group[j] = 1;
+                if (firstB < 0) {
+                    firstB = j;
+                }
+                polarity[j] = Math.signum(correlation(z[j], z[firstB], from, to));
+                if (polarity[j] == 0) {
+                    polarity[j] = 1;
+                }
+            }
+        }
+        double[][] za = combine(z, live, rms, group, polarity, 0, n);
+        double[][] zb = firstB < 0 ? null : combine(z, live, rms, group, polarity, 1, n);
+
+        int reversals = 0;
+        Double lagDeg = null;
+        if (zb != null) {
+            int block = blockLength();
+            List<double[]> blocks = new ArrayList<>();
+            double sumIm = 0;
+            for (int s = from; s + block <= to; s += block) {
+                double re = 0;
+                double im = 0;
+                for (int i = s; i < s + block; i++) {
+                    // zb·conj(za): its angle is B's phase relative to A
+                    re += zb[0][i] * za[0][i] + zb[1][i] * za[1][i];
+                    im += zb[1][i] * za[0][i] - zb[0][i] * za[1][i];
+                }
+                blocks.add(new double[] {re, im});
+                sumIm += im;
+            }
+            if (sumIm > 0) {
+                // B leads A in the main direction: take the other end of every B coil as its start.
+                for (int j = 0; j < m; j++) {
+                    if (group[j] == 1) {
+                        polarity[j] = -polarity[j];
+                    }
+                }
+                for (double[] b : blocks) {
+                    b[0] = -b[0];
+                    b[1] = -b[1];
+                }
+                zb = combine(z, live, rms, group, polarity, 1, n);
+            }
+            double maxAbsIm = 0;
+            for (double[] b : blocks) {
+                maxAbsIm = Math.max(maxAbsIm, Math.abs(b[1]));
+            }
+            double sre = 0;
+            double sim = 0;
+            int lastSign = 0;
+            for (double[] b : blocks) {
+                if (Math.abs(b[1]) < 0.2 * maxAbsIm) {
+                    continue;
+                }
+                int sign = b[1] < 0 ? -1 : 1;
+                if (lastSign != 0 && sign != lastSign) {
+                    reversals++;
+                }
+                lastSign = sign;
+                // blocks turned the other way have the mirror-image relation; fold them back
+                sre += b[0];
+                sim += sign < 0 ? b[1] : -b[1];
+            }
+            lagDeg = -Math.toDegrees(Math.atan2(sim, sre));
+            if (Math.abs(lagDeg - 90) > 20) {
+                findings.add(Finding.warning("not_quadrature", String.format("phase B lags phase A by %.0f° "
+                        + "electrical, expected 90°: the channels may not be single coils", lagDeg)));
+            }
+            if (reversals > 0) {
+                findings.add(Finding.warning("direction_reversed", "the shaft changed direction " + reversals
+                        + " time(s) during the capture; the pairing is unaffected, but for a tooth count turn one way "
+                        + "only"));
+            }
+        } else if (m > 1) {
+            findings.add(Finding.warning("one_phase", "every live channel is in phase or antiphase with "
+                    + channels.get(live.get(0)).pair() + ": only one phase was recorded"));
+        }
+
+        // Electrical angle, held still where the shaft is not turning.
+        double[] amp = new double[n];
+        double[] rawAngle = new double[n];
+        for (int i = 0; i < n; i++) {
+            if (zb != null) {
+                double a = za[0][i];
+                double b = zb[0][i];
+                amp[i] = Math.hypot(a, b);
+                rawAngle[i] = Math.atan2(a, -b);
+            } else {
+                amp[i] = Math.hypot(za[0][i], za[1][i]);
+                rawAngle[i] = Math.atan2(za[1][i], za[0][i]);
+            }
+        }
+        int angleFrom = zb != null ? 0 : from;
+        int angleTo = zb != null ? n : to;
+        double[] sortedAmp = Arrays.copyOfRange(amp, angleFrom, angleTo);
+        Arrays.sort(sortedAmp);
+        double high = sortedAmp[(int) (0.95 * (sortedAmp.length - 1))];
+        double floor = sortedAmp[(int) (0.01 * (sortedAmp.length - 1))];
+        // Track the angle down to a few times the noise floor (the quietest 1 %, taken while the shaft rests), but
+        // never below 0.3 % of the high amplitude nor above MOVING_FRACTION of it.
+        double threshold = Math.min(MOVING_FRACTION * high, Math.max(5 * floor, 0.003 * high));
+        double[] angle = new double[n];
+        boolean[] moving = new boolean[n];
+        int lastValid = -1;
+        int firstValid = -1;
+        for (int i = angleFrom; i < angleTo; i++) {
+            moving[i] = amp[i] > threshold;
+            if (moving[i]) {
+                if (lastValid < 0) {
+                    angle[i] = rawAngle[i];
+                    firstValid = i;
+                } else {
+                    angle[i] = angle[lastValid] + wrap(rawAngle[i] - rawAngle[lastValid]);
+                }
+                lastValid = i;
+            } else {
+                angle[i] = lastValid < 0 ? rawAngle[i] : angle[lastValid];
+            }
+        }
+        for (int i = 0; i < angleFrom; i++) {
+            angle[i] = angle[angleFrom];
+        }
+        for (int i = angleTo; i < n; i++) {
+            angle[i] = angle[angleTo - 1];
+        }
+        if (firstValid < 0) {
+            throw new IllegalArgumentException("the shaft never turned fast enough to measure");
+        }
+        double cycles = Math.abs(angle[lastValid] - angle[firstValid]) / (2 * Math.PI);
+
+        // Block-wise frequency and Ke.
+        int block = blockLength();
+        List<Double> freqs = new ArrayList<>();
+        double[] num = new double[m];
+        double den = 0;
+        int movingSamples = 0;
+        for (int i = from; i < to; i++) {
+            if (moving[i]) {
+                movingSamples++;
+            }
+        }
+        for (int s = from; s + block <= to; s += block) {
+            boolean all = true;
+            for (int i = s; i < s + block && all; i++) {
+                all = moving[i];
+            }
+            if (!all) {
+                continue;
+            }
+            double omega = Math.abs(angle[s + block - 1] - angle[s]) / ((block - 1) / sampleRateHz);
+            freqs.add(omega / (2 * Math.PI));
+            for (int j = 0; j < m; j++) {
+                double env = 0;
+                for (int i = s; i < s + block; i++) {
+                    env += Math.hypot(z[j][0][i], z[j][1][i]);
+                }
+                num[j] += env / block * omega;
+            }
+            den += omega * omega;
+        }
+        double movingS = movingSamples / sampleRateHz;
+        double minF = freqs.stream().mapToDouble(Double::doubleValue).min().orElse(0);
+        double maxF = freqs.stream().mapToDouble(Double::doubleValue).max().orElse(0);
+        double meanF = movingS > 0 ? cycles / movingS : 0;
+        if (freqs.isEmpty()) {
+            findings.add(Finding.warning("too_slow", "no 20 ms stretch of steady turning: Ke is not measured"));
+        }
+
+        // Revolutions: stated, or counted between the first and last index pulse.
+        RevolutionSource source = RevolutionSource.NONE;
+        double countedCycles = cycles;
+        Double revs = null;
+        if (indexChannel != null) {
+            int[] edges = risingEdges(indexChannel);
+            if (edges.length >= 2) {
+                revs = (edges.length - 1) / (double) pulsesPerRevolution;
+                countedCycles = Math.abs(angle[edges[edges.length - 1]] - angle[edges[0]]) / (2 * Math.PI);
+                source = RevolutionSource.INDEX_CHANNEL;
+                if (revolutions != null && Math.abs(revolutions - revs) > 0.5) {
+                    findings.add(Finding.warning("revolutions_disagree", String.format("%.3g revolutions stated, "
+                            + "%.3g counted on the index channel; the count is used", revolutions, revs)));
+                }
+            } else {
+                findings.add(Finding.warning("index_channel", "the index channel has fewer than two pulses"));
+            }
+        }
+        if (revs == null && revolutions != null) {
+            revs = revolutions;
+            source = RevolutionSource.STATED;
+        }
+        Double perRev = null;
+        Integer teeth = null;
+        if (revs != null) {
+            perRev = StepGeometry.cyclesPerRevolution(countedCycles, revs);
+            teeth = (int) Math.round(perRev);
+            if (teeth < 1) {
+                findings.add(Finding.error("no_teeth", String.format("%.3g electrical cycles per revolution: the "
+                        + "revolution count or the capture is wrong", perRev)));
+                teeth = null;
+            } else {
+                double offCycles = Math.abs(countedCycles - teeth * revs);
+                if (offCycles > 0.25 * Math.max(1, revs)) {
+                    findings.add(Finding.warning("teeth_not_integer", String.format("%.2f electrical cycles per "
+                            + "revolution is not close to a whole number; check the revolution count", perRev)));
+                }
+                if (teeth != 50 && teeth != 100) {
+                    findings.add(Finding.warning("unusual_teeth", teeth + " rotor teeth is unusual for a hybrid "
+                            + "motor (50 for 1.8°, 100 for 0.9°); check the revolution count"));
+                }
+            }
+        } else {
+            findings.add(Finding.info("teeth_unknown", "revolutions not given: the rotor tooth count, step angle and "
+                    + "mechanical Ke stay unknown (give --revolutions or a '# revolutions=' line)"));
+        }
+
+        List<EmfCoil> coils = new ArrayList<>();
+        for (int j = 0; j < m; j++) {
+            LeadPair measured = channels.get(live.get(j)).pair();
+            LeadPair oriented = polarity[j] >= 0 ? measured : measured.reversed();
+            double keElec = den > 0 ? num[j] / den : 0;
+            Double keMech = teeth != null && keElec > 0 ? keElec * teeth : null;
+            coils.add(new EmfCoil(measured, group[j] == 0 ? "A" : "B", oriented, group[j] == 0 ? 0.0 : -90.0,
+                    rms[live.get(j)], keElec, keMech));
+        }
+        return new BackEmfResult(coils, cycles, movingS, meanF, minF, maxF, revs, source, perRev, teeth, lagDeg,
+                reversals, findings);
+    }
+
+    private int blockLength() {
+        return Math.max(16, (int) Math.round(BLOCK_S * sampleRateHz));
+    }
+
+    /** Normalised real correlation of two analytic signals: the cosine of their phase difference. */
+    private static double correlation(double[][] a, double[][] b, int from, int to) {
+        double cross = 0;
+        double pa = 0;
+        double pb = 0;
+        for (int i = from; i < to; i++) {
+            cross += a[0][i] * b[0][i] + a[1][i] * b[1][i];
+            pa += a[0][i] * a[0][i] + a[1][i] * a[1][i];
+            pb += b[0][i] * b[0][i] + b[1][i] * b[1][i];
+        }
+        return cross / Math.sqrt(pa * pb);
+    }
+
+    /** Sum of one group's analytic signals, each with its polarity and scaled to unit RMS. */
+    private static double[][] combine(double[][][] z, List<Integer> live, double[] rms, int[] group,
+                                      double[] polarity, int which, int n) {
+        double[][] out = new double[2][n];
+        for (int j = 0; j < z.length; j++) {
+            if (group[j] != which) {
+                continue;
+            }
+            double g = polarity[j] / rms[live.get(j)];
+            for (int i = 0; i < n; i++) {
+                out[0][i] += g * z[j][0][i];
+                out[1][i] += g * z[j][1][i];
+            }
+        }
+        return out;
+    }
+
+    private static double wrap(double a) {
+        return a - 2 * Math.PI * Math.floor((a + Math.PI) / (2 * Math.PI));
+    }
+
+    /** Sample indices of rising edges, with hysteresis at 30 % and 70 % of the channel's range. */
+    static int[] risingEdges(double[] s) {
+        double lo = Double.POSITIVE_INFINITY;
+        double hi = Double.NEGATIVE_INFINITY;
+        for (double v : s) {
+            lo = Math.min(lo, v);
+            hi = Math.max(hi, v);
+        }
+        double low = lo + 0.3 * (hi - lo);
+        double high = lo + 0.7 * (hi - lo);
+        List<Integer> edges = new ArrayList<>();
+        boolean armed = s[0] < low;
+        for (int i = 1; i < s.length; i++) {
+            if (s[i] < low) {
+                armed = true;
+            } else if (armed && s[i] > high) {
+                edges.add(i);
+                armed = false;
+            }
+        }
+        return edges.stream().mapToInt(Integer::intValue).toArray();
+    }
+}

@@ -1,0 +1,198 @@
+package org.lodestep.report;
+
+import java.util.List;
+import java.util.Locale;
+
+import org.lodestep.motor.BackEmfResult;
+import org.lodestep.motor.Finding;
+import org.lodestep.motor.HalfWinding;
+import org.lodestep.motor.MotorCard;
+import org.lodestep.motor.PhaseCard;
+import org.lodestep.motor.StepInput;
+import org.lodestep.motor.StepResponseFit;
+import org.lodestep.motor.Terminal;
+import org.lodestep.motor.Wiring;
+
+/** Renders a {@link MotorCard} as a plain-text card for the bench; computes nothing. */
+public final class MotorCardText {
+    private MotorCardText() {
+    }
+
+    /** The whole card, lines ending in {@code \n}. */
+    public static String render(MotorCard card) {
+        StringBuilder b = new StringBuilder();
+        b.append("MOTOR CARD  ").append(card.topology()).append(" motor");
+        if (card.wiring() != null) {
+            b.append(", ").append(connectionName(card.connection()));
+        }
+        b.append('\n');
+        b.append("Leads: ").append(String.join(" ", card.leads())).append("\n\n");
+
+        b.append("Wiring\n");
+        Wiring w = card.wiring();
+        if (w == null) {
+            b.append("  not yet known (see Unknown below)\n");
+        } else {
+            for (Terminal t : w.terminals()) {
+                b.append(String.format("  %-6s <- lead%s %s%n", t.terminal(), t.leads().size() > 1 ? "s" : "",
+                        String.join(" + ", t.leads())));
+            }
+            for (List<String> j : w.joinTogether()) {
+                b.append("  join   ").append(String.join(" + ", j)).append(" together (not to the driver); insulate "
+                        + "the joint\n");
+            }
+            for (String l : w.insulate()) {
+                b.append("  leave  ").append(l).append(" unconnected; insulate it\n");
+            }
+        }
+        b.append("  Direction: ").append(card.rotationConvention()).append("\n\n");
+
+        if (!card.phases().isEmpty()) {
+            b.append("Phases\n");
+            for (PhaseCard p : card.phases()) {
+                b.append("  ").append(p.name()).append(": ");
+                List<String> coils = p.halfWindings().stream().map(h -> h.startLead() + "->" + h.endLead()).toList();
+                b.append(String.join(", ", coils)).append(p.polarityKnown() ? "  (start->end measured)"
+                        : "  (orientation arbitrary)").append('\n');
+                for (HalfWinding h : p.halfWindings()) {
+                    b.append(String.format("     coil %s->%s: %s, %s, Ke %s%n", h.startLead(), h.endLead(),
+                            ohm(h.resistanceOhm()), henry(h.inductanceH()), ke(h.keVsPerRad())));
+                }
+                b.append(String.format("     phase as wired: %s, %s, tau %s, Ke %s%s%n", ohm(p.resistanceOhm()),
+                        henry(p.inductanceH()), ms(p.timeConstantS()), ke(p.keVsPerRad()),
+                        p.couplingFactor() == null ? "" : String.format(Locale.ROOT, ", coupling %.3f",
+                                p.couplingFactor())));
+            }
+            b.append('\n');
+        }
+
+        b.append("Step angle\n");
+        if (card.rotorTeeth() == null) {
+            b.append("  unknown\n\n");
+        } else {
+            b.append(String.format(Locale.ROOT, "  %s° full step, %d full steps/rev, %d rotor teeth%n%n",
+                    num(card.stepAngleDeg(), 4), card.fullStepsPerRevolution(), card.rotorTeeth()));
+        }
+
+        b.append("Constants and drive\n");
+        int before = b.length();
+        if (card.keVsPerRad() != null) {
+            b.append(String.format(Locale.ROOT, "  Ke per half-winding   %s V·s/rad peak (%s V/krpm); a full phase in "
+                    + "series has twice this%n", num(card.keVsPerRad(), 4), num(card.keVsPerRad() * 104.71975512, 4)));
+        }
+        if (card.ktNmPerA() != null) {
+            b.append(String.format(Locale.ROOT, "  Kt, phase as wired     %s N·m/A (= Ke in SI units)%n",
+                    num(card.ktNmPerA(), 4)));
+        }
+        if (card.phaseCurrentA() != null) {
+            b.append(String.format(Locale.ROOT, "  phase current          %s A (%s)%n", num(card.phaseCurrentA(), 3),
+                    card.phaseCurrentBasis()));
+        }
+        if (card.holdingTorqueNm() != null) {
+            b.append(String.format(Locale.ROOT, "  peak torque estimate   %s N·m at that current (ideal: no detent, no "
+                    + "saturation)%n", num(card.holdingTorqueNm(), 3)));
+        }
+        if (card.ratedCurrentMinA() != null) {
+            b.append(String.format(Locale.ROOT, "  rated current estimate %s to %s A per phase as wired, assuming %s%n",
+                    num(card.ratedCurrentMinA(), 2), num(card.ratedCurrentMaxA(), 2), card.ratedCurrentAssumption()));
+        }
+        if (card.suggestedSupplyV() != null) {
+            b.append(String.format(Locale.ROOT, "  supply suggestion      %s V (common practice: 32·sqrt(L in mH); "
+                    + "stay within the driver's rating)%n", num(card.suggestedSupplyV(), 3)));
+        }
+        if (card.fullCurrentRateFullStepsPerS() != null) {
+            double rate = card.fullCurrentRateFullStepsPerS();
+            String revs = card.fullStepsPerRevolution() == null ? ""
+                    : String.format(Locale.ROOT, " = %s rev/s", num(rate / card.fullStepsPerRevolution(), 3));
+            b.append(String.format(Locale.ROOT, "  full current up to     %s full steps/s%s at %s V (%s); back-EMF "
+                    + "ignored, so the real limit is lower%n", num(rate, 4), revs, num(card.supplyV(), 3),
+                    card.supplyBasis()));
+        }
+        if (card.naturalFrequencyHz() != null) {
+            b.append(String.format(Locale.ROOT, "  natural frequency      %s Hz with %s kg·m² (full-step resonance near "
+                    + "%s full steps/s)%n", num(card.naturalFrequencyHz(), 4), String.format(Locale.ROOT, "%.3g", card.inertiaKgM2()),
+                    num(card.naturalFrequencyHz(), 4)));
+        }
+        if (b.length() == before) {
+            b.append("  nothing known yet\n");
+        }
+        b.append('\n');
+
+        BackEmfResult e = card.backEmf();
+        if (e != null) {
+            b.append("Measurements\n");
+            b.append(String.format(Locale.ROOT, "  back-EMF: %s electrical cycles%s, %s s turning, electrical "
+                    + "frequency %s to %s Hz (mean %s Hz)%n", num(e.electricalCycles(), 4),
+                    e.revolutions() == null ? "" : String.format(Locale.ROOT, " in %s revolutions (%s)",
+                            num(e.revolutions(), 3), e.revolutionSource().name().toLowerCase(Locale.ROOT)
+                                    .replace('_', ' ')),
+                    num(e.movingDurationS(), 3), num(e.minElectricalFrequencyHz(), 3),
+                    num(e.maxElectricalFrequencyHz(), 3), num(e.meanElectricalFrequencyHz(), 3)));
+            if (e.quadratureLagDeg() != null) {
+                b.append(String.format(Locale.ROOT, "  phase B lags phase A by %s° electrical%n",
+                        num(e.quadratureLagDeg(), 3)));
+            }
+        }
+        for (StepInput s : card.stepResponses()) {
+            StepResponseFit f = s.fit();
+            b.append(String.format(Locale.ROOT, "  step response %s%s: tau %s, final %s A, L %s, %s, residual %s A "
+                    + "RMS, %s%n", s.leads(), s.joinedLeads().isEmpty() ? ""
+                            : " (" + String.join("+", s.joinedLeads()) + " joined)",
+                    ms(f.timeConstantS()), num(f.finalCurrentA(), 4), henry(f.inductanceH()),
+                    ohm(f.windingResistanceOhm()), num(f.rmsResidualA(), 2),
+                    f.shape().name().toLowerCase(Locale.ROOT).replace('_', ' ')));
+        }
+        if (e != null || !card.stepResponses().isEmpty()) {
+            b.append('\n');
+        }
+
+        if (!card.unknowns().isEmpty()) {
+            b.append("Unknown\n");
+            card.unknowns().forEach(u -> b.append("  - ").append(u).append('\n'));
+            b.append('\n');
+        }
+        if (!card.findings().isEmpty()) {
+            b.append("Findings\n");
+            for (Finding f : card.findings()) {
+                b.append(String.format("  %-7s %s%n", f.severity(), f.message()));
+            }
+        }
+        return b.toString();
+    }
+
+    private static String connectionName(String c) {
+        return switch (c) {
+            case "series" -> "bipolar series";
+            case "parallel" -> "bipolar parallel";
+            case "half" -> "bipolar, half winding";
+            default -> c;
+        };
+    }
+
+    static String num(Double v, int significant) {
+        if (v == null || !Double.isFinite(v)) {
+            return "?";
+        }
+        if (v == 0) {
+            return "0";
+        }
+        java.math.BigDecimal d = new java.math.BigDecimal(v).round(new java.math.MathContext(significant));
+        return d.stripTrailingZeros().toPlainString();
+    }
+
+    private static String ohm(Double v) {
+        return v == null ? "R ?" : num(v, 3) + " ohm";
+    }
+
+    private static String henry(Double v) {
+        return v == null ? "L ?" : num(v * 1e3, 3) + " mH";
+    }
+
+    private static String ms(Double v) {
+        return v == null ? "?" : num(v * 1e3, 3) + " ms";
+    }
+
+    private static String ke(Double v) {
+        return v == null ? "?" : num(v, 3) + " V·s/rad";
+    }
+}

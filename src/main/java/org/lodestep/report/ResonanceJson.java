@@ -1,0 +1,170 @@
+package org.lodestep.report;
+
+import java.util.ArrayList;
+import java.util.LinkedHashMap;
+import java.util.List;
+import java.util.Locale;
+import java.util.Map;
+
+import org.lodestep.resonance.AvoidList;
+import org.lodestep.resonance.BandClass;
+import org.lodestep.resonance.Prediction;
+import org.lodestep.resonance.RateUnits;
+import org.lodestep.resonance.ResonanceBand;
+import org.lodestep.resonance.ResponsePoint;
+import org.lodestep.resonance.RingDownResult;
+import org.lodestep.resonance.SweepResult;
+
+/**
+ * The JSON documents of the resonance commands, shaped for their readers (the README documents every key); computes
+ * nothing but unit conversions already defined in {@link RateUnits}.
+ */
+public final class ResonanceJson {
+    private ResonanceJson() {
+    }
+
+    public static String sweep(ResonanceText.SweepHeader h, SweepResult r, RateUnits u, AvoidList avoid,
+                               boolean withResponse) {
+        Map<String, Object> m = new LinkedHashMap<>();
+        m.put("source", h.source());
+        m.put("channel", h.channel());
+        m.put("unit", h.unit());
+        m.put("sample_rate_hz", h.sampleRateHz());
+        m.put("duration_s", r.durationS());
+        m.put("rate_source", r.rateSource());
+        m.put("rate_law", h.rateLaw());
+        m.put("natural_frequency_hz", r.naturalFrequencyHz());
+        m.put("natural_frequency_source", r.naturalFrequencySource());
+        m.put("microsteps", u.microsteps());
+        m.put("rotor_teeth", u.rotorTeeth());
+        m.put("full_steps_per_rev", u.fullStepsPerRev());
+        m.put("travel_mm_per_rev", u.travelMmPerRev());
+        m.put("segments", r.segments());
+        m.put("psd_peak_hz", r.psd().frequencyHz(r.psd().peakBin(r.psd().binHz() * 2)));
+        List<Map<String, Object>> bands = new ArrayList<>();
+        for (ResonanceBand b : r.bands()) {
+            Map<String, Object> j = new LinkedHashMap<>();
+            j.put("start_full_steps_per_s", b.startFullStepsPerS());
+            j.put("end_full_steps_per_s", b.endFullStepsPerS());
+            j.put("peak_full_steps_per_s", b.peakFullStepsPerS());
+            j.put("peak_level", b.peakLevel());
+            j.put("peak_level_db", b.peakLevelDb());
+            j.put("excess_db", b.excessDb());
+            j.put("class", classWord(b.bandClass()));
+            j.put("subharmonic", b.subharmonic());
+            j.put("mechanical_frequency_hz", b.mechanicalFrequencyHz());
+            j.put("start_pulses_per_s", u.pulsesPerS(b.startFullStepsPerS()));
+            j.put("end_pulses_per_s", u.pulsesPerS(b.endFullStepsPerS()));
+            j.put("peak_pulses_per_s", u.pulsesPerS(b.peakFullStepsPerS()));
+            j.put("start_rpm", u.rpm(b.startFullStepsPerS()));
+            j.put("end_rpm", u.rpm(b.endFullStepsPerS()));
+            j.put("peak_rpm", u.rpm(b.peakFullStepsPerS()));
+            j.put("start_mm_per_s", u.mmPerS(b.startFullStepsPerS()));
+            j.put("end_mm_per_s", u.mmPerS(b.endFullStepsPerS()));
+            j.put("peak_mm_per_s", u.mmPerS(b.peakFullStepsPerS()));
+            bands.add(j);
+        }
+        m.put("bands", bands);
+        m.put("avoid_list", avoidMap(avoid));
+        if (withResponse) {
+            List<Map<String, Object>> pts = new ArrayList<>();
+            for (ResponsePoint p : r.response()) {
+                Map<String, Object> j = new LinkedHashMap<>();
+                j.put("rate_full_steps_per_s", p.rateFullStepsPerS());
+                j.put("rms", p.rms());
+                j.put("level_db", p.levelDb());
+                j.put("electrical_amplitude", p.electricalAmplitude());
+                j.put("order1_amplitude", p.order1Amplitude());
+                j.put("order2_amplitude", p.order2Amplitude());
+                j.put("order4_amplitude", p.order4Amplitude());
+                j.put("segments", p.segments());
+                pts.add(j);
+            }
+            m.put("response", pts);
+        }
+        m.put("safety", ResonanceSafety.lines());
+        return Json.write(m);
+    }
+
+    /** The avoid-list document written by {@code --avoid-list}. */
+    public static String avoidList(AvoidList a) {
+        return Json.write(avoidMap(a));
+    }
+
+    private static Map<String, Object> avoidMap(AvoidList a) {
+        Map<String, Object> m = new LinkedHashMap<>();
+        m.put("format", a.format());
+        m.put("version", a.version());
+        m.put("microsteps", a.microsteps());
+        m.put("rotor_teeth", a.rotorTeeth());
+        m.put("full_steps_per_rev", a.fullStepsPerRev());
+        m.put("travel_mm_per_rev", a.travelMmPerRev());
+        m.put("natural_frequency_hz", a.naturalFrequencyHz());
+        m.put("damping_ratio", a.dampingRatio());
+        m.put("crossing_periods", a.crossingPeriods());
+        m.put("margin", a.margin());
+        List<Map<String, Object>> ranges = new ArrayList<>();
+        for (var r : a.ranges()) {
+            Map<String, Object> j = new LinkedHashMap<>();
+            j.put("from_full_steps_per_s", r.fromFullStepsPerS());
+            j.put("to_full_steps_per_s", r.toFullStepsPerS());
+            j.put("from_pulses_per_s", r.fromPulsesPerS());
+            j.put("to_pulses_per_s", r.toPulsesPerS());
+            j.put("from_rpm", r.fromRpm());
+            j.put("to_rpm", r.toRpm());
+            j.put("from_mm_per_s", r.fromMmPerS());
+            j.put("to_mm_per_s", r.toMmPerS());
+            j.put("class", classWord(r.bandClass()));
+            j.put("subharmonic", r.subharmonic());
+            j.put("oscillation_hz", r.oscillationHz());
+            j.put("min_acceleration_full_steps_per_s2", r.minAccelerationFullStepsPerS2());
+            j.put("min_acceleration_pulses_per_s2", r.minAccelerationPulsesPerS2());
+            j.put("min_acceleration_mm_per_s2", r.minAccelerationMmPerS2());
+            j.put("microstepping_helps", r.microsteppingHelps());
+            j.put("damping_helps", r.dampingHelps());
+            j.put("advice", r.advice());
+            ranges.add(j);
+        }
+        m.put("ranges", ranges);
+        m.put("notes", a.notes());
+        return m;
+    }
+
+    public static String ringDown(String source, String channel, RingDownResult r) {
+        Map<String, Object> m = new LinkedHashMap<>();
+        m.put("source", source);
+        m.put("channel", channel);
+        m.put("natural_frequency_hz", r.naturalFrequencyHz());
+        m.put("damped_frequency_hz", r.dampedFrequencyHz());
+        m.put("damping_ratio", r.dampingRatio());
+        m.put("decay_rate_per_s", r.decayRatePerS());
+        m.put("quality_factor", r.qualityFactor());
+        m.put("amplitude", r.amplitude());
+        m.put("offset", r.offset());
+        m.put("r_squared", r.rSquared());
+        m.put("rms_residual", r.rmsResidual());
+        m.put("start_time_s", r.startTimeS());
+        m.put("fitted_duration_s", r.fittedDurationS());
+        m.put("periods_fitted", r.periodsFitted());
+        return Json.write(m);
+    }
+
+    public static String prediction(Prediction p) {
+        Map<String, Object> m = new LinkedHashMap<>();
+        m.put("mode", p.inferred() ? "inverse" : "predict");
+        m.put("holding_torque_nm", p.holdingTorqueNm());
+        m.put("rotor_teeth", p.rotorTeeth());
+        m.put("stiffness_nm_per_rad", p.stiffnessNmPerRad());
+        m.put("rotor_inertia_kgm2", p.rotorInertiaKgm2());
+        m.put("load_inertia_kgm2", p.loadInertiaKgm2());
+        m.put("total_inertia_kgm2", p.totalInertiaKgm2());
+        m.put("natural_frequency_hz", p.naturalFrequencyHz());
+        m.put("risky_rates", p.riskyRates());
+        m.put("mid_band_centre_full_steps_per_s", p.midBandCentreFullStepsPerS());
+        return Json.write(m);
+    }
+
+    static String classWord(BandClass c) {
+        return c.name().toLowerCase(Locale.ROOT);
+    }
+}

@@ -1,0 +1,46 @@
+package org.lodestep.resonance;
+
+/**
+ * Relations of a viscously damped single-degree-of-freedom oscillation: logarithmic decrement, damping ratio,
+ * damped and undamped natural frequency, quality factor.
+ *
+ * <p>Source: S. S. Rao, <i>Mechanical Vibrations</i>, 5th ed., Prentice Hall 2011, ch. 2 (free vibration with viscous
+ * damping): δ = (1/n)·ln(x_0/x_n); ζ = δ/√(4π² + δ²); ω_d = ω_n·√(1 - ζ²); envelope e^(-ζ·ω_n·t); Q = 1/(2ζ).
+ */
+public final class DampedOscillation {
+    private DampedOscillation() {
+    }
+
+    /** Logarithmic decrement from two peaks {@code periods} apart. */
+    public static double logDecrement(double firstPeak, double laterPeak, int periods) {
+        Require.positive(firstPeak, "first peak", "");
+        Require.positive(laterPeak, "later peak", "");
+        if (periods < 1) {
+            throw new IllegalArgumentException("periods must be at least 1, got " + periods);
+        }
+        return Math.log(firstPeak / laterPeak) / periods;
+    }
+
+    /** Damping ratio from the logarithmic decrement. */
+    public static double dampingRatio(double logDecrement) {
+        return logDecrement / Math.sqrt(4 * Math.PI * Math.PI + logDecrement * logDecrement);
+    }
+
+    /** Undamped natural frequency f_n = f_d/√(1 - ζ²), in Hz. */
+    public static double naturalHz(double dampedHz, double dampingRatio) {
+        if (!(dampingRatio >= 0 && dampingRatio < 1)) {
+            throw new IllegalArgumentException("damping ratio must be 0 ... 1 for an oscillation, got " + dampingRatio);
+        }
+        return dampedHz / Math.sqrt(1 - dampingRatio * dampingRatio);
+    }
+
+    /** Damping ratio from the envelope decay rate σ (1/s) and damped angular frequency ω_d (rad/s): σ/√(σ² + ω_d²). */
+    public static double dampingRatio(double decayRatePerS, double dampedRadPerS) {
+        return decayRatePerS / Math.hypot(decayRatePerS, dampedRadPerS);
+    }
+
+    /** Quality factor 1/(2ζ). */
+    public static double qualityFactor(double dampingRatio) {
+        return 1 / (2 * dampingRatio);
+    }
+}

@@ -1,0 +1,202 @@
+package org.lodestep.resonance;
+
+import org.apache.commons.math3.fitting.leastsquares.LeastSquaresBuilder;
+import org.apache.commons.math3.fitting.leastsquares.LeastSquaresOptimizer;
+import org.apache.commons.math3.fitting.leastsquares.LevenbergMarquardtOptimizer;
+import org.apache.commons.math3.fitting.leastsquares.MultivariateJacobianFunction;
+import org.apache.commons.math3.linear.Array2DRowRealMatrix;
+import org.apache.commons.math3.linear.ArrayRealVector;
+import org.apache.commons.math3.linear.RealMatrix;
+import org.apache.commons.math3.linear.RealVector;
+import org.apache.commons.math3.stat.regression.SimpleRegression;
+import org.apache.commons.math3.util.Pair;
+
+/**
+ * Fits a damped sinusoid to a single-step (or tap) response to find the natural frequency and damping ratio.
+ *
+ * <p>Model: x(t) = A·e^(-σt)·cos(ω_d·t + φ) + c (S. S. Rao, <i>Mechanical Vibrations</i>, 5th ed., 2011, ch. 2,
+ * free viscously damped vibration). Starting values come from zero crossings (ω_d) and the logarithmic decrement of
+ * the half-period peaks (σ); Levenberg-Marquardt least squares (Commons Math) then refines all five parameters. The
+ * fit starts at the first peak of the free oscillation (after a pre-trigger stretch, and for a step response after
+ * the first crossing of the settled value, where the rotor is released from the step) and ends where the oscillation
+ * has decayed into the noise.
+ */
+public final class RingDownFit {
+    /** The fit stops where the envelope falls below this fraction of the first peak. */
+    private static final double END_FRACTION = 0.03;
+
+    private RingDownFit() {
+    }
+
+    /**
+     * @param x            the response, in any unit (position, velocity, acceleration, sound)
+     * @param sampleRateHz samples per second
+     * @param startTimeS   time of x[0], s
+     * @throws IllegalArgumentException when there is no decaying oscillation to fit (fewer than two periods, flat,
+     *                                  growing), with a message saying what was found
+     */
+    public static RingDownResult fit(double[] x, double sampleRateHz, double startTimeS) {
+        Require.positive(sampleRateHz, "sample rate", "Hz");
+        int n = x.length;
+        if (n < 16) {
+            throw new IllegalArgumentException("a ring-down needs at least 16 samples, got " + n);
+        }
+        for (int i = 0; i < n; i++) {
+            if (!Double.isFinite(x[i])) {
+                throw new IllegalArgumentException("sample " + i + " is not a finite number");
+            }
+        }
+        double settled = mean(x, n - Math.max(4, n / 5), n);
+        // Onset: where the signal first leaves its initial level (a pre-trigger stretch is skipped).
+        double range = 0;
+        for (int i = 0; i < n; i++) {
+            range = Math.max(range, Math.abs(x[i] - x[0]));
+        }
+        if (!(range > 0)) {
+            throw new IllegalArgumentException("the signal is flat: no ring-down to fit");
+        }
+        int onset = 0;
+        while (onset < n - 1 && Math.abs(x[onset] - x[0]) <= 0.1 * range) {
+            onset++;
+        }
+        // A step response starts far from its settled value and only then rings: the fit starts at the first
+        // extremum about the settled value after the onset (the first overshoot), where the free oscillation is.
+        int start = onset;
+        if (Math.abs(x[onset] - settled) > 0.5 * range) {
+            start = nextCrossing(x, onset, settled);
+        }
+        // The extremum of the half-wave that begins here: robust to noise, unlike the first local maximum.
+        int halfWaveEnd = nextCrossing(x, start, settled);
+        for (int i = start; i < halfWaveEnd; i++) {
+            if (Math.abs(x[i] - settled) > Math.abs(x[start] - settled)) {
+                start = i;
+            }
+        }
+        double peak = Math.abs(x[start] - settled);
+        if (!(peak > 0)) {
+            throw new IllegalArgumentException("no oscillation about the settled value: no ring-down to fit");
+        }
+        int end = n;
+        for (int i = n - 1; i > start; i--) {
+            if (Math.abs(x[i] - settled) > END_FRACTION * peak) {
+                end = Math.min(n, i + 1 + (i - start) / 10);
+                break;
+            }
+        }
+        int m = end - start;
+        double dt = 1 / sampleRateHz;
+        // Zero crossings of the oscillation about its settled value give the damped period.
+        double firstCross = Double.NaN;
+        double lastCross = Double.NaN;
+        int crossings = 0;
+        SimpleRegression logPeaks = new SimpleRegression();
+        double halfPeak = 0;
+        double halfPeakT = 0;
+        for (int i = start + 1; i < end; i++) {
+            double a = x[i - 1] - settled;
+            double b = x[i] - settled;
+            if (Math.abs(b) > halfPeak) {
+                halfPeak = Math.abs(b);
+                halfPeakT = (i - start) * dt;
+            }
+            if ((a < 0) != (b < 0) && a != b) {
+                double t = (i - 1 - start + a / (a - b)) * dt;
+                if (crossings == 0) {
+                    firstCross = t;
+                } else if (halfPeak > 0) {
+                    logPeaks.addData(halfPeakT, Math.log(halfPeak));
+                }
+                lastCross = t;
+                crossings++;
+                halfPeak = 0;
+            }
+        }
+        if (crossings < 4) {
+            throw new IllegalArgumentException("found " + crossings + " zero crossings after the largest excursion;"
+                    + " a ring-down fit needs at least two periods of decaying oscillation");
+        }
+        double omegaD0 = Math.PI * (crossings - 1) / (lastCross - firstCross);
+        double sigma0 = logPeaks.getN() >= 2 ? Math.max(0, -logPeaks.getSlope()) : 1 / (m * dt);
+        double[] t = new double[m];
+        double[] y = new double[m];
+        double sst = 0;
+        double ym = mean(x, start, end);
+        for (int i = 0; i < m; i++) {
+            t[i] = i * dt;
+            y[i] = x[start + i];
+            sst += (y[i] - ym) * (y[i] - ym);
+        }
+        double a0 = x[start] - settled;
+        LeastSquaresOptimizer.Optimum opt = new LevenbergMarquardtOptimizer().optimize(new LeastSquaresBuilder()
+                .model(model(t))
+                .target(y)
+                .start(new double[] {a0, sigma0, omegaD0, 0.0, settled})
+                .maxEvaluations(10_000)
+                .maxIterations(10_000)
+                .build());
+        double[] p = opt.getPoint().toArray();
+        double amplitude = p[0];
+        double phase = p[3];
+        if (amplitude < 0) {
+            amplitude = -amplitude;
+            phase += Math.PI;
+        }
+        double sigma = p[1];
+        double omegaD = Math.abs(p[2]);
+        if (!(sigma > 0)) {
+            throw new IllegalArgumentException("the fitted oscillation does not decay (decay rate " + sigma
+                    + " 1/s): not a ring-down");
+        }
+        double omegaN = Math.hypot(sigma, omegaD);
+        double zeta = DampedOscillation.dampingRatio(sigma, omegaD);
+        double ssr = opt.getRMS() * opt.getRMS() * m;
+        double duration = m * dt;
+        return new RingDownResult(omegaN / (2 * Math.PI), omegaD / (2 * Math.PI), zeta, sigma, amplitude, p[4],
+                DampedOscillation.qualityFactor(zeta), 1 - ssr / sst, opt.getRMS(), startTimeS + start * dt,
+                duration, duration * omegaD / (2 * Math.PI));
+    }
+
+    /** Index of the first sample after {@code from} on the other side of {@code level}, or x.length. */
+    private static int nextCrossing(double[] x, int from, double level) {
+        boolean above = x[from] >= level;
+        int i = from + 1;
+        while (i < x.length && (x[i] >= level) == above) {
+            i++;
+        }
+        return i;
+    }
+
+    private static double mean(double[] x, int from, int to) {
+        double s = 0;
+        for (int i = from; i < to; i++) {
+            s += x[i];
+        }
+        return s / (to - from);
+    }
+
+    /** Values and analytic Jacobian of A·e^(-σt)·cos(ωt + φ) + c over the parameters (A, σ, ω, φ, c). */
+    private static MultivariateJacobianFunction model(double[] t) {
+        return point -> {
+            double a = point.getEntry(0);
+            double s = point.getEntry(1);
+            double w = point.getEntry(2);
+            double ph = point.getEntry(3);
+            double c = point.getEntry(4);
+            RealVector v = new ArrayRealVector(t.length);
+            RealMatrix j = new Array2DRowRealMatrix(t.length, 5);
+            for (int i = 0; i < t.length; i++) {
+                double e = Math.exp(-s * t[i]);
+                double arg = w * t[i] + ph;
+                double cos = Math.cos(arg);
+                double sin = Math.sin(arg);
+                v.setEntry(i, a * e * cos + c);
+                j.setEntry(i, 0, e * cos);
+                j.setEntry(i, 1, -t[i] * a * e * cos);
+                j.setEntry(i, 2, -t[i] * a * e * sin);
+                j.setEntry(i, 3, -a * e * sin);
+                j.setEntry(i, 4, 1.0);
+            }
+            return new Pair<>(v, j);
+        };
+    }
+}

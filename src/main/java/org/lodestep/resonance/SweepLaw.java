@@ -1,0 +1,56 @@
+package org.lodestep.resonance;
+
+/**
+ * How the commanded full-step rate changed with time during a sweep, when it was programmed rather than recorded.
+ *
+ * <p>Linear: r(t) = r0 + (r1 - r0)·t/T. Logarithmic (exponential in time): r(t) = r0·(r1/r0)^(t/T). Time t is
+ * measured from the start of the capture; outside 0 ... T the rate is undefined (NaN) and those samples are not
+ * analysed.
+ *
+ * @param shape                  linear or logarithmic
+ * @param startFullStepsPerS     rate at t = 0, full steps/s: zero or more for a linear sweep, positive for a log one
+ * @param endFullStepsPerS       rate at t = T, full steps/s, positive and different from the start
+ * @param durationS              sweep duration T, s, positive
+ */
+public record SweepLaw(Shape shape, double startFullStepsPerS, double endFullStepsPerS, double durationS) {
+
+    /** Shape of the programmed rate ramp. */
+    public enum Shape {
+        LINEAR,
+        LOG
+    }
+
+    public SweepLaw {
+        if (shape == null) {
+            throw new IllegalArgumentException("sweep shape is missing (linear or log)");
+        }
+        if (shape == Shape.LOG || startFullStepsPerS != 0) {
+            Require.positive(startFullStepsPerS, "sweep start rate", "full steps/s");
+        }
+        Require.positive(endFullStepsPerS, "sweep end rate", "full steps/s");
+        Require.positive(durationS, "sweep duration", "s");
+        if (startFullStepsPerS == endFullStepsPerS) {
+            throw new IllegalArgumentException("sweep start and end rates are equal (" + startFullStepsPerS
+                    + " full steps/s): that is a dwell, not a sweep");
+        }
+    }
+
+    /** Commanded rate at time t (s from the start of the sweep), full steps/s; NaN outside the sweep. */
+    public double rateFullStepsPerSAt(double timeS) {
+        if (!(timeS >= 0 && timeS <= durationS)) {
+            return Double.NaN;
+        }
+        double u = timeS / durationS;
+        return shape == Shape.LINEAR
+                ? startFullStepsPerS + (endFullStepsPerS - startFullStepsPerS) * u
+                : startFullStepsPerS * Math.pow(endFullStepsPerS / startFullStepsPerS, u);
+    }
+
+    /** Rate of change of the commanded rate at time t, in full steps/s² (the sweep's acceleration). */
+    public double accelerationFullStepsPerS2At(double timeS) {
+        double r = rateFullStepsPerSAt(timeS);
+        return shape == Shape.LINEAR
+                ? (endFullStepsPerS - startFullStepsPerS) / durationS
+                : r * Math.log(endFullStepsPerS / startFullStepsPerS) / durationS;
+    }
+}
