@@ -58,6 +58,14 @@ final class DemoCommand implements Callable<Integer> {
         }
         out.println();
         out.println("Demo finished; its outputs are in " + outDir.toAbsolutePath().normalize());
+        List<Path> reports;
+        try (java.util.stream.Stream<Path> files = Files.walk(outDir)) {
+            reports = files.filter(p -> p.getFileName().toString().endsWith(".html")).sorted().toList();
+        }
+        if (!reports.isEmpty()) {
+            out.println("HTML reports (open in any browser):");
+            reports.forEach(p -> out.println("  " + p));
+        }
         out.flush();
         return worst;
     }

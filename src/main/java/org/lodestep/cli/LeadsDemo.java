@@ -13,6 +13,7 @@ import java.util.stream.Stream;
 import org.lodestep.capture.LeadPairReading;
 import org.lodestep.capture.ResistanceCsvReader;
 import org.lodestep.capture.ResistanceReadings;
+import org.lodestep.report.LeadsHtml;
 import org.lodestep.report.LeadsTextReport;
 import org.lodestep.wiring.IdentifySettings;
 import org.lodestep.wiring.Identification;
@@ -53,6 +54,9 @@ final class LeadsDemo implements DemoCommand.Section {
             faulty += id.hasError() ? 1 : 0;
             String title = (r.motor() != null ? r.motor() : f.getFileName().toString());
             LeadsTextReport.writeBrief(out, title, id);
+            Path html = outDir.resolve("leads-" + f.getFileName().toString().replaceAll("\\.(csv|tsv)$", "") + ".html");
+            LeadsHtml.report(r.motor() != null ? "Motor " + r.motor() : title, f.toString(), id).write(html);
+            out.println("  report: " + html);
             if (probeTarget == null && id.leads().size() == 6 && !id.hasError() && id.determined()) {
                 probeTarget = r;
             }

@@ -11,6 +11,7 @@ import org.lodestep.capture.LeadPairArgument;
 import org.lodestep.capture.LeadPairReading;
 import org.lodestep.capture.ResistanceCsvReader;
 import org.lodestep.capture.ResistanceReadings;
+import org.lodestep.report.LeadsHtml;
 import org.lodestep.report.LeadsJsonView;
 import org.lodestep.report.LeadsTextReport;
 import org.lodestep.wiring.Identification;
@@ -50,6 +51,11 @@ final class LeadsIdentifyCommand implements Callable<Integer> {
                     + "order the identification asks for them. " + RigCli.ADDRESS_HELP)
     String rig;
 
+    @Option(names = "--report", paramLabel = "FILE.html",
+            description = "Also write a self-contained HTML report of the motor: a wiring diagram for each driver"
+                    + " connection, windings, findings and readings (one FILE only).")
+    Path report;
+
     @Mixin
     LeadsIdentifyOptions options;
 
@@ -58,6 +64,9 @@ final class LeadsIdentifyCommand implements Callable<Integer> {
 
     @Override
     public Integer call() throws Exception {
+        if (report != null && (rig != null || files.size() > 1)) {
+            throw new UsageException("--report writes the report of one motor: give one FILE (without --rig)");
+        }
         if (rig != null) {
             if (!files.isEmpty() || !pairs.isEmpty()) {
                 throw new UsageException("--rig measures the motor itself: give no FILE or --pair with it");
@@ -90,6 +99,10 @@ final class LeadsIdentifyCommand implements Callable<Integer> {
             error |= id.hasError();
             String title = r.motor() != null ? "Motor " + r.motor() + " (" + r.source() + ")"
                     : files.isEmpty() ? "Readings from --pair" : r.source();
+            if (report != null) {
+                LeadsHtml.report(r.motor() != null ? "Motor " + r.motor() : title, files.isEmpty() ? null
+                        : r.source(), id).write(report);
+            }
             if (options.json) {
                 json.add(LeadsJsonView.of(r.source(), r.motor(), id, null));
             } else {

@@ -32,7 +32,12 @@ final class MotorDemo implements DemoCommand.Section {
         args.addAll(List.of("--back-emf", dir.resolve("back-emf.csv").toString(), "--supply-v", "24",
                 "--phase-current-a", "1.2", "--inertia-kgm2", "5.4e-6"));
         out.println("$ lodestep " + String.join(" ", args));
-        int code = Main.run(out, err, args.toArray(String[]::new));
+        Files.createDirectories(outDir);
+        Path html = outDir.resolve("motor-card.html");
+        List<String> withReport = new ArrayList<>(args);
+        withReport.addAll(List.of("--report", html.toString()));
+        int code = Main.run(out, err, withReport.toArray(String[]::new));
+        out.println("report: " + html);
         Files.createDirectories(outDir);
         List<String> jsonArgs = new ArrayList<>(args);
         jsonArgs.add("--json");

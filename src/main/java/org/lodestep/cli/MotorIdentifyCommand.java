@@ -13,6 +13,7 @@ import org.lodestep.motor.MotorCard;
 import org.lodestep.motor.MotorIdentifier;
 import org.lodestep.motor.StepInput;
 import org.lodestep.motor.WindingInput;
+import org.lodestep.report.MotorHtml;
 import org.lodestep.report.MotorJson;
 import org.lodestep.report.MotorCardText;
 
@@ -101,11 +102,22 @@ final class MotorIdentifyCommand implements Callable<Integer> {
                     + "(serial:DEVICE, tcp:HOST:PORT or sim:SCENARIO for the virtual rig). Give --revolutions.")
     String rig;
 
+    @Option(names = "--report", paramLabel = "FILE.html",
+            description = "Also write the motor card as a self-contained HTML report: wiring diagram, constants,"
+                    + " phases, step-response fits drawn over their data.")
+    Path report;
+
     @Option(names = "--json", description = "Write the motor card as JSON instead of text.")
     boolean json;
 
     @Spec
     CommandSpec spec;
+
+    /** The report's heading: the first input file's folder and name. */
+    private String title() {
+        Path first = resistance != null ? resistance : !stepResponses.isEmpty() ? stepResponses.get(0) : backEmf;
+        return first != null ? first.toString() : rig != null ? "Motor on rig " + rig : "motor";
+    }
 
     @Override
     public Integer call() throws Exception {
@@ -151,6 +163,14 @@ final class MotorIdentifyCommand implements Callable<Integer> {
         }
         MotorCard card = MotorIdentifier.identify(new IdentifyRequest(windings, steps, emf, connection,
                 phaseCurrentA, supplyV, inertiaKgM2));
+        if (report != null) {
+            // Recorded step responses are drawn under their fits; the rig's are measured in memory and listed only.
+            List<MotorHtml.Trace> traces = new ArrayList<>();
+            for (Path p : stepResponses) {
+                traces.add(MotorInputs.trace(p));
+            }
+            MotorHtml.report(title(), card, traces).write(report);
+        }
         if (json) {
             out.println(MotorJson.write(card));
         } else {

@@ -109,6 +109,28 @@ final class MotorInputs {
         return level > 0 ? level : null;
     }
 
+    /** The recorded current of a step-response capture, for drawing under its fit in the HTML report. */
+    static org.lodestep.report.MotorHtml.Trace trace(Path file) throws IOException, InputFormatException {
+        SampledSignal s = Captures.readAll(file);
+        int current = -1;
+        for (int c = 0; c < s.channels().size(); c++) {
+            Channel ch = s.channels().get(c);
+            if (ch.unit().equals("a") && (current < 0 || ch.name().startsWith("current"))) {
+                current = c; // the same column stepResponse fits
+            }
+        }
+        if (current < 0) {
+            throw new InputFormatException(file.toString(), InputFormatException.NO_LINE, null, null,
+                    "has no current channel");
+        }
+        double[] i = s.channel(current);
+        double[] t = new double[i.length];
+        for (int k = 0; k < t.length; k++) {
+            t[k] = s.startTimeS() + k / s.sampleRateHz();
+        }
+        return new org.lodestep.report.MotorHtml.Trace(file.getFileName().toString(), t, i);
+    }
+
     /**
      * Reads and analyses a back-EMF capture: channels {@code emf_<lead>_<lead>} in volts, optionally an index or
      * tachometer channel ({@code index}, {@code tach}); {@code # revolutions=} and {@code # pulses_per_rev=}

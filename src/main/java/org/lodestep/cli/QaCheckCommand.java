@@ -26,6 +26,7 @@ import org.lodestep.qa.Submission;
 import org.lodestep.qa.Timestamps;
 import org.lodestep.qa.Verdict;
 import org.lodestep.report.Json;
+import org.lodestep.report.QaHtml;
 import org.lodestep.report.QaText;
 
 import picocli.CommandLine.Command;
@@ -81,6 +82,10 @@ final class QaCheckCommand implements Callable<Integer> {
     @Mixin
     QaStoreOption store = new QaStoreOption();
 
+    @Option(names = "--report", paramLabel = "FILE.html",
+            description = "Also write a self-contained HTML report: verdict, every check against its limits, the record.")
+    Path report;
+
     @Option(names = "--json", description = "Print the recorded result(s) as JSON instead of text.")
     boolean json;
 
@@ -111,6 +116,10 @@ final class QaCheckCommand implements Callable<Integer> {
         try (RecordStore records = store.open()) {
             if (serial != null) {
                 RecordStore.Appended a = checkOne(records, serial);
+                if (report != null) {
+                    QaHtml.check(serial, List.of(a.record()), partSpec.insulationTestVoltageV(), Map.of())
+                            .write(report);
+                }
                 if (json) {
                     out.println(Json.write(a));
                 } else {
@@ -170,6 +179,14 @@ final class QaCheckCommand implements Callable<Integer> {
                     out.flush();
                 }
             }
+        }
+        if (report != null) {
+            Map<String, String> notRecorded = new LinkedHashMap<>();
+            for (Map<String, String> e : errors) {
+                notRecorded.put(e.get("serial"), e.get("message"));
+            }
+            QaHtml.check("lot " + lot, results.stream().map(RecordStore.Appended::record).toList(),
+                    partSpec.insulationTestVoltageV(), notRecorded).write(report);
         }
         if (json) {
             Map<String, Object> doc = new LinkedHashMap<>();

@@ -42,7 +42,8 @@ final class QaDemo implements DemoCommand.Section {
                 "--serials", qa.resolve("lot-L2607-serials.txt").toString(),
                 "--resistance-pattern", qa.resolve("{serial}.csv").toString(),
                 "--meter-log", qa.resolve("lot-L2607-meter-log.csv").toString(),
-                "--ambient-c", "22", "--operator", "R. Okafor", "--station", "harrow-fen-2", "--db", db.toString());
+                "--ambient-c", "22", "--operator", "R. Okafor", "--station", "harrow-fen-2", "--db", db.toString(),
+                "--report", dir.resolve("qa-check-" + LOT + ".html").toString());
         worst = expect(worst, lot.code, ExitCode.FINDING);
         out.println();
         out.println("$ lodestep qa check --spec kv-4218-m.toml --lot " + LOT + " ... < lot-L2607-serials.txt");
@@ -72,9 +73,12 @@ final class QaDemo implements DemoCommand.Section {
 
         out.println();
         out.println("$ lodestep qa report --lot " + LOT);
-        Result report = run(err, "qa", "report", "--lot", LOT, "--db", db.toString());
+        Result report = run(err, "qa", "report", "--lot", LOT, "--db", db.toString(),
+                "--report", dir.resolve("qa-report-" + LOT + ".html").toString());
         worst = expect(worst, report.code, ExitCode.OK);
         out.print(report.text);
+        out.println("reports: " + dir.resolve("qa-check-" + LOT + ".html") + ", " + dir.resolve("qa-report-" + LOT
+                + ".html"));
 
         out.println();
         out.println("$ lodestep qa certificate --serial KV24-00124");

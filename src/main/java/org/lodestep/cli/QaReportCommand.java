@@ -10,6 +10,7 @@ import org.lodestep.qa.LotStatistics;
 import org.lodestep.qa.RecordStore;
 import org.lodestep.qa.StoredRecord;
 import org.lodestep.report.Json;
+import org.lodestep.report.QaHtml;
 import org.lodestep.report.QaText;
 
 import picocli.CommandLine.Command;
@@ -33,6 +34,11 @@ final class QaReportCommand implements Callable<Integer> {
     @Mixin
     QaStoreOption store = new QaStoreOption();
 
+    @Option(names = "--report", paramLabel = "FILE.html",
+            description = "Also write a self-contained HTML report: yield, and per parameter the statistics, a histogram"
+                    + " against the spec limits and the individuals and moving-range charts.")
+    java.nio.file.Path report;
+
     @Option(names = "--json", description = "Print the summary as JSON.")
     boolean json;
 
@@ -47,6 +53,9 @@ final class QaReportCommand implements Callable<Integer> {
             records = rs.find(filter.query());
         }
         LotStatistics.Summary summary = LotStatistics.of(records);
+        if (report != null) {
+            QaHtml.lot(filter.title(), records, summary).write(report);
+        }
         if (json) {
             Map<String, Object> doc = new LinkedHashMap<>();
             doc.put("lot", filter.lot);

@@ -26,8 +26,10 @@ final class ResonanceDemo implements DemoCommand.Section {
         Path avoid = outDir.resolve("hv420-y-avoid-list.json");
         int worst = ExitCode.OK;
         out.println("1. Single full step, encoder on the axis: ring-down fit.");
+        Path ringdownHtml = outDir.resolve("resonance-ringdown.html");
         worst = Math.max(worst, step(out, err, "resonance", "ringdown", dir.resolve("belt-axis-ringdown.csv")
-                .toString()));
+                .toString(), "--report", ringdownHtml.toString()));
+        out.println("report: " + ringdownHtml);
         out.println();
         out.println("2. The motor's data (0.45 N·m holding, rotor 5.4e-6 kg·m²) against the measured 116 Hz:"
                 + " load inertia.");
@@ -38,7 +40,8 @@ final class ResonanceDemo implements DemoCommand.Section {
         out.println("3. Accelerometer sweep at full step, 30 to 400 full steps/s, advice in the controller's units.");
         worst = Math.max(worst, step(out, err, "resonance", "sweep", dir.resolve("belt-axis-sweep.csv").toString(),
                 "--microsteps", "16", "--travel-mm-per-rev", "40", "--natural-hz", "116", "--damping-ratio", "0.084",
-                "--avoid-list", avoid.toString()));
+                "--avoid-list", avoid.toString(), "--report", outDir.resolve("resonance-sweep.html").toString()));
+        out.println("report: " + outDir.resolve("resonance-sweep.html"));
         out.println();
         out.println("4. A phone on the frame during a log sweep, 40 to 600 full steps/s over 24 s (no metadata in the"
                 + " recording, so the law is given).");

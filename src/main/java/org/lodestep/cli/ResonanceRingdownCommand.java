@@ -8,6 +8,7 @@ import java.util.concurrent.Callable;
 import org.lodestep.capture.Captures;
 import org.lodestep.capture.InputFormatException;
 import org.lodestep.capture.SampledSignal;
+import org.lodestep.report.ResonanceHtml;
 import org.lodestep.report.ResonanceJson;
 import org.lodestep.report.ResonanceText;
 import org.lodestep.resonance.RingDownFit;
@@ -47,6 +48,10 @@ final class ResonanceRingdownCommand implements Callable<Integer> {
     @Option(names = "--json", description = "Print JSON instead of text.")
     boolean json;
 
+    @Option(names = "--report", paramLabel = "FILE.html",
+            description = "Also write a self-contained HTML report: the fitted decay drawn over the data.")
+    Path report;
+
     @picocli.CommandLine.Spec
     picocli.CommandLine.Model.CommandSpec spec;
 
@@ -71,6 +76,13 @@ final class ResonanceRingdownCommand implements Callable<Integer> {
         double[] part = Arrays.copyOfRange(x, from, to);
         double t0 = sig.startTimeS() + from / fs;
         RingDownResult r = ResonanceSweepCommand.analysis(() -> RingDownFit.fit(part, fs, t0), source, name);
+        if (report != null) {
+            double[] t = new double[part.length];
+            for (int i = 0; i < t.length; i++) {
+                t[i] = t0 + i / fs;
+            }
+            ResonanceHtml.ringDown(source, name, sig.channels().get(c).unit(), t, part, r).write(report);
+        }
         if (json) {
             out.println(ResonanceJson.ringDown(source, name, r));
         } else {

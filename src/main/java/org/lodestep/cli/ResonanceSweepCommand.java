@@ -15,6 +15,7 @@ import org.lodestep.capture.Channel;
 import org.lodestep.capture.InputFormatException;
 import org.lodestep.capture.SampleStream;
 import org.lodestep.capture.SweepProfile;
+import org.lodestep.report.ResonanceHtml;
 import org.lodestep.report.ResonanceJson;
 import org.lodestep.report.ResonanceText;
 import org.lodestep.resonance.AvoidList;
@@ -145,6 +146,11 @@ final class ResonanceSweepCommand implements Callable<Integer> {
     @Option(names = "--json", description = "Print JSON instead of text.")
     boolean json;
 
+    @Option(names = "--report", paramLabel = "FILE.html",
+            description = "Also write a self-contained HTML report: response curve with the bands shaded, spectrogram"
+                    + " against step rate, rates to avoid.")
+    Path report;
+
     @picocli.CommandLine.Spec
     picocli.CommandLine.Model.CommandSpec spec;
 
@@ -225,6 +231,16 @@ final class ResonanceSweepCommand implements Callable<Integer> {
         }
         ResonanceText.SweepHeader header = new ResonanceText.SweepHeader(source, vibName, unit,
                 sampleRateHz, lawText);
+        if (report != null) {
+            double[] columnRates = null;
+            if (law != null && result.spectrogram() != null) {
+                columnRates = new double[result.spectrogram().columnCount()];
+                for (int c = 0; c < columnRates.length; c++) {
+                    columnRates[c] = law.rateFullStepsPerSAt(result.spectrogram().columnTimeS(c));
+                }
+            }
+            ResonanceHtml.sweep(header, result, units, avoid, columnRates).write(report);
+        }
         if (json) {
             out.println(ResonanceJson.sweep(header, result, units, avoid, response));
         } else {

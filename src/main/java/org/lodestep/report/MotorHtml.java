@@ -1,0 +1,246 @@
+package org.lodestep.report;
+
+import java.util.ArrayList;
+import java.util.LinkedHashMap;
+import java.util.List;
+import java.util.Locale;
+import java.util.Map;
+
+import org.lodestep.motor.Finding;
+import org.lodestep.motor.HalfWinding;
+import org.lodestep.motor.MotorCard;
+import org.lodestep.motor.PhaseCard;
+import org.lodestep.motor.Severity;
+import org.lodestep.motor.StepInput;
+import org.lodestep.motor.StepResponseFit;
+import org.lodestep.motor.Terminal;
+import org.lodestep.motor.Wiring;
+import org.lodestep.report.html.Cell;
+import org.lodestep.report.html.DriverTerminal;
+import org.lodestep.report.html.HtmlReport;
+import org.lodestep.report.html.HtmlTable;
+import org.lodestep.report.html.SafetyNote;
+import org.lodestep.report.html.Status;
+import org.lodestep.report.html.WiringDiagram;
+import org.lodestep.report.html.XyChart;
+
+/**
+ * The HTML motor card: wiring diagram, the motor's constants at a glance, each phase, the step-response fits drawn
+ * over their data, findings and what is still unknown.
+ */
+public final class MotorHtml {
+    private MotorHtml() {
+    }
+
+    /**
+     * A recorded current step response, for drawing under its fit.
+     *
+     * @param source   file name
+     * @param timeS    sample times, s
+     * @param currentA current, A
+     */
+    public record Trace(String source, double[] timeS, double[] currentA) {
+    }
+
+    /**
+     * Builds the card.
+     *
+     * @param traces the recorded step responses in the order of {@code card.stepResponses()}; may be shorter (a
+     *               fit without its trace is listed but not drawn)
+     */
+    public static HtmlReport report(String title, MotorCard card, List<Trace> traces) {
+        HtmlReport.Builder b = HtmlReport.builder("Motor card", title)
+                .meta("Layout", card.topology() + (card.wiring() == null ? "" : ", " + card.connection()))
+                .meta("Leads", String.join(", ", card.leads()));
+        boolean warn = card.findings().stream().anyMatch(f -> f.severity() == Severity.WARNING);
+        if (card.hasError()) {
+            Finding f = card.findings().stream().filter(x -> x.severity() == Severity.ERROR).findFirst().orElseThrow();
+            b.verdict(Status.FAIL, "Fault found", f.message());
+        } else {
+            String head = card.stepAngleDeg() == null ? card.topology() + " motor"
+                    : String.format(Locale.ROOT, "%s motor, %s\u00B0 step (%d steps/rev)", card.topology(),
+                    num(card.stepAngleDeg()), card.fullStepsPerRevolution());
+            b.verdict(warn || !card.unknowns().isEmpty() ? Status.WARN : Status.PASS, head,
+                    card.unknowns().isEmpty() ? null : card.unknowns().size() + " value(s) still unknown: see below.");
+        }
+        b.safety(SafetyNote.ENERGISED_COILS, SafetyNote.HOT_MOTOR);
+
+        b.section("The card");
+        Map<String, String> f = new LinkedHashMap<>();
+        put(f, "Step angle", card.stepAngleDeg(), "%s\u00B0");
+        put(f, "Rotor teeth", card.rotorTeeth() == null ? null : card.rotorTeeth().doubleValue(), "%s");
+        put(f, "Back-EMF constant Ke", card.keVsPerRad(), "%s V\u00B7s/rad");
+        put(f, "Torque constant Kt", card.ktNmPerA(), "%s N\u00B7m/A");
+        put(f, "Phase current", card.phaseCurrentA(), "%s A");
+        put(f, "Holding torque (est.)", card.holdingTorqueNm(), "%s N\u00B7m");
+        if (card.ratedCurrentMinA() != null && card.ratedCurrentMaxA() != null) {
+            f.put("Rated current (est.)", num(card.ratedCurrentMinA()) + "\u2013" + num(card.ratedCurrentMaxA()) + " A");
+        }
+        put(f, "Supply", card.supplyV(), "%s V");
+        put(f, "Suggested supply", card.suggestedSupplyV(), "%s V");
+        put(f, "Full current up to", card.fullCurrentRateFullStepsPerS(), "%s full steps/s");
+        put(f, "Natural frequency", card.naturalFrequencyHz(), "%s Hz");
+        b.facts(f);
+        if (card.phaseCurrentBasis() != null || card.ratedCurrentAssumption() != null) {
+            List<HtmlReport.Finding> basis = new ArrayList<>();
+            if (card.phaseCurrentBasis() != null) {
+                basis.add(new HtmlReport.Finding(Status.INFO, "Phase current: " + card.phaseCurrentBasis()));
+            }
+            if (card.ratedCurrentAssumption() != null) {
+                basis.add(new HtmlReport.Finding(Status.INFO, "Rated current: " + card.ratedCurrentAssumption()));
+            }
+            if (card.supplyBasis() != null) {
+                basis.add(new HtmlReport.Finding(Status.INFO, "Supply: " + card.supplyBasis()));
+            }
+            b.findings(basis);
+        }
+
+        if (card.wiring() != null && !card.phases().isEmpty()) {
+            b.section("How to wire it");
+            WiringDiagram d = diagram(card);
+            if (d != null) {
+                b.figure(d.toSvg(), "Driver connection (" + card.connection() + "). Direction: "
+                        + card.rotationConvention());
+            }
+        }
+
+        if (!card.phases().isEmpty()) {
+            b.section("Phases");
+            HtmlTable.Builder t = HtmlTable.builder(null, "Phase", "Coils (start \u2192 end)", "R", "L", "L/R",
+                    "Ke (V\u00B7s/rad)", "Orientation");
+            for (PhaseCard p : card.phases()) {
+                t.row(Cell.text(p.name()), Cell.text(String.join(", ", p.halfWindings().stream()
+                                .map(h -> h.startLead() + " \u2192 " + h.endLead()).toList())),
+                        Cell.number(ohm(p.resistanceOhm())), Cell.number(mh(p.inductanceH())),
+                        Cell.number(p.timeConstantS() == null ? "\u2014" : num(p.timeConstantS() * 1e3) + " ms"),
+                        Cell.number(p.keVsPerRad() == null ? "\u2014" : num(p.keVsPerRad())),
+                        Cell.text(p.polarityKnown() ? "measured" : "arbitrary"));
+            }
+            b.table(t.build());
+        }
+
+        if (!card.stepResponses().isEmpty()) {
+            b.section("Current step responses");
+            for (int k = 0; k < card.stepResponses().size(); k++) {
+                StepInput in = card.stepResponses().get(k);
+                StepResponseFit fit = in.fit();
+                String what = "Leads " + in.leads().first() + "\u2013" + in.leads().second()
+                        + (in.joinedLeads().isEmpty() ? "" : " (" + String.join("+", in.joinedLeads()) + " joined)");
+                String fitLabel = String.format(Locale.ROOT, "fit: \u03C4 %s ms%s", num(fit.timeConstantS() * 1e3),
+                        fit.inductanceH() == null ? "" : ", L " + mh(fit.inductanceH()));
+                if (k < traces.size()) {
+                    Trace tr = traces.get(k);
+                    double[] model = new double[tr.timeS().length];
+                    for (int i = 0; i < model.length; i++) {
+                        // The fitted model i0 + I∞·(1 − e^(−(t − t0)/τ)) of StepResponseFit, evaluated for drawing.
+                        double dt = tr.timeS()[i] - fit.stepTimeS();
+                        model[i] = fit.offsetA() + (dt > 0 ? fit.finalCurrentA() * -Math.expm1(-dt / fit.timeConstantS())
+                                : 0);
+                    }
+                    b.figure(XyChart.fitOverData("", "time (s)", "current (A)", "measured", tr.timeS(), tr.currentA(),
+                            fitLabel, tr.timeS(), model).toSvg(), what + ", " + tr.source() + ": measured current with"
+                            + " the fitted first-order rise drawn over it.");
+                }
+                Map<String, String> ff = new LinkedHashMap<>();
+                ff.put("Time constant \u03C4", num(fit.timeConstantS() * 1e3) + " ms");
+                ff.put("Final current", num(fit.finalCurrentA()) + " A");
+                ff.put("Inductance", mh(fit.inductanceH()));
+                ff.put("Loop resistance", ohm(fit.loopResistanceOhm()));
+                ff.put("Shape", fit.shape().name().toLowerCase(Locale.ROOT).replace('_', ' '));
+                ff.put("RMS residual", num(fit.rmsResidualA()) + " A");
+                b.paragraph(what);
+                b.facts(ff);
+            }
+        }
+
+        b.section("Findings and unknowns");
+        List<HtmlReport.Finding> fs = new ArrayList<>();
+        for (Finding x : card.findings()) {
+            fs.add(new HtmlReport.Finding(switch (x.severity()) {
+                case ERROR -> Status.FAIL;
+                case WARNING -> Status.WARN;
+                case INFO -> Status.INFO;
+            }, x.code() + ": " + x.message()));
+        }
+        for (String u : card.unknowns()) {
+            fs.add(new HtmlReport.Finding(Status.WARN, "Unknown: " + u));
+        }
+        if (fs.isEmpty()) {
+            fs.add(new HtmlReport.Finding(Status.PASS, "No findings; nothing left unknown."));
+        }
+        b.findings(fs);
+        return b.build();
+    }
+
+    /** The card's phases and wiring as a diagram; a phase's two coils sharing a lead are one tapped coil. */
+    static WiringDiagram diagram(MotorCard card) {
+        Wiring w = card.wiring();
+        WiringDiagram.Builder d = WiringDiagram.builder(connectionTitle(card.connection()) + ", " + card.topology());
+        for (PhaseCard p : card.phases()) {
+            List<HalfWinding> h = p.halfWindings();
+            if (h.size() == 2 && h.get(0).endLead().equals(h.get(1).startLead())) {
+                d.coil(p.name(), h.get(0).startLead(), h.get(1).endLead(), h.get(0).endLead());
+            } else {
+                for (HalfWinding c : h) {
+                    d.coil(p.name(), c.startLead(), c.endLead());
+                }
+            }
+        }
+        java.util.Set<String> done = new java.util.HashSet<>();
+        for (Terminal t : w.terminals()) {
+            DriverTerminal dt = DriverTerminal.parse(t.terminal());
+            for (String lead : t.leads()) {
+                // A tapped 5-lead common may be listed under both phases' COM: one lead, one destination.
+                if (done.add(lead)) {
+                    d.connect(lead, dt);
+                }
+            }
+        }
+        for (List<String> j : w.joinTogether()) {
+            d.tie(j.toArray(String[]::new));
+        }
+        for (String l : w.insulate()) {
+            d.insulate(l);
+        }
+        try {
+            return d.build();
+        } catch (IllegalArgumentException e) {
+            return null; // a lead the card could not place: the text card still lists the wiring
+        }
+    }
+
+    private static String connectionTitle(String c) {
+        return switch (c) {
+            case "series" -> "Bipolar series";
+            case "parallel" -> "Bipolar parallel";
+            case "half" -> "Bipolar half-coil";
+            case "unipolar" -> "Unipolar";
+            default -> c;
+        };
+    }
+
+    private static void put(Map<String, String> m, String label, Double v, String format) {
+        if (v != null) {
+            m.put(label, String.format(Locale.ROOT, format, num(v)));
+        }
+    }
+
+    private static String ohm(Double v) {
+        return v == null ? "\u2014" : num(v) + " \u03A9";
+    }
+
+    private static String mh(Double h) {
+        return h == null ? "\u2014" : num(h * 1e3) + " mH";
+    }
+
+    static String num(double v) {
+        if (!Double.isFinite(v)) {
+            return "\u2014";
+        }
+        String s = String.format(Locale.ROOT, "%.4g", v);
+        if (s.contains(".") && !s.contains("e")) {
+            s = s.replaceAll("0+$", "").replaceAll("\\.$", "");
+        }
+        return s;
+    }
+}

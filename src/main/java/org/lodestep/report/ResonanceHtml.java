@@ -1,0 +1,303 @@
+package org.lodestep.report;
+
+import java.util.ArrayList;
+import java.util.LinkedHashMap;
+import java.util.List;
+import java.util.Locale;
+import java.util.Map;
+
+import org.lodestep.report.html.Cell;
+import org.lodestep.report.html.HeatMapChart;
+import org.lodestep.report.html.HtmlReport;
+import org.lodestep.report.html.HtmlTable;
+import org.lodestep.report.html.SafetyNote;
+import org.lodestep.report.html.Status;
+import org.lodestep.report.html.XyChart;
+import org.lodestep.resonance.AvoidList;
+import org.lodestep.resonance.AvoidRange;
+import org.lodestep.resonance.BandClass;
+import org.lodestep.resonance.RateUnits;
+import org.lodestep.resonance.ResonanceBand;
+import org.lodestep.resonance.ResponsePoint;
+import org.lodestep.resonance.RingDownResult;
+import org.lodestep.resonance.SweepResult;
+import org.lodestep.signal.Spectrogram;
+import org.lodestep.signal.SpectrumScaling;
+
+/**
+ * HTML reports of the resonance commands: a sweep (response curve with its bands shaded and labelled in the user's
+ * units, the spectrogram against step rate, the avoid-list) and a ring-down (the fitted decay over the data).
+ */
+public final class ResonanceHtml {
+    /** Levels shown in the spectrogram: this many dB below its strongest cell, darker for stronger. */
+    static final double SPECTROGRAM_RANGE_DB = 60;
+
+    private ResonanceHtml() {
+    }
+
+    /**
+     * The report of a sweep.
+     *
+     * @param columnRatesFullStepsPerS the step rate at each spectrogram column (from the sweep law), or null when the
+     *                                 rate is known only per segment (step-pulse channel): the map is then drawn over
+     *                                 time
+     */
+    public static HtmlReport sweep(ResonanceText.SweepHeader h, SweepResult r, RateUnits u, AvoidList avoid,
+                                   double[] columnRatesFullStepsPerS) {
+        String unit = h.unit() == null || h.unit().isBlank() ? "channel unit" : h.unit();
+        HtmlReport.Builder b = HtmlReport.builder("Resonance sweep", h.source())
+                .meta("Channel", h.channel() + " (" + unit + ")")
+                .meta("Step rate", h.rateLaw())
+                .meta("Units", u.microsteps() + " pulses per full step, " + u.fullStepsPerRev() + " full steps/rev"
+                        + (u.hasTravel() ? String.format(Locale.ROOT, ", %s mm/rev", num(u.travelMmPerRev())) : ""))
+                .meta("Natural frequency", Double.isNaN(r.naturalFrequencyHz()) ? "unknown"
+                        : String.format(Locale.ROOT, "%.1f Hz (%s)", r.naturalFrequencyHz(), r.naturalFrequencySource()))
+                .meta("Analysed", String.format(Locale.ROOT, "%.1f s at %s Hz, %d segments", r.durationS(),
+                        num(h.sampleRateHz()), r.segments()));
+        if (r.bands().isEmpty()) {
+            b.verdict(Status.PASS, "No resonance found in the swept range",
+                    "No band rises over the baseline of the response.");
+        } else {
+            ResonanceBand worst = r.strongestBand();
+            b.verdict(avoid.ranges().isEmpty() ? Status.WARN : Status.FAIL,
+                    r.bands().size() + (r.bands().size() == 1 ? " resonance band" : " resonance bands") + " found",
+                    "Strongest at " + rateText(u, worst.peakFullStepsPerS()) + ".");
+        }
+        b.safety(SafetyNote.MOVING_AXIS, SafetyNote.HOT_MOTOR);
+
+        b.section("Response against step rate");
+        b.figure(responseChart(r, u, unit).toSvg(), "RMS vibration against full-step rate; each band is shaded and"
+                + " labelled with its range in the units you program (" + programUnit(u) + ", rpm"
+                + (u.hasTravel() ? ", mm/s" : "") + "). Solid edges: low-speed resonance; dashed: mid-band"
+                + " instability; dotted: unclassified.");
+        if (r.spectrogram() != null && r.spectrogram().columnCount() >= 2) {
+            b.figure(spectrogram(r, unit, columnRatesFullStepsPerS).toSvg(), columnRatesFullStepsPerS != null
+                    ? "Spectrogram of the sweep against step rate: ridges rising with the rate are the stepping"
+                    + " orders, a horizontal ridge is a fixed mechanical resonance. Pale is quiet, dark is loud."
+                    : "Spectrogram of the sweep over time (the rate came from step pulses, known per segment only)."
+                    + " Pale is quiet, dark is loud.");
+        }
+
+        if (!r.bands().isEmpty()) {
+            b.section("Bands");
+            HtmlTable.Builder t = HtmlTable.builder(null, "#", "Kind", "Full steps/s", programUnit(u), "rpm",
+                    "Peak level", "Over baseline", "Vibrates at");
+            int i = 1;
+            for (ResonanceBand band : r.bands()) {
+                t.row(band.bandClass() == BandClass.LOW_SPEED_RESONANCE ? Status.FAIL : Status.WARN,
+                        Cell.text("R" + i++), Cell.status(status(band.bandClass()), kind(band)),
+                        Cell.number(range(band.startFullStepsPerS(), band.endFullStepsPerS())),
+                        Cell.number(range(u.pulsesPerS(band.startFullStepsPerS()), u.pulsesPerS(band.endFullStepsPerS()))),
+                        Cell.number(range(u.rpm(band.startFullStepsPerS()), u.rpm(band.endFullStepsPerS()))),
+                        Cell.number(sig(band.peakLevel()) + " " + unit),
+                        Cell.number(String.format(Locale.ROOT, "%.1f dB", band.excessDb())),
+                        Cell.number(Double.isNaN(band.mechanicalFrequencyHz()) ? "\u2014"
+                                : String.format(Locale.ROOT, "%.1f Hz", band.mechanicalFrequencyHz())));
+            }
+            b.table(t.build());
+        }
+        if (!avoid.ranges().isEmpty()) {
+            b.section("Rates to avoid or cross quickly");
+            HtmlTable.Builder t = HtmlTable.builder(null, "Full steps/s", programUnit(u), "rpm",
+                    u.hasTravel() ? "mm/s" : "Oscillates at", "Cross at least at", "Advice");
+            for (AvoidRange a : avoid.ranges()) {
+                t.row(Cell.number(range(a.fromFullStepsPerS(), a.toFullStepsPerS())),
+                        Cell.number(range(a.fromPulsesPerS(), a.toPulsesPerS())),
+                        Cell.number(range(a.fromRpm(), a.toRpm())),
+                        Cell.number(u.hasTravel() ? range(a.fromMmPerS(), a.toMmPerS())
+                                : Double.isNaN(a.oscillationHz()) ? "\u2014"
+                                : String.format(Locale.ROOT, "%.1f Hz", a.oscillationHz())),
+                        Cell.number(Double.isNaN(a.minAccelerationFullStepsPerS2()) ? "\u2014"
+                                : sig(a.minAccelerationFullStepsPerS2()) + " full steps/s\u00B2"),
+                        Cell.text(a.advice()));
+            }
+            b.table(t.build());
+            List<HtmlReport.Finding> notes = new ArrayList<>();
+            for (String n : avoid.notes()) {
+                notes.add(new HtmlReport.Finding(Status.INFO, n));
+            }
+            if (!notes.isEmpty()) {
+                b.findings(notes);
+            }
+        }
+        for (String line : ResonanceSafety.lines()) {
+            b.paragraph(line);
+        }
+        return b.build();
+    }
+
+    private static org.lodestep.report.html.Chart responseChart(SweepResult r, RateUnits u, String unit) {
+        double[] x = new double[r.response().size()];
+        double[] y = new double[x.length];
+        for (int i = 0; i < x.length; i++) {
+            ResponsePoint p = r.response().get(i);
+            x[i] = p.rateFullStepsPerS();
+            y[i] = p.rms();
+        }
+        XyChart.Builder c = XyChart.builder("", "step rate (full steps/s)", "vibration (" + unit + " RMS)")
+                .lineWithPoints("response", x, y).yFromZero(true);
+        int i = 1;
+        for (ResonanceBand band : r.bands()) {
+            c.band(band.startFullStepsPerS(), band.endFullStepsPerS(), "R" + i++ + " " + bandLabel(u, band),
+                    status(band.bandClass()));
+        }
+        if (!Double.isNaN(r.naturalFrequencyHz())) {
+            c.verticalLine(r.naturalFrequencyHz(), String.format(Locale.ROOT, "f\u2099 %.0f Hz", r.naturalFrequencyHz()),
+                    Status.INFO);
+        }
+        return c.describe("Response against step rate with " + r.bands().size() + " band(s) marked.").build();
+    }
+
+    private static org.lodestep.report.html.Chart spectrogram(SweepResult r, String unit, double[] rates) {
+        Spectrogram s = r.spectrogram();
+        int cols = s.columnCount();
+        double[] first = s.column(0, SpectrumScaling.POWER);
+        int rows = first.length;
+        double[] freq = new double[rows];
+        for (int k = 0; k < rows; k++) {
+            freq[k] = k * s.binHz();
+        }
+        // Columns ordered by increasing x (a sweep may run downwards).
+        Integer[] order = new Integer[cols];
+        double[] xs = new double[cols];
+        for (int c = 0; c < cols; c++) {
+            order[c] = c;
+            xs[c] = rates != null ? rates[c] : s.columnTimeS(c);
+        }
+        java.util.Arrays.sort(order, (a, b2) -> Double.compare(xs[a], xs[b2]));
+        List<Integer> keep = new ArrayList<>();
+        for (int idx : order) {
+            if (Double.isFinite(xs[idx]) && (keep.isEmpty() || xs[idx] > xs[keep.get(keep.size() - 1)])) {
+                keep.add(idx);
+            }
+        }
+        double[] x = new double[keep.size()];
+        double[][] level = new double[keep.size()][];
+        double max = Double.NEGATIVE_INFINITY;
+        for (int i = 0; i < keep.size(); i++) {
+            x[i] = xs[keep.get(i)];
+            double[] p = s.column(keep.get(i), SpectrumScaling.POWER);
+            level[i] = new double[rows];
+            for (int k = 0; k < rows; k++) {
+                // 10·log10 of the mean square: dB re 1 unit RMS.
+                level[i][k] = p[k] > 0 ? 10 * Math.log10(p[k]) : Double.NaN;
+                if (Double.isFinite(level[i][k])) {
+                    max = Math.max(max, level[i][k]);
+                }
+            }
+        }
+        HeatMapChart.Builder h = HeatMapChart.builder("", rates != null ? "step rate (full steps/s)" : "time (s)", x,
+                "frequency (Hz)", freq, "level (dB re 1 " + unit + " RMS)", level);
+        if (Double.isFinite(max)) {
+            h.levelRange(max - SPECTROGRAM_RANGE_DB, max);
+        }
+        if (rates != null) {
+            int i = 1;
+            for (ResonanceBand band : r.bands()) {
+                h.band(band.startFullStepsPerS(), band.endFullStepsPerS(), "R" + i++, status(band.bandClass()));
+            }
+        }
+        return h.build();
+    }
+
+    /**
+     * The report of a ring-down fit: the measured response and the fitted decay envelope
+     * ±A·e^(−σ(t − t0)) around the settled value (the fit's own model, evaluated for drawing).
+     */
+    public static HtmlReport ringDown(String source, String channel, String unit, double[] timeS, double[] x,
+                                      RingDownResult r) {
+        String u = unit == null || unit.isBlank() ? "channel unit" : unit;
+        HtmlReport.Builder b = HtmlReport.builder("Ring-down", source)
+                .meta("Channel", channel + " (" + u + ")")
+                .meta("Fitted from", String.format(Locale.ROOT, "t = %.4f s, %.1f periods", r.startTimeS(),
+                        r.periodsFitted()));
+        boolean good = r.rSquared() >= 0.9;
+        b.verdict(good ? Status.PASS : Status.WARN, String.format(Locale.ROOT,
+                "Natural frequency %.1f Hz, damping ratio %.3f", r.naturalFrequencyHz(), r.dampingRatio()),
+                good ? String.format(Locale.ROOT, "Low-speed resonance expected near %.0f, %.0f and %.0f full steps/s.",
+                        r.naturalFrequencyHz(), r.naturalFrequencyHz() / 2, r.naturalFrequencyHz() / 3)
+                        : "The fit is poor (R\u00B2 below 0.9): the response is not a single damped oscillation.");
+        b.safety(SafetyNote.ENERGISED_COILS);
+        double[] env = new double[timeS.length];
+        double[] envLow = new double[timeS.length];
+        for (int i = 0; i < timeS.length; i++) {
+            double dt = timeS[i] - r.startTimeS();
+            double a = dt >= 0 ? r.amplitude() * Math.exp(-r.decayRatePerS() * dt) : Double.NaN;
+            env[i] = r.offset() + a;
+            envLow[i] = r.offset() - a;
+        }
+        String fit = String.format(Locale.ROOT, "fitted envelope: f\u2099 %.1f Hz, \u03B6 %.3f", r.naturalFrequencyHz(),
+                r.dampingRatio());
+        b.section("Response and fit");
+        b.figure(XyChart.builder("", "time (s)", channel + " (" + u + ")")
+                .points("measured", timeS, x).line(fit, timeS, env).sameAsPrevious(timeS, envLow)
+                .describe("Measured ring-down with the fitted exponential envelope drawn over it.").build().toSvg(),
+                "The measured response (points, or a thin line when dense) and the fitted decay envelope (dashed).");
+        Map<String, String> facts = new LinkedHashMap<>();
+        facts.put("Natural frequency", String.format(Locale.ROOT, "%.2f Hz", r.naturalFrequencyHz()));
+        facts.put("Damped frequency", String.format(Locale.ROOT, "%.2f Hz", r.dampedFrequencyHz()));
+        facts.put("Damping ratio \u03B6", String.format(Locale.ROOT, "%.4f", r.dampingRatio()));
+        facts.put("Quality factor Q", String.format(Locale.ROOT, "%.1f", r.qualityFactor()));
+        facts.put("Decay rate \u03C3", String.format(Locale.ROOT, "%.2f 1/s", r.decayRatePerS()));
+        facts.put("Fit quality R\u00B2", String.format(Locale.ROOT, "%.4f", r.rSquared()));
+        facts.put("RMS residual", sig(r.rmsResidual()) + " " + u);
+        b.facts(facts);
+        return b.build();
+    }
+
+    private static Status status(BandClass c) {
+        return switch (c) {
+            case LOW_SPEED_RESONANCE -> Status.FAIL;
+            case MID_BAND_INSTABILITY -> Status.WARN;
+            case UNCLASSIFIED -> Status.INFO;
+        };
+    }
+
+    private static String kind(ResonanceBand b) {
+        return switch (b.bandClass()) {
+            case LOW_SPEED_RESONANCE -> b.subharmonic() > 1 ? "low-speed resonance (f\u2099/" + b.subharmonic() + ")"
+                    : "low-speed resonance";
+            case MID_BAND_INSTABILITY -> "mid-band instability";
+            case UNCLASSIFIED -> "unclassified";
+        };
+    }
+
+    private static String bandLabel(RateUnits u, ResonanceBand b) {
+        String s = u.microsteps() > 1
+                ? range(u.pulsesPerS(b.startFullStepsPerS()), u.pulsesPerS(b.endFullStepsPerS())) + " pulses/s"
+                : range(b.startFullStepsPerS(), b.endFullStepsPerS()) + " steps/s";
+        return s + ", " + range(u.rpm(b.startFullStepsPerS()), u.rpm(b.endFullStepsPerS())) + " rpm";
+    }
+
+    private static String rateText(RateUnits u, double fullStepsPerS) {
+        return String.format(Locale.ROOT, "%s full steps/s (%s pulses/s, %s rpm%s)", sig(fullStepsPerS),
+                sig(u.pulsesPerS(fullStepsPerS)), sig(u.rpm(fullStepsPerS)),
+                u.hasTravel() ? ", " + sig(u.mmPerS(fullStepsPerS)) + " mm/s" : "");
+    }
+
+    private static String programUnit(RateUnits u) {
+        return "pulses/s at " + u.microsteps() + "\u00D7";
+    }
+
+    private static String range(double a, double b) {
+        return sig(a) + "\u2013" + sig(b);
+    }
+
+    static String sig(double v) {
+        if (!Double.isFinite(v)) {
+            return "\u2014";
+        }
+        double a = Math.abs(v);
+        if (a >= 100) {
+            return String.format(Locale.ROOT, "%.0f", v);
+        }
+        if (a >= 10) {
+            return String.format(Locale.ROOT, "%.1f", v);
+        }
+        return String.format(Locale.ROOT, "%.3g", v);
+    }
+
+    private static String num(double v) {
+        return v == Math.rint(v) ? String.format(Locale.ROOT, "%.0f", v) : String.format(Locale.ROOT, "%.4g", v);
+    }
+}

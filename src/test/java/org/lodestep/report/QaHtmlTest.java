@@ -1,0 +1,75 @@
+package org.lodestep.report;
+
+import static org.junit.jupiter.api.Assertions.assertEquals;
+import static org.junit.jupiter.api.Assertions.assertTrue;
+
+import java.nio.file.Path;
+import java.util.List;
+
+import org.junit.jupiter.api.BeforeAll;
+import org.junit.jupiter.api.Test;
+import org.junit.jupiter.api.io.TempDir;
+import org.w3c.dom.Document;
+
+import com.fasterxml.jackson.databind.JsonNode;
+
+class QaHtmlTest {
+    private static final Path DIR = Path.of("sample-captures", "qa");
+    @TempDir
+    static Path tmp;
+    private static Path db;
+    private static Document lotCheck;
+
+    @BeforeAll
+    static void checkTheSampleLot() throws Exception {
+        db = tmp.resolve("qa.sqlite");
+        Path html = tmp.resolve("check.html");
+        // The sample lot has failing motors: exit code 3, as the QA demo expects.
+        lotCheck = ReportCli.report(html, 3, "qa", "check", "--spec", DIR.resolve("kv-4218-m.toml").toString(),
+                "--lot", "L2607", "--serials", DIR.resolve("lot-L2607-serials.txt").toString(),
+                "--resistance-pattern", DIR.resolve("{serial}.csv").toString(),
+                "--meter-log", DIR.resolve("lot-L2607-meter-log.csv").toString(), "--ambient-c", "22",
+                "--operator", "R. <Okafor> & co", "--station", "hf-2", "--db", db.toString(),
+                "--report", html.toString());
+    }
+
+    @Test
+    void lotCheckListsEveryMotorWithItsVerdictAndEveryCheck() {
+        List<String> serials = new java.util.ArrayList<>();
+        for (int i = 117; i <= 128; i++) {
+            serials.add("KV24-00" + i);
+        }
+        String cells = String.join("|", ReportCli.texts(lotCheck, ReportCli.XHTML, "td"));
+        serials.forEach(s -> assertTrue(cells.contains(s), s));
+        assertTrue(ReportCli.verdictClass(lotCheck).contains("st-fail"));
+        assertTrue(cells.contains("\u2716 fail") && cells.contains("\u2714 pass"), cells);
+        // The operator's name is shown as typed, markup characters and all.
+        assertTrue(ReportCli.texts(lotCheck, ReportCli.XHTML, "dd").contains("R. <Okafor> & co"));
+        assertTrue(String.join(" ", ReportCli.texts(lotCheck, ReportCli.XHTML, "aside")).contains("local electrical"));
+    }
+
+    @Test
+    void lotReportHasAHistogramAndIndividualsAndMovingRangeChartsPerParameter(@TempDir Path out) throws Exception {
+        Path html = out.resolve("lot.html");
+        Document d = ReportCli.report(html, 0, "qa", "report", "--lot", "L2607", "--db", db.toString(),
+                "--report", html.toString());
+        JsonNode json = Json.mapper().readTree(ReportCli.run("qa", "report", "--lot", "L2607", "--db",
+                db.toString(), "--json").out());
+        JsonNode params = json.at("/summary/parameters");
+        int charted = 0;
+        for (JsonNode p : params) {
+            charted += p.get("n").asInt() >= 2 ? 3 : 1;
+        }
+        assertEquals(charted, ReportCli.count(d, ReportCli.SVG, "svg"));
+        List<String> svgText = ReportCli.texts(d, ReportCli.SVG, "text");
+        // Every serial the statistics put outside a control limit is named on its chart.
+        for (JsonNode p : params) {
+            for (JsonNode o : p.get("out_of_control")) {
+                String serial = o.get("serial").asText();
+                assertTrue(svgText.stream().anyMatch(t -> t.startsWith(serial)), serial + " named on a chart");
+            }
+        }
+        assertTrue(svgText.stream().anyMatch(t -> t.startsWith("USL ")), svgText.toString());
+        assertTrue(svgText.stream().anyMatch(t -> t.startsWith("UCL ")), svgText.toString());
+    }
+}
