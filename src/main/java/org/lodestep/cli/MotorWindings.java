@@ -12,7 +12,6 @@ import org.lodestep.motor.CoilResistance;
 import org.lodestep.motor.Finding;
 import org.lodestep.motor.LeadPair;
 import org.lodestep.motor.Severity;
-import org.lodestep.motor.Topology;
 import org.lodestep.motor.WindingInput;
 import org.lodestep.wiring.Identification;
 import org.lodestep.wiring.IdentifySettings;
@@ -50,7 +49,7 @@ final class MotorWindings {
                 add(coils, findings, w.ends().get(0), w.ends().get(1), w.resistanceOhm());
             }
         }
-        return new WindingInput(Topology.valueOf(id.topology().name()), id.leads(), coils, findings);
+        return new WindingInput(id.topology(), id.leads(), coils, findings);
     }
 
     private static void add(List<CoilResistance> coils, List<Finding> findings, String a, String b, double ohm) {

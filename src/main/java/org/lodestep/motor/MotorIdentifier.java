@@ -8,6 +8,7 @@ import java.util.Map;
 import java.util.Set;
 
 import org.lodestep.motor.PhaseAssignment.OrientedCoil;
+import org.lodestep.wiring.Topology;
 
 /**
  * Combines whatever is known about a motor (resistances, step responses, back-EMF) into a {@link MotorCard}, and says

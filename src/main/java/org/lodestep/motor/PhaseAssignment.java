@@ -10,6 +10,8 @@ import java.util.Map;
 import java.util.Set;
 import java.util.TreeSet;
 
+import org.lodestep.wiring.Topology;
+
 /**
  * Puts the coils of a motor into phases A and B and orients them, from the back-EMF phasing when there is one,
  * otherwise from the resistance topology alone (possible for 4- and 6-lead motors only, with arbitrary polarity).

@@ -3,6 +3,8 @@ package org.lodestep.motor;
 import java.util.List;
 import java.util.Objects;
 
+import org.lodestep.wiring.Topology;
+
 /**
  * What a resistance matrix told about the windings, in the terms this package needs: the topology, every lead
  * label, the coils, and the findings of that analysis (an open winding arrives here as an error finding).

@@ -234,7 +234,8 @@ public final class VirtualRig implements Runnable {
     private void caps(int tag) throws IOException {
         reply(tag, "OK leads=" + motor.leadCount() + " labels=" + String.join(",", motor.labels())
                 + " measure=res,ins,step,emf,sweep ins_volts=100,250,500 max_rate_hz=" + MAX_RATE_HZ
-                + " max_frames=" + MAX_FRAMES + " max_step_a=5 watchdog_ms=" + WATCHDOG_MS + " resend_depth=all"
+                + " max_frames=" + MAX_FRAMES + " max_step_a=5 drive_series_ohm=" + BenchMotor.DRIVE_SERIES_OHM
+                + " watchdog_ms=" + WATCHDOG_MS + " resend_depth=all"
                 + " channels=current:a,voltage:v,emf:v,accel:g,step:v scenario=" + scenarioName + " motor_serial="
                 + motor.scenario().serial());
     }

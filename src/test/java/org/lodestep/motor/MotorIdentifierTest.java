@@ -10,6 +10,8 @@ import java.util.List;
 
 import org.junit.jupiter.api.Test;
 
+import org.lodestep.wiring.Topology;
+
 class MotorIdentifierTest {
     private static final double FS = 10_000;
     // 8-lead motor with shuffled labels (see BackEmfAnalyzerTest): A = 1-2 (start 1) and 5-6 (start 6);

@@ -8,6 +8,7 @@ import java.util.List;
 
 import org.junit.jupiter.api.Test;
 import org.lodestep.motor.PhaseAssignment.OrientedCoil;
+import org.lodestep.wiring.Topology;
 
 class PhaseAssignmentTest {
     private static final double FS = 10_000;

@@ -12,7 +12,7 @@ import org.lodestep.motor.IdentifyRequest;
 import org.lodestep.motor.LeadPair;
 import org.lodestep.motor.MotorCard;
 import org.lodestep.motor.MotorIdentifier;
-import org.lodestep.motor.Topology;
+import org.lodestep.wiring.Topology;
 import org.lodestep.motor.WindingInput;
 
 class MotorJsonTest {
