@@ -34,7 +34,7 @@ with open(sys.argv[1], "wb") as f:
 PY
 fi
 start=$(date +%s.%N)
-/usr/bin/time -f "peak resident memory %M KiB" java -Xmx256m -jar "$jar" resonance sweep "$wav" \
+/usr/bin/time -f "peak resident memory %M KiB" java -Xmx256m ${JAVA_OPTS:-} -jar "$jar" resonance sweep "$wav" \
   --sweep linear --start 20 --end 2000 --duration 3600 > "$dir/hour.txt"
 end=$(date +%s.%N)
 python3 -c "import sys; s=float(sys.argv[2])-float(sys.argv[1]); print(f'{s:.1f} s, {184320000/s/1e6:.1f} million samples/s')" "$start" "$end"

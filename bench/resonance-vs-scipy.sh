@@ -9,4 +9,6 @@ jar="${LODESTEP_JAR:-$here/target/lodestep.jar}"
 if [ ! -f "$jar" ]; then
   (cd "$here" && mvn -q -B -o -DskipTests package)
 fi
+# The launcher's default JVM options (see ./lodestep), so the figures are what a user's command costs.
+export JAVA_OPTS="${JAVA_OPTS--XX:TieredStopAtLevel=1}"
 python3 "$here/bench/resonance_bench.py" "$jar" "${BENCH_DIR:-/tmp/lodestep-bench}" "${1:-3}"
