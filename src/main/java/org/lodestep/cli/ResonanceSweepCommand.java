@@ -266,6 +266,9 @@ final class ResonanceSweepCommand implements Callable<Integer> {
     }
 
     private static long countFrames(SampleStream s) throws IOException, InputFormatException {
+        if (s.knownFrameCount() >= 0) {
+            return s.knownFrameCount(); // WAV and rig captures state it: no need to read the data twice
+        }
         double[][] buf = new double[s.channels().size()][BLOCK_FRAMES];
         long n = 0;
         int got;
