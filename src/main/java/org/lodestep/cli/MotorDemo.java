@@ -6,6 +6,8 @@ import java.nio.file.Path;
 import java.util.ArrayList;
 import java.util.List;
 
+import org.lodestep.report.OutputFile;
+
 /**
  * Demo section: a salvaged 8-lead motor with taped lead numbers is identified from its resistance matrix, one step
  * response per coil, one series step response and a hand-turned back-EMF capture (files in
@@ -46,10 +48,7 @@ final class MotorDemo implements DemoCommand.Section {
             code = Math.max(code, Main.run(jw, err, jsonArgs.toArray(String[]::new)));
         }
         Path card = outDir.resolve("motor-card.json");
-        Path tmp = Files.createTempFile(outDir, "motor-card", ".tmp");
-        Files.writeString(tmp, json.toString());
-        Files.move(tmp, card, java.nio.file.StandardCopyOption.REPLACE_EXISTING,
-                java.nio.file.StandardCopyOption.ATOMIC_MOVE);
+        OutputFile.write(card, json.toString());
         out.println("(the same card as JSON: " + card + ")");
 
         // The same job on the virtual rig: a shuffled 8-lead motor with colour-coded leads, measured end to end.

@@ -11,6 +11,7 @@ import org.lodestep.qa.RecordStore;
 import org.lodestep.qa.StoredRecord;
 import org.lodestep.qa.Verdict;
 import org.lodestep.report.Json;
+import org.lodestep.report.OutputFile;
 import org.lodestep.report.QaText;
 
 import picocli.CommandLine.Command;
@@ -78,7 +79,7 @@ final class QaCertificateCommand implements Callable<Integer> {
             text = QaText.certificate(history);
         }
         if (outFile != null) {
-            QaExportCommand.writeAtomically(outFile, text);
+            OutputFile.write(outFile, text);
             out.println("wrote the certificate of " + serial.replaceAll("\\p{Cntrl}", "?") + " (record #" + latest.id()
                     + ", " + latest.submission().verdict() + ") to " + outFile);
         } else {

@@ -1,12 +1,7 @@
 package org.lodestep.cli;
 
-import java.io.IOException;
 import java.io.PrintWriter;
-import java.io.Writer;
-import java.nio.charset.StandardCharsets;
-import java.nio.file.Files;
 import java.nio.file.Path;
-import java.nio.file.StandardCopyOption;
 import java.util.LinkedHashMap;
 import java.util.List;
 import java.util.Map;
@@ -15,6 +10,7 @@ import java.util.concurrent.Callable;
 import org.lodestep.qa.RecordStore;
 import org.lodestep.qa.StoredRecord;
 import org.lodestep.report.Json;
+import org.lodestep.report.OutputFile;
 import org.lodestep.report.QaCsv;
 
 import picocli.CommandLine.Command;
@@ -53,7 +49,7 @@ final class QaExportCommand implements Callable<Integer> {
         }
         java.io.StringWriter csv = new java.io.StringWriter();
         QaCsv.write(records, csv);
-        writeAtomically(outFile, csv.toString());
+        OutputFile.write(outFile, csv.toString());
         int rows = records.stream().mapToInt(r -> r.submission().checks().size()).sum();
         PrintWriter out = spec.commandLine().getOut();
         if (json) {
@@ -69,18 +65,4 @@ final class QaExportCommand implements Callable<Integer> {
         return ExitCode.OK;
     }
 
-    /** Temporary file in the same folder, then an atomic move: a reader never sees half a file. */
-    static void writeAtomically(Path target, String text) throws IOException {
-        Path dir = target.toAbsolutePath().getParent();
-        Files.createDirectories(dir);
-        Path tmp = Files.createTempFile(dir, "." + target.getFileName() + ".", ".tmp");
-        try {
-            try (Writer w = Files.newBufferedWriter(tmp, StandardCharsets.UTF_8)) {
-                w.write(text);
-            }
-            Files.move(tmp, target, StandardCopyOption.ATOMIC_MOVE, StandardCopyOption.REPLACE_EXISTING);
-        } finally {
-            Files.deleteIfExists(tmp);
-        }
-    }
 }

@@ -2,10 +2,7 @@ package org.lodestep.cli;
 
 import java.io.IOException;
 import java.io.PrintWriter;
-import java.nio.charset.StandardCharsets;
-import java.nio.file.Files;
 import java.nio.file.Path;
-import java.nio.file.StandardCopyOption;
 import java.util.List;
 import java.util.Locale;
 import java.util.concurrent.Callable;
@@ -15,6 +12,7 @@ import org.lodestep.capture.Channel;
 import org.lodestep.capture.InputFormatException;
 import org.lodestep.capture.SampleStream;
 import org.lodestep.capture.SweepProfile;
+import org.lodestep.report.OutputFile;
 import org.lodestep.report.ResonanceHtml;
 import org.lodestep.report.ResonanceJson;
 import org.lodestep.report.ResonanceText;
@@ -227,7 +225,7 @@ final class ResonanceSweepCommand implements Callable<Integer> {
         AvoidList avoid = usage(() -> Recommendations.avoidList(result.bands(), units, result.naturalFrequencyHz(),
                 dampingRatio == null ? Double.NaN : dampingRatio, crossingPeriods, margin));
         if (avoidListFile != null) {
-            writeAtomically(avoidListFile, ResonanceJson.avoidList(avoid));
+            OutputFile.write(avoidListFile, ResonanceJson.avoidList(avoid) + System.lineSeparator());
         }
         ResonanceText.SweepHeader header = new ResonanceText.SweepHeader(source, vibName, unit,
                 sampleRateHz, lawText);
@@ -308,19 +306,6 @@ final class ResonanceSweepCommand implements Callable<Integer> {
 
     private static String fmt(double v) {
         return v == Math.rint(v) ? String.format(Locale.ROOT, "%.0f", v) : String.format(Locale.ROOT, "%.4g", v);
-    }
-
-    /** Writes a whole file or nothing: a temporary file in the same folder, then an atomic move. */
-    static void writeAtomically(Path target, String text) throws IOException {
-        Path abs = target.toAbsolutePath();
-        Path dir = abs.getParent();
-        Path tmp = Files.createTempFile(dir, abs.getFileName().toString(), ".tmp");
-        try {
-            Files.writeString(tmp, text + System.lineSeparator(), StandardCharsets.UTF_8);
-            Files.move(tmp, abs, StandardCopyOption.ATOMIC_MOVE, StandardCopyOption.REPLACE_EXISTING);
-        } finally {
-            Files.deleteIfExists(tmp);
-        }
     }
 
     /** Runs a constructor or engine call whose IllegalArgumentException is the user's option at fault. */

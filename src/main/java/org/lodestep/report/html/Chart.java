@@ -15,6 +15,8 @@ import org.jfree.chart.JFreeChart;
 import org.jfree.svg.SVGGraphics2D;
 import org.jfree.svg.ViewBox;
 
+import org.lodestep.report.OutputFile;
+
 /**
  * A finished chart, ready to render as inline SVG (through JFreeSVG) or as PNG at its design size.
  *
@@ -104,11 +106,11 @@ public final class Chart {
 
     /** Writes the chart as a PNG file, whole or not at all. */
     public void writePng(Path file, double scale) throws IOException {
-        AtomicWrite.write(file, toPng(scale));
+        OutputFile.write(file, toPng(scale));
     }
 
     /** Writes the chart as a standalone SVG file, whole or not at all. */
     public void writeSvg(Path file) throws IOException {
-        AtomicWrite.write(file, toSvg().asDocument().getBytes(StandardCharsets.UTF_8));
+        OutputFile.write(file, toSvg().asDocument().getBytes(StandardCharsets.UTF_8));
     }
 }

@@ -8,6 +8,8 @@ import java.util.List;
 import java.util.Map;
 import java.util.Objects;
 
+import org.lodestep.report.OutputFile;
+
 /**
  * One self-contained HTML report: inline CSS and SVG, no scripts, no network. The markup is XHTML-compatible (it
  * parses as XML), so tests and other tools can read it with any XML parser.
@@ -42,7 +44,7 @@ public final class HtmlReport {
 
     /** Writes the report as UTF-8, whole or not at all (temporary file in the same folder, then an atomic move). */
     public void write(Path file) throws IOException {
-        AtomicWrite.write(file, html.getBytes(StandardCharsets.UTF_8));
+        OutputFile.write(file, html.getBytes(StandardCharsets.UTF_8));
     }
 
     /** One line of a findings list: a status and a sentence. */

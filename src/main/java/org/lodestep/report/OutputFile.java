@@ -1,18 +1,29 @@
-package org.lodestep.report.html;
+package org.lodestep.report;
 
 import java.io.IOException;
+import java.nio.charset.StandardCharsets;
 import java.nio.file.AtomicMoveNotSupportedException;
 import java.nio.file.Files;
 import java.nio.file.Path;
 import java.nio.file.StandardCopyOption;
 import java.nio.file.attribute.PosixFilePermissions;
 
-/** Writes a file whole or not at all: a temporary file in the same folder, then an atomic move over the target. */
-final class AtomicWrite {
-    private AtomicWrite() {
+/**
+ * Writes an output file (report, avoid-list, export, certificate) whole or not at all: a temporary file in the same
+ * folder, then an atomic move over the target, so a reader never sees half a file and a failed write leaves the old
+ * one in place.
+ */
+public final class OutputFile {
+    private OutputFile() {
     }
 
-    static void write(Path target, byte[] content) throws IOException {
+    /** Writes text as UTF-8. */
+    public static void write(Path target, String text) throws IOException {
+        write(target, text.getBytes(StandardCharsets.UTF_8));
+    }
+
+    /** Writes bytes. */
+    public static void write(Path target, byte[] content) throws IOException {
         Path abs = target.toAbsolutePath();
         Path dir = abs.getParent();
         if (dir != null) {
@@ -32,7 +43,7 @@ final class AtomicWrite {
         }
     }
 
-    /** A temporary file starts private (rw-------); a report is meant to be shared like any other file. */
+    /** A temporary file starts private (rw-------); an output is meant to be shared like any other file. */
     private static void readableByAll(Path tmp) throws IOException {
         if (tmp.getFileSystem().supportedFileAttributeViews().contains("posix")) {
             Files.setPosixFilePermissions(tmp, PosixFilePermissions.fromString("rw-r--r--"));
