@@ -52,7 +52,16 @@ final class WindingChecks {
             OptionalDouble h2 = m.ohms(LeadPair.of(t, e2));
             OptionalDouble ee = m.ohms(LeadPair.of(e1, e2));
             boolean explained = false;
-            if (h1.isPresent() && h2.isPresent() && ee.isPresent()) {
+            if (h1.isPresent() && h2.isPresent() && m.isOpen(LeadPair.of(e1, e2))) {
+                // Both halves conduct through the tap, so the ends must too: an open reading here is not physics.
+                explained = true;
+                out.add(new Finding(FindingCode.INCONSISTENT_MATRIX, Severity.ERROR, String.format(Locale.ROOT,
+                        "%s-%s reads open, but %s-%s (%s) and %s-%s (%s) both conduct through %s, so the ends must"
+                        + " read about %s: a value was mis-recorded, a probe slipped, or two labels are swapped."
+                        + " Measure %s-%s, %s-%s and %s-%s again.", e1, e2, t, e1, ohm(h1.getAsDouble()), t, e2,
+                        ohm(h2.getAsDouble()), t, ohm(h1.getAsDouble() + h2.getAsDouble()), e1, e2, t, e1, t, e2),
+                        List.of(e1, e2, t)));
+            } else if (h1.isPresent() && h2.isPresent() && ee.isPresent()) {
                 double a = h1.getAsDouble();
                 double b = h2.getAsDouble();
                 double whole = ee.getAsDouble();

@@ -212,6 +212,19 @@ class LeadIdentifierTest {
     }
 
     @Test
+    void endsReadingOpenWhileBothHalvesConductIsAnInconsistentMatrixError() {
+        // Series relation of a tapped winding (circuit topology, REFERENCE-CHECKS item 4): end-end = end-CT + CT-end,
+        // so both halves conducting forces the ends to conduct. Before this check the open end-end reading was taken
+        // as "not measured" and the winding was drawn with a computed 4.90 ohm and no finding.
+        ResistanceMatrix m = ResistanceMatrix.builder()
+                .reading("red", "blue", 2.4).reading("red", "black", 2.5).open("blue", "black")
+                .open("green", "black").open("red", "green").open("blue", "green").build();
+        Identification id = identify(m);
+        assertTrue(codes(id).contains("inconsistent-matrix"), id.findings().toString());
+        assertTrue(id.hasError(), id.findings().toString());
+    }
+
+    @Test
     void fourLeadsAllJoinedIsAnInconsistentMatrixError() {
         ResistanceMatrix.Builder b = ResistanceMatrix.builder();
         String[] l = {"1", "2", "3", "4"};
