@@ -30,6 +30,7 @@ public final class LeadIdentifier {
         boolean allStructured = true;
         for (List<String> g : cg.groups) {
             sizes.add(g.size());
+            findings.addAll(WindingChecks.openInsideGroup(g, m));
             switch (g.size()) {
                 case 1 -> singletons.add(g.get(0));
                 case 2 -> windings.add(new Winding(g, null, m.ohms(LeadPair.of(g.get(0), g.get(1))).getAsDouble(),

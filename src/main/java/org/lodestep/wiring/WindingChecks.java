@@ -52,16 +52,7 @@ final class WindingChecks {
             OptionalDouble h2 = m.ohms(LeadPair.of(t, e2));
             OptionalDouble ee = m.ohms(LeadPair.of(e1, e2));
             boolean explained = false;
-            if (h1.isPresent() && h2.isPresent() && m.isOpen(LeadPair.of(e1, e2))) {
-                // Both halves conduct through the tap, so the ends must too: an open reading here is not physics.
-                explained = true;
-                out.add(new Finding(FindingCode.INCONSISTENT_MATRIX, Severity.ERROR, String.format(Locale.ROOT,
-                        "%s-%s reads open, but %s-%s (%s) and %s-%s (%s) both conduct through %s, so the ends must"
-                        + " read about %s: a value was mis-recorded, a probe slipped, or two labels are swapped."
-                        + " Measure %s-%s, %s-%s and %s-%s again.", e1, e2, t, e1, ohm(h1.getAsDouble()), t, e2,
-                        ohm(h2.getAsDouble()), t, ohm(h1.getAsDouble() + h2.getAsDouble()), e1, e2, t, e1, t, e2),
-                        List.of(e1, e2, t)));
-            } else if (h1.isPresent() && h2.isPresent() && ee.isPresent()) {
+            if (h1.isPresent() && h2.isPresent() && ee.isPresent()) {
                 double a = h1.getAsDouble();
                 double b = h2.getAsDouble();
                 double whole = ee.getAsDouble();
@@ -152,6 +143,56 @@ final class WindingChecks {
                 "%s reads %s, about %s below what the other readings of the common group imply, which contact"
                 + " resistance cannot cause: a value was mis-recorded or labels swapped. Measure %s again.", worst,
                 ohm(worstValue), ohm(-worstResidual), worst), List.of(worst.a(), worst.b())));
+    }
+
+    /**
+     * Pairs measured open inside one continuity group: copper joins every lead of a group, so each such reading
+     * contradicts the others, whatever the layout. One finding names each pair with the path that conducts.
+     */
+    static List<Finding> openInsideGroup(List<String> g, ResistanceMatrix m) {
+        List<Finding> out = new ArrayList<>();
+        for (int i = 0; i < g.size(); i++) {
+            for (int j = i + 1; j < g.size(); j++) {
+                LeadPair p = LeadPair.of(g.get(i), g.get(j));
+                if (!m.isOpen(p)) {
+                    continue;
+                }
+                List<String> path = conductingPath(g, m, p.a(), p.b());
+                double sum = 0;
+                List<String> parts = new ArrayList<>();
+                for (int k = 1; k < path.size(); k++) {
+                    double v = m.ohms(LeadPair.of(path.get(k - 1), path.get(k))).getAsDouble();
+                    sum += v;
+                    parts.add(ohm(v));
+                }
+                out.add(new Finding(FindingCode.INCONSISTENT_MATRIX, Severity.ERROR, String.format(Locale.ROOT,
+                        "%s reads open, but %s conducts (%s = %s), so %s must too: a value was mis-recorded, a probe"
+                        + " slipped, or two labels are swapped. Measure %s and the readings along that path again.",
+                        p, String.join("-", path), String.join(" + ", parts), ohm(sum), p, p), List.of(p.a(), p.b())));
+            }
+        }
+        return out;
+    }
+
+    /** Shortest chain of finite readings from one lead to another within a group (breadth first). */
+    private static List<String> conductingPath(List<String> g, ResistanceMatrix m, String from, String to) {
+        java.util.Map<String, String> previous = new java.util.HashMap<>();
+        java.util.ArrayDeque<String> queue = new java.util.ArrayDeque<>(List.of(from));
+        previous.put(from, from);
+        while (!queue.isEmpty() && !previous.containsKey(to)) {
+            String at = queue.poll();
+            for (String next : g) {
+                if (!previous.containsKey(next) && m.ohms(LeadPair.of(at, next)).isPresent()) {
+                    previous.put(next, at);
+                    queue.add(next);
+                }
+            }
+        }
+        List<String> path = new ArrayList<>(List.of(to));
+        for (String at = to; !at.equals(from); at = previous.get(at)) {
+            path.add(0, previous.get(at));
+        }
+        return path;
     }
 
     static Finding unfitGroup(List<String> g) {

@@ -222,6 +222,18 @@ class LeadIdentifierTest {
         Identification id = identify(m);
         assertTrue(codes(id).contains("inconsistent-matrix"), id.findings().toString());
         assertTrue(id.hasError(), id.findings().toString());
+
+        // The same holds in any layout: a 5-lead common group (item 4: COM-end = r, end-end = 2r) with one end-end
+        // pair recorded open.
+        ResistanceMatrix.Builder five = ResistanceMatrix.builder();
+        for (String e : List.of("1", "2", "3", "4")) {
+            five.reading("c", e, 1.2);
+        }
+        five.open("1", "2").reading("1", "3", 2.4).reading("1", "4", 2.4).reading("2", "3", 2.4)
+                .reading("2", "4", 2.4).reading("3", "4", 2.4);
+        Identification f = identify(five.build());
+        assertTrue(f.findings().stream().anyMatch(x -> x.code().code().equals("inconsistent-matrix")
+                && x.message().startsWith("1-2 reads open")), f.findings().toString());
     }
 
     @Test
