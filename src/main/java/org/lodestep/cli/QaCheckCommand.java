@@ -103,11 +103,19 @@ final class QaCheckCommand implements Callable<Integer> {
         if (serial != null && serial.isEmpty()) {
             throw new UsageException("--serial is empty");
         }
-        if (serial != null && (serialsFile != null || readings.resistancePattern != null)) {
-            throw new UsageException("--serials and --resistance-pattern are for lot mode (--lot without --serial)");
+        if (serial != null && (serialsFile != null || readings.resistancePattern != null
+                || readings.stepResponsePattern != null || readings.backEmfPattern != null)) {
+            throw new UsageException("--serials and the --*-pattern options are for lot mode (--lot without --serial)");
         }
-        if (serial == null && readings.resistanceFile != null) {
-            throw new UsageException("lot mode takes --resistance-pattern, not one --resistance file for every motor");
+        if (serial == null && (readings.resistanceFile != null || !readings.stepResponses.isEmpty()
+                || readings.backEmfFile != null)) {
+            throw new UsageException("lot mode takes --resistance-pattern, --step-response-pattern and "
+                    + "--back-emf-pattern, not one --resistance, --step-response or --back-emf file for every motor");
+        }
+        positive(readings.stepSupplyV, "--step-supply-v");
+        positive(readings.revolutions, "--revolutions");
+        if (readings.seriesOhm != null && !(readings.seriesOhm >= 0 && Double.isFinite(readings.seriesOhm))) {
+            throw new UsageException("--series-ohm must be 0 or more, got " + readings.seriesOhm);
         }
         partSpec = PartSpecReader.read(specFile);
         if (!json && partSpec.limit(Parameters.INSULATION_RESISTANCE).isPresent()) {
@@ -220,6 +228,12 @@ final class QaCheckCommand implements Callable<Integer> {
             throw new UsageException(e.getMessage());
         }
         return records.append(s);
+    }
+
+    private static void positive(Double v, String option) {
+        if (v != null && !(v > 0 && Double.isFinite(v))) {
+            throw new UsageException(option + " must be a positive number, got " + v);
+        }
     }
 
     /** The one-line caution printed before checks that include an insulation test. */
