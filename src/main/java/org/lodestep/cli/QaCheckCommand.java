@@ -46,10 +46,17 @@ import picocli.CommandLine.Option;
                 "      --insulation b-frame=910 --operator 'M. Ortiz'",
                 "  lodestep qa check --spec kv4218.toml --lot L-2607 \\",
                 "      --resistance-pattern 'caps/{serial}.csv' < serials.txt",
+                "  lodestep qa check --spec kv4218.toml --serial KV24-00117 \\",
+                "      --step-response a.csv --step-response b.csv --back-emf emf.csv",
+                "  lodestep qa check --spec kv4218.toml --lot L-2607 \\",
+                "      --step-response-pattern 'caps/{serial}-step-*.csv' \\",
+                "      --back-emf-pattern 'caps/{serial}-emf.csv' < serials.txt",
                 "",
                 "Safety: insulation testers apply hundreds of volts DC. Disconnect the motor from any driver, test on a "
                         + "non-conductive surface, keep hands off the leads while the tester runs, and discharge the "
-                        + "windings afterwards. Local electrical-safety rules and your site's procedures take precedence."})
+                        + "windings afterwards. A step-response test energises the winding and an interrupted coil kicks "
+                        + "back: switch off before touching leads. A shaft turned by hand makes voltage at the leads. "
+                        + "Local electrical-safety rules and your site's procedures take precedence."})
 final class QaCheckCommand implements Callable<Integer> {
 
     @Option(names = "--spec", required = true, paramLabel = "FILE", description = "Part spec (TOML).")

@@ -23,8 +23,9 @@ import com.fasterxml.jackson.databind.ObjectMapper;
  * {@code qa check} judging phase inductance, back-EMF constant and step angle from step-response and back-EMF captures.
  *
  * <p>The captures are made from the analytic models (REFERENCE-CHECKS item 10: RL step {@code i = V/R·(1 − e^(−t/τ))},
- * {@code τ = L/R}; item 14: {@code e = Ke·ω·sin(Nr·θ)}; item 15: step angle {@code 360/(4·Nr)} = 1.8° for 50 rotor
- * teeth), so the expected values are the inductance and Ke the files were made with, not anything the code computes.
+ * {@code τ = L/R}; item 14: {@code e = Ke·ω·sin(Nr·θ)}, Ke in peak V per mechanical rad/s as item 15 defines it), so
+ * the expected values are the inductance and Ke the files were made with, not anything the code computes; the step
+ * angle is item 1's {@code 360°/(4·Nr)}.
  */
 class QaCaptureChecksTest {
 
@@ -94,9 +95,11 @@ class QaCaptureChecksTest {
         // REFERENCE-CHECKS item 10: the files were made with L = 2.80 mH and 2.70 mH; the fit recovers them within 2 %
         assertEquals(2.80e-3, check(doc, "phase_inductance", "A").get("measured").asDouble(), 0.02 * 2.80e-3);
         assertEquals(2.70e-3, check(doc, "phase_inductance", "B").get("measured").asDouble(), 0.02 * 2.70e-3);
-        // REFERENCE-CHECKS item 14: made with Ke = 0.090 V·s/rad per phase; recovered within 3 %
+        // REFERENCE-CHECKS items 14 and 15 (Acarnley 4th ed.; SI peak convention): made with Ke = 0.090 V·s/rad per
+        // phase; recovered within 3 %
         assertEquals(0.090, check(doc, "back_emf_constant", "").get("measured").asDouble(), 0.03 * 0.090);
-        // REFERENCE-CHECKS item 15: 50 rotor teeth -> 360/(4·50) = 1.8°
+        // REFERENCE-CHECKS item 1 (Jones, Stepping Motors tutorial part 2; Acarnley 4th ed. ch. 1-2):
+        // 50 rotor teeth -> 360/(4·50) = 1.8°
         assertEquals(1.8, check(doc, "step_angle", "").get("measured").asDouble(), 1e-9);
         assertEquals("PASS", check(doc, "step_angle", "").get("verdict").asText());
 
@@ -111,6 +114,43 @@ class QaCaptureChecksTest {
             }
             assertTrue(found, name + " missing from " + captures);
         }
+    }
+
+    @Test
+    void eightLeadSampleIsJudgedAsWiredInSeries() throws IOException {
+        // sample-captures/motor: coils of 2.10 mH, coupling 0.96, Ke 0.090 V·s/rad per coil (its README). Wired in
+        // series, REFERENCE-CHECKS item 5 (L = L1 + L2 + 2M, any circuit-theory text): L = 2·2.10·(1 + 0.96)
+        // = 8.232 mH per phase, and the two coils' EMFs add: Ke = 0.180 V·s/rad per phase.
+        Path series = dir.resolve("hx.toml");
+        Files.writeString(series, """
+                [part]
+                number = "HX-5718-08"
+                revision = "A"
+                spec_version = 1
+
+                [inductance]
+                phase_nominal_mh = 8.232
+                tolerance_pct = 3
+
+                [back_emf]
+                ke_nominal_v_s_per_rad = 0.180
+                tolerance_pct = 3
+                """);
+        Path samples = Path.of("sample-captures/motor");
+        List<String> args = new ArrayList<>(List.of("qa", "check", "--spec", series.toString(), "--db", db,
+                "--serial", "4471", "--operator", "tester", "--station", "bench-9", "--json",
+                "--back-emf", samples.resolve("back-emf.csv").toString()));
+        for (String f : List.of("step-1-7.csv", "step-2-5.csv", "step-3-8.csv", "step-4-6.csv",
+                "step-7-6-joined-1-4.csv")) {
+            args.addAll(List.of("--step-response", samples.resolve(f).toString()));
+        }
+        CliRun r = CliRun.of(args.toArray(String[]::new));
+        assertEquals(ExitCode.OK, r.code(), r.err() + r.out());
+        JsonNode doc = new ObjectMapper().readTree(r.out());
+        assertEquals(8.232e-3, check(doc, "phase_inductance", "A").get("measured").asDouble(), 0.02 * 8.232e-3);
+        assertEquals(8.232e-3, check(doc, "phase_inductance", "B").get("measured").asDouble(), 0.02 * 8.232e-3);
+        assertEquals(0.180, check(doc, "back_emf_constant", "").get("measured").asDouble(), 0.03 * 0.180);
+        assertEquals(6, doc.at("/record/submission/measurements/captures").size());
     }
 
     @Test
@@ -183,6 +223,7 @@ class QaCaptureChecksTest {
         // KV-7 has no captures: reported, not recorded, the lot goes on
         assertEquals("KV-7", doc.at("/errors/0/serial").asText());
         assertTrue(r.err().contains("KV-7") && r.err().contains("no such file"), r.err());
-        assertEquals(2, doc.at("/results/0/record/submission/measurements/captures").size() - 1);
+        // two step responses and one back-EMF capture found for KV-5 by the patterns
+        assertEquals(3, doc.at("/results/0/record/submission/measurements/captures").size());
     }
 }
