@@ -1,18 +1,22 @@
 package org.lodestep.cli;
 
 import java.io.IOException;
+import java.io.PrintWriter;
 import java.nio.file.DirectoryStream;
 import java.nio.file.Files;
 import java.nio.file.Path;
 import java.util.ArrayList;
 import java.util.List;
+import java.util.Locale;
 
 import org.lodestep.capture.InputFormatException;
 import org.lodestep.motor.BackEmfResult;
+import org.lodestep.motor.Finding;
 import org.lodestep.motor.IdentifyRequest;
 import org.lodestep.motor.MotorCard;
 import org.lodestep.motor.MotorIdentifier;
 import org.lodestep.motor.PhaseCard;
+import org.lodestep.motor.Severity;
 import org.lodestep.motor.StepInput;
 import org.lodestep.qa.CaptureRef;
 import org.lodestep.qa.Hashes;
@@ -41,8 +45,8 @@ final class QaMotorCaptures {
     }
 
     /** Reads, fits and combines the given captures (either may be empty or null). */
-    static Result read(List<Path> stepFiles, Double stepSupplyV, Double seriesOhm, Path backEmfFile, Double revolutions)
-            throws IOException, InputFormatException {
+    static Result read(List<Path> stepFiles, Double stepSupplyV, Double seriesOhm, Path backEmfFile, Double revolutions,
+                       PrintWriter log) throws IOException, InputFormatException {
         List<CaptureRef> captures = new ArrayList<>();
         List<StepInput> steps = new ArrayList<>();
         for (Path p : stepFiles) {
@@ -81,6 +85,20 @@ final class QaMotorCaptures {
         }
         double ke = kes.isEmpty() ? Double.NaN : kes.stream().mapToDouble(Double::doubleValue).average().orElseThrow();
         double step = card.stepAngleDeg() == null ? Double.NaN : card.stepAngleDeg();
+        for (Finding f : card.findings()) {
+            if (f.severity() != Severity.INFO) {
+                log.println("  capture " + f.severity().name().toLowerCase(Locale.ROOT) + ": " + f.message());
+            }
+        }
+        if (emf != null && emf.findings().stream().anyMatch(f -> f.severity() == Severity.ERROR)) {
+            // A dead channel or an impossible tooth count: neither Ke nor the step angle is judged on half a capture;
+            // the checks stay incomplete and the inspector repeats the capture.
+            log.println("  back-EMF capture " + backEmfFile + " has an error: back-EMF constant and step angle not "
+                    + "taken from it");
+            ke = Double.NaN;
+            step = Double.NaN;
+        }
+        log.flush();
         return new Result(inductances, ke, step, captures);
     }
 

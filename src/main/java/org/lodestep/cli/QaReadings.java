@@ -159,7 +159,7 @@ final class QaReadings {
             emf = QaMotorCaptures.patternFiles("--back-emf-pattern", backEmfPattern, serial).get(0);
         }
         if (!steps.isEmpty() || emf != null) {
-            QaMotorCaptures.Result r = QaMotorCaptures.read(steps, stepSupplyV, seriesOhm, emf, revolutions);
+            QaMotorCaptures.Result r = QaMotorCaptures.read(steps, stepSupplyV, seriesOhm, emf, revolutions, log);
             if (!r.inductancesH().isEmpty()) {
                 if (!inductances.isEmpty()) {
                     throw new UsageException("give phase inductances either as step responses or with "

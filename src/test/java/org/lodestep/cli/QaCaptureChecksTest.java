@@ -187,6 +187,36 @@ class QaCaptureChecksTest {
     }
 
     @Test
+    void deadBackEmfChannelLeavesKeIncomplete() throws IOException {
+        motor("KV-8", 2.80e-3, 2.80e-3, 0.090);
+        Path emf = dir.resolve("KV-8-emf.csv");
+        StringBuilder b = new StringBuilder();
+        for (String line : Files.readAllLines(emf)) {
+            // phase B's leads came off the clip: its column reads nothing
+            b.append(line.matches("-?[0-9].*") ? line.replaceAll(",.*", ",0.0000") : line).append('\n');
+        }
+        Files.writeString(emf, b.toString());
+        CliRun r = check("KV-8");
+        assertEquals(ExitCode.FINDING, r.code(), r.err() + r.out());
+        JsonNode doc = new ObjectMapper().readTree(r.out());
+        assertEquals("INCOMPLETE", check(doc, "back_emf_constant", "").get("verdict").asText());
+        assertTrue(r.err().contains("shows no back-EMF"), r.err());
+    }
+
+    @Test
+    void serialWithGlobCharactersIsRefusedForAWildcardPattern() throws IOException {
+        // "KV-*" would otherwise match every motor's files
+        motor("KV-9", 2.80e-3, 2.80e-3, 0.090);
+        Path serials = dir.resolve("serials.txt");
+        Files.writeString(serials, "KV-*\n");
+        CliRun r = CliRun.of("qa", "check", "--spec", spec.toString(), "--db", db, "--lot", "L-2",
+                "--serials", serials.toString(), "--json",
+                "--step-response-pattern", dir.resolve("{serial}-step-*.csv").toString());
+        assertEquals(ExitCode.FINDING, r.code(), r.err());
+        assertTrue(r.err().contains("glob characters"), r.err());
+    }
+
+    @Test
     void sameCapturesSubmittedTwiceAreOneRecord() throws IOException {
         motor("KV-4", 2.80e-3, 2.80e-3, 0.090);
         CliRun first = check("KV-4");
