@@ -69,10 +69,16 @@ final class QaMotorCaptures {
                 kes.add(p.keVsPerRad());
             }
         }
-        if (inductances.size() < card.phases().size() || card.phases().isEmpty()) {
+        if (!card.phases().isEmpty() && inductances.size() < card.phases().size()) {
+            // Labels go by position, so a partial list would put phase B's value under A: judge none of them.
+            if (!steps.isEmpty()) {
+                log.println("  the step responses do not give the inductance of every phase (" + card.phases().size()
+                        + " phases found): phase inductance not taken from them");
+            }
+            inductances.clear();
+        } else if (card.phases().isEmpty()) {
             // The coils could not be put into phases (no back-EMF to phase them): each step is taken as one whole
             // phase winding, in the order given, as a 4-lead motor is measured.
-            inductances.clear();
             for (int k = 0; k < steps.size(); k++) {
                 StepInput s = steps.get(k);
                 if (s.fit().inductanceH() == null) {

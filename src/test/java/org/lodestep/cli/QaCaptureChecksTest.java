@@ -154,6 +154,22 @@ class QaCaptureChecksTest {
     }
 
     @Test
+    void stepResponsesOfOnlyOnePhaseLeaveInductanceIncomplete() throws IOException {
+        // one coil of the 8-lead sample measured, both phases found by the back-EMF: no value may go under the
+        // wrong phase label, so inductance is not judged; Ke and step angle still are
+        Path samples = Path.of("sample-captures/motor");
+        CliRun r = CliRun.of("qa", "check", "--spec", spec.toString(), "--db", db, "--serial", "4471",
+                "--operator", "tester", "--station", "bench-9", "--json",
+                "--step-response", samples.resolve("step-1-7.csv").toString(),
+                "--back-emf", samples.resolve("back-emf.csv").toString());
+        assertEquals(ExitCode.FINDING, r.code(), r.err());
+        JsonNode doc = new ObjectMapper().readTree(r.out());
+        assertEquals("INCOMPLETE", check(doc, "phase_inductance", "").get("verdict").asText());
+        assertEquals("PASS", check(doc, "step_angle", "").get("verdict").asText());
+        assertTrue(r.err().contains("do not give the inductance of every phase"), r.err());
+    }
+
+    @Test
     void capturesOutsideTheLimitsFail() throws IOException {
         // phase B 3.40 mH is 21 % above 2.80 mH (limit 10 %); Ke 0.120 V·s/rad is 33 % above 0.090
         motor("KV-2", 2.80e-3, 3.40e-3, 0.120);
