@@ -46,10 +46,17 @@ import picocli.CommandLine.Option;
                 "      --insulation b-frame=910 --operator 'M. Ortiz'",
                 "  lodestep qa check --spec kv4218.toml --lot L-2607 \\",
                 "      --resistance-pattern 'caps/{serial}.csv' < serials.txt",
+                "  lodestep qa check --spec kv4218.toml --serial KV24-00117 \\",
+                "      --step-response a.csv --step-response b.csv --back-emf emf.csv",
+                "  lodestep qa check --spec kv4218.toml --lot L-2607 \\",
+                "      --step-response-pattern 'caps/{serial}-step-*.csv' \\",
+                "      --back-emf-pattern 'caps/{serial}-emf.csv' < serials.txt",
                 "",
                 "Safety: insulation testers apply hundreds of volts DC. Disconnect the motor from any driver, test on a "
                         + "non-conductive surface, keep hands off the leads while the tester runs, and discharge the "
-                        + "windings afterwards. Local electrical-safety rules and your site's procedures take precedence."})
+                        + "windings afterwards. A step-response test energises the winding and an interrupted coil kicks "
+                        + "back: switch off before touching leads. A shaft turned by hand makes voltage at the leads. "
+                        + "Local electrical-safety rules and your site's procedures take precedence."})
 final class QaCheckCommand implements Callable<Integer> {
 
     @Option(names = "--spec", required = true, paramLabel = "FILE", description = "Part spec (TOML).")
@@ -103,11 +110,19 @@ final class QaCheckCommand implements Callable<Integer> {
         if (serial != null && serial.isEmpty()) {
             throw new UsageException("--serial is empty");
         }
-        if (serial != null && (serialsFile != null || readings.resistancePattern != null)) {
-            throw new UsageException("--serials and --resistance-pattern are for lot mode (--lot without --serial)");
+        if (serial != null && (serialsFile != null || readings.resistancePattern != null
+                || readings.stepResponsePattern != null || readings.backEmfPattern != null)) {
+            throw new UsageException("--serials and the --*-pattern options are for lot mode (--lot without --serial)");
         }
-        if (serial == null && readings.resistanceFile != null) {
-            throw new UsageException("lot mode takes --resistance-pattern, not one --resistance file for every motor");
+        if (serial == null && (readings.resistanceFile != null || !readings.stepResponses.isEmpty()
+                || readings.backEmfFile != null)) {
+            throw new UsageException("lot mode takes --resistance-pattern, --step-response-pattern and "
+                    + "--back-emf-pattern, not one --resistance, --step-response or --back-emf file for every motor");
+        }
+        positive(readings.stepSupplyV, "--step-supply-v");
+        positive(readings.revolutions, "--revolutions");
+        if (readings.seriesOhm != null && !(readings.seriesOhm >= 0 && Double.isFinite(readings.seriesOhm))) {
+            throw new UsageException("--series-ohm must be 0 or more, got " + readings.seriesOhm);
         }
         partSpec = PartSpecReader.read(specFile);
         if (!json && partSpec.limit(Parameters.INSULATION_RESISTANCE).isPresent()) {
@@ -220,6 +235,12 @@ final class QaCheckCommand implements Callable<Integer> {
             throw new UsageException(e.getMessage());
         }
         return records.append(s);
+    }
+
+    private static void positive(Double v, String option) {
+        if (v != null && !(v > 0 && Double.isFinite(v))) {
+            throw new UsageException(option + " must be a positive number, got " + v);
+        }
     }
 
     /** The one-line caution printed before checks that include an insulation test. */

@@ -71,6 +71,40 @@ final class QaReadings {
 
     private MeterLog meterLog;
 
+    @Option(names = "--step-response", paramLabel = "FILE",
+            description = "Current step response of a phase winding or coil (CSV time_s,current_a with '# leads=a,b', "
+                    + "'# supply_v=', '# series_ohm=', as `motor identify` reads it); repeat for each. Phase "
+                    + "inductance comes from the fits (phased by --back-emf when given, else phase A first).")
+    List<Path> stepResponses = new ArrayList<>();
+
+    @Option(names = "--step-response-pattern", paramLabel = "PATTERN",
+            description = "Lot mode: the step responses of each serial number, {serial} replaced, * and ? in the file "
+                    + "name matched, e.g. 'caps/{serial}-step-*.csv'.")
+    String stepResponsePattern;
+
+    @Option(names = "--step-supply-v", paramLabel = "V",
+            description = "Voltage of the step responses, volts, for files without '# supply_v='.")
+    Double stepSupplyV;
+
+    @Option(names = "--series-ohm", paramLabel = "OHM",
+            description = "Resistance in series with the winding during the step responses (sense resistor), ohms, "
+                    + "for files without '# series_ohm=' (default 0).")
+    Double seriesOhm;
+
+    @Option(names = "--back-emf", paramLabel = "FILE",
+            description = "Back-EMF capture with the shaft turned by hand (CSV or WAV, channels emf_<lead>_<lead>_v, "
+                    + "volts): gives the back-EMF constant and, from the rotor teeth, the step angle.")
+    Path backEmfFile;
+
+    @Option(names = "--back-emf-pattern", paramLabel = "PATTERN",
+            description = "Lot mode: the back-EMF capture of each serial number, {serial} replaced, e.g. "
+                    + "'caps/{serial}-emf.csv'.")
+    String backEmfPattern;
+
+    @Option(names = "--revolutions", paramLabel = "N",
+            description = "Mechanical revolutions turned during the back-EMF capture (overrides '# revolutions=').")
+    Double revolutions;
+
     @Option(names = "--winding-c", paramLabel = "CELSIUS",
             description = "Winding temperature during the resistance reading, °C (default: the CSV's temperature_c, "
                     + "else --ambient-c: a motor that has rested at the bench is at ambient).")
@@ -116,6 +150,35 @@ final class QaReadings {
         List<Double> inductances = new ArrayList<>(inductanceMh.stream().map(v -> v / 1000.0).toList());
         double ke = keVsPerRad == null ? Double.NaN : keVsPerRad;
         double step = stepAngleDeg == null ? Double.NaN : stepAngleDeg;
+        List<Path> steps = new ArrayList<>(stepResponses);
+        if (stepResponsePattern != null && serial != null) {
+            steps.addAll(QaMotorCaptures.patternFiles("--step-response-pattern", stepResponsePattern, serial));
+        }
+        Path emf = backEmfFile;
+        if (backEmfPattern != null && serial != null) {
+            emf = QaMotorCaptures.patternFiles("--back-emf-pattern", backEmfPattern, serial).get(0);
+        }
+        if (!steps.isEmpty() || emf != null) {
+            QaMotorCaptures.Result r = QaMotorCaptures.read(steps, stepSupplyV, seriesOhm, emf, revolutions, log);
+            if (!r.inductancesH().isEmpty()) {
+                if (!inductances.isEmpty()) {
+                    throw new UsageException("give phase inductances either as step responses or with "
+                            + "--inductance-mh, not both");
+                }
+                inductances.addAll(r.inductancesH());
+            }
+            if (!Double.isNaN(r.keVsPerRad())) {
+                if (!Double.isNaN(ke)) {
+                    throw new UsageException("give the back-EMF constant either as a capture or with --ke, not both");
+                }
+                ke = r.keVsPerRad();
+            }
+            if (!Double.isNaN(r.stepAngleDeg()) && Double.isNaN(step)) {
+                // a typed step angle (from the nameplate or a count) stands; the capture's fills the gap
+                step = r.stepAngleDeg();
+            }
+            captures.addAll(r.captures());
+        }
         if (meterLogFile != null) {
             if (meterLog == null) {
                 meterLog = MeterLog.read(meterLogFile);
@@ -186,8 +249,13 @@ final class QaReadings {
 
     /** The capture file of one serial number; refuses serials that would leave the pattern's folder. */
     static Path patternFile(String pattern, String serial) {
+        return patternFile(pattern, serial, "--resistance-pattern");
+    }
+
+    /** As {@link #patternFile(String, String)}, naming {@code option} in errors. */
+    static Path patternFile(String pattern, String serial, String option) {
         if (!pattern.contains("{serial}")) {
-            throw new UsageException("--resistance-pattern '" + pattern + "' lacks {serial}");
+            throw new UsageException(option + " '" + pattern + "' lacks {serial}");
         }
         if (serial.contains("/") || serial.contains("\\") || serial.contains("..")
                 || serial.chars().anyMatch(Character::isISOControl)) {
@@ -200,7 +268,9 @@ final class QaReadings {
     /** True when any reading source was given. */
     boolean any() {
         return resistanceFile != null || resistancePattern != null || !phaseOhm.isEmpty() || !inductanceMh.isEmpty()
-                || !insulation.isEmpty() || keVsPerRad != null || stepAngleDeg != null || meterLogFile != null || rig != null;
+                || !insulation.isEmpty() || keVsPerRad != null || stepAngleDeg != null || meterLogFile != null || rig != null
+                || !stepResponses.isEmpty() || stepResponsePattern != null || backEmfFile != null
+                || backEmfPattern != null;
     }
 
 }
