@@ -1,5 +1,6 @@
 package org.lodestep.capture;
 
+import org.lodestep.sample.InputFormatException;
 import java.io.IOException;
 import java.io.InputStream;
 import java.nio.charset.StandardCharsets;

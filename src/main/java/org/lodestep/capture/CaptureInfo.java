@@ -1,5 +1,6 @@
 package org.lodestep.capture;
 
+import org.lodestep.sample.Channel;
 import java.time.Instant;
 import java.util.HashSet;
 import java.util.List;

@@ -1,5 +1,9 @@
 package org.lodestep.capture;
 
+import org.lodestep.sample.Channel;
+
+import org.lodestep.sample.InputFormatException;
+import org.lodestep.sample.SampleStream;
 import java.io.IOException;
 import java.io.InputStream;
 import java.nio.file.Files;

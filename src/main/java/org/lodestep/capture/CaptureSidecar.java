@@ -1,5 +1,9 @@
 package org.lodestep.capture;
 
+import org.lodestep.sample.SampleStream;
+
+import org.lodestep.sample.Channel;
+import org.lodestep.sample.InputFormatException;
 import java.io.IOException;
 import java.nio.file.Files;
 import java.nio.file.Path;

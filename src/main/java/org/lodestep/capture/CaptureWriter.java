@@ -1,5 +1,7 @@
 package org.lodestep.capture;
 
+import org.lodestep.sample.Channel;
+
 import java.io.BufferedWriter;
 import java.io.Closeable;
 import java.io.IOException;

@@ -1,5 +1,8 @@
 package org.lodestep.capture;
 
+import org.lodestep.sample.InputFormatException;
+
+import org.lodestep.sample.Channel;
 import java.io.IOException;
 import java.io.StringReader;
 import java.util.ArrayList;

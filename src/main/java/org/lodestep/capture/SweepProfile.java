@@ -1,5 +1,6 @@
 package org.lodestep.capture;
 
+import org.lodestep.sample.InputFormatException;
 import java.util.LinkedHashMap;
 import java.util.Locale;
 import java.util.Map;

@@ -1,5 +1,6 @@
 package org.lodestep.capture;
 
+import org.lodestep.sample.InputFormatException;
 import java.util.Arrays;
 
 /**

@@ -13,7 +13,7 @@ import java.util.Optional;
 import java.util.OptionalDouble;
 import java.util.concurrent.Callable;
 
-import org.lodestep.capture.InputFormatException;
+import org.lodestep.sample.InputFormatException;
 import org.lodestep.capture.LeadPairArgument;
 import org.lodestep.capture.LeadPairReading;
 import org.lodestep.report.LeadsJsonView;

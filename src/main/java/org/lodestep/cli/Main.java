@@ -8,7 +8,7 @@ import java.nio.charset.StandardCharsets;
 import java.nio.file.AccessDeniedException;
 import java.nio.file.NoSuchFileException;
 
-import org.lodestep.capture.InputFormatException;
+import org.lodestep.sample.InputFormatException;
 import org.lodestep.qa.StoreException;
 import org.lodestep.rig.RigException;
 

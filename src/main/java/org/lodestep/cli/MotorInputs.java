@@ -7,9 +7,9 @@ import java.util.List;
 import java.util.Locale;
 
 import org.lodestep.capture.Captures;
-import org.lodestep.capture.Channel;
-import org.lodestep.capture.InputFormatException;
-import org.lodestep.capture.SampledSignal;
+import org.lodestep.sample.Channel;
+import org.lodestep.sample.InputFormatException;
+import org.lodestep.sample.SampledSignal;
 import org.lodestep.motor.BackEmfAnalyzer;
 import org.lodestep.motor.BackEmfResult;
 import org.lodestep.motor.EmfChannel;

@@ -6,8 +6,8 @@ import java.util.List;
 import java.util.Locale;
 import java.util.OptionalDouble;
 
-import org.lodestep.capture.InputFormatException;
-import org.lodestep.capture.SampledSignal;
+import org.lodestep.sample.InputFormatException;
+import org.lodestep.sample.SampledSignal;
 import org.lodestep.motor.BackEmfAnalyzer;
 import org.lodestep.motor.BackEmfResult;
 import org.lodestep.motor.CoilResistance;

@@ -14,7 +14,7 @@ import java.util.List;
 import java.util.Map;
 import java.util.concurrent.Callable;
 
-import org.lodestep.capture.InputFormatException;
+import org.lodestep.sample.InputFormatException;
 import org.lodestep.qa.Inspection;
 import org.lodestep.qa.Measurements;
 import org.lodestep.qa.Parameters;

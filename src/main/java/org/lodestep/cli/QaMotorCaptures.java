@@ -9,7 +9,7 @@ import java.util.ArrayList;
 import java.util.List;
 import java.util.Locale;
 
-import org.lodestep.capture.InputFormatException;
+import org.lodestep.sample.InputFormatException;
 import org.lodestep.motor.BackEmfResult;
 import org.lodestep.motor.Finding;
 import org.lodestep.motor.IdentifyRequest;

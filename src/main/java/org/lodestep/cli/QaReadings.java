@@ -7,7 +7,7 @@ import java.util.List;
 import java.util.regex.Matcher;
 import java.util.regex.Pattern;
 
-import org.lodestep.capture.InputFormatException;
+import org.lodestep.sample.InputFormatException;
 import org.lodestep.qa.CaptureRef;
 import org.lodestep.qa.Hashes;
 import org.lodestep.qa.InsulationReading;

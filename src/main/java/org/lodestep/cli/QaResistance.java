@@ -5,7 +5,7 @@ import java.nio.file.Path;
 import java.util.List;
 import java.util.stream.Collectors;
 
-import org.lodestep.capture.InputFormatException;
+import org.lodestep.sample.InputFormatException;
 import org.lodestep.capture.ResistanceCsvReader;
 import org.lodestep.capture.ResistanceReadings;
 import org.lodestep.wiring.FindingCode;

@@ -6,8 +6,8 @@ import java.util.Arrays;
 import java.util.concurrent.Callable;
 
 import org.lodestep.capture.Captures;
-import org.lodestep.capture.InputFormatException;
-import org.lodestep.capture.SampledSignal;
+import org.lodestep.sample.InputFormatException;
+import org.lodestep.sample.SampledSignal;
 import org.lodestep.report.ResonanceHtml;
 import org.lodestep.report.ResonanceJson;
 import org.lodestep.report.ResonanceText;

@@ -8,9 +8,9 @@ import java.util.Locale;
 import java.util.concurrent.Callable;
 
 import org.lodestep.capture.Captures;
-import org.lodestep.capture.Channel;
-import org.lodestep.capture.InputFormatException;
-import org.lodestep.capture.SampleStream;
+import org.lodestep.sample.Channel;
+import org.lodestep.sample.InputFormatException;
+import org.lodestep.sample.SampleStream;
 import org.lodestep.capture.SweepProfile;
 import org.lodestep.report.OutputFile;
 import org.lodestep.report.ResonanceHtml;

@@ -9,7 +9,7 @@ import java.util.Map;
 
 import org.lodestep.capture.CaptureInfo;
 import org.lodestep.capture.CaptureWriter;
-import org.lodestep.capture.SampledSignal;
+import org.lodestep.sample.SampledSignal;
 import org.lodestep.capture.SweepProfile;
 import org.lodestep.rig.RigCapture;
 import org.lodestep.rig.SweepPlan;

@@ -19,7 +19,7 @@ import java.util.regex.Pattern;
 import org.apache.commons.csv.CSVFormat;
 import org.apache.commons.csv.CSVParser;
 import org.apache.commons.csv.CSVRecord;
-import org.lodestep.capture.InputFormatException;
+import org.lodestep.sample.InputFormatException;
 
 /**
  * A bench log of hand-held meter readings, one row per motor: what an inspector types while testing a lot with

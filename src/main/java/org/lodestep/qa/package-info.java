@@ -1,6 +1,6 @@
 /**
  * Incoming inspection: part specs, check verdicts, the record store (SQLite or PostgreSQL) and lot statistics.
  * Consumes results of {@code wiring} and {@code motor} (copper temperature correction from {@code wiring}); reads
- * its own small inputs (part specs, meter logs) with {@code capture}'s error type; the only package that speaks SQL.
+ * its own small inputs (part specs, meter logs) with {@code sample}'s error type; the only package that speaks SQL.
  */
 package org.lodestep.qa;

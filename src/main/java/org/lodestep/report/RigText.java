@@ -4,7 +4,7 @@ import java.util.List;
 import java.util.Locale;
 import java.util.Map;
 
-import org.lodestep.capture.Channel;
+import org.lodestep.sample.Channel;
 import org.lodestep.rig.InsulationReading;
 import org.lodestep.rig.ResistanceReading;
 import org.lodestep.rig.RigCapture;

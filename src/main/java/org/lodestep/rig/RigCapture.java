@@ -4,8 +4,8 @@ import java.util.LinkedHashMap;
 import java.util.List;
 import java.util.Map;
 
-import org.lodestep.capture.Channel;
-import org.lodestep.capture.SampledSignal;
+import org.lodestep.sample.Channel;
+import org.lodestep.sample.SampledSignal;
 
 /**
  * A whole stream received from a rig, every block present and CRC-checked: channels in SI units (g for

@@ -3,7 +3,7 @@ package org.lodestep.rig;
 import java.util.ArrayList;
 import java.util.List;
 
-import org.lodestep.capture.Channel;
+import org.lodestep.sample.Channel;
 
 /**
  * The header of a sample stream, sent as the reply to a streaming command: channels with their units and

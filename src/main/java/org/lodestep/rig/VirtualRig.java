@@ -7,7 +7,7 @@ import java.util.HexFormat;
 import java.util.List;
 import java.util.Random;
 
-import org.lodestep.capture.Channel;
+import org.lodestep.sample.Channel;
 
 /**
  * The firmware side of {@code firmware-protocol.md} running on a {@link BenchMotor}: what {@code sim:} addresses and

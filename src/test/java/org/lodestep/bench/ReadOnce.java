@@ -7,8 +7,8 @@ import java.nio.file.Path;
 import java.util.Locale;
 
 import org.lodestep.capture.Captures;
-import org.lodestep.capture.InputFormatException;
-import org.lodestep.capture.SampleStream;
+import org.lodestep.sample.InputFormatException;
+import org.lodestep.sample.SampleStream;
 import org.lodestep.capture.TimeSeriesCsvReader;
 
 /**

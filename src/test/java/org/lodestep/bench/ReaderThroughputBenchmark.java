@@ -8,8 +8,8 @@ import java.util.concurrent.TimeUnit;
 import java.util.stream.Stream;
 
 import org.lodestep.capture.Captures;
-import org.lodestep.capture.InputFormatException;
-import org.lodestep.capture.SampleStream;
+import org.lodestep.sample.InputFormatException;
+import org.lodestep.sample.SampleStream;
 import org.openjdk.jmh.annotations.Benchmark;
 import org.openjdk.jmh.annotations.BenchmarkMode;
 import org.openjdk.jmh.annotations.Fork;

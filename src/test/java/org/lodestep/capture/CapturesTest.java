@@ -1,5 +1,8 @@
 package org.lodestep.capture;
 
+import org.lodestep.sample.InputFormatException;
+import org.lodestep.sample.SampleStream;
+import org.lodestep.sample.SampledSignal;
 import static org.junit.jupiter.api.Assertions.assertArrayEquals;
 import static org.junit.jupiter.api.Assertions.assertEquals;
 import static org.junit.jupiter.api.Assertions.assertThrows;

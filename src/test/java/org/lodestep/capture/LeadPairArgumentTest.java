@@ -1,5 +1,6 @@
 package org.lodestep.capture;
 
+import org.lodestep.sample.InputFormatException;
 import static org.junit.jupiter.api.Assertions.assertEquals;
 import static org.junit.jupiter.api.Assertions.assertThrows;
 import static org.junit.jupiter.api.Assertions.assertTrue;

@@ -1,5 +1,7 @@
 package org.lodestep.capture;
 
+import org.lodestep.sample.InputFormatException;
+
 import static org.junit.jupiter.api.Assertions.assertEquals;
 import static org.junit.jupiter.api.Assertions.assertFalse;
 import static org.junit.jupiter.api.Assertions.assertThrows;

@@ -1,5 +1,6 @@
 package org.lodestep.capture;
 
+import org.lodestep.sample.InputFormatException;
 import static org.junit.jupiter.api.Assertions.assertEquals;
 import static org.junit.jupiter.api.Assertions.assertNull;
 import static org.junit.jupiter.api.Assertions.assertThrows;

@@ -1,5 +1,7 @@
 package org.lodestep.capture;
 
+import org.lodestep.sample.InputFormatException;
+import org.lodestep.sample.SampleStream;
 import java.io.ByteArrayInputStream;
 import java.io.IOException;
 import java.io.InputStream;

@@ -1,5 +1,7 @@
 package org.lodestep.capture;
 
+import org.lodestep.sample.Channel;
+import org.lodestep.sample.InputFormatException;
 import static org.junit.jupiter.api.Assertions.assertArrayEquals;
 import static org.junit.jupiter.api.Assertions.assertEquals;
 import static org.junit.jupiter.api.Assertions.assertThrows;

@@ -10,7 +10,7 @@ import java.nio.file.NoSuchFileException;
 import java.util.concurrent.Callable;
 
 import org.junit.jupiter.api.Test;
-import org.lodestep.capture.InputFormatException;
+import org.lodestep.sample.InputFormatException;
 import org.lodestep.qa.StoreException;
 import org.lodestep.rig.RigException;
 

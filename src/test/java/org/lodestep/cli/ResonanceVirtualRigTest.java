@@ -5,7 +5,7 @@ import static org.junit.jupiter.api.Assertions.assertNotNull;
 import static org.junit.jupiter.api.Assertions.assertTrue;
 
 import org.junit.jupiter.api.Test;
-import org.lodestep.capture.SampledSignal;
+import org.lodestep.sample.SampledSignal;
 import org.lodestep.resonance.BandSettings;
 import org.lodestep.motor.NaturalFrequency;
 import org.lodestep.resonance.ResonanceBand;

@@ -139,7 +139,7 @@ class RigCommandTest {
         assertTrue(side.complete());
         assertEquals("gantry-axis", side.scenario());
         assertEquals("KL5002-00871", side.serialNumber());
-        org.lodestep.capture.SampledSignal s = org.lodestep.capture.Captures.readAll(csv);
+        org.lodestep.sample.SampledSignal s = org.lodestep.capture.Captures.readAll(csv);
         assertEquals(10000, s.length());
         assertEquals(java.util.List.of("accel", "current", "step"), s.channelNames());
         assertEquals(5000.0, s.sampleRateHz());
@@ -154,7 +154,7 @@ class RigCommandTest {
         Path csv = dir.resolve("step.csv");
         Result r = run("rig", "measure", "sim:bench-4", "step-response", "--pair", "1-2", "--out", csv.toString());
         assertEquals(0, r.code(), r.err());
-        org.lodestep.capture.SampledSignal s = org.lodestep.capture.Captures.readAll(csv);
+        org.lodestep.sample.SampledSignal s = org.lodestep.capture.Captures.readAll(csv);
         assertEquals(java.util.List.of("current", "voltage"), s.channelNames());
         // 2 V into 1.5 ohm winding + 0.1 ohm drive (scenarios.toml): settles at 1.25 A (Ohm's law)
         double[] i = s.channel(0);

@@ -3,7 +3,7 @@ package org.lodestep.qa;
 import java.nio.charset.StandardCharsets;
 import java.util.List;
 
-import org.lodestep.capture.InputFormatException;
+import org.lodestep.sample.InputFormatException;
 
 /** A small invented part spec and motors measured against it. */
 final class Fixtures {

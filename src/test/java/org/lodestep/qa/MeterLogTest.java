@@ -8,7 +8,7 @@ import static org.junit.jupiter.api.Assertions.assertTrue;
 import java.util.Map;
 
 import org.junit.jupiter.api.Test;
-import org.lodestep.capture.InputFormatException;
+import org.lodestep.sample.InputFormatException;
 
 class MeterLogTest {
 

@@ -9,7 +9,7 @@ import static org.junit.jupiter.api.Assertions.assertTrue;
 import java.util.List;
 
 import org.junit.jupiter.api.Test;
-import org.lodestep.capture.Channel;
+import org.lodestep.sample.Channel;
 
 class BlockCollectorTest {
     // 2 channels, 5 frames in blocks of 2: blocks 0 and 1 hold 2 frames, block 2 holds 1

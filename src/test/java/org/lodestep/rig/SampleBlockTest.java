@@ -7,7 +7,7 @@ import static org.junit.jupiter.api.Assertions.assertThrows;
 import java.util.List;
 
 import org.junit.jupiter.api.Test;
-import org.lodestep.capture.Channel;
+import org.lodestep.sample.Channel;
 
 class SampleBlockTest {
 

@@ -1,4 +1,4 @@
-package org.lodestep.capture;
+package org.lodestep.sample;
 
 import static org.junit.jupiter.api.Assertions.assertArrayEquals;
 import static org.junit.jupiter.api.Assertions.assertEquals;
@@ -34,7 +34,7 @@ class ArraySampleStreamTest {
     void roundTripsThroughSampledSignal() throws Exception {
         ArraySampleStream s = ArraySampleStream.of("mem", new Channel("x", ""), 8, new double[] {0.5, -0.5});
         SampledSignal sig = SampledSignal.readAll(s);
-        assertArrayEquals(new double[] {0.5, -0.5}, TestStreams.readAll(sig.stream(), 1)[0]);
+        assertArrayEquals(new double[] {0.5, -0.5}, SampledSignal.readAll(sig.stream()).channel(0));
     }
 
     @Test

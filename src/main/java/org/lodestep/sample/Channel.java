@@ -1,4 +1,4 @@
-package org.lodestep.capture;
+package org.lodestep.sample;
 
 import java.util.Objects;
 
