@@ -6,11 +6,16 @@ import java.util.ArrayList;
 import java.util.List;
 import java.util.concurrent.Callable;
 
+import org.lodestep.capture.Captures;
+import org.lodestep.sample.Channel;
+import org.lodestep.sample.InputFormatException;
+import org.lodestep.sample.SampledSignal;
 import org.lodestep.motor.BackEmfResult;
 import org.lodestep.motor.Connection;
 import org.lodestep.motor.IdentifyRequest;
 import org.lodestep.motor.MotorCard;
 import org.lodestep.motor.MotorIdentifier;
+import org.lodestep.workflow.MotorCaptureInputs;
 import org.lodestep.motor.StepInput;
 import org.lodestep.motor.WindingInput;
 import org.lodestep.report.MotorHtml;
@@ -157,9 +162,9 @@ final class MotorIdentifyCommand implements Callable<Integer> {
         } else {
             windings = resistance == null ? null : MotorWindings.read(resistance);
             for (Path p : stepResponses) {
-                steps.add(MotorInputs.stepResponse(p, stepSupplyV, seriesOhm, null));
+                steps.add(MotorCaptureInputs.stepResponse(p, stepSupplyV, seriesOhm, null));
             }
-            emf = backEmf == null ? null : MotorInputs.backEmf(backEmf, revolutions, pulsesPerRev);
+            emf = backEmf == null ? null : MotorCaptureInputs.backEmf(backEmf, revolutions, pulsesPerRev);
         }
         MotorCard card = MotorIdentifier.identify(new IdentifyRequest(windings, steps, emf, connection,
                 phaseCurrentA, supplyV, inertiaKgM2));
@@ -167,7 +172,7 @@ final class MotorIdentifyCommand implements Callable<Integer> {
             // Recorded step responses are drawn under their fits; the rig's are measured in memory and listed only.
             List<MotorHtml.Trace> traces = new ArrayList<>();
             for (Path p : stepResponses) {
-                traces.add(MotorInputs.trace(p));
+                traces.add(trace(p));
             }
             MotorHtml.report(title(), card, traces).write(report);
         }
@@ -196,4 +201,28 @@ final class MotorIdentifyCommand implements Callable<Integer> {
             throw new UsageException(option + " must be a positive number, got " + v);
         }
     }
+
+    /** The recorded current of a step-response capture, for drawing under its fit in the HTML report. */
+    private static org.lodestep.report.MotorHtml.Trace trace(Path file)
+            throws java.io.IOException, org.lodestep.sample.InputFormatException {
+        SampledSignal s = Captures.readAll(file);
+        int current = -1;
+        for (int c = 0; c < s.channels().size(); c++) {
+            Channel ch = s.channels().get(c);
+            if (ch.unit().equals("a") && (current < 0 || ch.name().startsWith("current"))) {
+                current = c; // the same column stepResponse fits
+            }
+        }
+        if (current < 0) {
+            throw new InputFormatException(file.toString(), InputFormatException.NO_LINE, null, null,
+                    "has no current channel");
+        }
+        double[] i = s.channel(current);
+        double[] t = new double[i.length];
+        for (int k = 0; k < t.length; k++) {
+            t[k] = s.startTimeS() + k / s.sampleRateHz();
+        }
+        return new org.lodestep.report.MotorHtml.Trace(file.getFileName().toString(), t, i);
+    }
+
 }

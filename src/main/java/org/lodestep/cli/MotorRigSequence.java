@@ -6,6 +6,7 @@ import java.util.List;
 import java.util.Locale;
 import java.util.OptionalDouble;
 
+import org.lodestep.workflow.MotorCaptureInputs;
 import org.lodestep.sample.InputFormatException;
 import org.lodestep.sample.SampledSignal;
 import org.lodestep.motor.BackEmfAnalyzer;
@@ -88,9 +89,9 @@ final class MotorRigSequence {
             SampledSignal s = cap.signal();
             int current = s.indexOf("current");
             int voltage = s.indexOf("voltage");
-            Double supply = voltage >= 0 ? MotorInputs.settledLevel(s.channel(voltage)) : Double.valueOf(volts);
+            Double supply = voltage >= 0 ? MotorCaptureInputs.settledLevel(s.channel(voltage)) : Double.valueOf(volts);
             try {
-                steps.add(MotorInputs.fit(s, current, c.leads(), List.of(), supply, seriesOhm, null));
+                steps.add(MotorCaptureInputs.fit(s, current, c.leads(), List.of(), supply, seriesOhm, null));
             } catch (IllegalArgumentException e) {
                 throw new InputFormatException(s.source(), InputFormatException.NO_LINE, null, null, e.getMessage());
             }

@@ -1,5 +1,7 @@
 package org.lodestep.cli;
 
+import java.nio.file.DirectoryStream;
+import java.nio.file.Files;
 import java.io.IOException;
 import java.nio.file.Path;
 import java.util.ArrayList;
@@ -7,6 +9,8 @@ import java.util.List;
 import java.util.regex.Matcher;
 import java.util.regex.Pattern;
 
+import org.lodestep.workflow.Progress;
+import org.lodestep.workflow.QaMotorCaptures;
 import org.lodestep.sample.InputFormatException;
 import org.lodestep.qa.CaptureRef;
 import org.lodestep.qa.Hashes;
@@ -152,14 +156,21 @@ final class QaReadings {
         double step = stepAngleDeg == null ? Double.NaN : stepAngleDeg;
         List<Path> steps = new ArrayList<>(stepResponses);
         if (stepResponsePattern != null && serial != null) {
-            steps.addAll(QaMotorCaptures.patternFiles("--step-response-pattern", stepResponsePattern, serial));
+            steps.addAll(patternFiles("--step-response-pattern", stepResponsePattern, serial));
         }
         Path emf = backEmfFile;
         if (backEmfPattern != null && serial != null) {
-            emf = QaMotorCaptures.patternFiles("--back-emf-pattern", backEmfPattern, serial).get(0);
+            emf = patternFiles("--back-emf-pattern", backEmfPattern, serial).get(0);
         }
         if (!steps.isEmpty() || emf != null) {
-            QaMotorCaptures.Result r = QaMotorCaptures.read(steps, stepSupplyV, seriesOhm, emf, revolutions, log);
+            QaMotorCaptures.Result r = QaMotorCaptures.read(steps, stepSupplyV, seriesOhm, emf, revolutions,
+                    new Progress() {
+                        @Override
+                        public void note(String message) {
+                            log.println("  " + message);
+                            log.flush();
+                        }
+                    });
             if (!r.inductancesH().isEmpty()) {
                 if (!inductances.isEmpty()) {
                     throw new UsageException("give phase inductances either as step responses or with "
@@ -273,4 +284,32 @@ final class QaReadings {
                 || backEmfPattern != null;
     }
 
+
+    /**
+     * The files of one serial number: {@code {serial}} replaced, then {@code *} and {@code ?} in the file name matched
+     * as a glob, sorted by name (so {@code -step-a} comes before {@code -step-b}). No match is an error.
+     */
+    static List<Path> patternFiles(String option, String pattern, String serial) throws IOException {
+        Path p = patternFile(pattern, serial, option);
+        String name = p.getFileName().toString();
+        if (!name.contains("*") && !name.contains("?")) {
+            return List.of(p);
+        }
+        if (serial.matches(".*[*?\\[\\]{}\\\\].*")) {
+            throw new UsageException(option + ": serial '" + serial + "' holds glob characters (* ? [ ] { } \\); "
+                    + "name the file without wildcards");
+        }
+        Path dir = p.getParent() == null ? Path.of(".") : p.getParent();
+        List<Path> out = new ArrayList<>();
+        if (Files.isDirectory(dir)) {
+            try (DirectoryStream<Path> ds = Files.newDirectoryStream(dir, name)) {
+                ds.forEach(out::add);
+            }
+        }
+        if (out.isEmpty()) {
+            throw new java.nio.file.NoSuchFileException(p.toString());
+        }
+        out.sort(null);
+        return out;
+    }
 }

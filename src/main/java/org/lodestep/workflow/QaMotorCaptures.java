@@ -1,7 +1,6 @@
-package org.lodestep.cli;
+package org.lodestep.workflow;
 
 import java.io.IOException;
-import java.io.PrintWriter;
 import java.nio.file.DirectoryStream;
 import java.nio.file.Files;
 import java.nio.file.Path;
@@ -23,9 +22,9 @@ import org.lodestep.qa.Hashes;
 
 /**
  * Phase inductance, back-EMF constant and step angle of one motor from its step-response and back-EMF captures, read
- * and fitted exactly as {@code motor identify} does ({@link MotorInputs}, {@link MotorIdentifier}).
+ * and fitted exactly as {@code motor identify} does ({@link MotorCaptureInputs}, {@link MotorIdentifier}).
  */
-final class QaMotorCaptures {
+public final class QaMotorCaptures {
     private QaMotorCaptures() {
     }
 
@@ -37,25 +36,25 @@ final class QaMotorCaptures {
      * @param stepAngleDeg  full-step angle from the rotor teeth, degrees
      * @param captures      each file with its SHA-256
      */
-    record Result(List<Double> inductancesH, double keVsPerRad, double stepAngleDeg, List<CaptureRef> captures) {
-        Result {
+    public record Result(List<Double> inductancesH, double keVsPerRad, double stepAngleDeg, List<CaptureRef> captures) {
+        public Result {
             inductancesH = List.copyOf(inductancesH);
             captures = List.copyOf(captures);
         }
     }
 
     /** Reads, fits and combines the given captures (either may be empty or null). */
-    static Result read(List<Path> stepFiles, Double stepSupplyV, Double seriesOhm, Path backEmfFile, Double revolutions,
-                       PrintWriter log) throws IOException, InputFormatException {
+    public static Result read(List<Path> stepFiles, Double stepSupplyV, Double seriesOhm, Path backEmfFile, Double revolutions,
+                       Progress progress) throws IOException, InputFormatException {
         List<CaptureRef> captures = new ArrayList<>();
         List<StepInput> steps = new ArrayList<>();
         for (Path p : stepFiles) {
-            steps.add(MotorInputs.stepResponse(p, stepSupplyV, seriesOhm, null));
+            steps.add(MotorCaptureInputs.stepResponse(p, stepSupplyV, seriesOhm, null));
             captures.add(new CaptureRef(p.toString(), "step_response", Hashes.sha256(p)));
         }
         BackEmfResult emf = null;
         if (backEmfFile != null) {
-            emf = MotorInputs.backEmf(backEmfFile, revolutions, null);
+            emf = MotorCaptureInputs.backEmf(backEmfFile, revolutions, null);
             captures.add(new CaptureRef(backEmfFile.toString(), "back_emf", Hashes.sha256(backEmfFile)));
         }
         MotorCard card = MotorIdentifier.identify(new IdentifyRequest(null, steps, emf, null, null, null, null));
@@ -72,7 +71,7 @@ final class QaMotorCaptures {
         if (!card.phases().isEmpty() && inductances.size() < card.phases().size()) {
             // Labels go by position, so a partial list would put phase B's value under A: judge none of them.
             if (!steps.isEmpty()) {
-                log.println("  the step responses do not give the inductance of every phase (" + card.phases().size()
+                progress.note("the step responses do not give the inductance of every phase (" + card.phases().size()
                         + " phases found): phase inductance not taken from them");
             }
             inductances.clear();
@@ -93,46 +92,17 @@ final class QaMotorCaptures {
         double step = card.stepAngleDeg() == null ? Double.NaN : card.stepAngleDeg();
         for (Finding f : card.findings()) {
             if (f.severity() != Severity.INFO) {
-                log.println("  capture " + f.severity().name().toLowerCase(Locale.ROOT) + ": " + f.message());
+                progress.note("capture " + f.severity().name().toLowerCase(Locale.ROOT) + ": " + f.message());
             }
         }
         if (emf != null && emf.findings().stream().anyMatch(f -> f.severity() == Severity.ERROR)) {
             // A dead channel or an impossible tooth count: neither Ke nor the step angle is judged on half a capture;
             // the checks stay incomplete and the inspector repeats the capture.
-            log.println("  back-EMF capture " + backEmfFile + " has an error: back-EMF constant and step angle not "
+            progress.note("back-EMF capture " + backEmfFile + " has an error: back-EMF constant and step angle not "
                     + "taken from it");
             ke = Double.NaN;
             step = Double.NaN;
         }
-        log.flush();
         return new Result(inductances, ke, step, captures);
-    }
-
-    /**
-     * The files of one serial number: {@code {serial}} replaced, then {@code *} and {@code ?} in the file name matched
-     * as a glob, sorted by name (so {@code -step-a} comes before {@code -step-b}). No match is an error.
-     */
-    static List<Path> patternFiles(String option, String pattern, String serial) throws IOException {
-        Path p = QaReadings.patternFile(pattern, serial, option);
-        String name = p.getFileName().toString();
-        if (!name.contains("*") && !name.contains("?")) {
-            return List.of(p);
-        }
-        if (serial.matches(".*[*?\\[\\]{}\\\\].*")) {
-            throw new UsageException(option + ": serial '" + serial + "' holds glob characters (* ? [ ] { } \\); "
-                    + "name the file without wildcards");
-        }
-        Path dir = p.getParent() == null ? Path.of(".") : p.getParent();
-        List<Path> out = new ArrayList<>();
-        if (Files.isDirectory(dir)) {
-            try (DirectoryStream<Path> ds = Files.newDirectoryStream(dir, name)) {
-                ds.forEach(out::add);
-            }
-        }
-        if (out.isEmpty()) {
-            throw new java.nio.file.NoSuchFileException(p.toString());
-        }
-        out.sort(null);
-        return out;
     }
 }

@@ -1,4 +1,4 @@
-package org.lodestep.cli;
+package org.lodestep.workflow;
 
 import java.io.IOException;
 import java.nio.file.Path;
@@ -19,8 +19,8 @@ import org.lodestep.motor.StepResponseFit;
 import org.lodestep.motor.StepResponseFitter;
 
 /** Turns step-response and back-EMF files into motor inputs: picks channels, reads metadata, runs the fits. */
-final class MotorInputs {
-    private MotorInputs() {
+public final class MotorCaptureInputs {
+    private MotorCaptureInputs() {
     }
 
     /**
@@ -28,13 +28,13 @@ final class MotorInputs {
      * {@code # supply_v=}, {@code # series_ohm=}; the flags are used where the file has none, and a recorded
      * {@code voltage_v} channel where neither gives the step voltage.
      */
-    static StepInput stepResponse(Path file, Double supplyFlagV, Double seriesFlagOhm, Double knownWindingOhm)
+    public static StepInput stepResponse(Path file, Double supplyFlagV, Double seriesFlagOhm, Double knownWindingOhm)
             throws IOException, InputFormatException {
         return stepResponse(Captures.readAll(file), supplyFlagV, seriesFlagOhm, knownWindingOhm);
     }
 
     /** As {@link #stepResponse(Path, Double, Double, Double)}, for a signal already in memory (a rig capture). */
-    static StepInput stepResponse(SampledSignal s, Double supplyFlagV, Double seriesFlagOhm, Double knownWindingOhm)
+    public static StepInput stepResponse(SampledSignal s, Double supplyFlagV, Double seriesFlagOhm, Double knownWindingOhm)
             throws InputFormatException {
         String src = s.source();
         int current = -1;
@@ -88,7 +88,7 @@ final class MotorInputs {
     }
 
     /** Fits channel {@code current} of {@code s} as a step across {@code pair}. */
-    static StepInput fit(SampledSignal s, int current, LeadPair pair, List<String> joined, Double supplyV,
+    public static StepInput fit(SampledSignal s, int current, LeadPair pair, List<String> joined, Double supplyV,
                          double seriesOhm, Double knownWindingOhm) {
         double[] i = s.channel(current);
         double[] t = new double[i.length];
@@ -100,7 +100,7 @@ final class MotorInputs {
     }
 
     /** The level of a recorded drive voltage over the last half of the record, V; null when not positive. */
-    static Double settledLevel(double[] v) {
+    public static Double settledLevel(double[] v) {
         double sum = 0;
         for (int k = v.length / 2; k < v.length; k++) {
             sum += v[k];
@@ -109,40 +109,18 @@ final class MotorInputs {
         return level > 0 ? level : null;
     }
 
-    /** The recorded current of a step-response capture, for drawing under its fit in the HTML report. */
-    static org.lodestep.report.MotorHtml.Trace trace(Path file) throws IOException, InputFormatException {
-        SampledSignal s = Captures.readAll(file);
-        int current = -1;
-        for (int c = 0; c < s.channels().size(); c++) {
-            Channel ch = s.channels().get(c);
-            if (ch.unit().equals("a") && (current < 0 || ch.name().startsWith("current"))) {
-                current = c; // the same column stepResponse fits
-            }
-        }
-        if (current < 0) {
-            throw new InputFormatException(file.toString(), InputFormatException.NO_LINE, null, null,
-                    "has no current channel");
-        }
-        double[] i = s.channel(current);
-        double[] t = new double[i.length];
-        for (int k = 0; k < t.length; k++) {
-            t[k] = s.startTimeS() + k / s.sampleRateHz();
-        }
-        return new org.lodestep.report.MotorHtml.Trace(file.getFileName().toString(), t, i);
-    }
-
     /**
      * Reads and analyses a back-EMF capture: channels {@code emf_<lead>_<lead>} in volts, optionally an index or
      * tachometer channel ({@code index}, {@code tach}); {@code # revolutions=} and {@code # pulses_per_rev=}
      * metadata, overridden by the flags.
      */
-    static BackEmfResult backEmf(Path file, Double revolutionsFlag, Integer pulsesFlag)
+    public static BackEmfResult backEmf(Path file, Double revolutionsFlag, Integer pulsesFlag)
             throws IOException, InputFormatException {
         return backEmf(Captures.readAll(file), revolutionsFlag, pulsesFlag);
     }
 
     /** As {@link #backEmf(Path, Double, Integer)}, for a signal already in memory (a rig capture). */
-    static BackEmfResult backEmf(SampledSignal s, Double revolutionsFlag, Integer pulsesFlag)
+    public static BackEmfResult backEmf(SampledSignal s, Double revolutionsFlag, Integer pulsesFlag)
             throws InputFormatException {
         String src = s.source();
         List<EmfChannel> channels = new ArrayList<>();
