@@ -4,6 +4,8 @@ import java.util.ArrayList;
 import java.util.List;
 import java.util.Locale;
 
+import org.lodestep.wiring.PhaseImbalance;
+
 /**
  * Judges one motor's measurements against a part spec: one {@link CheckResult} per measured value and spec limit,
  * and the overall verdict.
@@ -48,17 +50,9 @@ public final class Inspection {
         return new Judgement(Verdict.overall(out.stream().map(CheckResult::verdict).toList()), out);
     }
 
-    /** Phase balance, 100·(max − min)/mean, % (REFERENCE-CHECKS item 4, common practice). */
+    /** Phase balance in per cent, by the one definition in {@link PhaseImbalance}. */
     static double imbalancePct(List<Double> values) {
-        double min = Double.POSITIVE_INFINITY;
-        double max = Double.NEGATIVE_INFINITY;
-        double sum = 0;
-        for (double v : values) {
-            min = Math.min(min, v);
-            max = Math.max(max, v);
-            sum += v;
-        }
-        return 100.0 * (max - min) / (sum / values.size());
+        return PhaseImbalance.percent(values.stream().mapToDouble(Double::doubleValue).toArray());
     }
 
     private static void resistance(PartSpec spec, Measurements m, Limit limit, List<CheckResult> out) {

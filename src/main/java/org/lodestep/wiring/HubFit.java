@@ -110,19 +110,11 @@ final class HubFit {
         RealVector residual = a.operate(new ArrayRealVector(coil)).subtract(b);
         double meanReading = values.stream().mapToDouble(Double::doubleValue).average().orElse(1);
         double misfit = Math.sqrt(residual.dotProduct(residual) / values.size()) / Math.max(meanReading, 1e-9);
-        double min = Double.POSITIVE_INFINITY;
-        double max = Double.NEGATIVE_INFINITY;
-        double sum = 0;
-        for (double c : coil) {
-            min = Math.min(min, c);
-            max = Math.max(max, c);
-            sum += c;
-        }
-        double mean = sum / coil.length;
-        double spread = mean > 0 ? (max - min) / mean : Double.POSITIVE_INFINITY;
+        boolean allPositive = java.util.Arrays.stream(coil).allMatch(c -> c > 0 && Double.isFinite(c));
+        double spread = allPositive ? PhaseImbalance.fraction(coil) : Double.POSITIVE_INFINITY;
         // With redundant readings the misfit alone rejects a wrong hub, so a real tap asymmetry may show.
         double maxSpread = rows.size() > ends.size() ? 1.5 : MAX_SPREAD;
-        boolean fits = min > 0 && spread <= maxSpread && misfit <= MAX_MISFIT;
+        boolean fits = allPositive && spread <= maxSpread && misfit <= MAX_MISFIT;
         return new Candidate(hub, ends, coil, spread, misfit, fits);
     }
 }

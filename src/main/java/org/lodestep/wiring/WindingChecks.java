@@ -249,7 +249,7 @@ final class WindingChecks {
                 max = w;
             }
         }
-        double imbalance = imbalance(windings.stream().mapToDouble(Winding::resistanceOhm).toArray());
+        double imbalance = PhaseImbalance.fraction(windings.stream().mapToDouble(Winding::resistanceOhm).toArray());
         // Probe contact alone can make two readings differ by up to the allowance: not a motor fault.
         if (!(imbalance > s.imbalanceTolerance())
                 || max.resistanceOhm() - min.resistanceOhm() <= s.contactAllowanceOhm()) {
@@ -264,18 +264,6 @@ final class WindingChecks {
                 name(max), name(min)), List.of()));
     }
 
-    /** (max − min)/mean of the values (REFERENCE-CHECKS item 4), as a fraction. */
-    static double imbalance(double... values) {
-        double min = Double.POSITIVE_INFINITY;
-        double max = Double.NEGATIVE_INFINITY;
-        double sum = 0;
-        for (double v : values) {
-            min = Math.min(min, v);
-            max = Math.max(max, v);
-            sum += v;
-        }
-        return (max - min) / (sum / values.length);
-    }
 
     private static String name(Winding w) {
         return w.ends().get(0) + "-" + w.ends().get(1);

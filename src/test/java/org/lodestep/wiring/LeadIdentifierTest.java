@@ -164,7 +164,7 @@ class LeadIdentifierTest {
     @Test
     void imbalanceFractionMatchesItem4() {
         // REFERENCE-CHECKS item 4: coils 1.20 and 1.26 Ω → 4.878 % (abs 1e-3 %).
-        assertEquals(4.878, 100 * WindingChecks.imbalance(1.20, 1.26), 1e-3);
+        assertEquals(4.878, PhaseImbalance.percent(1.20, 1.26), 1e-3);
     }
 
     @Test
