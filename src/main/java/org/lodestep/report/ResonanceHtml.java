@@ -201,8 +201,8 @@ public final class ResonanceHtml {
     }
 
     /**
-     * The report of a ring-down fit: the measured response and the fitted decay envelope
-     * ±A·e^(−σ(t − t0)) around the settled value (the fit's own model, evaluated for drawing).
+     * The report of a ring-down fit: the measured response and the fitted decay envelope around the settled value,
+     * as the fit result gives it ({@link RingDownResult#upperEnvelopeAt}, {@link RingDownResult#lowerEnvelopeAt}).
      */
     public static HtmlReport ringDown(String source, String channel, String unit, double[] timeS, double[] x,
                                       RingDownResult r) {
@@ -212,19 +212,18 @@ public final class ResonanceHtml {
                 .meta("Fitted from", String.format(Locale.ROOT, "t = %.4f s, %.1f periods", r.startTimeS(),
                         r.periodsFitted()));
         boolean good = r.rSquared() >= 0.9;
+        List<Double> risky = r.riskyRatesFullStepsPerS(3);
         b.verdict(good ? Status.PASS : Status.WARN, String.format(Locale.ROOT,
                 "Natural frequency %.1f Hz, damping ratio %.3f", r.naturalFrequencyHz(), r.dampingRatio()),
                 good ? String.format(Locale.ROOT, "Low-speed resonance expected near %.0f, %.0f and %.0f full steps/s.",
-                        r.naturalFrequencyHz(), r.naturalFrequencyHz() / 2, r.naturalFrequencyHz() / 3)
+                        risky.get(0), risky.get(1), risky.get(2))
                         : "The fit is poor (R\u00B2 below 0.9): the response is not a single damped oscillation.");
         b.safety(SafetyNote.ENERGISED_COILS);
         double[] env = new double[timeS.length];
         double[] envLow = new double[timeS.length];
         for (int i = 0; i < timeS.length; i++) {
-            double dt = timeS[i] - r.startTimeS();
-            double a = dt >= 0 ? r.amplitude() * Math.exp(-r.decayRatePerS() * dt) : Double.NaN;
-            env[i] = r.offset() + a;
-            envLow[i] = r.offset() - a;
+            env[i] = r.upperEnvelopeAt(timeS[i]);
+            envLow[i] = r.lowerEnvelopeAt(timeS[i]);
         }
         String fit = String.format(Locale.ROOT, "fitted envelope: f\u2099 %.1f Hz, \u03B6 %.3f", r.naturalFrequencyHz(),
                 r.dampingRatio());

@@ -43,4 +43,15 @@ public final class DampedOscillation {
     public static double qualityFactor(double dampingRatio) {
         return 1 / (2 * dampingRatio);
     }
+
+    /** Envelope A·e^(-σ·t) of a free damped oscillation t seconds after its start (σ = ζ·ω_n). */
+    public static double envelope(double amplitude, double decayRatePerS, double t) {
+        return amplitude * Math.exp(-decayRatePerS * t);
+    }
+
+    /** Displacement A·e^(-σ·t)·cos(ω_d·t + φ) + c of a free damped oscillation t seconds after its start. */
+    public static double displacement(double amplitude, double decayRatePerS, double dampedRadPerS, double phaseRad,
+                                      double offset, double t) {
+        return envelope(amplitude, decayRatePerS, t) * Math.cos(dampedRadPerS * t + phaseRad) + offset;
+    }
 }

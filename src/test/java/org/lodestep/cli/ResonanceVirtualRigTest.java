@@ -1,5 +1,6 @@
 package org.lodestep.cli;
 
+import org.lodestep.sample.SweepShape;
 import static org.junit.jupiter.api.Assertions.assertEquals;
 import static org.junit.jupiter.api.Assertions.assertNotNull;
 import static org.junit.jupiter.api.Assertions.assertTrue;
@@ -33,7 +34,7 @@ class ResonanceVirtualRigTest {
             s = cap.signal();
         }
         SweepAnalyzer a = SweepAnalyzer.programmed(SweepSettings.forSampleRate(s.sampleRateHz()), s.sampleRateHz(),
-                new SweepLaw(SweepLaw.Shape.LINEAR, 20, 400, 20));
+                new SweepLaw(SweepShape.LINEAR, 20, 400, 20));
         double[] accel = s.channel(s.indexOf("accel"));
         a.feed(accel, null, 0, accel.length);
         SweepResult r = a.finish(BandSettings.defaults(), Double.NaN);
