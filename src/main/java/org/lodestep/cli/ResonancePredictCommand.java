@@ -75,7 +75,7 @@ final class ResonancePredictCommand implements Callable<Integer> {
             throw new UsageException("a prediction needs --inertia-kgm2 (rotor inertia, kg·m²); or give"
                     + " --measured-natural-hz to infer the inertia");
         }
-        ResonancePredict.Result r = ResonanceSweepCommand.usage(() -> ResonancePredict.run(
+        ResonancePredict.Result r = WorkflowCall.run(() -> ResonancePredict.run(
                 new ResonancePredict.Settings(holdingTorqueNm, nanIfNull(rotorInertiaKgm2), loadInertiaKgm2, rotorTeeth,
                         nanIfNull(measuredNaturalHz), microsteps, nanIfNull(travelMmPerRev),
                         nanIfNull(phaseResistanceOhm), nanIfNull(phaseInductanceH))));

@@ -54,7 +54,7 @@ final class ResonanceRingdownCommand implements Callable<Integer> {
     @Override
     public Integer call() throws Exception {
         PrintWriter out = spec.commandLine().getOut();
-        ResonanceRingdown.Result r = ResonanceSweepCommand.usage(() -> ResonanceRingdown.fit(file,
+        ResonanceRingdown.Result r = WorkflowCall.run(() -> ResonanceRingdown.fit(file,
                 new ResonanceRingdown.Settings(channel, fromS, toS), Progress.NONE));
         if (report != null) {
             ResonanceHtml.ringDown(r.source(), r.channel(), r.unit(), r.timeS(), r.values(), r.fit()).write(report);

@@ -139,8 +139,8 @@ final class ResonanceSweepCommand implements Callable<Integer> {
     @Override
     public Integer call() throws Exception {
         PrintWriter out = spec.commandLine().getOut();
-        ResonanceSweep.Settings settings = usage(this::settings);
-        ResonanceSweep.Result r = usage(() -> ResonanceSweep.analyse(file, settings, Progress.NONE));
+        ResonanceSweep.Settings settings = WorkflowCall.run(this::settings);
+        ResonanceSweep.Result r = WorkflowCall.run(() -> ResonanceSweep.analyse(file, settings, Progress.NONE));
         if (avoidListFile != null) {
             OutputFile.write(avoidListFile, ResonanceJson.avoidList(r.avoid()) + System.lineSeparator());
         }
@@ -170,23 +170,5 @@ final class ResonanceSweepCommand implements Callable<Integer> {
         return new ResonanceSweep.Settings(channel, pulseChannel, shape, start, end, duration, microsteps, rotorTeeth,
                 travelMmPerRev == null ? Double.NaN : travelMmPerRev, naturalHz == null ? Double.NaN : naturalHz,
                 dampingRatio == null ? Double.NaN : dampingRatio, bands, segment, window, crossingPeriods, margin);
-    }
-
-    /** A workflow call, with the checked exceptions of reading and of the rig. */
-    @FunctionalInterface
-    interface Step<T> {
-        T get() throws Exception;
-    }
-
-    /**
-     * Runs a workflow or settings constructor; its IllegalArgumentException is the user's option at fault (the
-     * workflows turn what the input cannot support into InputFormatException themselves).
-     */
-    static <T> T usage(Step<T> s) throws Exception {
-        try {
-            return s.get();
-        } catch (IllegalArgumentException e) {
-            throw new UsageException(e.getMessage());
-        }
     }
 }

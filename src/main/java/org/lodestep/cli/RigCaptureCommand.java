@@ -74,7 +74,7 @@ final class RigCaptureCommand implements Callable<Integer> {
             throw new UsageException("KIND '" + kind + "' is not sweep (step responses and back-EMF: rig measure "
                     + "... --out FILE)");
         }
-        RigSweepCapture.Settings settings = ResonanceSweepCommand.usage(() -> {
+        RigSweepCapture.Settings settings = WorkflowCall.run(() -> {
             RigSweepCapture.Settings s = new RigSweepCapture.Settings(address,
                     new SweepPlan(from, to, seconds, microsteps, rateHz), out, VersionProvider.version());
             RigCaptureFile.checkTarget(out); // before the caution: nothing moves for a file that cannot be written
@@ -87,7 +87,7 @@ final class RigCaptureCommand implements Callable<Integer> {
         caution.flush();
         RigSweepCapture.Result r;
         try (RigCli.Bar bar = new RigCli.Bar("sweep", spec.commandLine().getErr(), quiet)) {
-            r = ResonanceSweepCommand.usage(() -> RigSweepCapture.run(settings, bar));
+            r = WorkflowCall.run(() -> RigSweepCapture.run(settings, bar));
         }
         if (json) {
             o.println(Json.write(r.capture().metadata()));

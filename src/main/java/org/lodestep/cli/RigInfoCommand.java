@@ -38,7 +38,7 @@ final class RigInfoCommand implements Callable<Integer> {
             var scenarios = RigDescribe.scenarios();
             out.print(json ? Json.write(scenarios) + "\n" : RigText.scenarios(scenarios));
         } else {
-            RigInfo info = ResonanceSweepCommand.usage(() -> RigDescribe.info(address, Progress.NONE));
+            RigInfo info = WorkflowCall.run(() -> RigDescribe.info(address, Progress.NONE));
             out.print(json ? Json.write(info) + "\n" : RigText.info(info));
         }
         out.flush();

@@ -100,7 +100,7 @@ final class RigMeasureCommand implements Callable<Integer> {
         if (k == RigMeasure.Kind.STEP_RESPONSE && pairs.size() != 1) {
             throw new UsageException("step-response needs exactly one --pair A-B");
         }
-        RigMeasure.Settings settings = ResonanceSweepCommand.usage(() -> {
+        RigMeasure.Settings settings = WorkflowCall.run(() -> {
             RigMeasure.Settings s = new RigMeasure.Settings(address, k, pairs, leads, volts, seconds, ms, rateHz, out,
                     VersionProvider.version());
             if (out != null) {
@@ -126,7 +126,7 @@ final class RigMeasureCommand implements Callable<Integer> {
         RigMeasure.Result r;
         try (RigCli.Bar bar = new RigCli.Bar(k == RigMeasure.Kind.BACK_EMF ? "back-emf" : "step",
                 spec.commandLine().getErr(), quiet || k == RigMeasure.Kind.RESISTANCE || k == RigMeasure.Kind.INSULATION)) {
-            r = ResonanceSweepCommand.usage(() -> RigMeasure.run(settings, bar));
+            r = WorkflowCall.run(() -> RigMeasure.run(settings, bar));
         }
         switch (k) {
             case RESISTANCE -> o.print(json ? Json.write(r.resistances()) + "\n"

@@ -7,7 +7,7 @@ package org.lodestep.resonance;
  * <p>Source: S. S. Rao, <i>Mechanical Vibrations</i>, 5th ed., Prentice Hall 2011, ch. 2 (free vibration with viscous
  * damping): δ = (1/n)·ln(x_0/x_n); ζ = δ/√(4π² + δ²); ω_d = ω_n·√(1 - ζ²); envelope e^(-ζ·ω_n·t); Q = 1/(2ζ).
  */
-public final class DampedOscillation {
+final class DampedOscillation {
     private DampedOscillation() {
     }
 
