@@ -201,8 +201,9 @@ public final class ResonanceHtml {
     }
 
     /**
-     * The report of a ring-down fit: the measured response and the fitted decay envelope around the settled value,
-     * as the fit result gives it ({@link RingDownResult#upperEnvelopeAt}, {@link RingDownResult#lowerEnvelopeAt}).
+     * The report of a ring-down fit: the measured response, the fitted damped oscillation and its decay envelope
+     * around the settled value, as the fit result evaluates them ({@link RingDownResult#fittedAt},
+     * {@link RingDownResult#upperEnvelopeAt}, {@link RingDownResult#lowerEnvelopeAt}).
      */
     public static HtmlReport ringDown(String source, String channel, String unit, double[] timeS, double[] x,
                                       RingDownResult r) {
@@ -221,17 +222,22 @@ public final class ResonanceHtml {
         b.safety(SafetyNote.ENERGISED_COILS);
         double[] env = new double[timeS.length];
         double[] envLow = new double[timeS.length];
+        double[] curve = new double[timeS.length];
         for (int i = 0; i < timeS.length; i++) {
             env[i] = r.upperEnvelopeAt(timeS[i]);
             envLow[i] = r.lowerEnvelopeAt(timeS[i]);
+            curve[i] = r.fittedAt(timeS[i]);
         }
         String fit = String.format(Locale.ROOT, "fitted envelope: f\u2099 %.1f Hz, \u03B6 %.3f", r.naturalFrequencyHz(),
                 r.dampingRatio());
         b.section("Response and fit");
         b.figure(XyChart.builder("", "time (s)", channel + " (" + u + ")")
                 .points("measured", timeS, x).line(fit, timeS, env).sameAsPrevious(timeS, envLow)
-                .describe("Measured ring-down with the fitted exponential envelope drawn over it.").build().toSvg(),
-                "The measured response (points, or a thin line when dense) and the fitted decay envelope (dashed).");
+                .line("fitted damped oscillation", timeS, curve)
+                .describe("Measured ring-down with the fitted damped oscillation and its exponential envelope drawn"
+                        + " over it.").build().toSvg(),
+                "The measured response (points, or a thin line when dense), the fitted decay envelope and the fitted"
+                        + " damped oscillation, from the fitted stretch on.");
         Map<String, String> facts = new LinkedHashMap<>();
         facts.put("Natural frequency", String.format(Locale.ROOT, "%.2f Hz", r.naturalFrequencyHz()));
         facts.put("Damped frequency", String.format(Locale.ROOT, "%.2f Hz", r.dampedFrequencyHz()));

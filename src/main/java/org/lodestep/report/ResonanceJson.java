@@ -146,6 +146,7 @@ public final class ResonanceJson {
         m.put("start_time_s", r.startTimeS());
         m.put("fitted_duration_s", r.fittedDurationS());
         m.put("periods_fitted", r.periodsFitted());
+        m.put("phase_rad", r.phaseRad());
         return Json.write(m);
     }
 
