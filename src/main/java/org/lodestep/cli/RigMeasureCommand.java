@@ -124,8 +124,10 @@ final class RigMeasureCommand implements Callable<Integer> {
             caution.println(RigCautions.HAND_TURN);
         }
         RigMeasure.Result r;
+        // a bar for streamed captures only; readings come one by one and print as a table
+        boolean streams = k == RigMeasure.Kind.STEP_RESPONSE || k == RigMeasure.Kind.BACK_EMF;
         try (RigCli.Bar bar = new RigCli.Bar(k == RigMeasure.Kind.BACK_EMF ? "back-emf" : "step",
-                spec.commandLine().getErr(), quiet || k == RigMeasure.Kind.RESISTANCE || k == RigMeasure.Kind.INSULATION)) {
+                spec.commandLine().getErr(), quiet || !streams)) {
             r = WorkflowCall.run(() -> RigMeasure.run(settings, bar));
         }
         switch (k) {

@@ -37,7 +37,8 @@ public final class ResonancePredict {
 
     public static Result run(Settings s) {
         if (Double.isNaN(s.phaseResistanceOhm()) != Double.isNaN(s.phaseInductanceH())) {
-            throw new IllegalArgumentException("phase resistance and phase inductance go together: give both or neither");
+            throw new IllegalArgumentException("phase resistance and phase inductance go together: give both or"
+                    + " neither");
         }
         RateUnits units = new RateUnits(s.microsteps(), s.rotorTeeth(), s.travelMmPerRev());
         if (!Double.isNaN(s.measuredNaturalHz())) {

@@ -84,8 +84,8 @@ public final class ResonanceRingdown {
         int to = settings.toS() == null ? x.length
                 : (int) Math.min(x.length, Math.floor((settings.toS() - sig.startTimeS()) * fs) + 1);
         if (to <= from) {
-            throw new IllegalArgumentException("the time window (from-s/to-s) selects no samples of " + source + " (it runs from "
-                    + sig.startTimeS() + " s for " + x.length / fs + " s)");
+            throw new IllegalArgumentException("the time window (from-s/to-s) selects no samples of " + source
+                    + " (it runs from " + sig.startTimeS() + " s for " + x.length / fs + " s)");
         }
         double[] part = Arrays.copyOfRange(x, from, to);
         double t0 = sig.startTimeS() + from / fs;

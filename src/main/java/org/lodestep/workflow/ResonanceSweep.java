@@ -45,7 +45,8 @@ public final class ResonanceSweep {
     /**
      * What to analyse and how. Boxed and NaN values mean "not given".
      *
-     * @param channel            channel to analyse by name or header, or null for the first that is not the pulse channel
+     * @param channel            channel to analyse by name or header, or null for the first that is not the pulse
+     *                           channel
      * @param pulseChannel       recorded step-pulse channel, or null; when given it overrides any sweep law
      * @param shape              programmed sweep shape, or null to take it from the capture's metadata
      * @param startFullStepsPerS programmed start rate, or null (metadata)

@@ -35,8 +35,8 @@ public final class RigCaptureFile {
     public static void checkTarget(Path csv) {
         String name = csv.getFileName().toString();
         if (!name.endsWith(".csv") || name.length() <= 4) {
-            throw new IllegalArgumentException("capture file " + csv + ": a capture file name ends in .csv (the sidecar gets"
-                    + " .json)");
+            throw new IllegalArgumentException("capture file " + csv + ": the name must end in .csv (the sidecar"
+                    + " gets .json)");
         }
         Path sidecar = sidecarOf(csv);
         for (Path p : new Path[] {csv, sidecar}) {
