@@ -17,8 +17,9 @@ import java.util.List;
  *       on the direction, so it groups channels into phases and gives each coil's polarity;</li>
  *   <li>phase B is oriented to lag phase A while the shaft turned the way it turned most of the time, so a driver whose
  *       B current lags its A current turns the shaft that same way;</li>
- *   <li>with both phases present the electrical angle is {@code atan2(eA, -eB)}, defined at any speed, so cycles are
- *       counted through slow parts and direction changes; with one phase the analytic phase is used;</li>
+ *   <li>with both phases present the electrical angle is {@code atan2(eA, -eB)}; {@link ToothCounter} reads it only
+ *       where the EMF stands well above the idle noise, bridges slow stretches and reversals, and gives the tooth
+ *       count only when one whole number fits the count and its bound; with one phase the analytic phase is used;</li>
  *   <li>Ke (peak volts per electrical rad/s) is the least-squares slope through the origin of each channel's
  *       envelope against the electrical angular speed, block by block (20 ms blocks).</li>
  * </ol>
@@ -197,57 +198,29 @@ public final class BackEmfAnalyzer {
                     + channels.get(live.get(0)).pair() + ": only one phase was recorded"));
         }
 
-        // Electrical angle, held still where the shaft is not turning.
-        double[] amp = new double[n];
-        double[] rawAngle = new double[n];
+        // Electrical angle, read only where the EMF stands well above the idle noise (ToothCounter).
+        double[] px = new double[n];
+        double[] py = new double[n];
         for (int i = 0; i < n; i++) {
             if (zb != null) {
-                double a = za[0][i];
-                double b = zb[0][i];
-                amp[i] = Math.hypot(a, b);
-                rawAngle[i] = Math.atan2(a, -b);
+                px[i] = -zb[0][i];
+                py[i] = za[0][i];
             } else {
-                amp[i] = Math.hypot(za[0][i], za[1][i]);
-                rawAngle[i] = Math.atan2(za[1][i], za[0][i]);
+                px[i] = za[0][i];
+                py[i] = za[1][i];
             }
         }
-        int angleFrom = zb != null ? 0 : from;
-        int angleTo = zb != null ? n : to;
-        double[] sortedAmp = Arrays.copyOfRange(amp, angleFrom, angleTo);
-        Arrays.sort(sortedAmp);
-        double high = sortedAmp[(int) (0.95 * (sortedAmp.length - 1))];
-        double floor = sortedAmp[(int) (0.01 * (sortedAmp.length - 1))];
-        // Track the angle down to a few times the noise floor (the quietest 1 %, taken while the shaft rests), but
-        // never below 0.3 % of the high amplitude nor above MOVING_FRACTION of it.
-        double threshold = Math.min(MOVING_FRACTION * high, Math.max(5 * floor, 0.003 * high));
-        double[] angle = new double[n];
-        boolean[] moving = new boolean[n];
-        int lastValid = -1;
-        int firstValid = -1;
-        for (int i = angleFrom; i < angleTo; i++) {
-            moving[i] = amp[i] > threshold;
-            if (moving[i]) {
-                if (lastValid < 0) {
-                    angle[i] = rawAngle[i];
-                    firstValid = i;
-                } else {
-                    angle[i] = angle[lastValid] + wrap(rawAngle[i] - rawAngle[lastValid]);
-                }
-                lastValid = i;
-            } else {
-                angle[i] = lastValid < 0 ? rawAngle[i] : angle[lastValid];
-            }
+        ToothCounter.Track track = ToothCounter.track(px, py, sampleRateHz);
+        double[] angle = track.angleRad();
+        boolean[] moving = track.trusted();
+        boolean anyTrusted = false;
+        for (boolean t : moving) {
+            anyTrusted |= t;
         }
-        for (int i = 0; i < angleFrom; i++) {
-            angle[i] = angle[angleFrom];
-        }
-        for (int i = angleTo; i < n; i++) {
-            angle[i] = angle[angleTo - 1];
-        }
-        if (firstValid < 0) {
+        if (!anyTrusted) {
             throw new IllegalArgumentException("the shaft never turned fast enough to measure");
         }
-        double cycles = Math.abs(angle[lastValid] - angle[firstValid]) / (2 * Math.PI);
+        double cycles = Math.abs(track.cycles());
 
         // Block-wise frequency and Ke.
         int block = blockLength();
@@ -255,8 +228,8 @@ public final class BackEmfAnalyzer {
         double[] num = new double[m];
         double den = 0;
         int movingSamples = 0;
-        for (int i = from; i < to; i++) {
-            if (moving[i]) {
+        for (int i = 0; i < n; i++) {
+            if (track.moving()[i]) {
                 movingSamples++;
             }
         }
@@ -292,14 +265,17 @@ public final class BackEmfAnalyzer {
         double countedCycles = cycles;
         Double revs = null;
         if (indexChannel != null) {
-            int[] edges = risingEdges(indexChannel);
+            int[] all = risingEdges(indexChannel);
+            // Only pulses where the angle was read directly count: one in a slow start or stop has no exact angle.
+            int[] edges = Arrays.stream(all).filter(i -> moving[i]).toArray();
             if (edges.length >= 2) {
                 revs = (edges.length - 1) / (double) pulsesPerRevolution;
                 countedCycles = Math.abs(angle[edges[edges.length - 1]] - angle[edges[0]]) / (2 * Math.PI);
                 source = RevolutionSource.INDEX_CHANNEL;
-                if (revolutions != null && Math.abs(revolutions - revs) > 0.5) {
+                double allRevs = (all.length - 1) / (double) pulsesPerRevolution;
+                if (revolutions != null && Math.abs(revolutions - allRevs) > 0.5) {
                     findings.add(Finding.warning("revolutions_disagree", String.format("%.3g revolutions stated, "
-                            + "%.3g counted on the index channel; the count is used", revolutions, revs)));
+                            + "%.3g counted on the index channel; the count is used", revolutions, allRevs)));
                 }
             } else {
                 findings.add(Finding.warning("index_channel", "the index channel has fewer than two pulses"));
@@ -311,24 +287,16 @@ public final class BackEmfAnalyzer {
         }
         Double perRev = null;
         Integer teeth = null;
+        ToothCount toothCount = null;
         if (revs != null) {
-            perRev = StepGeometry.cyclesPerRevolution(countedCycles, revs);
-            teeth = (int) Math.round(perRev);
-            if (teeth < 1) {
-                findings.add(Finding.error("no_teeth", String.format("%.3g electrical cycles per revolution: the "
-                        + "revolution count or the capture is wrong", perRev)));
-                teeth = null;
-            } else {
-                double offCycles = Math.abs(countedCycles - teeth * revs);
-                if (offCycles > 0.25 * Math.max(1, revs)) {
-                    findings.add(Finding.warning("teeth_not_integer", String.format("%.2f electrical cycles per "
-                            + "revolution is not close to a whole number; check the revolution count", perRev)));
-                }
-                if (teeth != 50 && teeth != 100) {
-                    findings.add(Finding.warning("unusual_teeth", teeth + " rotor teeth is unusual for a hybrid "
-                            + "motor (50 for 1.8°, 100 for 0.9°); check the revolution count"));
-                }
-            }
+            boolean indexed = source == RevolutionSource.INDEX_CHANNEL;
+            toothCount = ToothCounter.count(countedCycles,
+                    indexed ? track.interiorUncertaintyCycles() + ToothCounter.ENDPOINT_ERROR_CYCLES
+                            : track.uncertaintyCycles(), revs,
+                    indexed ? 0 : ToothCounter.MARK_TOLERANCE_REV, track.trustedFraction());
+            perRev = toothCount.cyclesPerRevolution() > 0 ? toothCount.cyclesPerRevolution() : null;
+            teeth = toothCount.teeth();
+            findings.addAll(ToothFindings.of(toothCount));
         } else {
             findings.add(Finding.info("teeth_unknown", "revolutions not given: the rotor tooth count, step angle and "
                     + "mechanical Ke stay unknown (give --revolutions or a '# revolutions=' line)"));
@@ -344,7 +312,7 @@ public final class BackEmfAnalyzer {
                     rms[live.get(j)], keElec, keMech));
         }
         return new BackEmfResult(coils, cycles, movingS, meanF, minF, maxF, revs, source, perRev, teeth, lagDeg,
-                reversals, findings);
+                reversals, toothCount, findings);
     }
 
     private int blockLength() {
