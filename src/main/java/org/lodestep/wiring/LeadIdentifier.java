@@ -70,10 +70,23 @@ public final class LeadIdentifier {
                 findings.add(WindingChecks.leakage(u, cg.continuityLimitOhm));
             }
         }
+        List<Connection> salvage = null;
         if (groupsDecided && !singletons.isEmpty()) {
-            findings.add(WindingChecks.openWinding(singletons, windings, m.leads().size()));
+            var faulty = topology == Topology.UNKNOWN && allStructured
+                    ? FaultyLayout.infer(m.leads().size(), cg.groups, windings) : java.util.Optional.<FaultyLayout.Inference>empty();
+            if (faulty.isPresent()) {
+                topology = faulty.get().topology();
+                windings = faulty.get().windings();
+                salvage = faulty.get().salvage();
+                findings.add(new Finding(FindingCode.OPEN_WINDING, Severity.ERROR, faulty.get().message(),
+                        faulty.get().openLeads()));
+            } else {
+                findings.add(WindingChecks.openWinding(singletons, windings, m.leads().size()));
+            }
         }
-        WindingChecks.imbalance(topology, windings, s).ifPresent(findings::add);
+        if (salvage == null) {
+            WindingChecks.imbalance(topology, windings, s).ifPresent(findings::add);
+        }
         findings.sort(Comparator.comparing(Finding::severity).reversed());
 
         List<Double> atReference = new ArrayList<>();
@@ -87,7 +100,7 @@ public final class LeadIdentifier {
         }
         List<LeadPair> distinctMissing = missing.stream().distinct().toList();
         return new Identification(m.leads(), topology, windings, atReference, temperature, findings,
-                ConnectionGuide.connections(topology, windings), distinctMissing, distinctMissing.isEmpty(), cg.uses,
+                salvage != null ? salvage : ConnectionGuide.connections(topology, windings), distinctMissing, distinctMissing.isEmpty(), cg.uses,
                 m.readings().size(), m.allPairs().size());
     }
 
