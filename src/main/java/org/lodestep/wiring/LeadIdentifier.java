@@ -21,6 +21,12 @@ public final class LeadIdentifier {
 
     /** Identifies the motor from the readings with the given settings. */
     public static Identification identify(ResistanceMatrix m, IdentifySettings s) {
+        Identification asRead = identifyAsRead(m, s);
+        return SingleSlip.find(m, s, asRead, LeadIdentifier::identifyAsRead).orElse(asRead);
+    }
+
+    /** Identifies the readings as they are, trusting each one. */
+    static Identification identifyAsRead(ResistanceMatrix m, IdentifySettings s) {
         ContinuityGroups cg = new ContinuityGroups(m, s);
         List<LeadPair> missing = new ArrayList<>(cg.undecided);
         List<Finding> findings = new ArrayList<>();
