@@ -71,6 +71,9 @@ public final class LeadIdentifier {
             windings = windings.stream().map(w -> new Winding(w.ends(), null, w.resistanceOhm(), List.of(), true, true))
                     .toList();
         }
+        for (Winding w : windings) {
+            WindingChecks.shorted(w).ifPresent(findings::add);
+        }
         for (ReadingUse u : cg.uses) {
             if (u.kind().equals("leakage")) {
                 findings.add(WindingChecks.leakage(u, cg.continuityLimitOhm));
