@@ -59,13 +59,14 @@ def medians(samples):
 
 
 def alternate(cases, runs, env=None):
-    """cases: {name: argv}. Round-robin, order rotated each round. Returns {name: [samples]}."""
+    """cases: {name: argv or (argv, env)}. Round-robin, order rotated each round. Returns {name: [samples]}."""
     names = list(cases)
     res = {n: [] for n in names}
     for r in range(runs):
         order = names[r % len(names):] + names[:r % len(names)]
         for n in order:
-            res[n].append(measure(cases[n], env))
+            argv, e = cases[n] if isinstance(cases[n], tuple) else (cases[n], env)
+            res[n].append(measure(argv, e))
         log(f"  round {r + 1}/{runs} done, load {os.getloadavg()[0]:.1f}")
     return res
 
@@ -162,7 +163,8 @@ def main():
         small[f"`lodestep {cmd} --help`"] = [LAUNCHER] + cmd.split() + ["--help"]
     small_res = alternate(small, SMALL_RUNS)
     check = alternate({"bash": ["bash", "-c", ":"],
-                       "launcher": ["env", "LODESTEP_DRY_RUN=1", LAUNCHER, "--version"]}, max(SMALL_RUNS, 10))
+                       "launcher": ([LAUNCHER, "--version"], dict(os.environ, LODESTEP_DRY_RUN="1"))},
+                      max(SMALL_RUNS, 10))
 
     hour = None
     if HOUR:
