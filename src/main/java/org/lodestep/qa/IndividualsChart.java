@@ -44,6 +44,20 @@ public final class IndividualsChart {
     private IndividualsChart() {
     }
 
+    /** The moving range of span 2 ending at point {@code i} (1 or more): MR_i = |x_i − x_(i−1)|. */
+    public static double movingRange(double[] x, int i) {
+        return Math.abs(x[i] - x[i - 1]);
+    }
+
+    /** Every moving range of {@code x}: element i−1 is MR_i, so there is one fewer than there are points. */
+    public static double[] movingRanges(double[] x) {
+        double[] mr = new double[Math.max(0, x.length - 1)];
+        for (int i = 1; i < x.length; i++) {
+            mr[i - 1] = movingRange(x, i);
+        }
+        return mr;
+    }
+
     /** Limits for {@code x} in production order; needs at least two values (else every figure is NaN). */
     public static Limits of(double[] x) {
         int n = x.length;
@@ -56,7 +70,7 @@ public final class IndividualsChart {
         for (int i = 0; i < n; i++) {
             sum += x[i];
             if (i > 0) {
-                mrSum += Math.abs(x[i] - x[i - 1]);
+                mrSum += movingRange(x, i);
             }
         }
         double centre = sum / n;
@@ -73,7 +87,7 @@ public final class IndividualsChart {
             if (x[i] > ucl || x[i] < lcl) {
                 outX.add(i);
             }
-            if (i > 0 && Math.abs(x[i] - x[i - 1]) > uclMr) {
+            if (i > 0 && movingRange(x, i) > uclMr) {
                 outMr.add(i);
             }
         }
