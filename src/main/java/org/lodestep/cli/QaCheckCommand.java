@@ -20,6 +20,7 @@ import org.lodestep.qa.PartSpec;
 import org.lodestep.qa.PartSpecReader;
 import org.lodestep.qa.RecordStore;
 import org.lodestep.qa.StoreException;
+import org.lodestep.qa.Tally;
 import org.lodestep.qa.Verdict;
 import org.lodestep.report.Json;
 import org.lodestep.report.QaHtml;
@@ -125,7 +126,7 @@ final class QaCheckCommand implements Callable<Integer> {
         }
         partSpec = PartSpecReader.read(specFile);
         if (!json && partSpec.limit(Parameters.INSULATION_RESISTANCE).isPresent()) {
-            out.println(caution(partSpec.insulationTestVoltageV()));
+            out.println(QaText.insulationCaution(partSpec.insulationTestVoltageV()));
         }
         QaCheck.Settings settings = new QaCheck.Settings(partSpec, lot, readings.sources(),
                 ambientC == null ? Double.NaN : ambientC, operator(), station(), VersionProvider.version(),
@@ -153,9 +154,7 @@ final class QaCheckCommand implements Callable<Integer> {
     private int lot(QaCheck check, RecordStore records, PrintWriter out)
             throws IOException, StoreException {
         PrintWriter err = spec.commandLine().getErr();
-        int passed = 0;
-        int failed = 0;
-        int incomplete = 0;
+        Tally tally = Tally.NONE;
         List<RecordStore.Appended> results = new ArrayList<>();
         List<Map<String, String>> errors = new ArrayList<>();
         try (BufferedReader in = serialsFile == null || serialsFile.equals("-")
@@ -182,18 +181,14 @@ final class QaCheckCommand implements Callable<Integer> {
                     err.println("lodestep qa check: serial " + sn.replaceAll("\\p{Cntrl}", "?") + " not recorded: " + msg);
                     err.flush();
                     errors.add(Map.of("serial", sn, "message", msg));
-                    incomplete++;
+                    tally = tally.plus(Verdict.INCOMPLETE);
                     continue;
                 }
                 results.add(a);
-                switch (a.record().submission().verdict()) {
-                    case PASS -> passed++;
-                    case FAIL -> failed++;
-                    default -> incomplete++;
-                }
+                tally = tally.plus(a.record().submission().verdict());
                 if (!json) {
                     out.print(QaText.check(a.record(), a.created(), records.location()));
-                    out.println(QaText.tally(passed + failed + incomplete, passed, failed, incomplete));
+                    out.println(QaText.tally(tally));
                     out.println();
                     out.flush();
                 }
@@ -210,18 +205,18 @@ final class QaCheckCommand implements Callable<Integer> {
         if (json) {
             Map<String, Object> doc = new LinkedHashMap<>();
             doc.put("lot", lot);
-            doc.put("tested", passed + failed + incomplete);
-            doc.put("passed", passed);
-            doc.put("failed", failed);
-            doc.put("incomplete", incomplete);
+            doc.put("tested", tally.tested());
+            doc.put("passed", tally.passed());
+            doc.put("failed", tally.failed());
+            doc.put("incomplete", tally.incomplete());
             doc.put("results", results);
             doc.put("errors", errors);
             out.println(Json.write(doc));
         } else {
-            out.println("lot " + lot + " done: " + QaText.tally(passed + failed + incomplete, passed, failed, incomplete));
+            out.println("lot " + lot + " done: " + QaText.tally(tally));
         }
         out.flush();
-        return failed + incomplete == 0 ? ExitCode.OK : ExitCode.FINDING;
+        return tally.allPassed() ? ExitCode.OK : ExitCode.FINDING;
     }
 
     /** Rig readings and capture notes as indented lines: on stdout, or on stderr when stdout carries JSON. */
@@ -240,13 +235,6 @@ final class QaCheckCommand implements Callable<Integer> {
         if (v != null && !(v > 0 && Double.isFinite(v))) {
             throw new UsageException(option + " must be a positive number, got " + v);
         }
-    }
-
-    /** The one-line caution printed before checks that include an insulation test. */
-    static String caution(double testVoltageV) {
-        return "Caution: the insulation test applies " + Math.round(testVoltageV) + " V DC. Motor disconnected from any"
-                + " driver, hands off leads and frame while the tester runs, windings discharged afterwards; local"
-                + " electrical-safety rules take precedence.";
     }
 
     private String operator() {

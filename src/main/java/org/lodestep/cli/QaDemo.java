@@ -13,6 +13,7 @@ import org.lodestep.qa.PartSpecReader;
 import org.lodestep.qa.RecordQuery;
 import org.lodestep.qa.RecordStore;
 import org.lodestep.qa.RecordStores;
+import org.lodestep.qa.Tally;
 import org.lodestep.qa.Verdict;
 import org.lodestep.report.OutputFile;
 import org.lodestep.report.QaCsv;
@@ -109,9 +110,7 @@ final class QaDemo implements DemoCommand.Section {
         out.println();
         out.println("$ lodestep qa check --spec kv-4218-m.toml --lot " + LOT + " ... < lot-L2607-serials.txt");
         List<RecordStore.Appended> results = new ArrayList<>();
-        int passed = 0;
-        int failed = 0;
-        int incomplete = 0;
+        Tally tally = Tally.NONE;
         for (String line : Files.readAllLines(qa.resolve("lot-L2607-serials.txt"))) {
             String sn = line.strip();
             if (sn.isEmpty() || sn.startsWith("#")) {
@@ -119,27 +118,22 @@ final class QaDemo implements DemoCommand.Section {
             }
             RecordStore.Appended a = check.check(sn, Progress.NONE);
             results.add(a);
-            switch (a.record().submission().verdict()) {
-                case PASS -> passed++;
-                case FAIL -> failed++;
-                default -> incomplete++;
-            }
-            String tally = QaText.tally(passed + failed + incomplete, passed, failed, incomplete);
+            tally = tally.plus(a.record().submission().verdict());
             if (a.record().submission().verdict() == Verdict.PASS) {
                 // Compact: the framed serial line and the tally; the full verdict only for motors that did not pass.
                 QaText.check(a.record(), a.created(), store.location()).lines().filter(l -> l.startsWith("=   serial"))
                         .map(l -> "PASS  " + l.substring(1, l.length() - 1).strip()).forEach(out::println);
-                out.println(tally);
+                out.println(QaText.tally(tally));
             } else {
                 out.print(QaText.check(a.record(), a.created(), store.location()));
-                out.println(tally);
+                out.println(QaText.tally(tally));
                 out.println();
             }
         }
         QaHtml.check("lot " + LOT, results.stream().map(RecordStore.Appended::record).toList(),
                 spec.insulationTestVoltageV(), Map.of()).write(dir.resolve("qa-check-" + LOT + ".html"));
-        out.println("lot " + LOT + " done: " + QaText.tally(passed + failed + incomplete, passed, failed, incomplete));
-        return failed + incomplete == 0 ? ExitCode.OK : ExitCode.FINDING;
+        out.println("lot " + LOT + " done: " + QaText.tally(tally));
+        return tally.allPassed() ? ExitCode.OK : ExitCode.FINDING;
     }
 
     private static QaCheck.Settings settings(PartSpec spec, QaReadingSources sources, double ambientC) {

@@ -12,6 +12,7 @@ import org.lodestep.qa.LotStatistics;
 import org.lodestep.qa.Parameters;
 import org.lodestep.qa.StoredRecord;
 import org.lodestep.qa.Submission;
+import org.lodestep.qa.Tally;
 import org.lodestep.qa.Verdict;
 import org.lodestep.report.html.Cell;
 import org.lodestep.report.html.ControlChart;
@@ -40,29 +41,21 @@ public final class QaHtml {
     public static HtmlReport check(String title, List<StoredRecord> records, double testVoltageV,
                                    Map<String, String> notRecorded) {
         HtmlReport.Builder b = HtmlReport.builder("Incoming QA check", title);
-        int passed = 0;
-        int failed = 0;
-        int incomplete = notRecorded.size();
-        for (StoredRecord r : records) {
-            switch (r.submission().verdict()) {
-                case PASS -> passed++;
-                case FAIL -> failed++;
-                default -> incomplete++;
-            }
-        }
+        Tally tally = Tally.of(records);
+        tally = new Tally(tally.passed(), tally.failed(), tally.incomplete() + notRecorded.size());
         if (!records.isEmpty()) {
             Submission s = records.get(0).submission();
             b.meta("Part", s.partNumber() + " rev " + s.partRevision() + ", spec v" + s.specVersion())
                     .meta("Lot", s.lot()).meta("Operator", s.operator()).meta("Station", s.station());
         }
-        int tested = records.size() + notRecorded.size();
-        Status overall = failed > 0 ? Status.FAIL : incomplete > 0 ? Status.WARN : Status.PASS;
+        int tested = tally.tested();
+        Status overall = tally.failed() > 0 ? Status.FAIL : tally.incomplete() > 0 ? Status.WARN : Status.PASS;
         if (tested == 1 && records.size() == 1) {
             Submission s = records.get(0).submission();
             b.verdict(status(s.verdict()), s.verdict().name() + ": serial " + s.serial(), failing(s));
         } else {
-            b.verdict(overall, String.format(Locale.ROOT, "%d tested: %d pass, %d fail, %d incomplete", tested, passed,
-                    failed, incomplete), null);
+            b.verdict(overall, String.format(Locale.ROOT, "%d tested: %d pass, %d fail, %d incomplete", tested,
+                    tally.passed(), tally.failed(), tally.incomplete()), null);
         }
         if (!Double.isNaN(testVoltageV)) {
             b.safety(SafetyNote.INSULATION_TEST);
