@@ -52,7 +52,7 @@ public record Measurements(List<Double> phaseResistancesOhm, double windingTempe
     }
 
     /** Nothing measured yet. */
-    public static Measurements none() {
+    static Measurements none() {
         return new Measurements(List.of(), Double.NaN, List.of(), List.of(), Double.NaN, Double.NaN, List.of());
     }
 }
