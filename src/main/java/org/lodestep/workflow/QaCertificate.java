@@ -47,7 +47,7 @@ public final class QaCertificate {
         }
         List<String> parts = history.stream().map(r -> r.submission().partNumber()).distinct().toList();
         if (parts.size() > 1) {
-            throw new SettingsException("serial '" + serial + "' was tested as several parts " + parts + ": add --part");
+            throw new SettingsException("serial '" + serial + "' was tested as several parts " + parts + ": name the part");
         }
         StoredRecord latest = history.get(history.size() - 1);
         return new Result(serial, latest, history.subList(0, history.size() - 1),

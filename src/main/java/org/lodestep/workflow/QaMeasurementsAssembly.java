@@ -52,11 +52,11 @@ final class QaMeasurementsAssembly {
         double temperature = src.windingC() != null ? src.windingC() : Double.NaN;
         Path file = src.resistanceFile();
         if (src.resistancePattern() != null && serial != null) {
-            file = patternFile("--resistance-pattern", src.resistancePattern(), serial);
+            file = patternFile("resistance pattern", src.resistancePattern(), serial);
         }
         if (file != null) {
             if (!phases.isEmpty()) {
-                throw new SettingsException("give phase resistances either in a file or with --phase-ohm, not both");
+                throw new SettingsException("give phase resistances either in a resistance file or typed in, not both");
             }
             progress.step("reading " + file);
             QaResistancePhases.Phases p = QaResistancePhases.read(file);
@@ -72,11 +72,11 @@ final class QaMeasurementsAssembly {
         double step = src.stepAngleDeg() == null ? Double.NaN : src.stepAngleDeg();
         List<Path> steps = new ArrayList<>(src.stepResponses());
         if (src.stepResponsePattern() != null && serial != null) {
-            steps.addAll(patternFiles("--step-response-pattern", src.stepResponsePattern(), serial));
+            steps.addAll(patternFiles("step-response pattern", src.stepResponsePattern(), serial));
         }
         Path emf = src.backEmfFile();
         if (src.backEmfPattern() != null && serial != null) {
-            emf = patternFiles("--back-emf-pattern", src.backEmfPattern(), serial).get(0);
+            emf = patternFiles("back-EMF pattern", src.backEmfPattern(), serial).get(0);
         }
         if (!steps.isEmpty() || emf != null) {
             progress.step("fitting the motor captures");
@@ -84,14 +84,14 @@ final class QaMeasurementsAssembly {
                     src.revolutions(), progress);
             if (!r.inductancesH().isEmpty()) {
                 if (!inductances.isEmpty()) {
-                    throw new SettingsException("give phase inductances either as step responses or with "
-                            + "--inductance-mh, not both");
+                    throw new SettingsException("give phase inductances either as step responses or typed in, "
+                            + "not both");
                 }
                 inductances.addAll(r.inductancesH());
             }
             if (!Double.isNaN(r.keVsPerRad())) {
                 if (!Double.isNaN(ke)) {
-                    throw new SettingsException("give the back-EMF constant either as a capture or with --ke, not both");
+                    throw new SettingsException("give the back-EMF constant either as a capture or typed in, not both");
                 }
                 ke = r.keVsPerRad();
             }
@@ -126,7 +126,7 @@ final class QaMeasurementsAssembly {
             double volts = Double.isNaN(t.testVoltageV()) ? specTestVoltageV : t.testVoltageV();
             if (Double.isNaN(volts)) {
                 throw new SettingsException("insulation " + t.label() + ": the spec has no insulation test voltage; "
-                        + "give it as LABEL=MOHM@VOLTS");
+                        + "give the voltage the reading was taken at");
             }
             ins.add(new InsulationReading(t.label(), t.megohm() * OHM_PER_MEGOHM, volts));
         }
@@ -147,7 +147,7 @@ final class QaMeasurementsAssembly {
                     + " V DC was not confirmed: nothing was energised");
         }
         if (!phases.isEmpty() || src.resistanceFile() != null || src.resistancePattern() != null) {
-            throw new SettingsException("--rig measures phase resistance itself: give no --phase-ohm or resistance file");
+            throw new SettingsException("the rig measures phase resistance itself: give no typed phase resistances or resistance file");
         }
         RigClient c;
         try {
@@ -171,7 +171,7 @@ final class QaMeasurementsAssembly {
         }
         if (!into.isEmpty()) {
             throw new SettingsException(what + " of " + row.serial() + " given twice (meter log line " + row.line()
-                    + " and another option)");
+                    + " and another source)");
         }
         if (Double.isNaN(va) || Double.isNaN(vb)) {
             throw new SettingsException("meter log line " + row.line() + ": " + what + " needs both " + a + " and " + b);
@@ -182,15 +182,19 @@ final class QaMeasurementsAssembly {
 
     private static double pick(double option, double logged, String what) {
         if (!Double.isNaN(option) && !Double.isNaN(logged)) {
-            throw new SettingsException(what + " given both as an option and in the meter log");
+            throw new SettingsException(what + " given both typed in and in the meter log");
         }
         return Double.isNaN(option) ? logged : option;
     }
 
-    /** The capture file of one serial number; refuses serials that would leave the pattern's folder. */
-    static Path patternFile(String option, String pattern, String serial) {
+    /**
+     * The capture file of one serial number; refuses serials that would leave the pattern's folder.
+     *
+     * @param what the pattern's name in messages ("resistance pattern")
+     */
+    static Path patternFile(String what, String pattern, String serial) {
         if (!pattern.contains("{serial}")) {
-            throw new SettingsException(option + " '" + pattern + "' lacks {serial}");
+            throw new SettingsException(what + " '" + pattern + "' lacks {serial}");
         }
         if (serial.contains("/") || serial.contains("\\") || serial.contains("..")
                 || serial.chars().anyMatch(Character::isISOControl)) {
@@ -204,14 +208,14 @@ final class QaMeasurementsAssembly {
      * The files of one serial number: {@code {serial}} replaced, then {@code *} and {@code ?} in the file name matched
      * as a glob, sorted by name (so {@code -step-a} comes before {@code -step-b}). No match is an error.
      */
-    static List<Path> patternFiles(String option, String pattern, String serial) throws IOException {
-        Path p = patternFile(option, pattern, serial);
+    static List<Path> patternFiles(String what, String pattern, String serial) throws IOException {
+        Path p = patternFile(what, pattern, serial);
         String name = p.getFileName().toString();
         if (!name.contains("*") && !name.contains("?")) {
             return List.of(p);
         }
         if (serial.matches(".*[*?\\[\\]{}\\\\].*")) {
-            throw new SettingsException(option + ": serial '" + serial + "' holds glob characters (* ? [ ] { } \\); "
+            throw new SettingsException(what + ": serial '" + serial + "' holds glob characters (* ? [ ] { } \\); "
                     + "name the file without wildcards");
         }
         Path dir = p.getParent() == null ? Path.of(".") : p.getParent();

@@ -178,8 +178,8 @@ public final class HistogramChart {
             }
             JFreeChart chart = new JFreeChart(title.isEmpty() ? null : title, ChartStyle.TITLE, plot, true);
             String desc = description != null ? description
-                    : (title.isEmpty() ? "Histogram" : title) + ": " + n + " values of " + valueLabel + ", "
-                    + outCount + " outside the limits.";
+                    : (title.isEmpty() ? "Histogram" : title) + ": " + n + " values of " + valueLabel + " in " + k
+                    + (k == 1 ? " bin, " : " bins, ") + outCount + " outside the limits.";
             return new Chart(chart, widthPx, heightPx, desc);
         }
 
