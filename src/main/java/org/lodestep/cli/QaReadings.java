@@ -135,12 +135,4 @@ final class QaReadings {
             return true;
         };
     }
-
-    /** True when any reading source was given. */
-    boolean any() {
-        return resistanceFile != null || resistancePattern != null || !phaseOhm.isEmpty() || !inductanceMh.isEmpty()
-                || !insulation.isEmpty() || keVsPerRad != null || stepAngleDeg != null || meterLogFile != null || rig != null
-                || !stepResponses.isEmpty() || stepResponsePattern != null || backEmfFile != null
-                || backEmfPattern != null;
-    }
 }
