@@ -112,8 +112,14 @@ final class QaMeasurementsAssembly {
                 fromLog(row, "inductance_a_mh", "inductance_b_mh", HENRY_PER_MILLIHENRY, inductances, "inductance");
                 double volts = Double.isNaN(row.get("insulation_test_v")) ? specTestVoltageV : row.get("insulation_test_v");
                 for (var e : row.insulationMohm().entrySet()) {
-                    ins.add(new InsulationReading(e.getKey().replace('_', '-'), e.getValue() * OHM_PER_MEGOHM,
-                            Double.isNaN(volts) ? DEFAULT_TEST_VOLTAGE_V : volts));
+                    try {
+                        ins.add(new InsulationReading(e.getKey().replace('_', '-'), e.getValue() * OHM_PER_MEGOHM,
+                                Double.isNaN(volts) ? DEFAULT_TEST_VOLTAGE_V : volts));
+                    } catch (IllegalArgumentException bad) {
+                        throw new InputFormatException(src.meterLogFile().toString(), row.line(),
+                                "insulation_" + e.getKey() + "_mohm", Double.toString(e.getValue()),
+                                "expected 0 or more megohms (and a positive insulation_test_v)");
+                    }
                 }
                 ke = pick(ke, row.get("ke_v_s_per_rad"), "back-EMF constant");
                 step = pick(step, row.get("step_angle_deg"), "step angle");

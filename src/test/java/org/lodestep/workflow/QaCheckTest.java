@@ -185,6 +185,20 @@ class QaCheckTest {
     }
 
     @Test
+    void impossibleMeterLogInsulationIsABadLineNotAnInternalError() throws Exception {
+        Path log = dir.resolve("log.csv");
+        Files.writeString(log, "serial,phase_a_ohm,phase_b_ohm,insulation_a_frame_mohm\nSN-5,1.5,1.5,-5\n");
+        QaReadingSources src = new QaReadingSources(null, null, null, null, null, null, null, null, log, null, null,
+                null, null, null, null, null, null);
+        try (RecordStore store = store()) {
+            org.lodestep.sample.InputFormatException e = assertThrows(org.lodestep.sample.InputFormatException.class,
+                    () -> new QaCheck(settings(spec(), src, null), store).check("SN-5", Progress.NONE));
+            assertTrue(e.getMessage().contains("line 2") && e.getMessage().contains("insulation_a_frame_mohm"),
+                    e.getMessage());
+        }
+    }
+
+    @Test
     void patternsRefuseSerialsThatLeaveTheFolder() throws IOException {
         assertThrows(SettingsException.class,
                 () -> QaMeasurementsAssembly.patternFile("--resistance-pattern", "caps/{serial}.csv", "../etc"));
