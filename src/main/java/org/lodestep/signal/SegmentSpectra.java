@@ -31,6 +31,8 @@ public final class SegmentSpectra {
     private static final int BATCH_SEGMENTS = 32;
     /** Below this many complete segments a batch is transformed on the feeding thread alone. */
     private static final int PARALLEL_MIN_SEGMENTS = 4;
+    /** Batches transformed on the feeding thread alone after the helpers made it wait (a busy machine). */
+    private static final int BACK_OFF_BATCHES = 16;
 
     private final SpectralSettings settings;
     private final double sampleRateHz;
@@ -51,17 +53,27 @@ public final class SegmentSpectra {
     /** The batch being transformed: its segment count and the next slot a lane may take. */
     private int batchCount;
     private final AtomicInteger nextSlot = new AtomicInteger();
+    /** Whether to fall back to the feeding thread for a while when waiting on helpers costs more than they save. */
+    private final boolean adaptive;
+    private int serialBatchesLeft;
 
     /** A segmenter that transforms on one thread per core (see {@link TransformThreads#defaultLanes()}). */
     public SegmentSpectra(SpectralSettings settings, double sampleRateHz) {
-        this(settings, sampleRateHz, TransformThreads.defaultLanes());
+        this(settings, sampleRateHz, TransformThreads.defaultLanes(), true);
+    }
+
+    /** A segmenter that always shares batches among {@code lanes} threads, for tests of the parallel path. */
+    SegmentSpectra(SpectralSettings settings, double sampleRateHz, int lanes) {
+        this(settings, sampleRateHz, lanes, false);
     }
 
     /**
      * @param lanes threads that transform segments, the feeding thread included (1 = serial); listeners are called
      *              in segment order on the feeding thread whatever the lane count, with bit-identical spectra
+     * @param adaptive fall back to the feeding thread alone for a few batches when it waited on a helper longer
+     *              than half its own share of a batch (a helper thread descheduled on a busy machine)
      */
-    SegmentSpectra(SpectralSettings settings, double sampleRateHz, int lanes) {
+    private SegmentSpectra(SpectralSettings settings, double sampleRateHz, int lanes, boolean adaptive) {
         this.settings = Objects.requireNonNull(settings, "settings");
         if (!(sampleRateHz > 0) || !Double.isFinite(sampleRateHz)) {
             throw new IllegalArgumentException("sample rate must be positive and finite, got " + sampleRateHz + " Hz");
@@ -70,6 +82,7 @@ public final class SegmentSpectra {
             throw new IllegalArgumentException("lanes must be at least 1, got " + lanes);
         }
         this.sampleRateHz = sampleRateHz;
+        this.adaptive = adaptive;
         int n = settings.segmentLength();
         this.window = settings.window().periodic(n);
         double s1 = 0;
@@ -137,15 +150,24 @@ public final class SegmentSpectra {
         batchCount = count;
         nextSlot.set(0);
         int helpers = count < PARALLEL_MIN_SEGMENTS ? 0 : Math.min(lanes.length, count) - 1;
+        if (serialBatchesLeft > 0) {
+            serialBatchesLeft--;
+            helpers = 0;
+        }
         for (int h = 1; h <= helpers; h++) {
             if (lanes[h] == null) {
                 lanes[h] = new Lane(settings.segmentLength());
             }
             lanes[h].start(Thread.currentThread());
         }
+        long t0 = adaptive && helpers > 0 ? System.nanoTime() : 0;
         lanes[0].transformSlots();
+        long t1 = adaptive && helpers > 0 ? System.nanoTime() : 0;
         for (int h = 1; h <= helpers; h++) {
             lanes[h].awaitOrCancel();
+        }
+        if (adaptive && helpers > 0 && System.nanoTime() - t1 > (t1 - t0) / 2) {
+            serialBatchesLeft = BACK_OFF_BATCHES; // which thread computes a segment never changes its bits
         }
     }
 
