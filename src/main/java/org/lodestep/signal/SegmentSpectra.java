@@ -27,8 +27,10 @@ public final class SegmentSpectra {
         void segment(long firstSample, double[] magnitudeSquared, double meanSquare);
     }
 
-    /** Segments transformed per batch: enough to share among the lanes, few enough to stay in cache (~0.5 MiB). */
-    private static final int BATCH_SEGMENTS = 32;
+    /** Most segments transformed per batch: enough to share among the lanes (about 1 MiB at 4096 points). */
+    private static final int MAX_BATCH_SEGMENTS = 32;
+    /** Samples a batch may hold, so long segments keep memory to a few MiB: batches of 2 from 2^18 points on. */
+    private static final int BATCH_SAMPLE_BUDGET = 1 << 19;
     /** Below this many complete segments a batch is transformed on the feeding thread alone. */
     private static final int PARALLEL_MIN_SEGMENTS = 4;
     /** Batches transformed on the feeding thread alone after the helpers made it wait (a busy machine). */
@@ -93,11 +95,12 @@ public final class SegmentSpectra {
         }
         this.sumW = s1;
         this.sumW2 = s2;
-        this.samples = new double[n + settings.hopSamples() * (BATCH_SEGMENTS - 1)];
-        this.mag2 = new double[BATCH_SEGMENTS][];
-        this.meanSquare = new double[BATCH_SEGMENTS];
-        this.badSample = new long[BATCH_SEGMENTS];
-        this.lanes = new Lane[Math.min(lanes, BATCH_SEGMENTS)];
+        int batch = Math.max(2, Math.min(MAX_BATCH_SEGMENTS, BATCH_SAMPLE_BUDGET / n));
+        this.samples = new double[n + settings.hopSamples() * (batch - 1)];
+        this.mag2 = new double[batch][];
+        this.meanSquare = new double[batch];
+        this.badSample = new long[batch];
+        this.lanes = new Lane[Math.min(lanes, batch)];
         this.lanes[0] = new Lane(n); // the helpers' lanes are made on the first parallel batch
     }
 
@@ -149,7 +152,8 @@ public final class SegmentSpectra {
     private void transform(int count) {
         batchCount = count;
         nextSlot.set(0);
-        int helpers = count < PARALLEL_MIN_SEGMENTS ? 0 : Math.min(lanes.length, count) - 1;
+        // Long segments come in small batches, and each of their transforms is worth sharing.
+        int helpers = count < Math.min(PARALLEL_MIN_SEGMENTS, mag2.length) ? 0 : Math.min(lanes.length, count) - 1;
         if (serialBatchesLeft > 0) {
             serialBatchesLeft--;
             helpers = 0;

@@ -134,8 +134,10 @@ class SegmentSpectraParallelTest {
         for (SpectralSettings s : new SpectralSettings[] {
             new SpectralSettings(63, 0, Window.RECTANGULAR, Detrend.NONE),
             new SpectralSettings(100, 99, Window.FLAT_TOP, Detrend.MEAN),
-            new SpectralSettings(33, 11, Window.HANN, Detrend.NONE)}) {
-            double[] x = new double[5000 + r.nextInt(5000)];
+            new SpectralSettings(33, 11, Window.HANN, Detrend.NONE),
+            // long enough that a batch holds two segments only
+            new SpectralSettings(1 << 18, 1 << 17, Window.HANN, Detrend.MEAN)}) {
+            double[] x = new double[Math.max(5000 + r.nextInt(5000), 6 * (s.segmentLength() - s.overlapSamples()) + 3)];
             for (int i = 0; i < x.length; i++) {
                 x[i] = r.nextGaussian();
             }
