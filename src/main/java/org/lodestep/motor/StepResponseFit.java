@@ -36,4 +36,9 @@ public record StepResponseFit(double finalCurrentA, double timeConstantS, double
         Objects.requireNonNull(shape, "shape");
         findings = List.copyOf(findings);
     }
+
+    /** The fitted model at {@code timeS}, A: {@code i0} plus the {@link RlStep} rise from {@code t0}. */
+    public double modelCurrentA(double timeS) {
+        return offsetA + RlStep.riseA(finalCurrentA, timeConstantS, timeS - stepTimeS);
+    }
 }

@@ -132,10 +132,7 @@ public final class MotorHtml {
                     Trace tr = traces.get(k);
                     double[] model = new double[tr.timeS().length];
                     for (int i = 0; i < model.length; i++) {
-                        // The fitted model i0 + I∞·(1 − e^(−(t − t0)/τ)) of StepResponseFit, evaluated for drawing.
-                        double dt = tr.timeS()[i] - fit.stepTimeS();
-                        model[i] = fit.offsetA() + (dt > 0 ? fit.finalCurrentA() * -Math.expm1(-dt / fit.timeConstantS())
-                                : 0);
+                        model[i] = fit.modelCurrentA(tr.timeS()[i]);
                     }
                     b.figure(XyChart.fitOverData("", "time (s)", "current (A)", "measured", tr.timeS(), tr.currentA(),
                             fitLabel, tr.timeS(), model).toSvg(), what + ", " + tr.source() + ": measured current with"
