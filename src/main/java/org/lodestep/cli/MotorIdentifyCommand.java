@@ -4,20 +4,19 @@ import java.io.PrintWriter;
 import java.nio.file.Path;
 import java.util.ArrayList;
 import java.util.List;
+import java.util.Locale;
 import java.util.concurrent.Callable;
 
-import org.lodestep.capture.Captures;
-import org.lodestep.sample.Channel;
-import org.lodestep.sample.InputFormatException;
-import org.lodestep.sample.SampledSignal;
-import org.lodestep.motor.BackEmfResult;
 import org.lodestep.motor.Connection;
-import org.lodestep.motor.IdentifyRequest;
 import org.lodestep.motor.MotorCard;
-import org.lodestep.motor.MotorIdentifier;
-import org.lodestep.workflow.MotorCaptureInputs;
-import org.lodestep.motor.StepInput;
+import org.lodestep.motor.LeadPair;
 import org.lodestep.motor.WindingInput;
+import org.lodestep.rig.RigClient;
+import org.lodestep.rig.RigInfo;
+import org.lodestep.workflow.MotorCardSettings;
+import org.lodestep.workflow.MotorFromFiles;
+import org.lodestep.workflow.MotorOnRig;
+import org.lodestep.workflow.Progress;
 import org.lodestep.report.MotorHtml;
 import org.lodestep.report.MotorJson;
 import org.lodestep.report.MotorCardText;
@@ -146,34 +145,27 @@ final class MotorIdentifyCommand implements Callable<Integer> {
             throw new UsageException("--pulses-per-rev must be at least 1, got " + pulsesPerRev);
         }
         PrintWriter out = spec.commandLine().getOut();
-        WindingInput windings;
-        List<StepInput> steps = new ArrayList<>();
-        BackEmfResult emf;
+        MotorCardSettings cardSettings = new MotorCardSettings(connection, phaseCurrentA, supplyV, inertiaKgM2);
+        MotorCard card;
+        List<MotorHtml.Trace> traces = new ArrayList<>();
         if (rig != null) {
             if (!json) {
                 SAFETY.forEach(out::println);
                 out.println();
             }
-            MotorRigSequence.Measurements m = MotorRigSequence.run(rig, revolutions,
-                    json ? spec.commandLine().getErr() : out);
-            windings = m.windings();
-            steps.addAll(m.steps());
-            emf = m.backEmf();
+            PrintWriter log = json ? spec.commandLine().getErr() : out;
+            try (RigClient c = RigCli.connect(rig)) {
+                card = MotorOnRig.run(c, new MotorOnRig.Settings(revolutions, cardSettings), new RigLog(log)).card();
+            }
         } else {
-            windings = resistance == null ? null : MotorWindings.read(resistance);
-            for (Path p : stepResponses) {
-                steps.add(MotorCaptureInputs.stepResponse(p, stepSupplyV, seriesOhm, null));
-            }
-            emf = backEmf == null ? null : MotorCaptureInputs.backEmf(backEmf, revolutions, pulsesPerRev);
-        }
-        MotorCard card = MotorIdentifier.identify(new IdentifyRequest(windings, steps, emf, connection,
-                phaseCurrentA, supplyV, inertiaKgM2));
-        if (report != null) {
+            MotorFromFiles.Result r = MotorFromFiles.run(new MotorFromFiles.Settings(resistance, stepResponses,
+                    backEmf, revolutions, pulsesPerRev, stepSupplyV, seriesOhm, cardSettings, report != null),
+                    Progress.NONE);
+            card = r.card();
             // Recorded step responses are drawn under their fits; the rig's are measured in memory and listed only.
-            List<MotorHtml.Trace> traces = new ArrayList<>();
-            for (Path p : stepResponses) {
-                traces.add(trace(p));
-            }
+            r.traces().forEach(t -> traces.add(new MotorHtml.Trace(t.source(), t.timeS(), t.currentA())));
+        }
+        if (report != null) {
             MotorHtml.report(title(), card, traces).write(report);
         }
         if (json) {
@@ -185,6 +177,46 @@ final class MotorIdentifyCommand implements Callable<Integer> {
         }
         out.flush();
         return card.hasError() ? ExitCode.FINDING : ExitCode.OK;
+    }
+
+    /** Prints the rig sequence's stages as they begin. */
+    record RigLog(PrintWriter out) implements MotorOnRig.Listener {
+        @Override
+        public void connected(RigInfo info, List<String> leads) {
+            out.printf(Locale.ROOT, "rig %s (%s), %d leads: %s%n", info.rig(), info.address(), leads.size(),
+                    String.join(" ", leads));
+        }
+
+        @Override
+        public void measuringResistances(int pairs) {
+            out.printf(Locale.ROOT, "[1/3] resistance of %d lead pairs ...%n", pairs);
+            out.flush();
+        }
+
+        @Override
+        public void windingsFound(WindingInput windings) {
+            out.printf(Locale.ROOT, "      %s, %d coils%n", windings.topology().label(), windings.coils().size());
+        }
+
+        @Override
+        public void stepResponse(int k, int n, double volts, LeadPair coil) {
+            out.printf(Locale.ROOT, "[2/3] step response %d/%d: %.2f V across %s ...%n", k, n, volts, coil);
+            out.flush();
+        }
+
+        @Override
+        public void turnTheShaft(int coils, double seconds) {
+            out.printf(Locale.ROOT, "[3/3] back-EMF of %d coils for %.1f s: turn the shaft by hand, one way, a whole "
+                    + "number of turns ...%n", coils, seconds);
+            out.flush();
+        }
+
+        @Override
+        public void outputsOff() {
+            out.println("      done; outputs switched off");
+            out.println();
+            out.flush();
+        }
     }
 
     /** The cautions printed under every text card. */
@@ -201,28 +233,4 @@ final class MotorIdentifyCommand implements Callable<Integer> {
             throw new UsageException(option + " must be a positive number, got " + v);
         }
     }
-
-    /** The recorded current of a step-response capture, for drawing under its fit in the HTML report. */
-    private static org.lodestep.report.MotorHtml.Trace trace(Path file)
-            throws java.io.IOException, org.lodestep.sample.InputFormatException {
-        SampledSignal s = Captures.readAll(file);
-        int current = -1;
-        for (int c = 0; c < s.channels().size(); c++) {
-            Channel ch = s.channels().get(c);
-            if (ch.unit().equals("a") && (current < 0 || ch.name().startsWith("current"))) {
-                current = c; // the same column stepResponse fits
-            }
-        }
-        if (current < 0) {
-            throw new InputFormatException(file.toString(), InputFormatException.NO_LINE, null, null,
-                    "has no current channel");
-        }
-        double[] i = s.channel(current);
-        double[] t = new double[i.length];
-        for (int k = 0; k < t.length; k++) {
-            t[k] = s.startTimeS() + k / s.sampleRateHz();
-        }
-        return new org.lodestep.report.MotorHtml.Trace(file.getFileName().toString(), t, i);
-    }
-
 }

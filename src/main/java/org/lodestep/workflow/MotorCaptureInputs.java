@@ -33,10 +33,39 @@ public final class MotorCaptureInputs {
         return stepResponse(Captures.readAll(file), supplyFlagV, seriesFlagOhm, knownWindingOhm);
     }
 
-    /** As {@link #stepResponse(Path, Double, Double, Double)}, for a signal already in memory (a rig capture). */
-    public static StepInput stepResponse(SampledSignal s, Double supplyFlagV, Double seriesFlagOhm, Double knownWindingOhm)
-            throws InputFormatException {
-        String src = s.source();
+    /**
+     * The recorded current of a step response, for drawing under its fit.
+     *
+     * @param source   the file's name
+     * @param timeS    sample times, s
+     * @param currentA the current channel the fit used, A
+     */
+    public record StepTrace(String source, double[] timeS, double[] currentA) {
+        public StepTrace {
+            java.util.Objects.requireNonNull(source, "source");
+            if (timeS.length != currentA.length) {
+                throw new IllegalArgumentException("trace of " + source + ": " + timeS.length + " times but "
+                        + currentA.length + " currents");
+            }
+        }
+    }
+
+    /** A fitted step response and the recording it was fitted to. */
+    public record StepCapture(StepInput input, StepTrace trace) {
+    }
+
+    /** As {@link #stepResponse(Path, Double, Double, Double)}, keeping the recorded current with the fit. */
+    public static StepCapture stepCapture(Path file, Double supplyFlagV, Double seriesFlagOhm, Double knownWindingOhm)
+            throws IOException, InputFormatException {
+        SampledSignal s = Captures.readAll(file);
+        StepInput input = stepResponse(s, supplyFlagV, seriesFlagOhm, knownWindingOhm);
+        int current = currentChannel(s);
+        return new StepCapture(input, new StepTrace(file.getFileName().toString(), times(s, s.channel(current).length),
+                s.channel(current)));
+    }
+
+    /** The current channel a step response is fitted on: the first in amperes, or one named current*; -1 if none. */
+    private static int currentChannel(SampledSignal s) {
         int current = -1;
         for (int c = 0; c < s.channels().size(); c++) {
             Channel ch = s.channels().get(c);
@@ -44,6 +73,22 @@ public final class MotorCaptureInputs {
                 current = c;
             }
         }
+        return current;
+    }
+
+    private static double[] times(SampledSignal s, int n) {
+        double[] t = new double[n];
+        for (int k = 0; k < n; k++) {
+            t[k] = s.startTimeS() + k / s.sampleRateHz();
+        }
+        return t;
+    }
+
+    /** As {@link #stepResponse(Path, Double, Double, Double)}, for a signal already in memory (a rig capture). */
+    public static StepInput stepResponse(SampledSignal s, Double supplyFlagV, Double seriesFlagOhm, Double knownWindingOhm)
+            throws InputFormatException {
+        String src = s.source();
+        int current = currentChannel(s);
         if (current < 0) {
             throw new InputFormatException(src, InputFormatException.NO_LINE, null, String.join(",",
                     s.channelNames()), "has no current column: expected a column such as current_a (amperes)");
@@ -91,10 +136,7 @@ public final class MotorCaptureInputs {
     public static StepInput fit(SampledSignal s, int current, LeadPair pair, List<String> joined, Double supplyV,
                          double seriesOhm, Double knownWindingOhm) {
         double[] i = s.channel(current);
-        double[] t = new double[i.length];
-        for (int k = 0; k < t.length; k++) {
-            t[k] = s.startTimeS() + k / s.sampleRateHz();
-        }
+        double[] t = times(s, i.length);
         StepResponseFit fit = new StepResponseFitter(supplyV, seriesOhm, knownWindingOhm).fit(t, i);
         return new StepInput(pair, joined, fit);
     }

@@ -1,4 +1,4 @@
-package org.lodestep.cli;
+package org.lodestep.workflow;
 
 import java.io.IOException;
 import java.nio.file.Path;
@@ -28,7 +28,7 @@ final class MotorWindings {
 
     static WindingInput read(Path file) throws IOException, InputFormatException {
         ResistanceReadings r = ResistanceCsvReader.read(file);
-        Identification id = LeadIdentifier.identify(LeadsIdentifyCommand.matrix(r, List.of()),
+        Identification id = LeadIdentifier.identify(LeadsFromReadings.matrix(r, List.of()),
                 IdentifySettings.DEFAULT);
         return of(id);
     }
