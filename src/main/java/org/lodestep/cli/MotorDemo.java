@@ -6,7 +6,7 @@ import java.nio.file.Path;
 import java.util.ArrayList;
 import java.util.List;
 
-import org.lodestep.motor.Connection;
+import org.lodestep.wiring.Connection;
 import org.lodestep.motor.MotorCard;
 import org.lodestep.report.MotorCardText;
 import org.lodestep.report.MotorHtml;

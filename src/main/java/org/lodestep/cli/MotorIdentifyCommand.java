@@ -7,9 +7,9 @@ import java.util.List;
 import java.util.Locale;
 import java.util.concurrent.Callable;
 
-import org.lodestep.motor.Connection;
+import org.lodestep.wiring.Connection;
 import org.lodestep.motor.MotorCard;
-import org.lodestep.motor.LeadPair;
+import org.lodestep.motor.OrientedLeads;
 import org.lodestep.motor.WindingInput;
 import org.lodestep.rig.RigClient;
 import org.lodestep.rig.RigInfo;
@@ -133,6 +133,9 @@ final class MotorIdentifyCommand implements Callable<Integer> {
         if (files && rig != null) {
             throw new UsageException("--rig measures everything itself; give either --rig or files, not both");
         }
+        if (connection == Connection.WHOLE) {
+            throw new UsageException("--connection whole: expected series, parallel, half or unipolar");
+        }
         positive(revolutions, "--revolutions");
         positive(phaseCurrentA, "--phase-current-a");
         positive(supplyV, "--supply-v");
@@ -199,7 +202,7 @@ final class MotorIdentifyCommand implements Callable<Integer> {
         }
 
         @Override
-        public void stepResponse(int k, int n, double volts, LeadPair coil) {
+        public void stepResponse(int k, int n, double volts, OrientedLeads coil) {
             out.printf(Locale.ROOT, "[2/3] step response %d/%d: %.2f V across %s ...%n", k, n, volts, coil);
             out.flush();
         }

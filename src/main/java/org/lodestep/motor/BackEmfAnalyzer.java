@@ -3,6 +3,7 @@ package org.lodestep.motor;
 import java.util.ArrayList;
 import java.util.Arrays;
 import java.util.List;
+import org.lodestep.wiring.Finding;
 
 /**
  * Phases the coils of a motor from a multi-channel back-EMF capture taken while the shaft is turned by hand, tracks
@@ -93,7 +94,7 @@ public final class BackEmfAnalyzer {
         List<Integer> live = new ArrayList<>();
         for (int k = 0; k < channels.size(); k++) {
             if (rms[k] < DEAD_FRACTION * maxRms) {
-                findings.add(Finding.error("no_emf", String.format("channel %s shows no back-EMF (%.3g V RMS against "
+                findings.add(Finding.error(MotorFindingCode.NO_EMF, String.format("channel %s shows no back-EMF (%.3g V RMS against "
                         + "%.3g V on the strongest): an open coil, a broken lead, or two leads that are not one coil",
                         channels.get(k).pair(), rms[k], maxRms)));
             } else {
@@ -184,16 +185,16 @@ public final class BackEmfAnalyzer {
             }
             lagDeg = -Math.toDegrees(Math.atan2(sim, sre));
             if (Math.abs(lagDeg - 90) > 20) {
-                findings.add(Finding.warning("not_quadrature", String.format("phase B lags phase A by %.0f° "
+                findings.add(Finding.warning(MotorFindingCode.NOT_QUADRATURE, String.format("phase B lags phase A by %.0f° "
                         + "electrical, expected 90°: the channels may not be single coils", lagDeg)));
             }
             if (reversals > 0) {
-                findings.add(Finding.warning("direction_reversed", "the shaft changed direction " + reversals
+                findings.add(Finding.warning(MotorFindingCode.DIRECTION_REVERSED, "the shaft changed direction " + reversals
                         + " time(s) during the capture; the pairing is unaffected, but for a tooth count turn one way "
                         + "only"));
             }
         } else if (m > 1) {
-            findings.add(Finding.warning("one_phase", "every live channel is in phase or antiphase with "
+            findings.add(Finding.warning(MotorFindingCode.ONE_PHASE, "every live channel is in phase or antiphase with "
                     + channels.get(live.get(0)).pair() + ": only one phase was recorded"));
         }
 
@@ -284,7 +285,7 @@ public final class BackEmfAnalyzer {
         double maxF = freqs.stream().mapToDouble(Double::doubleValue).max().orElse(0);
         double meanF = movingS > 0 ? cycles / movingS : 0;
         if (freqs.isEmpty()) {
-            findings.add(Finding.warning("too_slow", "no 20 ms stretch of steady turning: Ke is not measured"));
+            findings.add(Finding.warning(MotorFindingCode.TOO_SLOW, "no 20 ms stretch of steady turning: Ke is not measured"));
         }
 
         // Revolutions: stated, or counted between the first and last index pulse.
@@ -298,11 +299,11 @@ public final class BackEmfAnalyzer {
                 countedCycles = Math.abs(angle[edges[edges.length - 1]] - angle[edges[0]]) / (2 * Math.PI);
                 source = RevolutionSource.INDEX_CHANNEL;
                 if (revolutions != null && Math.abs(revolutions - revs) > 0.5) {
-                    findings.add(Finding.warning("revolutions_disagree", String.format("%.3g revolutions stated, "
+                    findings.add(Finding.warning(MotorFindingCode.REVOLUTIONS_DISAGREE, String.format("%.3g revolutions stated, "
                             + "%.3g counted on the index channel; the count is used", revolutions, revs)));
                 }
             } else {
-                findings.add(Finding.warning("index_channel", "the index channel has fewer than two pulses"));
+                findings.add(Finding.warning(MotorFindingCode.INDEX_CHANNEL, "the index channel has fewer than two pulses"));
             }
         }
         if (revs == null && revolutions != null) {
@@ -315,29 +316,29 @@ public final class BackEmfAnalyzer {
             perRev = StepGeometry.cyclesPerRevolution(countedCycles, revs);
             teeth = (int) Math.round(perRev);
             if (teeth < 1) {
-                findings.add(Finding.error("no_teeth", String.format("%.3g electrical cycles per revolution: the "
+                findings.add(Finding.error(MotorFindingCode.NO_TEETH, String.format("%.3g electrical cycles per revolution: the "
                         + "revolution count or the capture is wrong", perRev)));
                 teeth = null;
             } else {
                 double offCycles = Math.abs(countedCycles - teeth * revs);
                 if (offCycles > 0.25 * Math.max(1, revs)) {
-                    findings.add(Finding.warning("teeth_not_integer", String.format("%.2f electrical cycles per "
+                    findings.add(Finding.warning(MotorFindingCode.TEETH_NOT_INTEGER, String.format("%.2f electrical cycles per "
                             + "revolution is not close to a whole number; check the revolution count", perRev)));
                 }
                 if (teeth != 50 && teeth != 100) {
-                    findings.add(Finding.warning("unusual_teeth", teeth + " rotor teeth is unusual for a hybrid "
+                    findings.add(Finding.warning(MotorFindingCode.UNUSUAL_TEETH, teeth + " rotor teeth is unusual for a hybrid "
                             + "motor (50 for 1.8°, 100 for 0.9°); check the revolution count"));
                 }
             }
         } else {
-            findings.add(Finding.info("teeth_unknown", "revolutions not given: the rotor tooth count, step angle and "
+            findings.add(Finding.info(MotorFindingCode.TEETH_UNKNOWN, "revolutions not given: the rotor tooth count, step angle and "
                     + "mechanical Ke stay unknown (give --revolutions or a '# revolutions=' line)"));
         }
 
         List<EmfCoil> coils = new ArrayList<>();
         for (int j = 0; j < m; j++) {
-            LeadPair measured = channels.get(live.get(j)).pair();
-            LeadPair oriented = polarity[j] >= 0 ? measured : measured.reversed();
+            OrientedLeads measured = channels.get(live.get(j)).pair();
+            OrientedLeads oriented = polarity[j] >= 0 ? measured : measured.reversed();
             double keElec = den > 0 ? num[j] / den : 0;
             Double keMech = teeth != null && keElec > 0 ? keElec * teeth : null;
             coils.add(new EmfCoil(measured, group[j] == 0 ? "A" : "B", oriented, group[j] == 0 ? 0.0 : -90.0,

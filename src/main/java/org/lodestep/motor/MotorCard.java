@@ -2,6 +2,8 @@ package org.lodestep.motor;
 
 import java.util.List;
 import java.util.Objects;
+import org.lodestep.wiring.Finding;
+import org.lodestep.wiring.Severity;
 
 /**
  * Everything known about one motor after identification, and what is not known yet. Values that could not be

@@ -8,7 +8,9 @@ import java.util.Map;
 import java.util.Set;
 
 import org.lodestep.motor.PhaseAssignment.OrientedCoil;
+import org.lodestep.wiring.Connection;
 import org.lodestep.wiring.Topology;
+import org.lodestep.wiring.Finding;
 
 /**
  * Combines whatever is known about a motor (resistances, step responses, back-EMF) into a {@link MotorCard}, and says
@@ -80,7 +82,7 @@ public final class MotorIdentifier {
                 } else if (coilR.containsKey(k) && fromStep != null
                         && Math.abs(fromStep - coilR.get(k)) > Math.max(0.05 * coilR.get(k), 0.05)) {
                     // 5 % or 50 mOhm: meter and probe scatter (common practice); beyond that the loop is misdescribed
-                    findings.add(Finding.info("step_resistance", String.format(java.util.Locale.ROOT, "%s gives "
+                    findings.add(Finding.info(MotorFindingCode.STEP_RESISTANCE, String.format(java.util.Locale.ROOT, "%s gives "
                             + "%.3g ohm for the coil, the resistance matrix %.3g ohm: the series resistance or the "
                             + "step voltage may be stated wrongly (the inductance uses the loop as measured)", where,
                             fromStep, coilR.get(k))));
@@ -91,11 +93,11 @@ public final class MotorIdentifier {
             if (match != null && s.fit().inductanceH() != null && match.aiding()) {
                 fullPhaseL.put(match.phase(), s.fit().inductanceH());
             } else if (match != null && s.fit().inductanceH() != null) {
-                findings.add(Finding.warning("series_opposing", where + ": the two coils of phase " + match.phase()
+                findings.add(Finding.warning(MotorFindingCode.SERIES_OPPOSING, where + ": the two coils of phase " + match.phase()
                         + " were joined start to start (or end to end), so their fluxes cancel; join the end of one "
                         + "to the start of the other (see the series wiring) to measure the coupling"));
             } else {
-                findings.add(Finding.warning("step_unmatched", where + " is not across one coil or one whole "
+                findings.add(Finding.warning(MotorFindingCode.STEP_UNMATCHED, where + " is not across one coil or one whole "
                         + "phase in series; ignored"));
             }
         }
@@ -151,7 +153,7 @@ public final class MotorIdentifier {
             if (fullPhaseL.containsKey(name) && lc != null) {
                 kappa = CoupledCoils.couplingFactor(lc, fullPhaseL.get(name));
                 if (kappa < 0.5 || kappa > 1.05) {
-                    findings.add(Finding.warning("coupling", String.format("phase %s: coupling factor %.3f from the "
+                    findings.add(Finding.warning(MotorFindingCode.COUPLING, String.format("phase %s: coupling factor %.3f from the "
                             + "series response; below 0.5 the coils were joined in opposition, above 1 the "
                             + "responses disagree", name, kappa)));
                 }
@@ -162,23 +164,23 @@ public final class MotorIdentifier {
             boolean two = coils.size() == 2;
             switch (two ? connection : Connection.HALF) {
                 case SERIES -> {
-                    phaseR = r == null ? null : CoupledCoils.seriesResistanceOhm(r);
+                    phaseR = r == null ? null : Connection.SERIES.phaseResistanceOhm(r);
                     if (fullPhaseL.containsKey(name)) {
                         phaseL = fullPhaseL.get(name);
                     } else if (lc != null) {
                         kappaAssumedIn.add(name);
-                        phaseL = CoupledCoils.seriesInductanceH(lc, sharedKappa == null ? 1.0 : sharedKappa);
+                        phaseL = Connection.SERIES.phaseInductanceH(lc, sharedKappa == null ? 1.0 : sharedKappa);
                     }
                     phaseKe = ke == null ? null : 2 * ke;
                 }
                 case PARALLEL -> {
-                    phaseR = r == null ? null : CoupledCoils.parallelResistanceOhm(r);
+                    phaseR = r == null ? null : Connection.PARALLEL.phaseResistanceOhm(r);
                     if (lc != null) {
                         if (kappa == null) {
                             kappaAssumedIn.add(name);
                         }
                         double k = kappa != null ? kappa : sharedKappa != null ? sharedKappa : 1.0;
-                        phaseL = CoupledCoils.parallelInductanceH(lc, k);
+                        phaseL = Connection.PARALLEL.phaseInductanceH(lc, k);
                     }
                     phaseKe = ke;
                 }
@@ -250,7 +252,7 @@ public final class MotorIdentifier {
         if (supply != null && phaseR != null && phaseL != null && current != null) {
             rate = DriveLimits.fullCurrentRateFullStepsPerS(supply, phaseR, phaseL, current);
             if (rate == 0.0) {
-                findings.add(Finding.error("supply_too_low", String.format("%.3g V cannot drive %.3g A through "
+                findings.add(Finding.error(MotorFindingCode.SUPPLY_TOO_LOW, String.format("%.3g V cannot drive %.3g A through "
                         + "%.3g ohm", supply, current, phaseR)));
             }
         } else if (phaseL == null) {
@@ -322,7 +324,7 @@ public final class MotorIdentifier {
         return null;
     }
 
-    private static Set<String> key(LeadPair p) {
+    private static Set<String> key(OrientedLeads p) {
         return Set.of(p.first(), p.second());
     }
 
@@ -334,6 +336,6 @@ public final class MotorIdentifier {
     }
 
     private static Finding prefixed(String where, Finding f) {
-        return new Finding(f.severity(), f.code(), where + ": " + f.message());
+        return f.at(where);
     }
 }

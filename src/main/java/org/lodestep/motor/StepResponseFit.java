@@ -2,6 +2,7 @@ package org.lodestep.motor;
 
 import java.util.List;
 import java.util.Objects;
+import org.lodestep.wiring.Finding;
 
 /**
  * Result of fitting {@code i(t) = i0 + Iinf·(1 - e^(-(t - t0)/tau))} to a current step response.

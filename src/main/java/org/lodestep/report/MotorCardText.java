@@ -4,7 +4,7 @@ import java.util.List;
 import java.util.Locale;
 
 import org.lodestep.motor.BackEmfResult;
-import org.lodestep.motor.Finding;
+import org.lodestep.wiring.Finding;
 import org.lodestep.motor.HalfWinding;
 import org.lodestep.motor.MotorCard;
 import org.lodestep.motor.PhaseCard;

@@ -6,11 +6,11 @@ import java.util.List;
 import java.util.Locale;
 import java.util.Map;
 
-import org.lodestep.motor.Finding;
+import org.lodestep.wiring.Finding;
 import org.lodestep.motor.HalfWinding;
 import org.lodestep.motor.MotorCard;
 import org.lodestep.motor.PhaseCard;
-import org.lodestep.motor.Severity;
+import org.lodestep.wiring.Severity;
 import org.lodestep.motor.StepInput;
 import org.lodestep.motor.StepResponseFit;
 import org.lodestep.motor.Terminal;
@@ -157,7 +157,7 @@ public final class MotorHtml {
                 case ERROR -> Status.FAIL;
                 case WARNING -> Status.WARN;
                 case INFO -> Status.INFO;
-            }, x.code() + ": " + x.message()));
+            }, x.code().code() + ": " + x.message()));
         }
         for (String u : card.unknowns()) {
             fs.add(new HtmlReport.Finding(Status.WARN, "Unknown: " + u));

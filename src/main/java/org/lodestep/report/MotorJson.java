@@ -1,13 +1,22 @@
 package org.lodestep.report;
 
+import java.io.IOException;
+
+import com.fasterxml.jackson.annotation.JsonIgnoreProperties;
 import com.fasterxml.jackson.annotation.JsonProperty;
+import com.fasterxml.jackson.annotation.JsonPropertyOrder;
+import com.fasterxml.jackson.core.JsonGenerator;
 import com.fasterxml.jackson.core.JsonProcessingException;
 import com.fasterxml.jackson.databind.ObjectMapper;
+import com.fasterxml.jackson.databind.SerializerProvider;
+import com.fasterxml.jackson.databind.module.SimpleModule;
+import com.fasterxml.jackson.databind.ser.std.StdSerializer;
 
 import org.lodestep.motor.EmfCoil;
 import org.lodestep.motor.HalfWinding;
 import org.lodestep.motor.MotorCard;
 import org.lodestep.motor.PhaseCard;
+import org.lodestep.wiring.Finding;
 
 /**
  * The JSON view of a {@link MotorCard}: {@link Json}'s conventions, except that back-EMF constants are spelled
@@ -18,7 +27,9 @@ public final class MotorJson {
             .addMixIn(HalfWinding.class, KeMixIn.class)
             .addMixIn(PhaseCard.class, KeMixIn.class)
             .addMixIn(MotorCard.class, KeMixIn.class)
-            .addMixIn(EmfCoil.class, EmfCoilMixIn.class);
+            .addMixIn(EmfCoil.class, EmfCoilMixIn.class)
+            .addMixIn(Finding.class, FindingMixIn.class)
+            .registerModule(new SimpleModule().addSerializer(Finding.Code.class, new CodeSerializer()));
 
     private MotorJson() {
     }
@@ -29,6 +40,26 @@ public final class MotorJson {
             return MAPPER.writeValueAsString(card);
         } catch (JsonProcessingException e) {
             throw new IllegalStateException("cannot serialise the motor card: " + e.getMessage(), e);
+        }
+    }
+
+    /** Motor findings keep their documented shape: severity, code, message (their leads are in the message). */
+    @JsonPropertyOrder({"severity", "code", "message"})
+    @JsonIgnoreProperties("leads")
+    private abstract static class FindingMixIn {
+    }
+
+    /** A finding code is written as its stable text ({@code saturation}, {@code open-winding}). */
+    private static final class CodeSerializer extends StdSerializer<Finding.Code> {
+        private static final long serialVersionUID = 1L;
+
+        CodeSerializer() {
+            super(Finding.Code.class);
+        }
+
+        @Override
+        public void serialize(Finding.Code c, JsonGenerator g, SerializerProvider p) throws IOException {
+            g.writeString(c.code());
         }
     }
 

@@ -13,7 +13,7 @@ import org.lodestep.sample.SampledSignal;
 import org.lodestep.motor.BackEmfAnalyzer;
 import org.lodestep.motor.BackEmfResult;
 import org.lodestep.motor.EmfChannel;
-import org.lodestep.motor.LeadPair;
+import org.lodestep.motor.OrientedLeads;
 import org.lodestep.motor.StepInput;
 import org.lodestep.motor.StepResponseFit;
 import org.lodestep.motor.StepResponseFitter;
@@ -125,7 +125,7 @@ public final class MotorCaptureInputs {
             series = seriesFlagOhm == null ? 0.0 : seriesFlagOhm;
         }
         try {
-            return fit(s, current, new LeadPair(leads.get(0), leads.get(1)), joined, supply, series,
+            return fit(s, current, new OrientedLeads(leads.get(0), leads.get(1)), joined, supply, series,
                     joined.isEmpty() ? knownWindingOhm : null);
         } catch (IllegalArgumentException e) {
             throw new InputFormatException(src, InputFormatException.NO_LINE, null, null, e.getMessage());
@@ -133,7 +133,7 @@ public final class MotorCaptureInputs {
     }
 
     /** Fits channel {@code current} of {@code s} as a step across {@code pair}. */
-    public static StepInput fit(SampledSignal s, int current, LeadPair pair, List<String> joined, Double supplyV,
+    public static StepInput fit(SampledSignal s, int current, OrientedLeads pair, List<String> joined, Double supplyV,
                          double seriesOhm, Double knownWindingOhm) {
         double[] i = s.channel(current);
         double[] t = times(s, i.length);
@@ -169,7 +169,7 @@ public final class MotorCaptureInputs {
         double[] index = null;
         for (int c = 0; c < s.channels().size(); c++) {
             Channel ch = s.channels().get(c);
-            LeadPair pair = LeadPair.fromChannelName(ch.name());
+            OrientedLeads pair = OrientedLeads.fromChannelName(ch.name());
             if (pair != null) {
                 if (!ch.unit().isEmpty() && !ch.unit().equals("v")) {
                     throw new InputFormatException(src, InputFormatException.NO_LINE, ch.header(), ch.unit(),

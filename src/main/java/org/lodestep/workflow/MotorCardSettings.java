@@ -1,6 +1,6 @@
 package org.lodestep.workflow;
 
-import org.lodestep.motor.Connection;
+import org.lodestep.wiring.Connection;
 
 /**
  * What the motor card should assume where the measurements leave a choice; every part is optional.

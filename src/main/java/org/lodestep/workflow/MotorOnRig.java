@@ -9,7 +9,7 @@ import org.lodestep.motor.BackEmfAnalyzer;
 import org.lodestep.motor.BackEmfResult;
 import org.lodestep.motor.CoilResistance;
 import org.lodestep.motor.EmfChannel;
-import org.lodestep.motor.LeadPair;
+import org.lodestep.motor.OrientedLeads;
 import org.lodestep.motor.MotorCard;
 import org.lodestep.motor.StepInput;
 import org.lodestep.motor.WindingInput;
@@ -69,7 +69,7 @@ public final class MotorOnRig {
         }
 
         /** Stage 2 of 3: step response {@code k} of {@code n}, {@code volts} across {@code coil}. */
-        default void stepResponse(int k, int n, double volts, LeadPair coil) {
+        default void stepResponse(int k, int n, double volts, OrientedLeads coil) {
         }
 
         /** Stage 3 of 3 begins: turn the shaft by hand, one way, a whole number of turns, for {@code seconds}. */
