@@ -52,11 +52,11 @@ final class MotorDemo implements DemoCommand.Section {
         Path html = outDir.resolve("motor-card.html");
         List<MotorHtml.Trace> traces = r.traces().stream()
                 .map(t -> new MotorHtml.Trace(t.source(), t.timeS(), t.currentA())).toList();
-        MotorHtml.report(resistance.toString(), card, traces).write(html);
+        MotorHtml.report(resistance.toString(), card, traces, MotorOptionHints.INSTANCE).write(html);
         printCard(out, card);
         out.println("report: " + html);
         Path json = outDir.resolve("motor-card.json");
-        OutputFile.write(json, MotorJson.write(card) + System.lineSeparator());
+        OutputFile.write(json, MotorJson.write(card, MotorOptionHints.INSTANCE) + System.lineSeparator());
         out.println("(the same card as JSON: " + json + ")");
         int code = card.hasError() ? ExitCode.FINDING : ExitCode.OK;
 
@@ -76,7 +76,7 @@ final class MotorDemo implements DemoCommand.Section {
     }
 
     private static void printCard(PrintWriter out, MotorCard card) {
-        out.print(MotorCardText.render(card));
+        out.print(MotorCardText.render(card, MotorOptionHints.INSTANCE));
         out.println();
         MotorIdentifyCommand.SAFETY.forEach(out::println);
         out.flush();

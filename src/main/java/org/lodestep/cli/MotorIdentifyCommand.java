@@ -169,12 +169,12 @@ final class MotorIdentifyCommand implements Callable<Integer> {
             r.traces().forEach(t -> traces.add(new MotorHtml.Trace(t.source(), t.timeS(), t.currentA())));
         }
         if (report != null) {
-            MotorHtml.report(title(), card, traces).write(report);
+            MotorHtml.report(title(), card, traces, MotorOptionHints.INSTANCE).write(report);
         }
         if (json) {
-            out.println(MotorJson.write(card));
+            out.println(MotorJson.write(card, MotorOptionHints.INSTANCE));
         } else {
-            out.print(MotorCardText.render(card));
+            out.print(MotorCardText.render(card, MotorOptionHints.INSTANCE));
             out.println();
             SAFETY.forEach(out::println);
         }

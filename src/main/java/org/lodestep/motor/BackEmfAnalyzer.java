@@ -331,8 +331,8 @@ public final class BackEmfAnalyzer {
                 }
             }
         } else {
-            findings.add(Finding.info(MotorFindingCode.TEETH_UNKNOWN, "revolutions not given: the rotor tooth count, step angle and "
-                    + "mechanical Ke stay unknown (give --revolutions or a '# revolutions=' line)"));
+            findings.add(Finding.info(MotorFindingCode.TEETH_UNKNOWN, "revolutions not given: the rotor tooth count, "
+                    + "step angle and mechanical Ke stay unknown"));
         }
 
         List<EmfCoil> coils = new ArrayList<>();

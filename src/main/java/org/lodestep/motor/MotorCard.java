@@ -33,7 +33,7 @@ import org.lodestep.wiring.Severity;
  * @param fullCurrentRateFullStepsPerS full-step rate above which the current no longer reaches its set value
  * @param inertiaKgM2               rotor plus load inertia used for the natural frequency, kg·m²
  * @param naturalFrequencyHz        small-oscillation natural frequency, Hz
- * @param unknowns                  what remains unknown and how to find it
+ * @param unknowns                  what remains unknown and why, coded; each front end phrases it
  * @param findings                  every finding of every input, worst first
  * @param backEmf                   the back-EMF analysis the card used, or null
  * @param stepResponses             the step-response fits the card used
@@ -44,7 +44,7 @@ public record MotorCard(String topology, List<String> leads, String connection, 
                         String phaseCurrentBasis, Double holdingTorqueNm, Double ratedCurrentMinA,
                         Double ratedCurrentMaxA, String ratedCurrentAssumption, Double supplyV, String supplyBasis,
                         Double suggestedSupplyV, Double fullCurrentRateFullStepsPerS, Double inertiaKgM2,
-                        Double naturalFrequencyHz, List<String> unknowns, List<Finding> findings,
+                        Double naturalFrequencyHz, List<Unknown> unknowns, List<Finding> findings,
                         BackEmfResult backEmf, List<StepInput> stepResponses) {
     public MotorCard {
         Objects.requireNonNull(topology, "topology");

@@ -20,6 +20,11 @@ public final class MotorCardText {
 
     /** The whole card, lines ending in {@code \n}. */
     public static String render(MotorCard card) {
+        return render(card, MotorPhrasing.PLAIN);
+    }
+
+    /** The card as text, unknowns and findings phrased by {@code phrasing}. */
+    public static String render(MotorCard card, MotorPhrasing phrasing) {
         StringBuilder b = new StringBuilder();
         b.append("MOTOR CARD  ").append(card.topology()).append(" motor");
         if (card.wiring() != null) {
@@ -148,13 +153,13 @@ public final class MotorCardText {
 
         if (!card.unknowns().isEmpty()) {
             b.append("Unknown\n");
-            card.unknowns().forEach(u -> b.append("  - ").append(u).append('\n'));
+            card.unknowns().forEach(u -> b.append("  - ").append(phrasing.unknown(u, card.connection())).append('\n'));
             b.append('\n');
         }
         if (!card.findings().isEmpty()) {
             b.append("Findings\n");
             for (Finding f : card.findings()) {
-                b.append(String.format("  %-7s %s%n", f.severity(), f.message()));
+                b.append(String.format("  %-7s %s%n", f.severity(), phrasing.finding(f)));
             }
         }
         return b.toString();

@@ -49,13 +49,18 @@ public final class MotorHtml {
      *               fit without its trace is listed but not drawn)
      */
     public static HtmlReport report(String title, MotorCard card, List<Trace> traces) {
+        return report(title, card, traces, MotorPhrasing.PLAIN);
+    }
+
+    /** As {@link #report(String, MotorCard, List)}, unknowns and findings phrased by {@code phrasing}. */
+    public static HtmlReport report(String title, MotorCard card, List<Trace> traces, MotorPhrasing phrasing) {
         HtmlReport.Builder b = HtmlReport.builder("Motor card", title)
                 .meta("Layout", card.topology() + (card.wiring() == null ? "" : ", " + card.connection()))
                 .meta("Leads", String.join(", ", card.leads()));
         boolean warn = card.findings().stream().anyMatch(f -> f.severity() == Severity.WARNING);
         if (card.hasError()) {
             Finding f = card.findings().stream().filter(x -> x.severity() == Severity.ERROR).findFirst().orElseThrow();
-            b.verdict(Status.FAIL, "Fault found", f.message());
+            b.verdict(Status.FAIL, "Fault found", phrasing.finding(f));
         } else {
             String head = card.stepAngleDeg() == null ? card.topology() + " motor"
                     : String.format(Locale.ROOT, "%s motor, %s\u00B0 step (%d steps/rev)", card.topology(),
@@ -157,9 +162,9 @@ public final class MotorHtml {
                 case ERROR -> Status.FAIL;
                 case WARNING -> Status.WARN;
                 case INFO -> Status.INFO;
-            }, x.code().code() + ": " + x.message()));
+            }, x.code().code() + ": " + phrasing.finding(x)));
         }
-        for (String u : card.unknowns()) {
+        for (String u : card.unknowns().stream().map(x -> phrasing.unknown(x, card.connection())).toList()) {
             fs.add(new HtmlReport.Finding(Status.WARN, "Unknown: " + u));
         }
         if (fs.isEmpty()) {

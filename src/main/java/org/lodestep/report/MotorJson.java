@@ -1,6 +1,7 @@
 package org.lodestep.report;
 
 import java.io.IOException;
+import java.util.List;
 
 import com.fasterxml.jackson.annotation.JsonIgnoreProperties;
 import com.fasterxml.jackson.annotation.JsonProperty;
@@ -10,6 +11,8 @@ import com.fasterxml.jackson.core.JsonProcessingException;
 import com.fasterxml.jackson.databind.ObjectMapper;
 import com.fasterxml.jackson.databind.SerializerProvider;
 import com.fasterxml.jackson.databind.module.SimpleModule;
+import com.fasterxml.jackson.databind.node.ArrayNode;
+import com.fasterxml.jackson.databind.node.ObjectNode;
 import com.fasterxml.jackson.databind.ser.std.StdSerializer;
 
 import org.lodestep.motor.EmfCoil;
@@ -36,8 +39,24 @@ public final class MotorJson {
 
     /** The card as indented JSON text. */
     public static String write(MotorCard card) {
+        return write(card, MotorPhrasing.PLAIN);
+    }
+
+    /** The card as indented JSON text, unknowns and finding messages phrased by {@code phrasing}. */
+    public static String write(MotorCard card, MotorPhrasing phrasing) {
         try {
-            return MAPPER.writeValueAsString(card);
+            ObjectNode tree = MAPPER.valueToTree(card);
+            ArrayNode unknowns = tree.putArray("unknowns");
+            card.unknowns().forEach(u -> unknowns.add(phrasing.unknown(u, card.connection())));
+            phrase(tree.withArray("findings"), card.findings(), phrasing);
+            if (card.backEmf() != null) {
+                phrase((ArrayNode) tree.get("back_emf").get("findings"), card.backEmf().findings(), phrasing);
+            }
+            for (int k = 0; k < card.stepResponses().size(); k++) {
+                phrase((ArrayNode) tree.get("step_responses").get(k).get("fit").get("findings"),
+                        card.stepResponses().get(k).fit().findings(), phrasing);
+            }
+            return MAPPER.writeValueAsString(tree);
         } catch (JsonProcessingException e) {
             throw new IllegalStateException("cannot serialise the motor card: " + e.getMessage(), e);
         }
@@ -60,6 +79,12 @@ public final class MotorJson {
         @Override
         public void serialize(Finding.Code c, JsonGenerator g, SerializerProvider p) throws IOException {
             g.writeString(c.code());
+        }
+    }
+
+    private static void phrase(ArrayNode json, List<Finding> findings, MotorPhrasing phrasing) {
+        for (int k = 0; k < findings.size(); k++) {
+            ((ObjectNode) json.get(k)).put("message", phrasing.finding(findings.get(k)));
         }
     }
 
