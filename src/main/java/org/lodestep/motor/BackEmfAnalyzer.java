@@ -51,6 +51,73 @@ public final class BackEmfAnalyzer {
      */
     public BackEmfResult analyze(List<EmfChannel> channels, Double revolutions, double[] indexChannel,
                                  int pulsesPerRevolution) {
+        int n = checkedLength(channels, revolutions, indexChannel, pulsesPerRevolution);
+        List<Finding> findings = new ArrayList<>();
+        Centred c = centred(channels, n);
+        List<Integer> live = liveChannels(channels, c, findings);
+        int m = live.size();
+        double[][][] z = new double[m][][];
+        for (int j = 0; j < m; j++) {
+            z[j] = AnalyticSignal.of(c.x()[live.get(j)]);
+        }
+        int margin = Math.max(1, n / 50); // FFT-based analytic signals are distorted at the record ends
+        Span span = new Span(margin, n - margin, n);
+        Grouping g = group(z, span);
+        Phasing ph = phase(channels, z, live, c.rms(), g, span, findings);
+        Angle angle = electricalAngle(ph, span);
+        Speed speed = speedAndKe(z, angle, span, findings);
+        Revolutions revs = revolutions(indexChannel, revolutions, pulsesPerRevolution, angle, findings);
+        Teeth teeth = teeth(revs, findings);
+
+        List<EmfCoil> coils = new ArrayList<>();
+        for (int j = 0; j < m; j++) {
+            OrientedLeads measured = channels.get(live.get(j)).pair();
+            OrientedLeads oriented = g.polarity()[j] >= 0 ? measured : measured.reversed();
+            double keElec = speed.den() > 0 ? speed.num()[j] / speed.den() : 0;
+            Double keMech = teeth.teeth() != null && keElec > 0 ? keElec * teeth.teeth() : null;
+            coils.add(new EmfCoil(measured, g.group()[j] == 0 ? "A" : "B", oriented, g.group()[j] == 0 ? 0.0 : -90.0,
+                    c.rms()[live.get(j)], keElec, keMech));
+        }
+        return new BackEmfResult(coils, angle.cycles(), speed.movingS(), speed.meanF(), speed.minF(), speed.maxF(),
+                revs.revolutions(), revs.source(), teeth.perRevolution(), teeth.teeth(), ph.lagDeg(), ph.reversals(),
+                findings);
+    }
+
+    /** The samples analysed, {@code from} (inclusive) to {@code to} (exclusive) of {@code n}. */
+    private record Span(int from, int to, int n) {
+    }
+
+    /** Channels with their mean removed, their RMS and the largest RMS. */
+    private record Centred(double[][] x, double[] rms, double maxRms) {
+    }
+
+    /** Which phase each live channel belongs to (0 = A, 1 = B), its polarity, and the first B channel (or -1). */
+    private record Grouping(int[] group, double[] polarity, int firstB) {
+    }
+
+    /** The combined analytic signals of phases A and B (B null with one phase), B's lag and direction changes. */
+    private record Phasing(double[][] za, double[][] zb, Double lagDeg, int reversals) {
+    }
+
+    /** The unwrapped electrical angle, where the shaft moved, and the cycles between the first and last movement. */
+    private record Angle(double[] angle, boolean[] moving, int firstValid, int lastValid, double cycles) {
+    }
+
+    /** Block-wise electrical frequency and the Ke regression sums (per channel numerator, common denominator). */
+    private record Speed(double movingS, double meanF, double minF, double maxF, double[] num, double den) {
+    }
+
+    /** Revolutions and where they came from, and the cycles counted over them. */
+    private record Revolutions(Double revolutions, RevolutionSource source, double countedCycles) {
+    }
+
+    /** Cycles per revolution and the rotor tooth count; null when unknown. */
+    private record Teeth(Double perRevolution, Integer teeth) {
+    }
+
+    /** The common channel length, after checking every argument. */
+    private static int checkedLength(List<EmfChannel> channels, Double revolutions, double[] indexChannel,
+                                     int pulsesPerRevolution) {
         if (channels.isEmpty()) {
             throw new IllegalArgumentException("no back-EMF channels (expected columns named emf_<lead>_<lead>_v)");
         }
@@ -71,9 +138,11 @@ public final class BackEmfAnalyzer {
         if (pulsesPerRevolution < 1) {
             throw new IllegalArgumentException("pulses per revolution must be at least 1, got " + pulsesPerRevolution);
         }
-        List<Finding> findings = new ArrayList<>();
+        return n;
+    }
 
-        // Mean removed: a DC offset of the recorder would bias the correlations.
+    /** Mean removed: a DC offset of the recorder would bias the correlations. */
+    private static Centred centred(List<EmfChannel> channels, int n) {
         double[][] x = new double[channels.size()][];
         double[] rms = new double[channels.size()];
         double maxRms = 0;
@@ -91,6 +160,13 @@ public final class BackEmfAnalyzer {
         if (!(maxRms > 0)) {
             throw new IllegalArgumentException("every back-EMF channel is flat: was the shaft turned?");
         }
+        return new Centred(x, rms, maxRms);
+    }
+
+    /** The channels that carry back-EMF; each dead one becomes an error finding. */
+    private static List<Integer> liveChannels(List<EmfChannel> channels, Centred c, List<Finding> findings) {
+        double[] rms = c.rms();
+        double maxRms = c.maxRms();
         List<Integer> live = new ArrayList<>();
         for (int k = 0; k < channels.size(); k++) {
             if (rms[k] < DEAD_FRACTION * maxRms) {
@@ -101,16 +177,14 @@ public final class BackEmfAnalyzer {
                 live.add(k);
             }
         }
-        int m = live.size();
-        double[][][] z = new double[m][][];
-        for (int j = 0; j < m; j++) {
-            z[j] = AnalyticSignal.of(x[live.get(j)]);
-        }
-        int margin = Math.max(1, n / 50); // FFT-based analytic signals are distorted at the record ends
-        int from = margin;
-        int to = n - margin;
+        return live;
+    }
 
-        // Group into phases by the direction-independent correlation with the first live channel.
+    /** Groups into phases by the direction-independent correlation with the first live channel. */
+    private static Grouping group(double[][][] z, Span span) {
+        int m = z.length;
+        int from = span.from();
+        int to = span.to();
         int[] group = new int[m];
         double[] polarity = new double[m];
         int firstB = -1;
@@ -130,6 +204,22 @@ public final class BackEmfAnalyzer {
                 }
             }
         }
+        return new Grouping(group, polarity, firstB);
+    }
+
+    /**
+     * Combines each phase's channels, orients B to lag A in the main turning direction (flipping B's polarities when
+     * it led), and measures the lag and the direction changes.
+     */
+    private Phasing phase(List<EmfChannel> channels, double[][][] z, List<Integer> live, double[] rms, Grouping g,
+                          Span span, List<Finding> findings) {
+        int m = z.length;
+        int n = span.n();
+        int from = span.from();
+        int to = span.to();
+        int[] group = g.group();
+        double[] polarity = g.polarity();
+        int firstB = g.firstB();
         double[][] za = combine(z, live, rms, group, polarity, 0, n);
         double[][] zb = firstB < 0 ? null : combine(z, live, rms, group, polarity, 1, n);
 
@@ -198,7 +288,16 @@ public final class BackEmfAnalyzer {
                     + channels.get(live.get(0)).pair() + ": only one phase was recorded"));
         }
 
-        // Electrical angle, held still where the shaft is not turning.
+        return new Phasing(za, zb, lagDeg, reversals);
+    }
+
+    /** Electrical angle, held still where the shaft is not turning. */
+    private static Angle electricalAngle(Phasing ph, Span span) {
+        double[][] za = ph.za();
+        double[][] zb = ph.zb();
+        int n = span.n();
+        int from = span.from();
+        int to = span.to();
         double[] amp = new double[n];
         double[] rawAngle = new double[n];
         for (int i = 0; i < n; i++) {
@@ -250,7 +349,17 @@ public final class BackEmfAnalyzer {
         }
         double cycles = Math.abs(angle[lastValid] - angle[firstValid]) / (2 * Math.PI);
 
-        // Block-wise frequency and Ke.
+        return new Angle(angle, moving, firstValid, lastValid, cycles);
+    }
+
+    /** Block-wise frequency and the Ke regression of each channel's envelope on the electrical angular speed. */
+    private Speed speedAndKe(double[][][] z, Angle a, Span span, List<Finding> findings) {
+        int m = z.length;
+        int from = span.from();
+        int to = span.to();
+        boolean[] moving = a.moving();
+        double[] angle = a.angle();
+        double cycles = a.cycles();
         int block = blockLength();
         List<Double> freqs = new ArrayList<>();
         double[] num = new double[m];
@@ -288,7 +397,14 @@ public final class BackEmfAnalyzer {
             findings.add(Finding.warning(MotorFindingCode.TOO_SLOW, "no 20 ms stretch of steady turning: Ke is not measured"));
         }
 
-        // Revolutions: stated, or counted between the first and last index pulse.
+        return new Speed(movingS, meanF, minF, maxF, num, den);
+    }
+
+    /** Revolutions: stated, or counted between the first and last index pulse. */
+    private static Revolutions revolutions(double[] indexChannel, Double revolutions, int pulsesPerRevolution,
+                                           Angle a, List<Finding> findings) {
+        double[] angle = a.angle();
+        double cycles = a.cycles();
         RevolutionSource source = RevolutionSource.NONE;
         double countedCycles = cycles;
         Double revs = null;
@@ -310,6 +426,13 @@ public final class BackEmfAnalyzer {
             revs = revolutions;
             source = RevolutionSource.STATED;
         }
+        return new Revolutions(revs, source, countedCycles);
+    }
+
+    /** The rotor tooth count from the cycles per revolution, with findings where it is doubtful or unknown. */
+    private static Teeth teeth(Revolutions r, List<Finding> findings) {
+        Double revs = r.revolutions();
+        double countedCycles = r.countedCycles();
         Double perRev = null;
         Integer teeth = null;
         if (revs != null) {
@@ -335,17 +458,7 @@ public final class BackEmfAnalyzer {
                     + "step angle and mechanical Ke stay unknown"));
         }
 
-        List<EmfCoil> coils = new ArrayList<>();
-        for (int j = 0; j < m; j++) {
-            OrientedLeads measured = channels.get(live.get(j)).pair();
-            OrientedLeads oriented = polarity[j] >= 0 ? measured : measured.reversed();
-            double keElec = den > 0 ? num[j] / den : 0;
-            Double keMech = teeth != null && keElec > 0 ? keElec * teeth : null;
-            coils.add(new EmfCoil(measured, group[j] == 0 ? "A" : "B", oriented, group[j] == 0 ? 0.0 : -90.0,
-                    rms[live.get(j)], keElec, keMech));
-        }
-        return new BackEmfResult(coils, cycles, movingS, meanF, minF, maxF, revs, source, perRev, teeth, lagDeg,
-                reversals, findings);
+        return new Teeth(perRev, teeth);
     }
 
     private int blockLength() {
