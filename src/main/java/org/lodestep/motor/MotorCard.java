@@ -68,6 +68,17 @@ public record MotorCard(String topology, List<String> leads, String connection, 
         stepResponses = List.copyOf(stepResponses);
     }
 
+    /** Ke per half-winding in volts per 1000 rpm, the unit of many data sheets; null when Ke is unknown. */
+    public Double keVPerKrpm() {
+        return keVsPerRad == null ? null : MotorConstants.keVPerKrpm(keVsPerRad);
+    }
+
+    /** The full-current step rate in revolutions per second; null when the rate or the steps per turn are unknown. */
+    public Double fullCurrentRateRevPerS() {
+        return fullCurrentRateFullStepsPerS == null || fullStepsPerRevolution == null ? null
+                : fullCurrentRateFullStepsPerS / fullStepsPerRevolution;
+    }
+
     /** True when any finding is an error. */
     public boolean hasError() {
         return findings.stream().anyMatch(f -> f.severity() == Severity.ERROR);

@@ -83,7 +83,7 @@ public final class MotorCardText {
         int before = b.length();
         if (card.keVsPerRad() != null) {
             b.append(String.format(Locale.ROOT, "  Ke per half-winding   %s V·s/rad peak (%s V/krpm); a full phase in "
-                    + "series has twice this%n", num(card.keVsPerRad(), 4), num(card.keVsPerRad() * 104.71975512, 4)));
+                    + "series has twice this%n", num(card.keVsPerRad(), 4), num(card.keVPerKrpm(), 4)));
         }
         if (card.ktNmPerA() != null) {
             b.append(String.format(Locale.ROOT, "  Kt, phase as wired     %s N·m/A (= Ke in SI units)%n",
@@ -107,8 +107,8 @@ public final class MotorCardText {
         }
         if (card.fullCurrentRateFullStepsPerS() != null) {
             double rate = card.fullCurrentRateFullStepsPerS();
-            String revs = card.fullStepsPerRevolution() == null ? ""
-                    : String.format(Locale.ROOT, " = %s rev/s", num(rate / card.fullStepsPerRevolution(), 3));
+            String revs = card.fullCurrentRateRevPerS() == null ? ""
+                    : String.format(Locale.ROOT, " = %s rev/s", num(card.fullCurrentRateRevPerS(), 3));
             b.append(String.format(Locale.ROOT, "  full current up to     %s full steps/s%s at %s V (%s); back-EMF "
                     + "ignored, so the real limit is lower%n", num(rate, 4), revs, num(card.supplyV(), 3),
                     card.supplyBasis()));
