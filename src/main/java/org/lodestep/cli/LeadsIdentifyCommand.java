@@ -81,8 +81,8 @@ final class LeadsIdentifyCommand implements Callable<Integer> {
         for (String p : pairs) {
             extra.add(LeadPairArgument.parse(p, "--pair"));
         }
-        LeadsFromReadings.Result result = LeadsFromReadings.run(
-                new LeadsFromReadings.Settings(files, extra, options.settings()), Progress.NONE);
+        LeadsFromReadings.Result result = WorkflowCall.run(() -> LeadsFromReadings.run(
+                new LeadsFromReadings.Settings(files, extra, options.settings()), Progress.NONE));
         PrintWriter out = spec.commandLine().getOut();
         List<LeadsJsonView.MotorJson> json = new ArrayList<>();
         for (LeadsFromReadings.Motor m : result.motors()) {

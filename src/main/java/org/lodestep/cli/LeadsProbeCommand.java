@@ -71,7 +71,8 @@ final class LeadsProbeCommand implements Callable<Integer> {
         boolean scripted = answers != null || System.console() == null;
         try (BufferedReader in = answers != null ? Files.newBufferedReader(answers, StandardCharsets.UTF_8)
                 : new BufferedReader(new InputStreamReader(System.in, StandardCharsets.UTF_8))) {
-            LeadsProbe.Result r = LeadsProbe.run(settings, new Prompt(in, prompts, scripted), Progress.NONE);
+            LeadsProbe.Result r = WorkflowCall.run(() -> LeadsProbe.run(settings, new Prompt(in, prompts, scripted),
+                    Progress.NONE));
             Identification id = r.identification();
             if (options.json) {
                 out.println(LeadsJsonView.write(List.of(LeadsJsonView.of("probe", null, id,

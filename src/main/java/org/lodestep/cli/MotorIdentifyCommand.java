@@ -158,12 +158,13 @@ final class MotorIdentifyCommand implements Callable<Integer> {
             }
             PrintWriter log = json ? spec.commandLine().getErr() : out;
             try (RigClient c = RigCli.connect(rig)) {
-                card = MotorOnRig.run(c, new MotorOnRig.Settings(revolutions, cardSettings), new RigLog(log)).card();
+                card = WorkflowCall.run(() -> MotorOnRig.run(c, new MotorOnRig.Settings(revolutions, cardSettings),
+                        new RigLog(log))).card();
             }
         } else {
-            MotorFromFiles.Result r = MotorFromFiles.run(new MotorFromFiles.Settings(resistance, stepResponses,
-                    backEmf, revolutions, pulsesPerRev, stepSupplyV, seriesOhm, cardSettings, report != null),
-                    Progress.NONE);
+            MotorFromFiles.Result r = WorkflowCall.run(() -> MotorFromFiles.run(new MotorFromFiles.Settings(
+                    resistance, stepResponses, backEmf, revolutions, pulsesPerRev, stepSupplyV, seriesOhm,
+                    cardSettings, report != null), Progress.NONE));
             card = r.card();
             // Recorded step responses are drawn under their fits; the rig's are measured in memory and listed only.
             r.traces().forEach(t -> traces.add(new MotorHtml.Trace(t.source(), t.timeS(), t.currentA())));

@@ -9,7 +9,6 @@ import org.lodestep.report.LeadsJsonView;
 import org.lodestep.report.LeadsTextReport;
 import org.lodestep.report.RigText;
 import org.lodestep.rig.RigClient;
-import org.lodestep.rig.RigException;
 import org.lodestep.rig.RigInfo;
 import org.lodestep.wiring.LeadPair;
 import org.lodestep.workflow.LeadsOnRig;
@@ -25,10 +24,10 @@ final class RigLeadsIdentify {
 
     /** Runs the session; returns {@link ExitCode#FINDING} when the motor has an error-severity finding. */
     static int run(String address, LeadsSettings settings, boolean json, PrintWriter out, PrintWriter log)
-            throws RigException {
+            throws Exception {
         LeadsOnRig.Result r;
         try (RigClient c = RigCli.connect(address)) {
-            r = LeadsOnRig.run(c, settings, new LeadsOnRig.Listener() {
+            r = WorkflowCall.run(() -> LeadsOnRig.run(c, settings, new LeadsOnRig.Listener() {
                 @Override
                 public void connected(RigInfo info, List<String> leads, int allPairs) {
                     log.printf(Locale.ROOT, "Measuring through %s (%s, id %s): %d leads, up to %d pairs.%n",
@@ -40,7 +39,7 @@ final class RigLeadsIdentify {
                     log.printf(Locale.ROOT, "  %-8s - %-8s %s%n", p.a(), p.b(), ohms.isEmpty() ? "open"
                             : RigText.ohm(ohms.getAsDouble()));
                 }
-            });
+            }));
         }
         log.printf(Locale.ROOT, "%d of %d pairs measured.%n", r.readings(), r.allPairs());
         log.flush();

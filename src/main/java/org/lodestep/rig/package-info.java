@@ -4,10 +4,12 @@
  * never analyses what it measured. Entry points: {@link org.lodestep.rig.RigClient}, {@link org.lodestep.rig.Transports},
  * {@link org.lodestep.rig.VirtualRig}, {@link org.lodestep.rig.Scenarios}.
  *
- * <p>Rig physics is an independent oracle: the virtual rig's motor ({@code BenchMotor}, {@code WindingNetwork},
- * {@code RotorDynamics}) computes its own physics from the textbook relations rather than calling the analysis
- * packages, so that an error in an analysis formula cannot hide by being simulated the same way. Tests check each
- * simulated relation against the engine's formula class; for the RL current step, {@code BenchMotorTest} against
- * {@code motor.RlStep}.
+ * <p>The virtual rig's physics is an independent oracle, on purpose: it integrates the motor's equations of motion and
+ * circuits itself (rotor dynamics, winding network, current responses) and does not call the engine's formulas in
+ * {@code motor} or {@code resonance}, so an engine bug cannot hide by appearing on both sides of an end-to-end test.
+ * Where the oracle states a closed form the engine also has (the rotor's small-oscillation natural frequency in
+ * {@code RotorDynamics} against {@code motor.NaturalFrequency}), a test checks the two against each other and against
+ * the integrated motion; so is the RL current step of {@code BenchMotor} against {@code motor.RlStep}
+ * ({@code BenchMotorTest}). Depends on {@code sample} only.
  */
 package org.lodestep.rig;
