@@ -63,7 +63,8 @@ final class MotorDemo implements DemoCommand.Section {
         // The same job on the virtual rig: a shuffled 8-lead motor with colour-coded leads, measured end to end.
         // Its simulated hand turns the shaft 3 revolutions (2.5 s at up to 90 rpm), as a technician would count them.
         out.println();
-        out.println("$ lodestep motor identify --rig sim:salvage-8 --revolutions 3 --connection parallel --supply-v 24");
+        out.println("$ lodestep motor identify --rig sim:salvage-8 --revolutions 3 --connection parallel "
+                + "--supply-v 24");
         MotorIdentifyCommand.SAFETY.forEach(out::println);
         out.println();
         MotorCard onRig;

@@ -215,80 +215,94 @@ public final class BackEmfAnalyzer {
                           Span span, List<Finding> findings) {
         int m = z.length;
         int n = span.n();
-        int from = span.from();
-        int to = span.to();
         int[] group = g.group();
         double[] polarity = g.polarity();
-        int firstB = g.firstB();
         double[][] za = combine(z, live, rms, group, polarity, 0, n);
-        double[][] zb = firstB < 0 ? null : combine(z, live, rms, group, polarity, 1, n);
-
-        int reversals = 0;
-        Double lagDeg = null;
-        if (zb != null) {
-            int block = blockLength();
-            List<double[]> blocks = new ArrayList<>();
-            double sumIm = 0;
-            for (int s = from; s + block <= to; s += block) {
-                double re = 0;
-                double im = 0;
-                for (int i = s; i < s + block; i++) {
-                    // zb·conj(za): its angle is B's phase relative to A
-                    re += zb[0][i] * za[0][i] + zb[1][i] * za[1][i];
-                    im += zb[1][i] * za[0][i] - zb[0][i] * za[1][i];
-                }
-                blocks.add(new double[] {re, im});
-                sumIm += im;
+        if (g.firstB() < 0) {
+            if (m > 1) {
+                findings.add(Finding.warning(MotorFindingCode.ONE_PHASE, "every live channel is in phase or antiphase "
+                        + "with " + channels.get(live.get(0)).pair() + ": only one phase was recorded"));
             }
-            if (sumIm > 0) {
-                // B leads A in the main direction: take the other end of every B coil as its start.
-                for (int j = 0; j < m; j++) {
-                    if (group[j] == 1) {
-                        polarity[j] = -polarity[j];
-                    }
-                }
-                for (double[] b : blocks) {
-                    b[0] = -b[0];
-                    b[1] = -b[1];
-                }
-                zb = combine(z, live, rms, group, polarity, 1, n);
-            }
-            double maxAbsIm = 0;
-            for (double[] b : blocks) {
-                maxAbsIm = Math.max(maxAbsIm, Math.abs(b[1]));
-            }
-            double sre = 0;
-            double sim = 0;
-            int lastSign = 0;
-            for (double[] b : blocks) {
-                if (Math.abs(b[1]) < 0.2 * maxAbsIm) {
-                    continue;
-                }
-                int sign = b[1] < 0 ? -1 : 1;
-                if (lastSign != 0 && sign != lastSign) {
-                    reversals++;
-                }
-                lastSign = sign;
-                // blocks turned the other way have the mirror-image relation; fold them back
-                sre += b[0];
-                sim += sign < 0 ? b[1] : -b[1];
-            }
-            lagDeg = -Math.toDegrees(Math.atan2(sim, sre));
-            if (Math.abs(lagDeg - 90) > 20) {
-                findings.add(Finding.warning(MotorFindingCode.NOT_QUADRATURE, String.format("phase B lags phase A by %.0f° "
-                        + "electrical, expected 90°: the channels may not be single coils", lagDeg)));
-            }
-            if (reversals > 0) {
-                findings.add(Finding.warning(MotorFindingCode.DIRECTION_REVERSED, "the shaft changed direction " + reversals
-                        + " time(s) during the capture; the pairing is unaffected, but for a tooth count turn one way "
-                        + "only"));
-            }
-        } else if (m > 1) {
-            findings.add(Finding.warning(MotorFindingCode.ONE_PHASE, "every live channel is in phase or antiphase with "
-                    + channels.get(live.get(0)).pair() + ": only one phase was recorded"));
+            return new Phasing(za, null, null, 0);
         }
+        double[][] zb = combine(z, live, rms, group, polarity, 1, n);
+        Cross cross = cross(za, zb, span);
+        if (cross.sumIm() > 0) {
+            // B leads A in the main direction: take the other end of every B coil as its start.
+            for (int j = 0; j < m; j++) {
+                if (group[j] == 1) {
+                    polarity[j] = -polarity[j];
+                }
+            }
+            for (double[] b : cross.blocks()) {
+                b[0] = -b[0];
+                b[1] = -b[1];
+            }
+            zb = combine(z, live, rms, group, polarity, 1, n);
+        }
+        Phasing ph = lag(za, zb, cross.blocks());
+        if (Math.abs(ph.lagDeg() - 90) > 20) {
+            findings.add(Finding.warning(MotorFindingCode.NOT_QUADRATURE, String.format("phase B lags phase A by "
+                    + "%.0f° electrical, expected 90°: the channels may not be single coils", ph.lagDeg())));
+        }
+        if (ph.reversals() > 0) {
+            findings.add(Finding.warning(MotorFindingCode.DIRECTION_REVERSED, "the shaft changed direction "
+                    + ph.reversals() + " time(s) during the capture; the pairing is unaffected, but for a tooth count "
+                    + "turn one way only"));
+        }
+        return ph;
+    }
 
-        return new Phasing(za, zb, lagDeg, reversals);
+    /** Block-wise {@code zb·conj(za)} (re, im per block) and the sum of the imaginary parts. */
+    private record Cross(List<double[]> blocks, double sumIm) {
+    }
+
+    /** The cross products of phases B and A, block by block: their angle is B's phase relative to A. */
+    private Cross cross(double[][] za, double[][] zb, Span span) {
+        int block = blockLength();
+        List<double[]> blocks = new ArrayList<>();
+        double sumIm = 0;
+        for (int s = span.from(); s + block <= span.to(); s += block) {
+            double re = 0;
+            double im = 0;
+            for (int i = s; i < s + block; i++) {
+                // zb·conj(za): its angle is B's phase relative to A
+                re += zb[0][i] * za[0][i] + zb[1][i] * za[1][i];
+                im += zb[1][i] * za[0][i] - zb[0][i] * za[1][i];
+            }
+            blocks.add(new double[] {re, im});
+            sumIm += im;
+        }
+        return new Cross(blocks, sumIm);
+    }
+
+    /**
+     * B's lag behind A over the blocks that turned clearly one way, folding back the blocks turned the other way, and
+     * the number of direction changes.
+     */
+    private static Phasing lag(double[][] za, double[][] zb, List<double[]> blocks) {
+        double maxAbsIm = 0;
+        for (double[] b : blocks) {
+            maxAbsIm = Math.max(maxAbsIm, Math.abs(b[1]));
+        }
+        double sre = 0;
+        double sim = 0;
+        int lastSign = 0;
+        int reversals = 0;
+        for (double[] b : blocks) {
+            if (Math.abs(b[1]) < 0.2 * maxAbsIm) {
+                continue;
+            }
+            int sign = b[1] < 0 ? -1 : 1;
+            if (lastSign != 0 && sign != lastSign) {
+                reversals++;
+            }
+            lastSign = sign;
+            // blocks turned the other way have the mirror-image relation; fold them back
+            sre += b[0];
+            sim += sign < 0 ? b[1] : -b[1];
+        }
+        return new Phasing(za, zb, -Math.toDegrees(Math.atan2(sim, sre)), reversals);
     }
 
     /** Electrical angle, held still where the shaft is not turning. */

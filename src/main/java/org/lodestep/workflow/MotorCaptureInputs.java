@@ -133,7 +133,7 @@ public final class MotorCaptureInputs {
     }
 
     /** Fits channel {@code current} of {@code s} as a step across {@code pair}. */
-    public static StepInput fit(SampledSignal s, int current, OrientedLeads pair, List<String> joined, Double supplyV,
+    static StepInput fit(SampledSignal s, int current, OrientedLeads pair, List<String> joined, Double supplyV,
                          double seriesOhm, Double knownWindingOhm) {
         double[] i = s.channel(current);
         double[] t = times(s, i.length);
@@ -142,7 +142,7 @@ public final class MotorCaptureInputs {
     }
 
     /** The level of a recorded drive voltage over the last half of the record, V; null when not positive. */
-    public static Double settledLevel(double[] v) {
+    static Double settledLevel(double[] v) {
         double sum = 0;
         for (int k = v.length / 2; k < v.length; k++) {
             sum += v[k];
