@@ -16,6 +16,7 @@ import java.util.concurrent.Callable;
 import org.lodestep.sample.InputFormatException;
 import org.lodestep.capture.LeadPairArgument;
 import org.lodestep.capture.LeadPairReading;
+import org.lodestep.report.IdentifyProgressText;
 import org.lodestep.report.LeadsJsonView;
 import org.lodestep.report.LeadsTextReport;
 import org.lodestep.wiring.Identification;
@@ -79,8 +80,7 @@ final class LeadsProbeCommand implements Callable<Integer> {
                         new LeadsJsonView.ProbeJson(r.readings(), all)))));
             } else {
                 out.println();
-                out.printf(Locale.ROOT, "Took %d readings of %d (N(N-1)/2 for %d leads)%s.%n", r.readings(), all,
-                        leads.size(), r.stopped() != null ? ", stopped early" : "");
+                out.println(IdentifyProgressText.probeDone(r.readings(), all, leads.size(), r.stopped() != null));
                 LeadsTextReport.write(out, "Probed motor", id);
             }
             out.flush();

@@ -4,7 +4,6 @@ import java.io.PrintWriter;
 import java.nio.file.Path;
 import java.util.ArrayList;
 import java.util.List;
-import java.util.Locale;
 import java.util.concurrent.Callable;
 
 import org.lodestep.wiring.Connection;
@@ -17,6 +16,7 @@ import org.lodestep.workflow.MotorCardSettings;
 import org.lodestep.workflow.MotorFromFiles;
 import org.lodestep.workflow.MotorOnRig;
 import org.lodestep.workflow.Progress;
+import org.lodestep.report.IdentifyProgressText;
 import org.lodestep.report.MotorHtml;
 import org.lodestep.report.MotorJson;
 import org.lodestep.report.MotorCardText;
@@ -187,37 +187,35 @@ final class MotorIdentifyCommand implements Callable<Integer> {
     record RigLog(PrintWriter out) implements MotorOnRig.Listener {
         @Override
         public void connected(RigInfo info, List<String> leads) {
-            out.printf(Locale.ROOT, "rig %s (%s), %d leads: %s%n", info.rig(), info.address(), leads.size(),
-                    String.join(" ", leads));
+            out.println(IdentifyProgressText.motorConnected(info, leads));
         }
 
         @Override
         public void measuringResistances(int pairs) {
-            out.printf(Locale.ROOT, "[1/3] resistance of %d lead pairs ...%n", pairs);
+            out.println(IdentifyProgressText.motorResistances(pairs));
             out.flush();
         }
 
         @Override
         public void windingsFound(WindingInput windings) {
-            out.printf(Locale.ROOT, "      %s, %d coils%n", windings.topology().label(), windings.coils().size());
+            out.println(IdentifyProgressText.motorWindings(windings));
         }
 
         @Override
         public void stepResponse(int k, int n, double volts, OrientedLeads coil) {
-            out.printf(Locale.ROOT, "[2/3] step response %d/%d: %.2f V across %s ...%n", k, n, volts, coil);
+            out.println(IdentifyProgressText.motorStep(k, n, volts, coil));
             out.flush();
         }
 
         @Override
         public void turnTheShaft(int coils, double seconds) {
-            out.printf(Locale.ROOT, "[3/3] back-EMF of %d coils for %.1f s: turn the shaft by hand, one way, a whole "
-                    + "number of turns ...%n", coils, seconds);
+            out.println(IdentifyProgressText.motorTurnTheShaft(coils, seconds));
             out.flush();
         }
 
         @Override
         public void outputsOff() {
-            out.println("      done; outputs switched off");
+            out.println(IdentifyProgressText.motorOutputsOff());
             out.println();
             out.flush();
         }

@@ -2,12 +2,11 @@ package org.lodestep.cli;
 
 import java.io.PrintWriter;
 import java.util.List;
-import java.util.Locale;
 import java.util.OptionalDouble;
 
 import org.lodestep.report.LeadsJsonView;
 import org.lodestep.report.LeadsTextReport;
-import org.lodestep.report.RigText;
+import org.lodestep.report.IdentifyProgressText;
 import org.lodestep.rig.RigClient;
 import org.lodestep.rig.RigInfo;
 import org.lodestep.wiring.LeadPair;
@@ -30,18 +29,16 @@ final class RigLeadsIdentify {
             r = WorkflowCall.run(() -> LeadsOnRig.run(c, settings, new LeadsOnRig.Listener() {
                 @Override
                 public void connected(RigInfo info, List<String> leads, int allPairs) {
-                    log.printf(Locale.ROOT, "Measuring through %s (%s, id %s): %d leads, up to %d pairs.%n",
-                            address, info.rig(), info.id(), leads.size(), allPairs);
+                    log.println(IdentifyProgressText.leadsConnected(address, info, leads.size(), allPairs));
                 }
 
                 @Override
                 public void measured(LeadPair p, OptionalDouble ohms) {
-                    log.printf(Locale.ROOT, "  %-8s - %-8s %s%n", p.a(), p.b(), ohms.isEmpty() ? "open"
-                            : RigText.ohm(ohms.getAsDouble()));
+                    log.println(IdentifyProgressText.leadsMeasured(p, ohms));
                 }
             }));
         }
-        log.printf(Locale.ROOT, "%d of %d pairs measured.%n", r.readings(), r.allPairs());
+        log.println(IdentifyProgressText.leadsDone(r.readings(), r.allPairs()));
         log.flush();
         String motor = r.motorSerial();
         if (json) {
