@@ -37,10 +37,10 @@ public final class LeadsFromReadings {
             extra = List.copyOf(extra);
             Objects.requireNonNull(leads, "leads");
             if (files.isEmpty() && extra.isEmpty()) {
-                throw new IllegalArgumentException("nothing to identify: no file and no reading");
+                throw new SettingsException("nothing to identify: no file and no reading");
             }
             if (files.size() > 1 && !extra.isEmpty()) {
-                throw new IllegalArgumentException("loose readings add to one file, not to " + files.size());
+                throw new SettingsException("loose readings add to one file, not to " + files.size());
             }
         }
     }

@@ -29,7 +29,7 @@ public final class LeadsProbe {
             Objects.requireNonNull(leadsSettings, "leadsSettings");
             if (leads.size() < 2 || leads.stream().distinct().count() != leads.size()
                     || leads.stream().anyMatch(String::isBlank)) {
-                throw new IllegalArgumentException("expected at least two distinct, non-blank lead labels: " + leads);
+                throw new SettingsException("expected at least two distinct, non-blank lead labels: " + leads);
             }
         }
 

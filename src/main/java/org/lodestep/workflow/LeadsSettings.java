@@ -26,19 +26,19 @@ public record LeadsSettings(double ambientC, double referenceC, CopperTemperatur
     public LeadsSettings {
         java.util.Objects.requireNonNull(copper, "copper");
         if (Double.isInfinite(ambientC) || ambientC <= -copper.kC()) {
-            throw new IllegalArgumentException("ambient temperature must be above " + (-copper.kC()) + " °C or NaN "
+            throw new SettingsException("ambient temperature must be above " + (-copper.kC()) + " °C or NaN "
                     + "(unknown): " + ambientC + " °C");
         }
         if (!Double.isFinite(referenceC) || referenceC <= -copper.kC()) {
-            throw new IllegalArgumentException("reference temperature must be above " + (-copper.kC()) + " °C: "
+            throw new SettingsException("reference temperature must be above " + (-copper.kC()) + " °C: "
                     + referenceC + " °C");
         }
         if (!(imbalanceTolerance > 0 && imbalanceTolerance < 1)) {
-            throw new IllegalArgumentException("imbalance tolerance must be between 0 and 100 %: "
+            throw new SettingsException("imbalance tolerance must be between 0 and 100 %: "
                     + imbalanceTolerance * 100 + " %");
         }
         if (!(contactAllowanceOhm >= 0 && contactAllowanceOhm < 1e3)) {
-            throw new IllegalArgumentException("contact allowance must be 0 to 1000 ohm: " + contactAllowanceOhm
+            throw new SettingsException("contact allowance must be 0 to 1000 ohm: " + contactAllowanceOhm
                     + " ohm");
         }
     }

@@ -40,7 +40,7 @@ public final class MotorFromFiles {
             stepResponses = List.copyOf(stepResponses);
             Objects.requireNonNull(card, "card");
             if (resistance == null && stepResponses.isEmpty() && backEmf == null) {
-                throw new IllegalArgumentException("nothing to identify: no resistance, step-response or back-EMF "
+                throw new SettingsException("nothing to identify: no resistance, step-response or back-EMF "
                         + "file");
             }
         }

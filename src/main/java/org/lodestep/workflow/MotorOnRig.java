@@ -48,7 +48,7 @@ public final class MotorOnRig {
     public record Settings(Double revolutions, MotorCardSettings card) {
         public Settings {
             if (revolutions != null && !(revolutions > 0 && Double.isFinite(revolutions))) {
-                throw new IllegalArgumentException("revolutions must be positive, got " + revolutions);
+                throw new SettingsException("revolutions must be positive, got " + revolutions);
             }
             Objects.requireNonNull(card, "card");
         }
