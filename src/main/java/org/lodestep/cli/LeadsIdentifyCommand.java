@@ -108,10 +108,4 @@ final class LeadsIdentifyCommand implements Callable<Integer> {
         out.flush();
         return result.hasError() ? ExitCode.FINDING : ExitCode.OK;
     }
-
-    /** The readings of a file plus command-line readings; kept for the QA commands, which read pairs the same way. */
-    static org.lodestep.wiring.ResistanceMatrix matrix(org.lodestep.capture.ResistanceReadings r,
-                                                       List<LeadPairReading> extra) {
-        return LeadsFromReadings.matrix(r, extra);
-    }
 }

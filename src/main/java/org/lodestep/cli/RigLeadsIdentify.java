@@ -53,9 +53,4 @@ final class RigLeadsIdentify {
         out.flush();
         return r.identification().hasError() ? ExitCode.FINDING : ExitCode.OK;
     }
-
-    /** The rig's lead labels when it has distinct ones, else the position numbers (as {@link LeadsOnRig} uses). */
-    static List<String> labels(List<String> rigLabels, int leads) {
-        return LeadsOnRig.labels(rigLabels, leads);
-    }
 }

@@ -107,7 +107,7 @@ public final class LeadsFromReadings {
     }
 
     /** The readings of a file plus loose readings (which replace the file's value for the same pair). */
-    public static ResistanceMatrix matrix(ResistanceReadings r, List<LeadPairReading> extra) {
+    static ResistanceMatrix matrix(ResistanceReadings r, List<LeadPairReading> extra) {
         ResistanceMatrix.Builder b = ResistanceMatrix.builder();
         r.leads().forEach(b::lead);
         List<LeadPairReading> all = new ArrayList<>(r.readings());

@@ -76,7 +76,7 @@ public final class LeadsOnRig {
     }
 
     /** The rig's lead labels when it has distinct ones, else the position numbers. */
-    public static List<String> labels(List<String> rigLabels, int leads) {
+    static List<String> labels(List<String> rigLabels, int leads) {
         if (rigLabels.size() == leads && rigLabels.stream().distinct().count() == leads
                 && rigLabels.stream().noneMatch(String::isBlank)) {
             return rigLabels;
