@@ -249,8 +249,8 @@ public final class MotorIdentifier {
     }
 
     /**
-     * The motor-wide figures (step angle, constants, rated current, torque, supply, full-current rate, natural
-     * frequency), each noted as unknown where its inputs are missing, and the card.
+     * The motor-wide figures (step angle, constants, the drive figures, natural frequency), each noted as unknown
+     * where its inputs are missing, and the card.
      */
     private static MotorCard card(IdentifyRequest request, Topology topology, PhaseAssignment.Result phases,
                                   Connection connection, Wiring wiring, List<PhaseCard> cards, BackEmfResult emf,
@@ -269,6 +269,33 @@ public final class MotorIdentifier {
         if (keHalf == null) {
             unknowns.add(Unknown.of(Unknown.What.KE));
         }
+        Drive d = drive(request, cards, kt, notes);
+        Double fn = null;
+        if (request.inertiaKgM2() != null) {
+            if (teeth != null && d.torque() != null) {
+                fn = NaturalFrequency.naturalHz(d.torque(), teeth, request.inertiaKgM2());
+            } else {
+                unknowns.add(Unknown.of(Unknown.What.NATURAL_FREQUENCY));
+            }
+        }
+        findings.sort(Comparator.comparing((Finding f) -> f.severity()).reversed());
+        return new MotorCard(topology.label(), phases.leads(), connection.label(), cards, wiring,
+                rotationConvention(emf, phases), teeth, steps, angle, keHalf, kt, d.current(), d.currentBasis(),
+                d.torque(), d.ratedMinA(), d.ratedMaxA(), d.ratedAssumption(), d.supply(), d.supplyBasis(),
+                d.suggestedSupply(), d.rate(), request.inertiaKgM2(), fn, unknowns, findings, emf,
+                request.stepResponses());
+    }
+
+    /** The drive figures: rated-current estimate, the current used and its torque, supply, full-current rate. */
+    private record Drive(Double current, String currentBasis, Double torque, Double ratedMinA, Double ratedMaxA,
+                         String ratedAssumption, Double supply, String supplyBasis, Double suggestedSupply,
+                         Double rate) {
+    }
+
+    /** The drive figures from the phases in the chosen connection, each noted as unknown where inputs are missing. */
+    private static Drive drive(IdentifyRequest request, List<PhaseCard> cards, Double kt, Notes notes) {
+        List<Unknown> unknowns = notes.unknowns();
+        List<Finding> findings = notes.findings();
         Double phaseR = mean(cards.stream().map(PhaseCard::resistanceOhm).toList());
         Double phaseL = mean(cards.stream().map(PhaseCard::inductanceH).toList());
 
@@ -310,19 +337,7 @@ public final class MotorIdentifier {
         } else if (phaseL == null) {
             unknowns.add(Unknown.of(Unknown.What.INDUCTANCE));
         }
-        Double fn = null;
-        if (request.inertiaKgM2() != null) {
-            if (teeth != null && torque != null) {
-                fn = NaturalFrequency.naturalHz(torque, teeth, request.inertiaKgM2());
-            } else {
-                unknowns.add(Unknown.of(Unknown.What.NATURAL_FREQUENCY));
-            }
-        }
-        findings.sort(Comparator.comparing((Finding f) -> f.severity()).reversed());
-        return new MotorCard(topology.label(), phases.leads(), connection.label(), cards, wiring,
-                rotationConvention(emf, phases), teeth, steps, angle, keHalf, kt, current, currentBasis, torque, iMin,
-                iMax, assumption, supply, supplyBasis, suggested, rate, request.inertiaKgM2(), fn, unknowns, findings,
-                emf, request.stepResponses());
+        return new Drive(current, currentBasis, torque, iMin, iMax, assumption, supply, supplyBasis, suggested, rate);
     }
 
     /** What the phase order means for the direction of rotation. */
