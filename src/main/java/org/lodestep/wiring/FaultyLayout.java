@@ -7,8 +7,6 @@ import java.util.Locale;
 import java.util.Map;
 import java.util.Optional;
 
-import org.lodestep.wiring.WindingConnections.Mode;
-
 /**
  * The layout of a motor with one open coil, from its lead count and what still conducts, and the connections that
  * still work on its healthy part (salvage).
@@ -19,7 +17,7 @@ import org.lodestep.wiring.WindingConnections.Mode;
  * the tap is open (the tap is one of the pair), and a whole winding when the tap lead itself is broken. 8 leads:
  * three coils and two loose leads (the open coil). Derating of a salvage connection is stated against bipolar series
  * at equal copper loss: one half-winding per phase gives about 1/√2 (71 %) of its low-speed torque
- * ({@link WindingConnections}: current ×√2 on half the turns).
+ * ({@link Connection}: current ×√2 on half the turns).
  */
 final class FaultyLayout {
     /** A pair reading above this fraction of the tapped winding's whole is a whole winding, not one half. */
@@ -42,7 +40,7 @@ final class FaultyLayout {
      * @param message       what is open, for the open-winding finding
      */
     record Inference(Topology topology, List<String> openLeads, List<String> tapCandidates, List<Winding> windings,
-                     List<Connection> salvage, String message) {
+                     List<DriverWiring> salvage, String message) {
     }
 
     static Optional<Inference> infer(int leadCount, List<List<String>> groups, List<Winding> windings) {
@@ -107,37 +105,37 @@ final class FaultyLayout {
         return Optional.empty();
     }
 
-    private static Connection halfSalvage(Winding tapped, Winding half, String loose) {
+    private static DriverWiring halfSalvage(Winding tapped, Winding half, String loose) {
         double r = (tapped.halfResistancesOhm().get(0) + half.resistanceOhm()) / 2;
-        return new Connection("salvage-bipolar-half-winding", terminals("A+", tapped.ends().get(0), "A-",
+        return new DriverWiring("salvage-bipolar-half-winding", terminals("A+", tapped.ends().get(0), "A-",
                 tapped.tap(), "B+", half.ends().get(0), "B-", half.ends().get(1)), List.of(),
-                List.of(tapped.ends().get(1), loose), WindingConnections.phaseResistanceOhm(Mode.BIPOLAR_HALF, r),
-                Mode.BIPOLAR_HALF.resistanceFactor(), Mode.BIPOLAR_HALF.inductanceFactor(),
-                Mode.BIPOLAR_HALF.currentFactor(), DERATED, true,
+                List.of(tapped.ends().get(1), loose), Connection.HALF.phaseResistanceOhm(r),
+                Connection.HALF.resistanceFactor(), Connection.HALF.inductanceFactor(),
+                Connection.HALF.currentFactor(), DERATED, true,
                 "Set the driver to the rated current of one half. Which of " + half.ends().get(0) + " and "
                 + half.ends().get(1) + " is the tap does not matter here. If the motor turns the wrong way, swap A+ "
                 + "and A-.");
     }
 
-    private static Connection seriesOnEnds(Winding tapped, Winding whole, String loose) {
-        return new Connection("salvage-bipolar-series", terminals("A+", tapped.ends().get(0), "A-",
+    private static DriverWiring seriesOnEnds(Winding tapped, Winding whole, String loose) {
+        return new DriverWiring("salvage-bipolar-series", terminals("A+", tapped.ends().get(0), "A-",
                 tapped.ends().get(1), "B+", whole.ends().get(0), "B-", whole.ends().get(1)), List.of(),
                 List.of(tapped.tap(), loose), (tapped.resistanceOhm() + whole.resistanceOhm()) / 2,
-                Mode.BIPOLAR_SERIES.resistanceFactor(), Mode.BIPOLAR_SERIES.inductanceFactor(),
-                Mode.BIPOLAR_SERIES.currentFactor(), ConnectionGuide.SERIES, true,
+                Connection.SERIES.resistanceFactor(), Connection.SERIES.inductanceFactor(),
+                Connection.SERIES.currentFactor(), ConnectionGuide.SERIES, true,
                 "Salvage: both taps insulated (one is broken off). If the motor turns the wrong way, swap A+ and A-.");
     }
 
-    private static Connection onePerPhase(List<Winding> coils, List<String> loose) {
+    private static DriverWiring onePerPhase(List<Winding> coils, List<String> loose) {
         Winding a = coils.get(0);
         Winding b = coils.get(1);
         List<String> insulate = new ArrayList<>(coils.get(2).ends());
         insulate.addAll(loose);
         double r = (a.resistanceOhm() + b.resistanceOhm()) / 2;
-        return new Connection("salvage-bipolar-one-coil-per-phase", terminals("A+", a.ends().get(0), "A-",
+        return new DriverWiring("salvage-bipolar-one-coil-per-phase", terminals("A+", a.ends().get(0), "A-",
                 a.ends().get(1), "B+", b.ends().get(0), "B-", b.ends().get(1)), List.of(), insulate,
-                WindingConnections.phaseResistanceOhm(Mode.BIPOLAR_HALF, r), Mode.BIPOLAR_HALF.resistanceFactor(),
-                Mode.BIPOLAR_HALF.inductanceFactor(), Mode.BIPOLAR_HALF.currentFactor(), DERATED, false,
+                Connection.HALF.phaseResistanceOhm(r), Connection.HALF.resistanceFactor(),
+                Connection.HALF.inductanceFactor(), Connection.HALF.currentFactor(), DERATED, false,
                 "The two coils must belong to different phases: resistance cannot tell which do; if the motor only "
                 + "shudders, use " + coils.get(2).ends().get(0) + "-" + coils.get(2).ends().get(1) + " instead of "
                 + b.ends().get(0) + "-" + b.ends().get(1) + " (back-EMF phasing, `lodestep motor identify`, settles"

@@ -79,7 +79,7 @@ public final class LeadIdentifier {
                 findings.add(WindingChecks.leakage(u, cg.continuityLimitOhm));
             }
         }
-        List<Connection> salvage = null;
+        List<DriverWiring> salvage = null;
         if (groupsDecided && !singletons.isEmpty()) {
             var faulty = topology == Topology.UNKNOWN && allStructured
                     ? FaultyLayout.infer(m.leads().size(), cg.groups, windings) : java.util.Optional.<FaultyLayout.Inference>empty();

@@ -121,7 +121,7 @@ final class HandTurn {
                         + p.humFraction() * peak * Math.sin(2 * Math.PI * 50 * i / sampleRateHz + humPhase);
                 v[i] = p.quantise12Bit() ? Math.round(s / lsb) * lsb : s;
             }
-            out.add(new EmfChannel(new LeadPair(c.lead1(), c.lead2()), v));
+            out.add(new EmfChannel(new OrientedLeads(c.lead1(), c.lead2()), v));
         }
         return new Capture(out, trueRevs, p.revolutions(), p.rotorTeeth(), p.toString());
     }

@@ -63,7 +63,7 @@ class ToothCountPropertyTest {
         HandTurn.Capture c = HandTurn.generate(p, EIGHT_LEAD, FS, 7);
         BackEmfResult r = new BackEmfAnalyzer(FS).analyze(c.channels(), 2.0, null, 1);
         assertEquals(null, r.rotorTeeth(), r.toothCount().toString());
-        assertTrue(r.findings().stream().anyMatch(f -> f.code().startsWith("teeth_")), r.findings().toString());
+        assertTrue(r.findings().stream().anyMatch(f -> f.code().code().startsWith("teeth_")), r.findings().toString());
     }
 
     @Test
@@ -74,7 +74,7 @@ class ToothCountPropertyTest {
         BackEmfResult r = new BackEmfAnalyzer(FS).analyze(c.channels(), 3.0, null, 1);
         assertEquals(90, r.rotorTeeth());
         assertEquals(ToothCount.Confidence.EXACT, r.toothCount().confidence());
-        assertTrue(r.findings().stream().anyMatch(f -> f.code().equals("unusual_teeth")));
+        assertTrue(r.findings().stream().anyMatch(f -> f.code() == MotorFindingCode.UNUSUAL_TEETH));
     }
 
     @Test

@@ -114,8 +114,8 @@ class FaultyLayoutTest {
             Set<String> open = openFindingLeads(id);
             assertTrue(open.containsAll(labelsOf(net, seed, 5, 3, 4)), open.toString());
             assertEquals(List.of("salvage-bipolar-half-winding"),
-                    id.connections().stream().map(Connection::name).toList());
-            Connection c = id.connections().get(0);
+                    id.connections().stream().map(DriverWiring::name).toList());
+            DriverWiring c = id.connections().get(0);
             // the healthy winding runs tap to one end, the broken one on its healthy half
             assertEquals(Set.of(labelsOf(net, seed, 3, 4).get(0), labelsOf(net, seed, 3, 4).get(1)),
                     Set.of(c.terminals().get("B+").get(0), c.terminals().get("B-").get(0)));
@@ -132,7 +132,7 @@ class FaultyLayoutTest {
             Identification id = identify(net, seed);
             assertEquals(Topology.SIX_LEAD, id.topology());
             assertEquals(Set.of(labelsOf(net, seed, 4).get(0)), openFindingLeads(id));
-            assertEquals(List.of("salvage-bipolar-series"), id.connections().stream().map(Connection::name).toList());
+            assertEquals(List.of("salvage-bipolar-series"), id.connections().stream().map(DriverWiring::name).toList());
         }
     }
 
@@ -143,7 +143,7 @@ class FaultyLayoutTest {
             Identification id = identify(net, seed);
             assertEquals(Topology.EIGHT_LEAD, id.topology());
             assertEquals(new HashSet<>(labelsOf(net, seed, 6, 7)), openFindingLeads(id));
-            Connection c = id.connections().get(0);
+            DriverWiring c = id.connections().get(0);
             assertEquals("salvage-bipolar-one-coil-per-phase", c.name());
             assertTrue(!c.verified());
             assertTrue(c.insulate().containsAll(labelsOf(net, seed, 6, 7)));
