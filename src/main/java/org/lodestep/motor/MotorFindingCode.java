@@ -18,6 +18,8 @@ public enum MotorFindingCode implements Finding.Code {
     DIRECTION_REVERSED("direction_reversed"),
     /** The step response rises in a way that suggests eddy currents. */
     EDDY_CURRENT("eddy_current"),
+    /** Which limit, inductance or back-EMF, sets the full-current step rate. */
+    FULL_CURRENT_LIMIT("full_current_limit"),
     /** The index channel has too few pulses. */
     INDEX_CHANNEL("index_channel"),
     /** A back-EMF channel shows no voltage: an open coil or two leads that are not one coil. */

@@ -78,8 +78,9 @@ final class ToothCounter {
             trusted[i] = amp[i] > threshold;
             moving[i] = smooth[i] > noise.smoothPeak || trusted[i];
         }
-        List<int[]> runs = runs(trusted, Math.max(2, block / 4));
-        // Runs shorter than a quarter block are noise spikes, not motion.
+        List<int[]> runs = runs(trusted, block);
+        // A run shorter than one block is too short to tell its direction (a noise spike at the trust level would
+        // pass for a reversal): it is bridged like any slow stretch.
         Arrays.fill(trusted, false);
         for (int[] r : runs) {
             Arrays.fill(trusted, r[0], r[1] + 1, true);
