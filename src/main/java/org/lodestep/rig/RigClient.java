@@ -54,6 +54,9 @@ public final class RigClient implements Closeable {
     private long lastSendNanos;
     private long resendRequests;
     private long commandRetries;
+    private int protocolMinor;
+    /** Samples at full scale per channel, from the last stream's end frame ({@code clipped=name:count,...}). */
+    private String lastClipped = "";
 
     private RigClient(Transport transport, Settings settings) throws RigException {
         this.transport = transport;
@@ -85,12 +88,24 @@ public final class RigClient implements Closeable {
         return info;
     }
 
+    /** The protocol revision both sides speak: 1 for 1.1, 0 for a 1.0 rig. */
+    public int protocolMinor() {
+        return protocolMinor;
+    }
+
     public Stats stats() {
         return new Stats(reader.damagedFrames(), resendRequests, commandRetries, reader.bytesRead());
     }
 
     private RigInfo handshake() throws RigException {
-        Fields hello = Fields.parse(command("HELLO " + VirtualRig.PROTOCOL_VERSION, settings.replyTimeoutMs()).text());
+        // minor= tells a 1.1 rig what this host speaks; a 1.0 rig ignores it and answers without minor=
+        Fields hello = Fields.parse(command("HELLO " + VirtualRig.PROTOCOL_VERSION + " minor="
+                + VirtualRig.PROTOCOL_MINOR, settings.replyTimeoutMs()).text());
+        try {
+            protocolMinor = Math.min(VirtualRig.PROTOCOL_MINOR, Integer.parseInt(hello.get("minor", "0")));
+        } catch (NumberFormatException e) {
+            protocolMinor = 0;
+        }
         Fields caps = Fields.parse(command("CAPS", settings.replyTimeoutMs()).text());
         String labels = caps.get("labels", "");
         return new RigInfo(transport.address(), hello.integer("proto"), hello.get("rig", "?"), hello.get("fw", "?"),
@@ -280,6 +295,7 @@ public final class RigClient implements Closeable {
         Frame header = command(text, (int) Math.min(Integer.MAX_VALUE / 2, seconds * 1000 * 2
                 + settings.replyTimeoutMs()));
         StreamSpec spec = StreamSpec.decode(header.text());
+        lastClipped = "";
         BlockCollector blocks = new BlockCollector(spec);
         try {
             receive(kind, text, header.tag(), blocks, progress);
@@ -327,6 +343,7 @@ public final class RigClient implements Closeable {
                 continue; // ping replies; a re-sent block carries the stream's tag, not the request's
             }
             if (f.type() == Frame.END) {
+                lastClipped = Fields.parse(f.text()).get("clipped", "");
                 if (!Fields.parse(f.text()).get("status", "").equals("complete")) {
                     throw new RigException("the rig ended the " + kind + " stream early (" + f.text() + ") after "
                             + blocks.have() + " of " + blocks.blocks() + " blocks");
@@ -364,6 +381,10 @@ public final class RigClient implements Closeable {
         String serial = info.capability("motor_serial", "");
         if (!serial.isEmpty()) {
             meta.put("motor_serial", serial);
+        }
+        if (!lastClipped.isEmpty()) {
+            // samples at full scale: the true value is beyond the range, so peaks there are lower bounds
+            meta.put("clipped_samples", lastClipped);
         }
         meta.put("started_utc", started);
         meta.put("finished_utc", Instant.now().toString());

@@ -19,6 +19,8 @@ class VirtualRigTest {
         Host(String address) throws Exception {
             link = Transports.openSim(address);
             in = new FrameReader(link.host());
+            // a session starts with HELLO (firmware-protocol.md, section 3); tag 254 stays clear of the tests' tags
+            assertEquals(Frame.REPLY, ask(254, "HELLO 1").type());
         }
 
         Frame ask(int tag, String text) throws Exception {
