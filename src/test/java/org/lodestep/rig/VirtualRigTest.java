@@ -99,8 +99,8 @@ class VirtualRigTest {
         assertTrue(h.ask(1, "FROB").text().startsWith("1 UNKNOWN_COMMAND"));
         assertTrue(h.ask(2, "SWEEP from=10 to=100 seconds=1 microsteps=3 rate_hz=1000").text()
                 .startsWith("2 BAD_ARGUMENT microsteps=3"));
-        assertTrue(h.ask(3, "HELLO 2").text().startsWith("10 VERSION"));
         assertTrue(h.ask(4, "RESEND seq=0").text().startsWith("6 BLOCK_GONE"));
+        assertTrue(h.ask(3, "HELLO 2").text().startsWith("10 VERSION"));
     }
 
     @Test
