@@ -11,10 +11,10 @@ import java.util.function.UnaryOperator;
  * frames pass through a fault that rewrites (or drops, by returning null) what a faulty firmware would have sent.
  * The virtual rig writes one whole frame per write, which is what lets the fault see frames.
  */
-final class BrokenRig implements Transport {
+public final class BrokenRig implements Transport {
 
     /** The faults, each a firmware bug a newcomer could write. */
-    enum Fault {
+    public enum Fault {
         /** Measures a retried command again instead of repeating its answer. */
         REMEASURES_RETRIES,
         /** Answers commands before HELLO instead of refusing them. */
@@ -41,6 +41,21 @@ final class BrokenRig implements Transport {
         t.setDaemon(true);
         t.start();
         return ends[0];
+    }
+
+    /** Serves one faulty session on the next connection to {@code server}, in a daemon thread. */
+    public static void serveOnce(java.net.ServerSocket server, Fault fault) {
+        Thread t = new Thread(() -> {
+            try {
+                java.net.Socket s = server.accept();
+                Transport rigSide = Transports.acceptedTcp("tcp:broken", s);
+                new VirtualRig("bench-4", Scenarios.all().get("bench-4"), new BrokenRig(rigSide, fault), false).run();
+            } catch (IOException e) {
+                // the test fails on what the kit reports
+            }
+        }, "broken rig on tcp");
+        t.setDaemon(true);
+        t.start();
     }
 
     @Override
