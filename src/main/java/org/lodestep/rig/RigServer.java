@@ -35,6 +35,14 @@ public final class RigServer {
                 throw e;
             }
             if (active != null && active.isAlive()) {
+                // a session that has just hung up may still be finishing: give it a moment before saying busy
+                try {
+                    active.join(250);
+                } catch (InterruptedException e) {
+                    Thread.currentThread().interrupt();
+                }
+            }
+            if (active != null && active.isAlive()) {
                 refuse(socket);
                 log.accept("turned away " + socket.getRemoteSocketAddress() + ": busy with another session");
                 continue;

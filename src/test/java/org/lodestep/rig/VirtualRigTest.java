@@ -104,6 +104,17 @@ class VirtualRigTest {
     }
 
     @Test
+    void aCommandAsLongAsAFrameAllowsGetsAnErrorThatFitsAndTheRigLivesOn() throws Exception {
+        Host h = new Host("sim:bench-4");
+        // one valid frame with a 4096-byte unknown command: the error may repeat only a little of it
+        Frame f = h.ask(9, "X".repeat(FrameCodec.MAX_PAYLOAD_BYTES));
+        assertEquals(Frame.ERROR, f.type());
+        assertTrue(f.text().startsWith("1 UNKNOWN_COMMAND"), f.text());
+        assertTrue(f.payload().length <= 256, f.payload().length + " bytes");
+        assertEquals("OK", h.ask(10, "PING").text());
+    }
+
+    @Test
     void clientSurfacesARefusalAsItsErrorCode() throws Exception {
         try (RigClient c = RigClient.open("sim:bench-4")) {
             RigRefusedException e = assertThrows(RigRefusedException.class,
