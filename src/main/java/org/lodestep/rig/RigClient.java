@@ -122,7 +122,8 @@ public final class RigClient implements Closeable {
 
     /**
      * Insulation resistance from one lead to the frame: arms the tester, then fires within the arm's validity.
-     * The caller must have shown the caution and had it confirmed; this method is the confirmation.
+     * The caller must have shown the caution and had it confirmed; this method is the confirmation. The reading is
+     * labelled {@code <position>-frame}.
      */
     public InsulationReading insulation(int lead, int testVolts, double seconds) throws RigException {
         Fields arm = Fields.parse(command("INS ARM lead=" + lead + " volts=" + testVolts,
@@ -131,8 +132,8 @@ public final class RigClient implements Closeable {
         Fields r = Fields.parse(command("INS FIRE token=" + token + " seconds=" + StreamSpec.fmt(seconds),
                 (int) (seconds * 1000) + settings.replyTimeoutMs() * 5).text());
         String ohm = r.get("ohm");
-        return new InsulationReading(lead, testVolts, seconds,
-                ohm.equals("over") ? Double.POSITIVE_INFINITY : r.number("ohm"));
+        return new InsulationReading(lead + "-frame", ohm.equals("over") ? Double.POSITIVE_INFINITY : r.number("ohm"),
+                testVolts);
     }
 
     /** A coil current step response between two positions: channels current (A) and voltage (V). */
@@ -159,6 +160,20 @@ public final class RigClient implements Closeable {
                 + " microsteps=" + profile.microsteps() + " rate_hz=" + StreamSpec.fmt(profile.sampleRateHz()),
                 profile.seconds(), p);
         return c;
+    }
+
+    /**
+     * A step-rate sweep through the rig's own drive of the given mode ({@code voltage}: constant-voltage H-bridge,
+     * {@code chopper}: current-regulating), with the supply stated or 0 for the rig's default: channels accel (g),
+     * current_a and current_b (phase currents, A), step (V).
+     */
+    public RigCapture sweep(SweepPlan profile, DriveMode drive, double supplyV, Progress p) throws RigException {
+        String mode = drive == DriveMode.CONSTANT_VOLTAGE ? "voltage" : "chopper";
+        return stream("sweep", "SWEEP from=" + StreamSpec.fmt(profile.fromFullStepsPerS()) + " to="
+                + StreamSpec.fmt(profile.toFullStepsPerS()) + " seconds=" + StreamSpec.fmt(profile.seconds())
+                + " microsteps=" + profile.microsteps() + " rate_hz=" + StreamSpec.fmt(profile.sampleRateHz())
+                + " drive=" + mode + (supplyV > 0 ? " supply_v=" + StreamSpec.fmt(supplyV) : ""),
+                profile.seconds(), p);
     }
 
     /** Tells the rig to switch every output off. */

@@ -18,7 +18,7 @@ public final class RigConformanceCheck {
     public record Settings(String address, boolean thorough) {
         public Settings {
             if (address == null || address.isBlank()) {
-                throw new IllegalArgumentException("no rig address");
+                throw new SettingsException("no rig address");
             }
         }
     }
