@@ -99,8 +99,17 @@ public final class RigClient implements Closeable {
 
     private RigInfo handshake() throws RigException {
         // minor= tells a 1.1 rig what this host speaks; a 1.0 rig ignores it and answers without minor=
-        Fields hello = Fields.parse(command("HELLO " + VirtualRig.PROTOCOL_VERSION + " minor="
-                + VirtualRig.PROTOCOL_MINOR, settings.replyTimeoutMs()).text());
+        Fields hello;
+        try {
+            hello = Fields.parse(command("HELLO " + VirtualRig.PROTOCOL_VERSION + " minor="
+                    + VirtualRig.PROTOCOL_MINOR, settings.replyTimeoutMs()).text());
+        } catch (RigRefusedException e) {
+            if (e.error() != RigError.BAD_ARGUMENT) {
+                throw e;
+            }
+            // a strict 1.0 rig that refuses the unknown key: speak plain 1.0 to it
+            hello = Fields.parse(command("HELLO " + VirtualRig.PROTOCOL_VERSION, settings.replyTimeoutMs()).text());
+        }
         try {
             protocolMinor = Math.min(VirtualRig.PROTOCOL_MINOR, Integer.parseInt(hello.get("minor", "0")));
         } catch (NumberFormatException e) {
