@@ -4,11 +4,10 @@ import java.io.Closeable;
 import java.io.EOFException;
 import java.io.IOException;
 import java.time.Instant;
-import java.util.HashSet;
+import java.util.HashMap;
 import java.util.LinkedHashMap;
 import java.util.List;
 import java.util.Map;
-import java.util.Set;
 
 /**
  * The host side of {@code firmware-protocol.md}: handshake, measurements and streams, with timeouts, retries,
@@ -342,9 +341,11 @@ public final class RigClient implements Closeable {
     /** Receives blocks until every one is present, asking again for damaged or lost ones. */
     private void receive(String kind, String text, int tag, BlockCollector blocks, Progress progress)
             throws IOException, RigException {
-        Set<Integer> resendTags = new HashSet<>();
+        Map<Integer, Integer> resendTags = new HashMap<>();
         int waitMs = Math.min(settings.replyTimeoutMs(), settings.keepaliveMs());
         int idleMs = 0;
+        int highest = -1;
+        boolean ended = false;
         progress.frames(0, blocks.totalFrames());
         while (!blocks.complete()) {
             Frame f = reader.next(waitMs);
@@ -353,20 +354,30 @@ public final class RigClient implements Closeable {
                 idleMs += waitMs;
                 if (idleMs >= settings.replyTimeoutMs()) {
                     idleMs = 0;
-                    // silence: ask again for what is missing, oldest first
+                    // silence: ask again for what is missing, oldest first; before the end, only up to the next
+                    // block due, since a rig streaming in real time may simply not have sampled the rest yet
                     for (int s : blocks.missing(32)) {
-                        request(s, blocks, kind, resendTags);
+                        if (ended || s <= highest + 1) {
+                            request(s, blocks, kind, resendTags);
+                        }
                     }
                 }
                 continue;
             }
-            if (f.type() == Frame.ERROR && (f.tag() == 0 || f.tag() == tag || resendTags.contains(f.tag()))) {
+            if (f.type() == Frame.ERROR && resendTags.containsKey(f.tag()) && f.text().startsWith(
+                    RigError.BLOCK_GONE.code() + " ") && !ended && resendTags.get(f.tag()) > highest) {
+                // not sent yet (section 6): not a lost block; it will come, or be asked for again
+                blocks.forgetRequest(resendTags.remove(f.tag()));
+                continue;
+            }
+            if (f.type() == Frame.ERROR && (f.tag() == 0 || f.tag() == tag || resendTags.containsKey(f.tag()))) {
                 throw refused(text, f);
             }
             if (f.tag() != tag) {
                 continue; // ping replies; a re-sent block carries the stream's tag, not the request's
             }
             if (f.type() == Frame.END) {
+                ended = true;
                 lastClipped = Fields.parse(f.text()).get("clipped", "");
                 if (!Fields.parse(f.text()).get("status", "").equals("complete")) {
                     throw new RigException("the rig ended the " + kind + " stream early (" + f.text() + ") after "
@@ -378,6 +389,7 @@ public final class RigClient implements Closeable {
             } else if (f.type() == Frame.BLOCK) {
                 SampleBlock b = SampleBlock.decode(f.payload());
                 idleMs = 0;
+                highest = Math.max(highest, b.seq());
                 if (blocks.accept(b)) {
                     progress.frames(blocks.framesReceived(), blocks.totalFrames());
                 }
@@ -415,7 +427,7 @@ public final class RigClient implements Closeable {
         return meta;
     }
 
-    private void request(int seq, BlockCollector blocks, String kind, Set<Integer> resendTags)
+    private void request(int seq, BlockCollector blocks, String kind, Map<Integer, Integer> resendTags)
             throws IOException {
         if (blocks.requests(seq) >= settings.attempts()) {
             throw new IOException("block " + seq + " of the " + kind + " stream still damaged or missing after "
@@ -425,7 +437,7 @@ public final class RigClient implements Closeable {
         blocks.noteRequest(seq);
         resendRequests++;
         int t = tag();
-        resendTags.add(t);
+        resendTags.put(t, seq);
         send(Frame.text(Frame.COMMAND, t, "RESEND seq=" + seq));
     }
 }

@@ -115,6 +115,17 @@ class VirtualRigTest {
     }
 
     @Test
+    void aStreamSlowerThanTheReplyTimeoutIsWaitedForNotGivenUp() throws Exception {
+        Transports.SimLink link = Transports.openSim("sim:bench-4?realtime=1");
+        try (RigClient c = RigClient.connect(link.host(), RigClient.Settings.DEFAULT)) {
+            // 500 Hz, one channel: a 1020-frame block every 2 s, twice the host's 1 s reply timeout; the rig
+            // answers an early re-request BLOCK_GONE (not sent yet), which is not a lost block
+            RigCapture cap = c.backEmf(java.util.List.of(new int[] {1, 2}), 4.5, 500, RigClient.Progress.NONE);
+            assertEquals(2250, cap.signal().length());
+        }
+    }
+
+    @Test
     void clientSurfacesARefusalAsItsErrorCode() throws Exception {
         try (RigClient c = RigClient.open("sim:bench-4")) {
             RigRefusedException e = assertThrows(RigRefusedException.class,
