@@ -16,7 +16,7 @@ import java.util.List;
  * @param endRateFullStepsPerS        last rate of the curve: the zero-torque rate, or where the torque has fallen
  *                                    to {@link TorqueCurves#END_FRACTION} of its low-speed value
  * @param maxPowerW                   highest mechanical power along the curve, W
- * @param maxPowerRateFullStepsPerS   rate of that power, full steps/s
+ * @param maxPowerRateFullStepsPerS   lowest rate at which the power comes within 1 % of that peak, full steps/s
  * @param points                      the curve, by rising rate, first point at standstill
  */
 public record TorqueCurve(PhaseModel motor, DriveSettings drive, double holdingTorqueNm, double lowSpeedTorqueNm,

@@ -33,11 +33,15 @@ public final class TorqueCurves {
             double w = motor.radPerS(rate);
             double t = PhasorTorque.pullOutTorqueNm(motor, drive, w);
             double p = t * w;
-            if (p > bestP) {
-                bestP = p;
-                bestRate = rate;
-            }
+            bestP = Math.max(bestP, p);
             points.add(new TorquePoint(rate, rate / motor.fullStepsPerRev() * 60, t, p, rate <= corner));
+        }
+        // above the corner the power levels off (T falls as 1/ω): name where it first comes within 1 % of its peak
+        for (TorquePoint p : points) {
+            if (p.powerW() >= 0.99 * bestP) {
+                bestRate = p.rateFullStepsPerS();
+                break;
+            }
         }
         return new TorqueCurve(motor, drive, PhasorTorque.holdingTorqueNm(motor, drive), t0, corner, zero, end,
                 bestP, bestRate, points);
