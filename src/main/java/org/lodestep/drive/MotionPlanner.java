@@ -78,7 +78,7 @@ public final class MotionPlanner {
         }
         boolean sCurve = s.shape() == ProfileShape.S_CURVE;
         double jerk = !sCurve ? Double.POSITIVE_INFINITY
-                : Double.isNaN(s.jerkFullStepsPerS3()) ? 5 * base * base / target : s.jerkFullStepsPerS3();
+                : Double.isNaN(s.jerkFullStepsPerS3()) ? defaultJerk(base, target, bands) : s.jerkFullStepsPerS3();
         List<double[]> raised = new ArrayList<>();   // {from, to, level}
         for (Band b : bands) {
             double level = Math.max(base, b.minAccelerationFullStepsPerS2());
@@ -135,6 +135,24 @@ public final class MotionPlanner {
             t = d.endS();
         }
         return new Profile(s, base, jerk, tUp, crossings, all2);
+    }
+
+    /**
+     * Default jerk: the ramp from 0 to the base acceleration gains a tenth of the target rate ({@code a²/2j}), or
+     * more where a raised band needs it to reach its level from standstill, or to come down before the target.
+     */
+    private static double defaultJerk(double base, double target, List<Band> bands) {
+        double j = 5 * base * base / target;
+        for (Band b : bands) {
+            double level = Math.max(base, b.minAccelerationFullStepsPerS2());
+            if (level > base) {
+                double room = Math.min(b.fromFullStepsPerS(), target - b.toFullStepsPerS());
+                if (room > 0) {
+                    j = Math.max(j, level * level / (2 * 0.8 * room));
+                }
+            }
+        }
+        return j;
     }
 
     /** Piecewise-constant acceleration: breakpoints at the raised regions' edges. */

@@ -8,7 +8,8 @@ package org.lodestep.drive;
  * @param margin             torque margin kept at every speed (common practice 0.3 to 0.5)
  * @param maxAccelerationFullStepsPerS2 an upper limit of the user's, full steps/s²; +inf for the torque's own
  * @param jerkFullStepsPerS3 jerk limit of an S-curve, full steps/s³; NaN for the default (the ramp from 0 to the
- *                           base acceleration gains a tenth of the target rate); ignored for trapezoidal
+ *                           base acceleration gains a tenth of the target rate, or more where a band needs
+ *                           it); ignored for trapezoidal
  * @param cruiseS            time at the cruise rate between acceleration and deceleration, s
  * @param tableStepS         time step of the exported step-rate table, s
  */
