@@ -27,6 +27,8 @@ final class BenchMotor {
     static final double INSULATION_RANGE_OHM = 1e11;
     /** Current-sense and switch resistance in series with a step-response drive, ohm. */
     static final double DRIVE_SERIES_OHM = 0.1;
+    /** Chopper supply when none is stated, V. */
+    static final double CHOPPER_SUPPLY_V = 24.0;
     /** Step output level, V. */
     static final double STEP_HIGH_V = 5.0;
 
@@ -267,6 +269,68 @@ final class BenchMotor {
             return peakRadPerS * 0.5 * (1 - Math.cos(Math.PI * Math.max(0, seconds - t) / ramp));
         }
         return peakRadPerS;
+    }
+
+    /**
+     * The phase circuits of this motor connected bipolar series (both halves of a phase in series: R = 2r plus the
+     * drive's sense resistance, L = 2·L_half·(1 + k)) on a drive of the given mode. The motor constant K is the one
+     * that gives the scenario's holding torque with rated current in both phases (T_h = √2·K·I), so the rotor rings
+     * at the scenario's natural frequency; a constant-voltage supply is rated current × R unless stated, a chopper's
+     * supply 24 V unless stated (common practice for small drives).
+     */
+    DriveSettings driveSettings(DriveMode mode, double supplyV) {
+        double r = 2 * scenario.halfWindingOhm() + DRIVE_SERIES_OHM;
+        double l = 2 * scenario.halfWindingH() * (1 + scenario.coupling());
+        double k = scenario.holdingTorqueNm() / (Math.sqrt(2) * scenario.ratedCurrentA());
+        if (mode == DriveMode.CONSTANT_VOLTAGE) {
+            return DriveSettings.constantVoltage(r, l, k, supplyV > 0 ? supplyV : scenario.ratedCurrentA() * r);
+        }
+        return DriveSettings.chopper(r, l, k, supplyV > 0 ? supplyV : CHOPPER_SUPPLY_V, scenario.ratedCurrentA());
+    }
+
+    /**
+     * A step-rate sweep through a drive whose phase currents obey the winding circuits with back-EMF
+     * ({@link DrivenMotor}), linear in rate as {@link #sweep}.
+     *
+     * @return channels accel (g, as {@link #sweep}), current_a and current_b (phase currents, A, with 1 % of rated
+     *         current as noise) and step (V, the full-step marker)
+     */
+    double[][] sweepDriven(double fromStepsPerS, double toStepsPerS, double seconds, int microsteps,
+                           double sampleRateHz, DriveSettings drive) {
+        RotorSettings rs = new RotorSettings(scenario.totalInertiaKgM2(), scenario.dampingNmsPerRad(),
+                scenario.detentTorqueNm(), scenario.rotorTeeth());
+        RotorDynamics ideal = new RotorDynamics(scenario.totalInertiaKgM2(), scenario.dampingNmsPerRad(),
+                scenario.holdingTorqueNm(), scenario.detentTorqueNm(), scenario.rotorTeeth(), microsteps);
+        DrivenMotor m = new DrivenMotor(drive, rs, ideal.electricalAngleRad(0) / scenario.rotorTeeth());
+        double slope = (toStepsPerS - fromStepsPerS) / seconds;
+        int frames = (int) Math.round(seconds * sampleRateHz);
+        double samplePeriodS = 1 / sampleRateHz;
+        double maxRate = Math.max(fromStepsPerS, toStepsPerS);
+        double target = Math.min(Math.min(m.maxStepS(), 1 / ideal.naturalFrequencyHz() / 200),
+                1 / (maxRate * microsteps * 20));
+        int sub = Math.max(2, (int) Math.ceil(samplePeriodS / target));
+        double dt = samplePeriodS / sub;
+        double[] u0 = DrivenMotor.phaseCommand(ideal.electricalAngleRad(0), microsteps);
+        m.holdCurrents(u0[0], u0[1]);
+        double[][] out = new double[4][frames];
+        double noise = 0.01 * scenario.ratedCurrentA();
+        for (int i = 0; i < frames; i++) {
+            double t = i * samplePeriodS;
+            double full = fromStepsPerS * t + 0.5 * slope * t * t;
+            out[0][i] = scenario.accelRadiusM() * m.accelRadPerS2() / G0_M_PER_S2
+                    + scenario.accelNoiseG() * random.nextGaussian();
+            out[1][i] = m.currentA(0) + noise * random.nextGaussian();
+            out[2][i] = m.currentA(1) + noise * random.nextGaussian();
+            out[3][i] = full - Math.floor(full) < 0.5 ? STEP_HIGH_V : 0.0;
+            for (int s = 0; s < sub; s++) {
+                double ts = t + s * dt;
+                double steps = fromStepsPerS * ts + 0.5 * slope * ts * ts;
+                double[] u = DrivenMotor.phaseCommand(
+                        ideal.electricalAngleRad((long) Math.floor(steps * microsteps + 1e-9)), microsteps);
+                m.step(dt, u[0], u[1], 0);
+            }
+        }
+        return out;
     }
 
     /**

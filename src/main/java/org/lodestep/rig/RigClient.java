@@ -146,6 +146,20 @@ public final class RigClient implements Closeable {
         return c;
     }
 
+    /**
+     * A step-rate sweep through the rig's own drive of the given mode ({@code voltage}: constant-voltage H-bridge,
+     * {@code chopper}: current-regulating), with the supply stated or 0 for the rig's default: channels accel (g),
+     * current_a and current_b (phase currents, A), step (V).
+     */
+    public RigCapture sweep(SweepPlan profile, DriveMode drive, double supplyV, Progress p) throws RigException {
+        String mode = drive == DriveMode.CONSTANT_VOLTAGE ? "voltage" : "chopper";
+        return stream("sweep", "SWEEP from=" + StreamSpec.fmt(profile.fromFullStepsPerS()) + " to="
+                + StreamSpec.fmt(profile.toFullStepsPerS()) + " seconds=" + StreamSpec.fmt(profile.seconds())
+                + " microsteps=" + profile.microsteps() + " rate_hz=" + StreamSpec.fmt(profile.sampleRateHz())
+                + " drive=" + mode + (supplyV > 0 ? " supply_v=" + StreamSpec.fmt(supplyV) : ""),
+                profile.seconds(), p);
+    }
+
     /** Tells the rig to switch every output off. */
     public void safe() throws RigException {
         command("SAFE", settings.replyTimeoutMs());

@@ -380,9 +380,29 @@ public final class VirtualRig implements Runnable {
         }
         double rate = number(c, "rate_hz", 100, MAX_RATE_HZ);
         int frames = frames(seconds, rate);
-        double[][] data = motor.sweep(from, to, seconds, micro, rate);
-        StreamSpec spec = new StreamSpec(List.of(new Channel("accel", "g"), new Channel("current", "a"),
-                new Channel("step", "v")), new double[] {0.001, 0.0005, 0.001}, rate, frames, blockFrames(3, frames));
+        String drive = c.get("drive", "ideal");
+        double supply = c.has("supply_v") ? number(c, "supply_v", 1, 400) : 0;
+        if (drive.equals("ideal")) {
+            double[][] data = motor.sweep(from, to, seconds, micro, rate);
+            StreamSpec spec = new StreamSpec(List.of(new Channel("accel", "g"), new Channel("current", "a"),
+                    new Channel("step", "v")), new double[] {0.001, 0.0005, 0.001}, rate, frames,
+                    blockFrames(3, frames));
+            stream(tag, spec, data, true);
+            return;
+        }
+        DriveMode mode = switch (drive) {
+            case "voltage" -> DriveMode.CONSTANT_VOLTAGE;
+            case "chopper" -> DriveMode.CHOPPER;
+            default -> throw new BadArgument("drive=" + drive + " is not ideal, voltage or chopper");
+        };
+        if (mode == DriveMode.CONSTANT_VOLTAGE && micro > 2) {
+            throw new BadArgument("drive=voltage switches full or half steps only: microsteps=" + micro
+                    + " is not 1 or 2");
+        }
+        double[][] data = motor.sweepDriven(from, to, seconds, micro, rate, motor.driveSettings(mode, supply));
+        StreamSpec spec = new StreamSpec(List.of(new Channel("accel", "g"), new Channel("current_a", "a"),
+                new Channel("current_b", "a"), new Channel("step", "v")), new double[] {0.001, 0.0005, 0.0005, 0.001},
+                rate, frames, blockFrames(4, frames));
         stream(tag, spec, data, true);
     }
 

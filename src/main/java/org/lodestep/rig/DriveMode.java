@@ -1,0 +1,15 @@
+package org.lodestep.rig;
+
+/** How a step drive feeds each phase winding. */
+public enum DriveMode {
+    /**
+     * An H-bridge that switches the supply voltage straight onto the winding (L/R drive): the current follows the
+     * winding's R-L response and falls with speed as back-EMF and inductance take over.
+     */
+    CONSTANT_VOLTAGE,
+    /**
+     * A current-regulating chopper: the bridge switches the supply to hold the commanded current, as far as the
+     * supply voltage allows (modelled by its switching-period average, ripple not modelled).
+     */
+    CHOPPER
+}
