@@ -25,7 +25,8 @@ import picocli.CommandLine.Option;
                 + " whose acceleration never asks for more than the torque with margin at any speed, never dwells"
                 + " in a band of the avoid-list, and crosses each band at no less than its crossing acceleration;"
                 + " export it as a step-rate table (CSV and JSON).",
-            "Exit code 3 when no profile meets the constraints (the line says why and what to change)."},
+            "Exit code 3 when no profile meets the constraints (the line says why and what to change), or when"
+                + " --simulate finds the planned profile losing steps."},
         footerHeading = "%nExamples:%n",
         footer = {
             "  lodestep drive plan --card card.json --rotor-inertia-kgm2 5.4e-6 --supply-v 36 --current-a 1.2 \\",
@@ -66,6 +67,11 @@ final class DrivePlanCommand implements Callable<Integer> {
     @Option(names = "--table-json", paramLabel = "FILE.json", description = "Write the step-rate table as JSON.")
     Path tableJson;
 
+    @Option(names = "--simulate",
+            description = "Also play the table on the virtual rig (phase circuits with back-EMF, this drive and load)"
+                    + " beside a naive constant-acceleration profile to the same peak, and count lost steps.")
+    boolean simulate;
+
     @Option(names = "--json", description = "Print JSON instead of text.")
     boolean json;
 
@@ -91,7 +97,7 @@ final class DrivePlanCommand implements Callable<Integer> {
         }
         DrivePlan.Settings settings = new DrivePlan.Settings(options.settings(), avoidList, s,
                 maxAcceleration == null ? Double.POSITIVE_INFINITY : maxAcceleration,
-                jerk == null ? Double.NaN : jerk, cruiseS, tableStepS);
+                jerk == null ? Double.NaN : jerk, cruiseS, tableStepS, simulate);
         DrivePlan.Result r;
         try {
             r = DriveOptions.usage(() -> DrivePlan.run(settings, Progress.NONE));
@@ -118,6 +124,7 @@ final class DrivePlanCommand implements Callable<Integer> {
             }
         }
         out.flush();
-        return ExitCode.OK;
+        return r.simulation() != null && r.simulation().planned().lostFullSteps() != 0
+                ? ExitCode.FINDING : ExitCode.OK;
     }
 }

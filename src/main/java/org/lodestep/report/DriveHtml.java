@@ -66,6 +66,13 @@ public final class DriveHtml {
                 pr.accelerationS(), pr.settings().cruiseS()));
         f.put("Distance", String.format(Locale.ROOT, "%.1f full steps", pr.distanceFullSteps()));
         f.put("Step-rate table", p.table().rows().size() + " rows every " + pr.settings().tableStepS() + " s");
+        if (p.simulation() != null) {
+            f.put("Virtual rig, planned profile", p.simulation().planned().lostFullSteps() + " full steps lost");
+            if (p.simulation().naive() != null) {
+                f.put("Virtual rig, naive constant acceleration", p.simulation().naive().lostFullSteps()
+                        + " full steps lost");
+            }
+        }
         b.facts(f);
         if (!pr.crossings().isEmpty()) {
             HtmlTable.Builder t = HtmlTable.builder(null, "Band (full steps/s)", "Needs", "Planned", "Torque allows",

@@ -56,6 +56,18 @@ public final class DriveJson {
         pm.put("table_rows", r.table().rows().size());
         pm.put("table_step_s", p.settings().tableStepS());
         m.put("profile", pm);
+        if (r.simulation() != null) {
+            Map<String, Object> sm = new LinkedHashMap<>();
+            sm.put("planned_lost_full_steps", r.simulation().planned().lostFullSteps());
+            sm.put("planned_max_lag_full_steps", r.simulation().planned().maxLagFullSteps());
+            sm.put("naive_acceleration_full_steps_per_s2", r.simulation().naiveAccelerationFullStepsPerS2());
+            sm.put("naive_lost_full_steps", r.simulation().naive() == null ? null
+                    : r.simulation().naive().lostFullSteps());
+            sm.put("damping_nms_per_rad", r.simulation().dampingNmsPerRad());
+            m.put("simulation", sm);
+        } else {
+            m.put("simulation", null);
+        }
         m.put("notes", r.notes());
         return Json.write(m);
     }

@@ -100,6 +100,18 @@ public final class DriveText {
         }
         out.printf(Locale.ROOT, "  step-rate table: %d rows every %.4g s%n", r.table().rows().size(),
                 p.settings().tableStepS());
+        if (r.simulation() != null) {
+            var s = r.simulation();
+            out.printf(Locale.ROOT, "Virtual rig (phase circuits with back-EMF, this drive and load, damping ratio"
+                    + " %.2f): the planned profile lost %d full steps (largest lag %.2f full steps)%n",
+                    org.lodestep.workflow.DriveSimulation.DAMPING_RATIO, s.planned().lostFullSteps(),
+                    s.planned().maxLagFullSteps());
+            if (s.naive() != null) {
+                out.printf(Locale.ROOT, "  a naive constant acceleration of %s full steps/s² (sized on the low-speed"
+                        + " torque, no margin) to the same peak lost %d full steps%n",
+                        sig(s.naiveAccelerationFullStepsPerS2()), s.naive().lostFullSteps());
+            }
+        }
         notes(out, r.notes(), c.midBandCentreFullStepsPerS(), u);
     }
 

@@ -31,10 +31,11 @@ public final class DrivePlan {
      * @param jerkFullStepsPerS3 jerk limit, or NaN for the default
      * @param cruiseS           time at the target speed, s
      * @param tableStepS        table time step, s
+     * @param simulate          also play the table on the virtual rig ({@link DriveSimulation})
      */
     public record Settings(DriveCurve.Settings curve, Path avoidList, ProfileShape shape,
                            double maxAccelerationFullStepsPerS2, double jerkFullStepsPerS3, double cruiseS,
-                           double tableStepS) {
+                           double tableStepS, boolean simulate) {
     }
 
     /**
@@ -44,9 +45,10 @@ public final class DrivePlan {
      * @param profile     the profile
      * @param table       its step-rate table
      * @param notes       what the user should know about the inputs
+     * @param simulation  the virtual rig's run of the table, or null when not asked for
      */
     public record Result(DriveCurve.Result curve, String avoidSource, List<Band> bands, Profile profile,
-                         StepRateTable table, List<String> notes) {
+                         StepRateTable table, List<String> notes, DriveSimulation.Result simulation) {
         public Result {
             bands = List.copyOf(bands);
             notes = List.copyOf(notes);
@@ -85,6 +87,8 @@ public final class DrivePlan {
                 s.curve().margin(), s.maxAccelerationFullStepsPerS2(), s.jerkFullStepsPerS3(), s.cruiseS(),
                 s.tableStepS());
         Profile p = MotionPlanner.plan(c.curve(), c.load(), bands, ps);
-        return new Result(c, avoidSource, bands, p, p.table(c.units()), notes);
+        StepRateTable table = p.table(c.units());
+        DriveSimulation.Result sim = s.simulate() ? DriveSimulation.run(c.curve(), c.load(), table, progress) : null;
+        return new Result(c, avoidSource, bands, p, table, notes, sim);
     }
 }
