@@ -43,11 +43,8 @@ final class JsonDocument {
         try (JsonParser p = new JsonFactory().createParser(text)) {
             for (JsonToken t = p.nextToken(); t != null; t = p.nextToken()) {
                 if (t.isScalarValue() || t == JsonToken.START_OBJECT || t == JsonToken.START_ARRAY) {
-                    String ptr = t == JsonToken.START_OBJECT || t == JsonToken.START_ARRAY
-                            ? p.getParsingContext().getParent() == null ? ""
-                            : p.getParsingContext().getParent().pathAsPointer().toString()
-                            : p.getParsingContext().pathAsPointer().toString();
-                    lines.putIfAbsent(ptr, p.currentLocation().getLineNr());
+                    lines.putIfAbsent(p.getParsingContext().pathAsPointer().toString(),
+                            p.currentTokenLocation().getLineNr());
                 }
             }
             JsonNode root = MAPPER.readTree(text);
