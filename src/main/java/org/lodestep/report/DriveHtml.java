@@ -129,7 +129,14 @@ public final class DriveHtml {
 
     private static Chart torqueChart(DriveCurve.Result r, List<Band> bands) {
         TorqueCurve c = r.curve();
-        List<TorquePoint> pts = c.points();
+        // draw the working range (the curve's tail falls as 1/ω for a long way): up to 3 × the target or the corner
+        double corner = Double.isFinite(c.fullCurrentRateFullStepsPerS()) ? c.fullCurrentRateFullStepsPerS()
+                : c.endRateFullStepsPerS() / 4;
+        double top = Math.max(3 * corner, r.answer() != null ? 3 * r.answer().target().fullStepsPerS() : 0);
+        List<TorquePoint> pts = c.points().stream().filter(p -> p.rateFullStepsPerS() <= top).toList();
+        if (pts.size() < 20) {
+            pts = c.points();
+        }
         double[] x = new double[pts.size()];
         double[] t = new double[pts.size()];
         double[] tm = new double[pts.size()];

@@ -142,7 +142,7 @@ public final class DriveJson {
             j.put("margin_rule", "common practice: keep 30 to 50 % of the pull-out torque in reserve");
             j.put("max_rate_with_margin", a.maxRateWithMargin());
             j.put("acceleration_at_target_full_steps_per_s2", a.accelerationAtTargetFullStepsPerS2());
-            j.put("total_inertia_kgm2", a.totalInertiaKgM2());
+            j.put("total_inertia_kg_m2", a.totalInertiaKgM2());
             j.put("suggestions", a.suggestions());
             m.put("answer", j);
         } else {
