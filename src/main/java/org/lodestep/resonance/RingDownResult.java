@@ -15,11 +15,12 @@ package org.lodestep.resonance;
  * @param startTimeS         time of the first fitted sample (the largest excursion), s
  * @param fittedDurationS    length of the fitted stretch, s
  * @param periodsFitted      damped periods within the fitted stretch
+ * @param phaseRad           φ, rad, at {@code startTimeS}
  */
 public record RingDownResult(double naturalFrequencyHz, double dampedFrequencyHz, double dampingRatio,
                              double decayRatePerS, double amplitude, double offset, double qualityFactor,
                              double rSquared, double rmsResidual, double startTimeS, double fittedDurationS,
-                             double periodsFitted) {
+                             double periodsFitted, double phaseRad) {
     public RingDownResult {
         Require.positive(naturalFrequencyHz, "natural frequency", "Hz");
         Require.positive(dampedFrequencyHz, "damped frequency", "Hz");
@@ -29,5 +30,32 @@ public record RingDownResult(double naturalFrequencyHz, double dampedFrequencyHz
         if (Double.isNaN(rSquared)) {
             throw new IllegalArgumentException("fit quality R² is NaN");
         }
+    }
+
+    /** The fitted curve x(t) at time t (s, on the capture's clock); NaN before the fitted stretch starts. */
+    public double fittedAt(double timeS) {
+        double dt = timeS - startTimeS;
+        return dt < 0 ? Double.NaN : DampedOscillation.displacement(amplitude, decayRatePerS,
+                2 * Math.PI * dampedFrequencyHz, phaseRad, offset, dt);
+    }
+
+    /** Upper decay envelope c + A·e^(-σ(t - t0)) at time t; NaN before the fitted stretch starts. */
+    public double upperEnvelopeAt(double timeS) {
+        double dt = timeS - startTimeS;
+        return dt < 0 ? Double.NaN : offset + DampedOscillation.envelope(amplitude, decayRatePerS, dt);
+    }
+
+    /** Lower decay envelope c - A·e^(-σ(t - t0)) at time t; NaN before the fitted stretch starts. */
+    public double lowerEnvelopeAt(double timeS) {
+        double dt = timeS - startTimeS;
+        return dt < 0 ? Double.NaN : offset - DampedOscillation.envelope(amplitude, decayRatePerS, dt);
+    }
+
+    /**
+     * Full-step rates where low-speed resonance is expected from this natural frequency: f_n/k for k = 1 ... count
+     * ({@link LowSpeedResonance}), highest first.
+     */
+    public java.util.List<Double> riskyRatesFullStepsPerS(int count) {
+        return LowSpeedResonance.riskyRatesFullStepsPerS(naturalFrequencyHz, count);
     }
 }

@@ -16,7 +16,7 @@ import org.lodestep.drive.SpeedAnswer;
 import org.lodestep.drive.SpeedQuestion;
 import org.lodestep.drive.TorqueCurve;
 import org.lodestep.drive.TorqueCurves;
-import org.lodestep.resonance.MidBandInstability;
+import org.lodestep.resonance.Prediction;
 import org.lodestep.resonance.RateUnits;
 import org.lodestep.sample.InputFormatException;
 
@@ -122,7 +122,9 @@ public final class DriveCurve {
                     && "series".equals(card.connection());
             answer = SpeedQuestion.answer(curve, s.load(), rate, s.margin(), units, canParallel);
         }
-        double midBand = MidBandInstability.centreFullStepsPerS(r, l);
+        // the resonance prediction names the mid-band centre 4·(R/L)/2π (Acarnley section 5.5), once
+        double midBand = Prediction.forward(curve.holdingTorqueNm(), teeth, inertia, s.load().inertiaKgM2(), units,
+                r, l).midBandCentreFullStepsPerS();
         return new Result(card == null ? "typed" : card.source(), motor, units, s.load(), curve, answer, midBand,
                 notes);
     }
