@@ -119,38 +119,44 @@ final class DriveOptions {
             throw new UsageException("--current-a: a constant-voltage drive has no current setting; its current is"
                     + " the supply over the winding resistance (add --series-resistance-ohm for an L/R resistor)");
         }
-        return ResonanceSweepCommand.usage(() -> {
-            Margin.check(margin);
-            double travel = travelMmPerRev == null ? Double.NaN : travelMmPerRev;
-            double j = loadInertiaKgm2;
-            if (loadMassKg > 0) {
-                if (travelMmPerRev == null) {
-                    throw new IllegalArgumentException("--load-mass-kg needs --travel-mm-per-rev");
-                }
-                j += Load.massInertiaKgM2(loadMassKg, travel);
+        try {
+            return build(kind);
+        } catch (IllegalArgumentException e) {
+            throw new UsageException(e.getMessage());
+        }
+    }
+
+    private DriveCurve.Settings build(DriveKind kind) {
+        Margin.check(margin);
+        double travel = travelMmPerRev == null ? Double.NaN : travelMmPerRev;
+        double j = loadInertiaKgm2;
+        if (loadMassKg > 0) {
+            if (travelMmPerRev == null) {
+                throw new IllegalArgumentException("--load-mass-kg needs --travel-mm-per-rev");
             }
-            Load load = new Load(j, frictionNm, gravityN, travel);
-            double value = Double.NaN;
-            DriveCurve.SpeedUnit unit = DriveCurve.SpeedUnit.FULL_STEPS_PER_S;
-            if (target != null) {
-                if (target.mmPerS != null) {
-                    value = target.mmPerS;
-                    unit = DriveCurve.SpeedUnit.MM_PER_S;
-                } else if (target.rpm != null) {
-                    value = target.rpm;
-                    unit = DriveCurve.SpeedUnit.RPM;
-                } else if (target.pulsesPerS != null) {
-                    value = target.pulsesPerS;
-                    unit = DriveCurve.SpeedUnit.PULSES_PER_S;
-                } else {
-                    value = target.fullStepsPerS;
-                }
-                if (!(value > 0) || !Double.isFinite(value)) {
-                    throw new IllegalArgumentException("target speed must be positive, got " + value);
-                }
+            j += Load.massInertiaKgM2(loadMassKg, travel);
+        }
+        Load load = new Load(j, frictionNm, gravityN, travel);
+        double value = Double.NaN;
+        DriveCurve.SpeedUnit unit = DriveCurve.SpeedUnit.FULL_STEPS_PER_S;
+        if (target != null) {
+            if (target.mmPerS != null) {
+                value = target.mmPerS;
+                unit = DriveCurve.SpeedUnit.MM_PER_S;
+            } else if (target.rpm != null) {
+                value = target.rpm;
+                unit = DriveCurve.SpeedUnit.RPM;
+            } else if (target.pulsesPerS != null) {
+                value = target.pulsesPerS;
+                unit = DriveCurve.SpeedUnit.PULSES_PER_S;
+            } else {
+                value = target.fullStepsPerS;
             }
-            return new DriveCurve.Settings(card, resistanceOhm, inductanceH, ktNmPerA, rotorTeeth, rotorInertiaKgm2,
-                    detentTorqueNm, kind, supplyV, currentA, microsteps, seriesOhm, load, value, unit, margin);
-        });
+            if (!(value > 0) || !Double.isFinite(value)) {
+                throw new IllegalArgumentException("target speed must be positive, got " + value);
+            }
+        }
+        return new DriveCurve.Settings(card, resistanceOhm, inductanceH, ktNmPerA, rotorTeeth, rotorInertiaKgm2,
+                detentTorqueNm, kind, supplyV, currentA, microsteps, seriesOhm, load, value, unit, margin);
     }
 }

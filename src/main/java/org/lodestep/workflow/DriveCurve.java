@@ -100,7 +100,7 @@ public final class DriveCurve {
                     + " kg·m²); if that figure already held a load, do not give the load again");
         }
         if (inertia == null) {
-            throw new IllegalArgumentException("rotor inertia is needed for accelerations: give"
+            throw new SettingsException("rotor inertia is needed for accelerations: give"
                     + " --rotor-inertia-kgm2 (datasheet; 1 g·cm² = 1e-7 kg·m²)");
         }
         double v = pick(s.supplyV(), card == null ? null : card.supplyV(), "supply voltage (--supply-v)");
@@ -132,7 +132,7 @@ public final class DriveCurve {
     /** A target speed in full steps/s. */
     static double fullStepsPerS(double value, SpeedUnit unit, RateUnits units) {
         if (!(value > 0) || !Double.isFinite(value)) {
-            throw new IllegalArgumentException("target speed must be positive, got " + value);
+            throw new SettingsException("target speed must be positive, got " + value);
         }
         return switch (unit) {
             case FULL_STEPS_PER_S -> value;
@@ -140,7 +140,7 @@ public final class DriveCurve {
             case RPM -> value / 60 * units.fullStepsPerRev();
             case MM_PER_S -> {
                 if (!units.hasTravel()) {
-                    throw new IllegalArgumentException("a target in mm/s needs the travel per revolution"
+                    throw new SettingsException("a target in mm/s needs the travel per revolution"
                             + " (--travel-mm-per-rev)");
                 }
                 yield value / units.travelMmPerRev() * units.fullStepsPerRev();
@@ -155,6 +155,6 @@ public final class DriveCurve {
         if (fromCard != null) {
             return fromCard;
         }
-        throw new IllegalArgumentException("missing " + what);
+        throw new SettingsException("missing " + what);
     }
 }

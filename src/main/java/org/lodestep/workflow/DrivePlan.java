@@ -57,7 +57,7 @@ public final class DrivePlan {
 
     public static Result run(Settings s, Progress progress) throws IOException, InputFormatException {
         if (Double.isNaN(s.curve().target())) {
-            throw new IllegalArgumentException("a profile needs a target speed (--target-mm-per-s, --target-rpm,"
+            throw new SettingsException("a profile needs a target speed (--target-mm-per-s, --target-rpm,"
                     + " --target-full-steps-per-s or --target-pulses-per-s)");
         }
         DriveCurve.Result c = DriveCurve.run(s.curve(), progress);
