@@ -4,20 +4,50 @@ import java.util.ArrayList;
 import java.util.List;
 
 /**
- * A planned move from standstill to the cruise rate, a cruise, and back to standstill, as stretches of constant
+ * A planned move from standstill to the cruise rate, a cruise, and back to standstill, held as stretches of constant
  * jerk (full steps, seconds).
- *
- * @param settings                  what was planned
- * @param baseAccelerationFullStepsPerS2 acceleration outside the bands, full steps/s²
- * @param jerkFullStepsPerS3        jerk limit used (+inf for trapezoidal)
- * @param accelerationS             time from standstill to the cruise rate, s
- * @param crossings                 how each band below the cruise rate is crossed, by rising rate
  */
-public record Profile(ProfileSettings settings, double baseAccelerationFullStepsPerS2, double jerkFullStepsPerS3,
-                      double accelerationS, List<BandCrossing> crossings, List<Segment> segments) {
-    public Profile {
-        crossings = List.copyOf(crossings);
-        segments = List.copyOf(segments);
+public final class Profile {
+    private final ProfileSettings settings;
+    private final double baseAccelerationFullStepsPerS2;
+    private final double jerkFullStepsPerS3;
+    private final double accelerationS;
+    private final List<BandCrossing> crossings;
+    private final List<Segment> segments;
+
+    Profile(ProfileSettings settings, double baseAccelerationFullStepsPerS2, double jerkFullStepsPerS3,
+            double accelerationS, List<BandCrossing> crossings, List<Segment> segments) {
+        this.settings = settings;
+        this.baseAccelerationFullStepsPerS2 = baseAccelerationFullStepsPerS2;
+        this.jerkFullStepsPerS3 = jerkFullStepsPerS3;
+        this.accelerationS = accelerationS;
+        this.crossings = List.copyOf(crossings);
+        this.segments = List.copyOf(segments);
+    }
+
+    /** What was planned. */
+    public ProfileSettings settings() {
+        return settings;
+    }
+
+    /** Acceleration outside the bands, full steps/s². */
+    public double baseAccelerationFullStepsPerS2() {
+        return baseAccelerationFullStepsPerS2;
+    }
+
+    /** Jerk limit used, full steps/s³ (+inf for trapezoidal). */
+    public double jerkFullStepsPerS3() {
+        return jerkFullStepsPerS3;
+    }
+
+    /** Time from standstill to the cruise rate, s. */
+    public double accelerationS() {
+        return accelerationS;
+    }
+
+    /** How each band below the cruise rate is crossed, by rising rate. */
+    public List<BandCrossing> crossings() {
+        return crossings;
     }
 
     /** Whole duration, s. */
