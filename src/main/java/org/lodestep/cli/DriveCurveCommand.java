@@ -33,6 +33,11 @@ final class DriveCurveCommand implements Callable<Integer> {
     @Mixin
     DriveOptions options;
 
+    @Option(names = "--simulate",
+            description = "Also measure the curve on the virtual rig's dynamometer (phase circuits with back-EMF, this"
+                    + " drive) at eight rates around the corner, beside the prediction.")
+    boolean simulate;
+
     @Option(names = "--json", description = "Print JSON instead of text.")
     boolean json;
 
@@ -46,7 +51,7 @@ final class DriveCurveCommand implements Callable<Integer> {
     @Override
     public Integer call() throws Exception {
         PrintWriter out = spec.commandLine().getOut();
-        DriveCurve.Settings s = options.settings();
+        DriveCurve.Settings s = options.settings(simulate);
         DriveCurve.Result r = DriveOptions.usage(() -> DriveCurve.run(s, Progress.NONE));
         if (report != null) {
             DriveHtml.curve(r).write(report);

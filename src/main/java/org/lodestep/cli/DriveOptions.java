@@ -108,7 +108,7 @@ final class DriveOptions {
     }
 
     /** The workflow's settings; bad combinations become a usage error. */
-    DriveCurve.Settings settings() {
+    DriveCurve.Settings settings(boolean dynamometer) {
         DriveKind kind = switch (drive.toLowerCase(java.util.Locale.ROOT)) {
             case "chopper" -> DriveKind.CHOPPER;
             case "constant-voltage", "cv", "l/r" -> DriveKind.CONSTANT_VOLTAGE;
@@ -120,13 +120,13 @@ final class DriveOptions {
                     + " the supply over the winding resistance (add --series-resistance-ohm for an L/R resistor)");
         }
         try {
-            return build(kind);
+            return build(kind, dynamometer);
         } catch (IllegalArgumentException e) {
             throw new UsageException(e.getMessage());
         }
     }
 
-    private DriveCurve.Settings build(DriveKind kind) {
+    private DriveCurve.Settings build(DriveKind kind, boolean dynamometer) {
         Margin.check(margin);
         double travel = travelMmPerRev == null ? Double.NaN : travelMmPerRev;
         double j = loadInertiaKgm2;
@@ -157,6 +157,6 @@ final class DriveOptions {
             }
         }
         return new DriveCurve.Settings(card, resistanceOhm, inductanceH, ktNmPerA, rotorTeeth, rotorInertiaKgm2,
-                detentTorqueNm, kind, supplyV, currentA, microsteps, seriesOhm, load, value, unit, margin);
+                detentTorqueNm, kind, supplyV, currentA, microsteps, seriesOhm, load, value, unit, margin, dynamometer);
     }
 }

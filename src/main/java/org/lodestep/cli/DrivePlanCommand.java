@@ -95,7 +95,7 @@ final class DrivePlanCommand implements Callable<Integer> {
         if (jerk != null && s != ProfileShape.S_CURVE) {
             throw new UsageException("--jerk applies to --shape s-curve only");
         }
-        DrivePlan.Settings settings = new DrivePlan.Settings(options.settings(), avoidList, s,
+        DrivePlan.Settings settings = new DrivePlan.Settings(options.settings(false), avoidList, s,
                 maxAcceleration == null ? Double.POSITIVE_INFINITY : maxAcceleration,
                 jerk == null ? Double.NaN : jerk, cruiseS, tableStepS, simulate);
         DrivePlan.Result r;

@@ -150,6 +150,18 @@ public final class DriveHtml {
                 .line("pull-out torque", x, t)
                 .line("with " + DriveText.pct(margin) + " margin", x, tm)
                 .yFromZero(true);
+        if (r.dynamometer() != null) {
+            List<double[]> kept = new ArrayList<>();
+            for (var p : r.dynamometer()) {
+                if (!p.lostWithoutLoad() && p.rateFullStepsPerS() <= x[x.length - 1]) {
+                    kept.add(new double[] {p.rateFullStepsPerS(), p.simulatedNm()});
+                }
+            }
+            if (!kept.isEmpty()) {
+                b.points("virtual dynamometer", kept.stream().mapToDouble(d -> d[0]).toArray(),
+                        kept.stream().mapToDouble(d -> d[1]).toArray());
+            }
+        }
         if (r.answer() != null) {
             double need = r.answer().requiredAtTargetNm();
             b.line("load at constant speed", new double[] {0, x[x.length - 1]}, new double[] {need, need});

@@ -130,6 +130,20 @@ public final class DriveJson {
         }
         m.put("curve", pts);
         m.put("load", r.load());
+        if (r.dynamometer() != null) {
+            List<Map<String, Object>> dy = new ArrayList<>();
+            for (var p : r.dynamometer()) {
+                Map<String, Object> j = new LinkedHashMap<>();
+                j.put("rate_full_steps_per_s", p.rateFullStepsPerS());
+                j.put("predicted_nm", p.predictedNm());
+                j.put("simulated_nm", p.lostWithoutLoad() ? null : p.simulatedNm());
+                j.put("lost_without_load", p.lostWithoutLoad());
+                dy.add(j);
+            }
+            m.put("dynamometer", dy);
+        } else {
+            m.put("dynamometer", null);
+        }
         SpeedAnswer a = r.answer();
         if (a != null) {
             Map<String, Object> j = new LinkedHashMap<>();

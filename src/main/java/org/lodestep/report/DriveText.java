@@ -59,6 +59,18 @@ public final class DriveText {
                             ? String.format(Locale.ROOT, "%8.1f", r.units().mmPerS(p.rateFullStepsPerS())) : "",
                     p.pullOutTorqueNm(), org.lodestep.drive.Margin.usableNm(p.pullOutTorqueNm(), margin), p.powerW());
         }
+        if (r.dynamometer() != null) {
+            out.println();
+            out.printf(Locale.ROOT, "Virtual dynamometer (phase circuits with back-EMF, this drive; damping ratio %.2f"
+                    + " added back as c·ω):%n", org.lodestep.workflow.DriveSimulation.DAMPING_RATIO);
+            out.printf(Locale.ROOT, "  %12s %12s %12s %8s%n", "full steps/s", "predicted", "simulated", "ratio");
+            for (var p : r.dynamometer()) {
+                out.printf(Locale.ROOT, "  %12.0f %12.4f %12s %8s%n", p.rateFullStepsPerS(), p.predictedNm(),
+                        p.lostWithoutLoad() ? "lost" : String.format(Locale.ROOT, "%.4f", p.simulatedNm()),
+                        p.lostWithoutLoad() ? "—" : String.format(Locale.ROOT, "%.3f", p.ratio()));
+            }
+            out.println("  (lost: the rotor slipped with no load, a resonance or instability of the simulated drive)");
+        }
         if (r.answer() != null) {
             out.println();
             answer(out, r.answer(), r.units(), r.load());

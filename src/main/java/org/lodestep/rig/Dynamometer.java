@@ -17,7 +17,7 @@ import java.util.List;
  */
 public final class Dynamometer {
     /** Shortest run-up to the rate, s: gentle enough that the torque the inertia takes stays small at speed. */
-    static final double RUN_UP_S = 0.3;
+    static final double RUN_UP_S = 1.0;
     /** Time at the rate before the load is applied, s. */
     static final double SETTLE_S = 0.15;
     /** Time over which the load rises to 1.5 × the reference torque, s. */

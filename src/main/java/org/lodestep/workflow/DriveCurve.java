@@ -50,11 +50,12 @@ public final class DriveCurve {
      * @param target               target speed, or NaN for the curve alone
      * @param targetUnit           its unit
      * @param margin               margin to keep (common practice 0.3 to 0.5)
+     * @param dynamometer          also measure the curve on the virtual rig's dynamometer ({@link DriveDynamometer})
      */
     public record Settings(Path card, Double phaseResistanceOhm, Double phaseInductanceH, Double ktNmPerA,
                            Integer rotorTeeth, Double rotorInertiaKgM2, double detentTorqueNm, DriveKind kind,
                            Double supplyV, Double phaseCurrentA, int microsteps, double seriesResistanceOhm,
-                           Load load, double target, SpeedUnit targetUnit, double margin) {
+                           Load load, double target, SpeedUnit targetUnit, double margin, boolean dynamometer) {
     }
 
     /**
@@ -67,11 +68,14 @@ public final class DriveCurve {
      * @param midBandCentreFullStepsPerS where mid-band instability is expected, full steps/s (the model does not
      *                    hold near it)
      * @param notes       what the user should know about the inputs
+     * @param dynamometer the virtual dynamometer's points, or null when not asked for
      */
     public record Result(String motorSource, PhaseModel motor, RateUnits units, Load load, TorqueCurve curve,
-                         SpeedAnswer answer, double midBandCentreFullStepsPerS, List<String> notes) {
+                         SpeedAnswer answer, double midBandCentreFullStepsPerS, List<String> notes,
+                         List<DriveDynamometer.Point> dynamometer) {
         public Result {
             notes = List.copyOf(notes);
+            dynamometer = dynamometer == null ? null : List.copyOf(dynamometer);
         }
     }
 
@@ -125,8 +129,9 @@ public final class DriveCurve {
         // the resonance prediction names the mid-band centre 4·(R/L)/2π (Acarnley section 5.5), once
         double midBand = Prediction.forward(curve.holdingTorqueNm(), teeth, inertia, s.load().inertiaKgM2(), units,
                 r, l).midBandCentreFullStepsPerS();
+        List<DriveDynamometer.Point> dyno = s.dynamometer() ? DriveDynamometer.run(curve, s.load(), progress) : null;
         return new Result(card == null ? "typed" : card.source(), motor, units, s.load(), curve, answer, midBand,
-                notes);
+                notes, dyno);
     }
 
     /** A target speed in full steps/s. */

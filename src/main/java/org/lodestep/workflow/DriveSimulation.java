@@ -38,19 +38,33 @@ public final class DriveSimulation {
                          double dampingNmsPerRad) {
     }
 
-    public static Result run(TorqueCurve curve, Load load, StepRateTable table, Progress progress) {
+    /** The virtual rig's drive for this motor and drive. */
+    static DriveSettings rigDrive(TorqueCurve curve) {
         PhaseModel m = curve.motor();
         org.lodestep.drive.DriveSettings d = curve.drive();
-        DriveSettings rig = d.kind() == DriveKind.CHOPPER
+        return d.kind() == DriveKind.CHOPPER
                 ? DriveSettings.chopper(m.phaseResistanceOhm(), m.phaseInductanceH(), m.ktNmPerA(), d.supplyV(),
                 d.phaseCurrentA())
                 : DriveSettings.constantVoltage(m.phaseResistanceOhm(), m.phaseInductanceH(), m.ktNmPerA(),
                 d.supplyV());
+    }
+
+    /** The simulated rotor: rotor plus load inertia, damping ratio {@link #DAMPING_RATIO}, the motor's detent. */
+    static RotorSettings rigRotor(TorqueCurve curve, Load load) {
+        PhaseModel m = curve.motor();
         double j = m.rotorInertiaKgM2() + load.inertiaKgM2();
         // ζ = c/(2·sqrt(k·J)), k = N_r·T_h (linearised stiffness, Acarnley ch. 4)
         double c = 2 * DAMPING_RATIO * Math.sqrt(m.rotorTeeth() * curve.holdingTorqueNm() * j);
-        RotorSettings rotor = new RotorSettings(j, c, m.detentTorqueNm(), m.rotorTeeth());
-        ProfileRunner runner = new ProfileRunner(rig, rotor, d.microsteps());
+        return new RotorSettings(j, c, m.detentTorqueNm(), m.rotorTeeth());
+    }
+
+    public static Result run(TorqueCurve curve, Load load, StepRateTable table, Progress progress) {
+        PhaseModel m = curve.motor();
+        org.lodestep.drive.DriveSettings d = curve.drive();
+        RotorSettings rotor = rigRotor(curve, load);
+        double j = rotor.inertiaKgM2();
+        double c = rotor.dampingNmsPerRad();
+        ProfileRunner runner = new ProfileRunner(rigDrive(curve), rotor, d.microsteps());
         List<StepRateTable.Row> rows = table.rows();
         double[] t = new double[rows.size()];
         double[] v = new double[rows.size()];

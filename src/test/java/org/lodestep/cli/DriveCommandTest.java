@@ -116,6 +116,18 @@ class DriveCommandTest {
     }
 
     @Test
+    void curveSimulateAddsTheVirtualDynamometerBesideThePrediction() throws Exception {
+        CliRun r = CliRun.of(args("curve", "--supply-v", "48", "--simulate", "--json"));
+        assertEquals(0, r.code(), r.err());
+        JsonNode dyno = new ObjectMapper().readTree(r.out()).get("dynamometer");
+        assertEquals(8, dyno.size());
+        // at a tenth of the corner the set current is reached: the simulation agrees within 15 %
+        JsonNode first = dyno.get(0);
+        assertEquals(first.get("predicted_nm").asDouble(), first.get("simulated_nm").asDouble(),
+                0.15 * first.get("predicted_nm").asDouble());
+    }
+
+    @Test
     void constantVoltageDriveRefusesACurrentSetting() {
         CliRun r = CliRun.of(args("curve", "--supply-v", "24", "--drive", "constant-voltage"));
         assertEquals(2, r.code());
