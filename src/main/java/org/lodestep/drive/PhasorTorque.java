@@ -20,7 +20,7 @@ package org.lodestep.drive;
  *
  * <p>Waveforms. With sine-cosine microstepping the fundamentals are the set current ({@code I_f = I}) and at most the
  * supply ({@code V_f = V}, linear PWM); a chopper driven far past its corner saturates towards a square wave whose
- * fundamental reaches {@code (4/π)·V}, so there the model is conservative (by up to about 16 % against the virtual
+ * fundamental reaches {@code (4/π)·V}, so there the model is conservative (by up to about 23 % against the virtual
  * rig's driven motor at two to three times the corner speed). With full steps (two phases on) currents and, once voltage-limited, phase
  * voltages are square waves whose fundamentals are {@code 4/π} times their amplitude; the harmonics give torque
  * ripple but no mean torque at constant speed. So the running pull-out torque of full stepping at low speed is
