@@ -2,7 +2,7 @@ package org.lodestep.cli;
 
 import java.nio.file.Path;
 
-import org.lodestep.drive.DriveKind;
+import org.lodestep.drive.DriveMode;
 import org.lodestep.drive.Load;
 import org.lodestep.drive.Margin;
 import org.lodestep.workflow.DriveCurve;
@@ -109,13 +109,13 @@ final class DriveOptions {
 
     /** The workflow's settings; bad combinations become a usage error. */
     DriveCurve.Settings settings(boolean dynamometer) {
-        DriveKind kind = switch (drive.toLowerCase(java.util.Locale.ROOT)) {
-            case "chopper" -> DriveKind.CHOPPER;
-            case "constant-voltage", "cv", "l/r" -> DriveKind.CONSTANT_VOLTAGE;
+        DriveMode kind = switch (drive.toLowerCase(java.util.Locale.ROOT)) {
+            case "chopper" -> DriveMode.CHOPPER;
+            case "constant-voltage", "cv", "l/r" -> DriveMode.CONSTANT_VOLTAGE;
             default -> throw new UsageException("--drive: '" + drive + "' is not a drive: expected chopper or"
                     + " constant-voltage");
         };
-        if (kind == DriveKind.CONSTANT_VOLTAGE && currentA != null) {
+        if (kind == DriveMode.CONSTANT_VOLTAGE && currentA != null) {
             throw new UsageException("--current-a: a constant-voltage drive has no current setting; its current is"
                     + " the supply over the winding resistance (add --series-resistance-ohm for an L/R resistor)");
         }
@@ -126,7 +126,7 @@ final class DriveOptions {
         }
     }
 
-    private DriveCurve.Settings build(DriveKind kind, boolean dynamometer) {
+    private DriveCurve.Settings build(DriveMode kind, boolean dynamometer) {
         Margin.check(margin);
         double travel = travelMmPerRev == null ? Double.NaN : travelMmPerRev;
         double j = loadInertiaKgm2;

@@ -40,22 +40,22 @@ public final class PhasorTorque {
     }
 
     /** Fundamental current limit per phase, peak A: the set current (×4/π for square-wave full steps). */
-    static double currentLimitA(DriveSettings d) {
-        if (d.kind() == DriveKind.CONSTANT_VOLTAGE) {
+    static double currentLimitA(Driver d) {
+        if (d.mode() == DriveMode.CONSTANT_VOLTAGE) {
             return Double.POSITIVE_INFINITY;
         }
         return d.phaseCurrentA() * (d.fullStep() ? SQUARE_FUNDAMENTAL : 1.0);
     }
 
     /** Fundamental voltage limit per phase, peak V: the supply (×4/π for square-wave full steps). */
-    static double voltageLimitV(DriveSettings d) {
+    static double voltageLimitV(Driver d) {
         return d.supplyV() * (d.fullStep() ? SQUARE_FUNDAMENTAL : 1.0);
     }
 
     /** Static holding torque with the set current at standstill, N·m: √2·K_t·I full step, K_t·I microstepping. */
-    public static double holdingTorqueNm(PhaseModel m, DriveSettings d) {
-        double i = d.kind() == DriveKind.CHOPPER ? d.phaseCurrentA() : d.supplyV() / m.phaseResistanceOhm();
-        if (d.kind() == DriveKind.CHOPPER) {
+    public static double holdingTorqueNm(PhaseModel m, Driver d) {
+        double i = d.mode() == DriveMode.CHOPPER ? d.phaseCurrentA() : d.supplyV() / m.phaseResistanceOhm();
+        if (d.mode() == DriveMode.CHOPPER) {
             i = Math.min(i, d.supplyV() / m.phaseResistanceOhm());
         }
         return m.ktNmPerA() * i * (d.fullStep() ? Math.sqrt(2) : 1.0);
@@ -66,7 +66,7 @@ public final class PhasorTorque {
      *
      * @param speedRadPerS mechanical speed, rad/s, zero or more
      */
-    public static double pullOutTorqueNm(PhaseModel m, DriveSettings d, double speedRadPerS) {
+    public static double pullOutTorqueNm(PhaseModel m, Driver d, double speedRadPerS) {
         Require.nonNegative(speedRadPerS, "speed", "rad/s");
         double r = m.phaseResistanceOhm();
         double x = m.rotorTeeth() * speedRadPerS * m.phaseInductanceH();
@@ -107,7 +107,7 @@ public final class PhasorTorque {
      * {@code (I_f·R + K_e·ω)² + (I_f·N_r·L·ω)² = V_f²}; 0 when the supply cannot drive the set current through the
      * resistance at all, +inf for a constant-voltage drive (no current setting).
      */
-    public static double fullCurrentSpeedRadPerS(PhaseModel m, DriveSettings d) {
+    public static double fullCurrentSpeedRadPerS(PhaseModel m, Driver d) {
         double i = currentLimitA(d);
         if (Double.isInfinite(i)) {
             return Double.POSITIVE_INFINITY;
@@ -130,7 +130,7 @@ public final class PhasorTorque {
      * every speed (then it falls as about 1/ω): finite only when {@code K_e·R > V_f·N_r·L}, at
      * {@code ω0 = V_f·R/sqrt(K_e²R² − V_f²N_r²L²)}.
      */
-    public static double zeroTorqueSpeedRadPerS(PhaseModel m, DriveSettings d) {
+    public static double zeroTorqueSpeedRadPerS(PhaseModel m, Driver d) {
         double v = voltageLimitV(d);
         double r = m.phaseResistanceOhm();
         double k = m.ktNmPerA();

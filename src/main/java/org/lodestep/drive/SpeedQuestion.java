@@ -29,7 +29,7 @@ public final class SpeedQuestion {
         Require.positive(targetFullStepsPerS, "target rate", "full steps/s");
         Margin.check(margin);
         PhaseModel m = curve.motor();
-        DriveSettings d = curve.drive();
+        Driver d = curve.drive();
         double need = load.steadyTorqueNm();
         double tp = curve.torqueNm(targetFullStepsPerS);
         double left = Margin.of(tp, need);
@@ -45,7 +45,7 @@ public final class SpeedQuestion {
     }
 
     /** Highest rate, full steps/s, at which {@code (1 − margin)·T_po ≥ need}; 0 when not even at standstill. */
-    static double maxRateWithMargin(PhaseModel m, DriveSettings d, double need, double margin) {
+    static double maxRateWithMargin(PhaseModel m, Driver d, double need, double margin) {
         double level = need / (1 - margin);
         if (PhasorTorque.pullOutTorqueNm(m, d, 0) <= level) {
             return 0;
@@ -53,11 +53,11 @@ public final class SpeedQuestion {
         return TorqueCurves.rateWhereTorqueFalls(m, d, level);
     }
 
-    private static boolean enough(PhaseModel m, DriveSettings d, double need, double margin, double rate) {
+    private static boolean enough(PhaseModel m, Driver d, double need, double margin, double rate) {
         return Margin.usableNm(PhasorTorque.pullOutTorqueNm(m, d, m.radPerS(rate)), margin) > need;
     }
 
-    private static List<Suggestion> suggestions(PhaseModel m, DriveSettings d, double need, double margin,
+    private static List<Suggestion> suggestions(PhaseModel m, Driver d, double need, double margin,
                                                 double rate, boolean canParallel) {
         List<Suggestion> out = new ArrayList<>();
         double vHi = d.supplyV() * MAX_SUPPLY_FACTOR;
@@ -76,7 +76,7 @@ public final class SpeedQuestion {
             out.add(new Suggestion("supply", volts, String.format(Locale.ROOT, "Raise the supply to about %.0f V"
                     + " (keep within the driver's and the motor's voltage ratings).", volts)));
         }
-        if (canParallel && d.kind() == DriveKind.CHOPPER) {
+        if (canParallel && d.mode() == DriveMode.CHOPPER) {
             PhaseModel p = Reconnection.seriesToParallel(m);
             double ip = Reconnection.parallelCurrentA(d.phaseCurrentA());
             if (enough(p, d.withCurrentA(ip), need, margin, rate)) {
@@ -85,7 +85,7 @@ public final class SpeedQuestion {
                         + " supply twice the current).", ip)));
             }
         }
-        if (d.kind() == DriveKind.CHOPPER) {
+        if (d.mode() == DriveMode.CHOPPER) {
             double iHi = d.phaseCurrentA() * MAX_CURRENT_FACTOR;
             if (enough(m, d.withCurrentA(iHi), need, margin, rate)) {
                 double lo = d.phaseCurrentA();

@@ -19,7 +19,7 @@ import java.util.List;
  * @param maxPowerRateFullStepsPerS   lowest rate at which the power comes within 1 % of that peak, full steps/s
  * @param points                      the curve, by rising rate, first point at standstill
  */
-public record TorqueCurve(PhaseModel motor, DriveSettings drive, double holdingTorqueNm, double lowSpeedTorqueNm,
+public record TorqueCurve(PhaseModel motor, Driver drive, double holdingTorqueNm, double lowSpeedTorqueNm,
                           double fullCurrentRateFullStepsPerS, double zeroTorqueRateFullStepsPerS,
                           double endRateFullStepsPerS, double maxPowerW, double maxPowerRateFullStepsPerS,
                           List<TorquePoint> points) {

@@ -14,7 +14,7 @@ public final class TorqueCurves {
     }
 
     /** The curve of {@code motor} on {@code drive}. */
-    public static TorqueCurve of(PhaseModel motor, DriveSettings drive) {
+    public static TorqueCurve of(PhaseModel motor, Driver drive) {
         double t0 = PhasorTorque.pullOutTorqueNm(motor, drive, 0);
         if (!(t0 > 0)) {
             throw new IllegalArgumentException("the drive gives no torque at standstill");
@@ -48,7 +48,7 @@ public final class TorqueCurves {
     }
 
     /** First rate above which the torque is at or below {@code levelNm}, full steps/s (bracket, then bisect). */
-    static double rateWhereTorqueFalls(PhaseModel motor, DriveSettings drive, double levelNm) {
+    static double rateWhereTorqueFalls(PhaseModel motor, Driver drive, double levelNm) {
         double lo = 0;
         double hi = 10;
         while (torque(motor, drive, hi) > levelNm) {
@@ -69,7 +69,7 @@ public final class TorqueCurves {
         return hi;
     }
 
-    private static double torque(PhaseModel m, DriveSettings d, double rate) {
+    private static double torque(PhaseModel m, Driver d, double rate) {
         return PhasorTorque.pullOutTorqueNm(m, d, m.radPerS(rate));
     }
 }

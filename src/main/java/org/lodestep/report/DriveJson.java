@@ -6,7 +6,7 @@ import java.util.List;
 import java.util.Map;
 
 import org.lodestep.drive.BandCrossing;
-import org.lodestep.drive.DriveKind;
+import org.lodestep.drive.DriveMode;
 import org.lodestep.drive.Profile;
 import org.lodestep.drive.SpeedAnswer;
 import org.lodestep.drive.StepRateTable;
@@ -102,7 +102,7 @@ public final class DriveJson {
         m.put("motor_source", r.motorSource());
         m.put("motor", r.motor());
         Map<String, Object> d = new LinkedHashMap<>();
-        d.put("kind", c.drive().kind() == DriveKind.CHOPPER ? "chopper" : "constant-voltage");
+        d.put("mode", c.drive().mode() == DriveMode.CHOPPER ? "chopper" : "constant-voltage");
         d.put("supply_v", c.drive().supplyV());
         d.put("phase_current_a", c.drive().phaseCurrentA());
         d.put("microsteps", c.drive().microsteps());

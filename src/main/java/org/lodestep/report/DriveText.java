@@ -5,8 +5,8 @@ import java.util.List;
 import java.util.Locale;
 
 import org.lodestep.drive.BandCrossing;
-import org.lodestep.drive.DriveKind;
-import org.lodestep.drive.DriveSettings;
+import org.lodestep.drive.DriveMode;
+import org.lodestep.drive.Driver;
 import org.lodestep.drive.Load;
 import org.lodestep.drive.PhaseModel;
 import org.lodestep.drive.Profile;
@@ -130,7 +130,7 @@ public final class DriveText {
     private static void header(PrintWriter out, DriveCurve.Result r) {
         PhaseModel m = r.motor();
         TorqueCurve c = r.curve();
-        DriveSettings d = c.drive();
+        Driver d = c.drive();
         out.printf(Locale.ROOT, "Motor (%s): R %.3g Ω, L %.3g mH, Kt %.3g N·m/A, %d rotor teeth (%d full steps/rev),"
                         + " rotor inertia %.3g kg·m²%n", r.motorSource(), m.phaseResistanceOhm(),
                 m.phaseInductanceH() * 1000, m.ktNmPerA(), m.rotorTeeth(), m.fullStepsPerRev(), m.rotorInertiaKgM2());
@@ -138,7 +138,7 @@ public final class DriveText {
         out.println("Model: " + MODEL);
         out.printf(Locale.ROOT, "Holding torque %.3f N·m; running pull-out torque at low speed %.3f N·m%n",
                 c.holdingTorqueNm(), c.lowSpeedTorqueNm());
-        if (d.kind() == DriveKind.CHOPPER) {
+        if (d.mode() == DriveMode.CHOPPER) {
             out.println("Set current reached up to " + rate(r.units(), c.fullCurrentRateFullStepsPerS())
                     + "; above it the supply limits the current");
         }
@@ -150,9 +150,9 @@ public final class DriveText {
                 rate(r.units(), c.maxPowerRateFullStepsPerS()));
     }
 
-    static String driveText(DriveSettings d) {
+    static String driveText(Driver d) {
         String step = d.fullStep() ? "full steps, two phases on" : "1/" + d.microsteps() + " microsteps";
-        return d.kind() == DriveKind.CHOPPER
+        return d.mode() == DriveMode.CHOPPER
                 ? String.format(Locale.ROOT, "chopper, %.2f A per phase, %.3g V supply, %s", d.phaseCurrentA(),
                 d.supplyV(), step)
                 : String.format(Locale.ROOT, "constant voltage, %.3g V supply, %s", d.supplyV(), step);

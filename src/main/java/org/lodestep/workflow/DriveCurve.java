@@ -8,8 +8,8 @@ import java.util.Locale;
 
 import org.lodestep.capture.MotorCardFile;
 import org.lodestep.capture.MotorCardReader;
-import org.lodestep.drive.DriveKind;
-import org.lodestep.drive.DriveSettings;
+import org.lodestep.drive.DriveMode;
+import org.lodestep.drive.Driver;
 import org.lodestep.drive.Load;
 import org.lodestep.drive.PhaseModel;
 import org.lodestep.drive.SpeedAnswer;
@@ -41,7 +41,7 @@ public final class DriveCurve {
      * @param rotorTeeth           typed rotor teeth, or null (card, else 50)
      * @param rotorInertiaKgM2     rotor inertia, kg·m², or null (then the card's inertia)
      * @param detentTorqueNm       detent torque, N·m
-     * @param kind                 chopper or constant-voltage
+     * @param mode                 chopper or constant-voltage
      * @param supplyV              supply, V, or null (the card's)
      * @param phaseCurrentA        chopper current setting, A, or null (the card's)
      * @param microsteps           pulses per full step
@@ -53,7 +53,7 @@ public final class DriveCurve {
      * @param dynamometer          also measure the curve on the virtual rig's dynamometer ({@link DriveDynamometer})
      */
     public record Settings(Path card, Double phaseResistanceOhm, Double phaseInductanceH, Double ktNmPerA,
-                           Integer rotorTeeth, Double rotorInertiaKgM2, double detentTorqueNm, DriveKind kind,
+                           Integer rotorTeeth, Double rotorInertiaKgM2, double detentTorqueNm, DriveMode mode,
                            Double supplyV, Double phaseCurrentA, int microsteps, double seriesResistanceOhm,
                            Load load, double target, SpeedUnit targetUnit, double margin, boolean dynamometer) {
     }
@@ -109,13 +109,13 @@ public final class DriveCurve {
         }
         double v = pick(s.supplyV(), card == null ? null : card.supplyV(), "supply voltage (--supply-v)");
         double i = Double.NaN;
-        if (s.kind() == DriveKind.CHOPPER) {
+        if (s.mode() == DriveMode.CHOPPER) {
             i = pick(s.phaseCurrentA(), card == null ? null : card.phaseCurrentA(),
                     "current setting (--current-a, peak A per phase)");
         }
         PhaseModel motor = new PhaseModel(r, l, kt, teeth, inertia, s.detentTorqueNm())
                 .withSeriesResistance(s.seriesResistanceOhm());
-        DriveSettings drive = new DriveSettings(s.kind(), v, i, s.microsteps());
+        Driver drive = new Driver(s.mode(), v, i, s.microsteps());
         RateUnits units = new RateUnits(s.microsteps(), teeth, s.load().travelMmPerRev());
         progress.step("computing the torque curve");
         TorqueCurve curve = TorqueCurves.of(motor, drive);

@@ -2,7 +2,7 @@ package org.lodestep.workflow;
 
 import java.util.List;
 
-import org.lodestep.drive.DriveKind;
+
 import org.lodestep.drive.Load;
 import org.lodestep.drive.PhaseModel;
 import org.lodestep.drive.StepRateTable;
@@ -41,8 +41,8 @@ public final class DriveSimulation {
     /** The virtual rig's drive for this motor and drive. */
     static DriveSettings rigDrive(TorqueCurve curve) {
         PhaseModel m = curve.motor();
-        org.lodestep.drive.DriveSettings d = curve.drive();
-        return d.kind() == DriveKind.CHOPPER
+        org.lodestep.drive.Driver d = curve.drive();
+        return d.mode() == org.lodestep.drive.DriveMode.CHOPPER
                 ? DriveSettings.chopper(m.phaseResistanceOhm(), m.phaseInductanceH(), m.ktNmPerA(), d.supplyV(),
                 d.phaseCurrentA())
                 : DriveSettings.constantVoltage(m.phaseResistanceOhm(), m.phaseInductanceH(), m.ktNmPerA(),
@@ -60,7 +60,7 @@ public final class DriveSimulation {
 
     public static Result run(TorqueCurve curve, Load load, StepRateTable table, Progress progress) {
         PhaseModel m = curve.motor();
-        org.lodestep.drive.DriveSettings d = curve.drive();
+        org.lodestep.drive.Driver d = curve.drive();
         RotorSettings rotor = rigRotor(curve, load);
         double j = rotor.inertiaKgM2();
         double c = rotor.dampingNmsPerRad();

@@ -12,7 +12,7 @@ import org.lodestep.resonance.RateUnits;
 
 class MotionPlannerTest {
     static final PhaseModel MOTOR = PhasorTorqueTest.MOTOR;
-    static final DriveSettings DRIVE = new DriveSettings(DriveKind.CHOPPER, 24, 1.2, 16);
+    static final Driver DRIVE = new Driver(DriveMode.CHOPPER, 24, 1.2, 16);
     static final TorqueCurve CURVE = TorqueCurves.of(MOTOR, DRIVE);
     static final Load LOAD = new Load(6e-5, 0.03, 0, 40);
     static final RateUnits UNITS = new RateUnits(16, 50, 40);

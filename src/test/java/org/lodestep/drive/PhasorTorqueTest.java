@@ -11,7 +11,7 @@ class PhasorTorqueTest {
 
     @Test
     void lowSpeedTorqueOfSineCosineMicrosteppingIsKtTimesCurrent() {
-        DriveSettings d = new DriveSettings(DriveKind.CHOPPER, 24, 1.2, 16);
+        Driver d = new Driver(DriveMode.CHOPPER, 24, 1.2, 16);
         // Two-phase machine, sinusoidal back-EMF, quadrature currents of peak I: T = Kt·I (power balance e·i = T·ω;
         // Acarnley, Stepping Motors, 4th ed., hybrid-motor model, from memory).
         assertEquals(0.18 * 1.2, PhasorTorque.pullOutTorqueNm(MOTOR, d, 1e-6), 1e-9);
@@ -20,7 +20,7 @@ class PhasorTorqueTest {
 
     @Test
     void fullStepHoldingTorqueIsRootTwoKtTimesCurrentWithTwoPhasesOn() {
-        DriveSettings d = new DriveSettings(DriveKind.CHOPPER, 24, 1.2, 1);
+        Driver d = new Driver(DriveMode.CHOPPER, 24, 1.2, 1);
         // Two phases on: the static torque curves of both phases, 90° electrical apart, add to √2·Kt·I at their
         // peak (Acarnley, ch. on static torque, two-phase-on excitation; from memory).
         assertEquals(Math.sqrt(2) * 0.18 * 1.2, PhasorTorque.holdingTorqueNm(MOTOR, d), 1e-12);
@@ -28,7 +28,7 @@ class PhasorTorqueTest {
 
     @Test
     void fullStepRunningTorqueAtLowSpeedIsTheSquareWaveFundamental() {
-        DriveSettings d = new DriveSettings(DriveKind.CHOPPER, 24, 1.2, 1);
+        Driver d = new Driver(DriveMode.CHOPPER, 24, 1.2, 1);
         // A square wave of amplitude I has a fundamental of (4/π)·I (Fourier series of a square wave, any
         // signals text); the harmonics give ripple but no mean torque at constant speed. Same figure by direct
         // averaging: √2·Kt·I·sin(45°)/(π/4) = (4/π)·Kt·I over each 90° step.
@@ -39,14 +39,14 @@ class PhasorTorqueTest {
 
     @Test
     void constantVoltageDriveAtStandstillGivesOhmsLawCurrent() {
-        DriveSettings d = new DriveSettings(DriveKind.CONSTANT_VOLTAGE, 4.8, Double.NaN, 16);
+        Driver d = new Driver(DriveMode.CONSTANT_VOLTAGE, 4.8, Double.NaN, 16);
         // Ohm's law: I = V/R = 2 A at standstill, T = Kt·I.
         assertEquals(0.18 * 4.8 / 2.4, PhasorTorque.pullOutTorqueNm(MOTOR, d, 0), 1e-12);
     }
 
     @Test
     void aboveTheCornerTheTorqueIsTheClosedFormVoltageLimitedPullOut() {
-        DriveSettings d = new DriveSettings(DriveKind.CHOPPER, 24, 1.2, 16);
+        Driver d = new Driver(DriveMode.CHOPPER, 24, 1.2, 16);
         double corner = PhasorTorque.fullCurrentSpeedRadPerS(MOTOR, d);
         for (double w = 1.5 * corner; w < 40 * corner; w *= 1.7) {
             double r = 2.4;
@@ -65,7 +65,7 @@ class PhasorTorqueTest {
 
     @Test
     void atHighSpeedTorqueFallsAsOneOverSpeedTowardsTheVoltageLimit() {
-        DriveSettings d = new DriveSettings(DriveKind.CHOPPER, 24, 1.2, 16);
+        Driver d = new Driver(DriveMode.CHOPPER, 24, 1.2, 16);
         // For X >> R: T ≈ Ke·V/(N_r·L·ω) − Ke²·R/(N_r²·L²·ω): the power T·ω tends to a constant (derived from the
         // closed form above).
         double limitPowerW = 0.18 * 24 / (50 * 8.0e-3) - 0.18 * 0.18 * 2.4 / (50 * 50 * 8.0e-3 * 8.0e-3);
@@ -78,7 +78,7 @@ class PhasorTorqueTest {
         // Independent oracle: search every current phasor inside both limits on a fine polar grid and keep the
         // largest in-phase component (T = Kt·Re(I) with E real); circuit V = (R + jX)·I + E.
         for (int micro : new int[] {1, 16}) {
-            DriveSettings d = new DriveSettings(DriveKind.CHOPPER, 24, 1.2, micro);
+            Driver d = new Driver(DriveMode.CHOPPER, 24, 1.2, micro);
             double ic = PhasorTorque.currentLimitA(d);
             double vf = PhasorTorque.voltageLimitV(d);
             for (double w : new double[] {10, 60, 120, 200, 400, 1000}) {
@@ -113,7 +113,7 @@ class PhasorTorqueTest {
 
     @Test
     void cornerSpeedIsWhereTheSupplyJustDrivesTheSetCurrent() {
-        DriveSettings d = new DriveSettings(DriveKind.CHOPPER, 24, 1.2, 16);
+        Driver d = new Driver(DriveMode.CHOPPER, 24, 1.2, 16);
         double w = PhasorTorque.fullCurrentSpeedRadPerS(MOTOR, d);
         // |I·(R + jX) + E| = V at the corner, with I in phase with E.
         double vr = 1.2 * 2.4 + 0.18 * w;
@@ -125,7 +125,7 @@ class PhasorTorqueTest {
 
     @Test
     void supplyBelowIRMeansTheSetCurrentIsNeverReached() {
-        DriveSettings d = new DriveSettings(DriveKind.CHOPPER, 2.0, 1.2, 16);
+        Driver d = new Driver(DriveMode.CHOPPER, 2.0, 1.2, 16);
         assertEquals(0, PhasorTorque.fullCurrentSpeedRadPerS(MOTOR, d));
         assertEquals(0.18 * 2.0 / 2.4, PhasorTorque.pullOutTorqueNm(MOTOR, d, 0), 1e-12);
     }
@@ -134,7 +134,7 @@ class PhasorTorqueTest {
     void zeroTorqueSpeedIsFiniteOnlyWhenBackEmfOutrunsTheSupply() {
         // A low-inductance, high-Ke winding on a low supply: Ke·R > V·N_r·L.
         PhaseModel m = new PhaseModel(10, 1e-4, 0.3, 50, 5e-6, 0);
-        DriveSettings d = new DriveSettings(DriveKind.CONSTANT_VOLTAGE, 6, Double.NaN, 16);
+        Driver d = new Driver(DriveMode.CONSTANT_VOLTAGE, 6, Double.NaN, 16);
         double w0 = PhasorTorque.zeroTorqueSpeedRadPerS(m, d);
         assertTrue(Double.isFinite(w0));
         // closed form ω0 = V·R/sqrt(Ke²R² − V²N_r²L²) (set the constant-voltage pull-out to zero)
@@ -142,7 +142,7 @@ class PhasorTorqueTest {
         assertTrue(PhasorTorque.pullOutTorqueNm(m, d, 0.99 * w0) > 0);
         assertEquals(0, PhasorTorque.pullOutTorqueNm(m, d, 1.01 * w0));
         assertEquals(Double.POSITIVE_INFINITY, PhasorTorque.zeroTorqueSpeedRadPerS(MOTOR,
-                new DriveSettings(DriveKind.CHOPPER, 24, 1.2, 16)));
+                new Driver(DriveMode.CHOPPER, 24, 1.2, 16)));
     }
 
     @Test
@@ -150,7 +150,7 @@ class PhasorTorqueTest {
         // Motor constants check values: Ke = 0.159155 V·s/rad (5.00 V peak at 300 rpm) gives Kt = 0.159155 N·m/A,
         // and 2.0 A peak in quadrature gives T = 0.318310 N·m (SI energy balance e·i = T·ω).
         PhaseModel m = new PhaseModel(1.0, 2e-3, 5.0 / (300 * 2 * Math.PI / 60), 50, 5e-6, 0);
-        DriveSettings d = new DriveSettings(DriveKind.CHOPPER, 48, 2.0, 8);
+        Driver d = new Driver(DriveMode.CHOPPER, 48, 2.0, 8);
         assertEquals(0.318310, PhasorTorque.pullOutTorqueNm(m, d, 1e-9), 1e-6);
     }
 }

@@ -9,7 +9,7 @@ import org.lodestep.resonance.RateUnits;
 
 class SpeedQuestionTest {
     static final PhaseModel MOTOR = PhasorTorqueTest.MOTOR;
-    static final DriveSettings DRIVE = new DriveSettings(DriveKind.CHOPPER, 24, 1.2, 16);
+    static final Driver DRIVE = new Driver(DriveMode.CHOPPER, 24, 1.2, 16);
     static final RateUnits UNITS = new RateUnits(16, 50, 40);
 
     @Test
@@ -52,7 +52,7 @@ class SpeedQuestionTest {
         assertFalse(a.suggestions().isEmpty());
         for (Suggestion s : a.suggestions()) {
             PhaseModel m = s.change().equals("parallel") ? Reconnection.seriesToParallel(MOTOR) : MOTOR;
-            DriveSettings d = switch (s.change()) {
+            Driver d = switch (s.change()) {
                 case "supply" -> DRIVE.withSupplyV(s.value());
                 case "parallel", "current" -> DRIVE.withCurrentA(s.value());
                 default -> throw new AssertionError(s.change());
@@ -71,7 +71,7 @@ class SpeedQuestionTest {
         assertEquals(2e-3, p.phaseInductanceH(), 1e-15);
         assertEquals(0.09, p.ktNmPerA(), 1e-12);
         // the same ampere-turns: same low-speed torque at twice the current
-        DriveSettings dp = DRIVE.withCurrentA(Reconnection.parallelCurrentA(1.2));
+        Driver dp = DRIVE.withCurrentA(Reconnection.parallelCurrentA(1.2));
         assertEquals(PhasorTorque.pullOutTorqueNm(MOTOR, DRIVE, 0), PhasorTorque.pullOutTorqueNm(p, dp, 0), 1e-12);
         // and the same copper loss: I²R
         assertEquals(1.2 * 1.2 * 2.4, 2.4 * 2.4 * 0.6, 1e-12);

@@ -9,7 +9,7 @@ import org.junit.jupiter.api.Test;
 class TorqueCurvesTest {
     @Test
     void curveStartsAtTheLowSpeedTorqueAndEndsAtTenPercentOfIt() {
-        DriveSettings d = new DriveSettings(DriveKind.CHOPPER, 24, 1.2, 16);
+        Driver d = new Driver(DriveMode.CHOPPER, 24, 1.2, 16);
         TorqueCurve c = TorqueCurves.of(PhasorTorqueTest.MOTOR, d);
         assertEquals(0.216, c.points().get(0).pullOutTorqueNm(), 1e-12);
         TorquePoint last = c.points().get(c.points().size() - 1);
@@ -30,7 +30,7 @@ class TorqueCurvesTest {
                 () -> new PhaseModel(2.4, -8e-3, 0.18, 50, 5.4e-6, 0));
         assertTrue(e.getMessage().contains("phase inductance") && e.getMessage().contains("H"), e.getMessage());
         assertThrows(IllegalArgumentException.class, () -> new PhaseModel(Double.NaN, 8e-3, 0.18, 50, 5.4e-6, 0));
-        assertThrows(IllegalArgumentException.class, () -> new DriveSettings(DriveKind.CHOPPER, 24, 0, 16));
-        assertThrows(IllegalArgumentException.class, () -> new DriveSettings(DriveKind.CHOPPER, -1, 1, 16));
+        assertThrows(IllegalArgumentException.class, () -> new Driver(DriveMode.CHOPPER, 24, 0, 16));
+        assertThrows(IllegalArgumentException.class, () -> new Driver(DriveMode.CHOPPER, -1, 1, 16));
     }
 }

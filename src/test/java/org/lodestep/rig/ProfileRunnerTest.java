@@ -8,7 +8,7 @@ import java.util.List;
 
 import org.junit.jupiter.api.Test;
 import org.lodestep.drive.Band;
-import org.lodestep.drive.DriveKind;
+
 import org.lodestep.drive.Load;
 import org.lodestep.drive.MotionPlanner;
 import org.lodestep.drive.PhaseModel;
@@ -28,8 +28,8 @@ class ProfileRunnerTest {
     static final double JL = 5.5126e-5;
     static final double FRICTION = 0.03;
     static final PhaseModel MOTOR = new PhaseModel(DynamometerTest.R, DynamometerTest.L, DynamometerTest.K, 50, JR, 0);
-    static final org.lodestep.drive.DriveSettings DRIVE =
-            new org.lodestep.drive.DriveSettings(DriveKind.CHOPPER, 24, 2.5, 16);
+    static final org.lodestep.drive.Driver DRIVE =
+            new org.lodestep.drive.Driver(org.lodestep.drive.DriveMode.CHOPPER, 24, 2.5, 16);
     static final TorqueCurve CURVE = TorqueCurves.of(MOTOR, DRIVE);
     static final Load LOAD = new Load(JL, FRICTION, 0, 40);
     // the bands a sweep of this axis gives (f_n/2 and f_n of its 100 Hz natural frequency), a = span·f/5

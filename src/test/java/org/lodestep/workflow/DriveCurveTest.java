@@ -9,7 +9,7 @@ import java.nio.file.Path;
 
 import org.junit.jupiter.api.Test;
 import org.junit.jupiter.api.io.TempDir;
-import org.lodestep.drive.DriveKind;
+import org.lodestep.drive.DriveMode;
 import org.lodestep.drive.Load;
 import org.lodestep.drive.SpeedAnswer;
 
@@ -18,7 +18,7 @@ class DriveCurveTest {
     Path dir;
 
     static DriveCurve.Settings typed(double supplyV, double target, DriveCurve.SpeedUnit unit) {
-        return new DriveCurve.Settings(null, 2.43, 8.2e-3, 0.18, null, 5.4e-6, 0, DriveKind.CHOPPER, supplyV, 1.2, 16,
+        return new DriveCurve.Settings(null, 2.43, 8.2e-3, 0.18, null, 5.4e-6, 0, DriveMode.CHOPPER, supplyV, 1.2, 16,
                 0, new Load(8.1e-5, 0.11, 0, 40), target, unit, 0.3, false);
     }
 
@@ -41,7 +41,7 @@ class DriveCurveTest {
                  "phases": [{"resistance_ohm": 2.43, "inductance_h": 0.0082},
                             {"resistance_ohm": 2.43, "inductance_h": 0.0082}]}
                 """);
-        DriveCurve.Settings s = new DriveCurve.Settings(card, null, null, null, null, null, 0, DriveKind.CHOPPER,
+        DriveCurve.Settings s = new DriveCurve.Settings(card, null, null, null, null, null, 0, DriveMode.CHOPPER,
                 null, null, 16, 0, new Load(8.1e-5, 0.11, 0, 40), 450, DriveCurve.SpeedUnit.MM_PER_S, 0.3, false);
         DriveCurve.Result r = DriveCurve.run(s, Progress.NONE);
         assertEquals(24, r.curve().drive().supplyV());
@@ -52,12 +52,12 @@ class DriveCurveTest {
 
     @Test
     void missingConstantsAreASettingsError() {
-        DriveCurve.Settings s = new DriveCurve.Settings(null, 2.43, null, 0.18, null, 5.4e-6, 0, DriveKind.CHOPPER,
+        DriveCurve.Settings s = new DriveCurve.Settings(null, 2.43, null, 0.18, null, 5.4e-6, 0, DriveMode.CHOPPER,
                 24.0, 1.2, 16, 0, Load.none(), Double.NaN, DriveCurve.SpeedUnit.RPM, 0.3, false);
         SettingsException e = assertThrows(SettingsException.class, () -> DriveCurve.run(s, Progress.NONE));
         assertTrue(e.getMessage().contains("phase inductance"), e.getMessage());
         SettingsException mm = assertThrows(SettingsException.class, () -> DriveCurve.run(new DriveCurve.Settings(
-                null, 2.43, 8.2e-3, 0.18, null, 5.4e-6, 0, DriveKind.CHOPPER, 24.0, 1.2, 16, 0, Load.none(), 100,
+                null, 2.43, 8.2e-3, 0.18, null, 5.4e-6, 0, DriveMode.CHOPPER, 24.0, 1.2, 16, 0, Load.none(), 100,
                 DriveCurve.SpeedUnit.MM_PER_S, 0.3, false), Progress.NONE));
         assertTrue(mm.getMessage().contains("travel per revolution"), mm.getMessage());
     }

@@ -3,17 +3,17 @@ package org.lodestep.drive;
 /**
  * The driver and supply.
  *
- * @param kind          chopper or constant-voltage
+ * @param mode          chopper or constant-voltage
  * @param supplyV       supply (bus) voltage, V
  * @param phaseCurrentA current setting, peak A per phase (chopper); NaN for a constant-voltage drive
  * @param microsteps    step pulses per full step: 1 is full stepping with two phases on (square-wave currents),
  *                      2 and more are sine-cosine microstepping
  */
-public record DriveSettings(DriveKind kind, double supplyV, double phaseCurrentA, int microsteps) {
-    public DriveSettings {
-        java.util.Objects.requireNonNull(kind, "kind");
+public record Driver(DriveMode mode, double supplyV, double phaseCurrentA, int microsteps) {
+    public Driver {
+        java.util.Objects.requireNonNull(mode, "mode");
         Require.positive(supplyV, "supply voltage", "V");
-        if (kind == DriveKind.CHOPPER) {
+        if (mode == DriveMode.CHOPPER) {
             Require.positive(phaseCurrentA, "phase current setting", "A");
         } else if (!Double.isNaN(phaseCurrentA)) {
             throw new IllegalArgumentException("a constant-voltage drive has no current setting (got "
@@ -30,12 +30,12 @@ public record DriveSettings(DriveKind kind, double supplyV, double phaseCurrentA
     }
 
     /** The same drive at another supply voltage. */
-    public DriveSettings withSupplyV(double v) {
-        return new DriveSettings(kind, v, phaseCurrentA, microsteps);
+    public Driver withSupplyV(double v) {
+        return new Driver(mode, v, phaseCurrentA, microsteps);
     }
 
     /** The same drive at another current setting (chopper). */
-    public DriveSettings withCurrentA(double a) {
-        return new DriveSettings(kind, supplyV, a, microsteps);
+    public Driver withCurrentA(double a) {
+        return new Driver(mode, supplyV, a, microsteps);
     }
 }
