@@ -248,7 +248,7 @@ public final class ResonanceHtml {
     private static Status status(BandClass c) {
         return switch (c) {
             case LOW_SPEED_RESONANCE -> Status.FAIL;
-            case MID_BAND_INSTABILITY -> Status.WARN;
+            case PARAMETRIC_RESONANCE, MID_BAND_INSTABILITY -> Status.WARN;
             case UNCLASSIFIED -> Status.INFO;
         };
     }
@@ -257,6 +257,8 @@ public final class ResonanceHtml {
         return switch (b.bandClass()) {
             case LOW_SPEED_RESONANCE -> b.subharmonic() > 1 ? "low-speed resonance (f\u2099/" + b.subharmonic() + ")"
                     : "low-speed resonance";
+            case PARAMETRIC_RESONANCE -> b.subharmonic() > 1 ? "parametric resonance (2f\u2099/" + b.subharmonic()
+                    + ")" : "parametric resonance (2f\u2099)";
             case MID_BAND_INSTABILITY -> "mid-band instability";
             case UNCLASSIFIED -> "unclassified";
         };

@@ -144,6 +144,9 @@ public final class ResonanceText {
         if (b.bandClass() == BandClass.LOW_SPEED_RESONANCE) {
             return b.subharmonic() == 1 ? "low-speed resonance f_n" : "low-speed resonance f_n/" + b.subharmonic();
         }
+        if (b.bandClass() == BandClass.PARAMETRIC_RESONANCE) {
+            return b.subharmonic() == 1 ? "parametric resonance 2f_n" : "parametric resonance 2f_n/" + b.subharmonic();
+        }
         return b.bandClass() == BandClass.MID_BAND_INSTABILITY ? "mid-band instability" : "unclassified";
     }
 

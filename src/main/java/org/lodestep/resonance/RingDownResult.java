@@ -15,12 +15,22 @@ package org.lodestep.resonance;
  * @param startTimeS         time of the first fitted sample (the largest excursion), s
  * @param fittedDurationS    length of the fitted stretch, s
  * @param periodsFitted      damped periods within the fitted stretch
+ * @param naturalFrequencyErrorHz standard error of the small-signal natural frequency, Hz (NaN without a backbone)
+ * @param dampingRatioError  standard error of the small-signal damping ratio (NaN without a backbone)
+ * @param largeSwingFrequencyHz frequency of the first, largest cycle, Hz (NaN without a backbone)
+ * @param wholeRingFrequencyHz natural frequency of one damped sinusoid fitted to the whole ring, Hz: what a
+ *                           constant-frequency fit reports, biased low by the large swings
+ * @param wholeRingRSquared  R² of that whole-ring fit
+ * @param backbone           cycle-by-cycle amplitude, frequency and decrement, largest swing first
  */
 public record RingDownResult(double naturalFrequencyHz, double dampedFrequencyHz, double dampingRatio,
                              double decayRatePerS, double amplitude, double offset, double qualityFactor,
                              double rSquared, double rmsResidual, double startTimeS, double fittedDurationS,
-                             double periodsFitted) {
+                             double periodsFitted, double naturalFrequencyErrorHz, double dampingRatioError,
+                             double largeSwingFrequencyHz, double wholeRingFrequencyHz, double wholeRingRSquared,
+                             java.util.List<BackbonePoint> backbone) {
     public RingDownResult {
+        backbone = java.util.List.copyOf(backbone);
         Require.positive(naturalFrequencyHz, "natural frequency", "Hz");
         Require.positive(dampedFrequencyHz, "damped frequency", "Hz");
         if (!(dampingRatio >= 0 && dampingRatio < 1)) {
@@ -29,5 +39,25 @@ public record RingDownResult(double naturalFrequencyHz, double dampedFrequencyHz
         if (Double.isNaN(rSquared)) {
             throw new IllegalArgumentException("fit quality R² is NaN");
         }
+    }
+
+    /** A fit without a backbone (too few cycles above the noise). */
+    RingDownResult(double naturalFrequencyHz, double dampedFrequencyHz, double dampingRatio, double decayRatePerS,
+                   double amplitude, double offset, double qualityFactor, double rSquared, double rmsResidual,
+                   double startTimeS, double fittedDurationS, double periodsFitted) {
+        this(naturalFrequencyHz, dampedFrequencyHz, dampingRatio, decayRatePerS, amplitude, offset, qualityFactor,
+                rSquared, rmsResidual, startTimeS, fittedDurationS, periodsFitted, Double.NaN, Double.NaN,
+                Double.NaN, naturalFrequencyHz, rSquared, java.util.List.of());
+    }
+
+    /** This tail fit with the small-signal values of a backbone in place of its own f_n and ζ. */
+    RingDownResult withBackbone(double smallSignalHz, double smallSignalErrorHz, double smallSignalZeta,
+                                double zetaError, double largeSwingHz, double wholeHz, double wholeR2,
+                                java.util.List<BackbonePoint> cycles) {
+        double fd = smallSignalHz * Math.sqrt(1 - smallSignalZeta * smallSignalZeta);
+        return new RingDownResult(smallSignalHz, fd, smallSignalZeta, smallSignalZeta * 2 * Math.PI * smallSignalHz,
+                amplitude, offset, DampedOscillation.qualityFactor(smallSignalZeta), rSquared, rmsResidual,
+                startTimeS, fittedDurationS, periodsFitted, smallSignalErrorHz, zetaError, largeSwingHz, wholeHz,
+                wholeR2, cycles);
     }
 }
