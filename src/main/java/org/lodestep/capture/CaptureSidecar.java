@@ -130,7 +130,7 @@ public record CaptureSidecar(String dataFile, boolean complete, String interrupt
             o.putNull("sweep");
         } else {
             ObjectNode s = o.putObject("sweep");
-            s.put("law", sweep.law().word());
+            s.put("law", sweep.shape().word());
             s.put("start_full_steps_per_s", sweep.startFullStepsPerS());
             s.put("end_full_steps_per_s", sweep.endFullStepsPerS());
             if (sweep.durationS().isPresent()) {

@@ -1,8 +1,8 @@
 package org.lodestep.capture;
 
 import org.lodestep.sample.InputFormatException;
+import org.lodestep.sample.SweepShape;
 import java.util.LinkedHashMap;
-import java.util.Locale;
 import java.util.Map;
 import java.util.Objects;
 import java.util.OptionalDouble;
@@ -15,22 +15,14 @@ import java.util.OptionalInt;
  * <p>In a CSV it is written as the comments {@code # sweep=linear|log}, {@code # sweep_start_full_steps_per_s=},
  * {@code # sweep_end_full_steps_per_s=}, and optionally {@code # sweep_duration_s=} and {@code # microsteps=} (step
  * pulses per full step).
+ *
+ * @param shape linear or logarithmic ({@link SweepShape}, shared with the analysis)
  */
-public record SweepProfile(Law law, double startFullStepsPerS, double endFullStepsPerS, OptionalDouble durationS,
+public record SweepProfile(SweepShape shape, double startFullStepsPerS, double endFullStepsPerS, OptionalDouble durationS,
                            OptionalInt microsteps) {
 
-    /** How the commanded rate moves from start to end. */
-    public enum Law {
-        LINEAR, LOG;
-
-        /** The word used in files: {@code linear} or {@code log}. */
-        public String word() {
-            return name().toLowerCase(Locale.ROOT);
-        }
-    }
-
     public SweepProfile {
-        Objects.requireNonNull(law, "law");
+        Objects.requireNonNull(shape, "shape");
         Objects.requireNonNull(durationS, "durationS");
         Objects.requireNonNull(microsteps, "microsteps");
         if (!(startFullStepsPerS >= 0) || !Double.isFinite(startFullStepsPerS)) {
@@ -45,7 +37,7 @@ public record SweepProfile(Law law, double startFullStepsPerS, double endFullSte
             throw new IllegalArgumentException("sweep start and end are both " + startFullStepsPerS
                     + " full steps/s: expected a range");
         }
-        if (law == Law.LOG && !(startFullStepsPerS > 0)) {
+        if (shape == SweepShape.LOG && !(startFullStepsPerS > 0)) {
             throw new IllegalArgumentException("a log sweep needs a positive start rate, got " + startFullStepsPerS
                     + " full steps/s");
         }
@@ -60,16 +52,16 @@ public record SweepProfile(Law law, double startFullStepsPerS, double endFullSte
     }
 
     /** A sweep with every field known. */
-    public static SweepProfile of(Law law, double startFullStepsPerS, double endFullStepsPerS, double durationS,
+    public static SweepProfile of(SweepShape shape, double startFullStepsPerS, double endFullStepsPerS, double durationS,
                                   int microsteps) {
-        return new SweepProfile(law, startFullStepsPerS, endFullStepsPerS, OptionalDouble.of(durationS),
+        return new SweepProfile(shape, startFullStepsPerS, endFullStepsPerS, OptionalDouble.of(durationS),
                 OptionalInt.of(microsteps));
     }
 
     /** The {@code key=value} pairs this profile is written as. */
     public Map<String, String> toMetadata() {
         Map<String, String> m = new LinkedHashMap<>();
-        m.put("sweep", law.word());
+        m.put("sweep", shape.word());
         m.put("sweep_start_full_steps_per_s", Double.toString(startFullStepsPerS));
         m.put("sweep_end_full_steps_per_s", Double.toString(endFullStepsPerS));
         durationS.ifPresent(d -> m.put("sweep_duration_s", Double.toString(d)));
@@ -88,17 +80,10 @@ public record SweepProfile(Law law, double startFullStepsPerS, double endFullSte
         if (word == null) {
             return null;
         }
-        Law law;
-        switch (word.strip().toLowerCase(Locale.ROOT)) {
-            case "linear":
-                law = Law.LINEAR;
-                break;
-            case "log":
-                law = Law.LOG;
-                break;
-            default:
-                throw new InputFormatException(source, InputFormatException.NO_LINE, "sweep", word,
-                        "expected linear or log");
+        SweepShape shape = SweepShape.ofWord(word);
+        if (shape == null) {
+            throw new InputFormatException(source, InputFormatException.NO_LINE, "sweep", word,
+                    "expected linear or log");
         }
         double start = number(metadata, "sweep_start_full_steps_per_s", source, true);
         double end = number(metadata, "sweep_end_full_steps_per_s", source, true);
@@ -114,7 +99,7 @@ public record SweepProfile(Law law, double startFullStepsPerS, double endFullSte
             }
         }
         try {
-            return new SweepProfile(law, start, end,
+            return new SweepProfile(shape, start, end,
                     Double.isNaN(duration) ? OptionalDouble.empty() : OptionalDouble.of(duration), micro);
         } catch (IllegalArgumentException e) {
             throw new InputFormatException(source, InputFormatException.NO_LINE, "sweep", null,

@@ -5,8 +5,7 @@ import java.util.concurrent.Callable;
 
 import org.lodestep.report.ResonanceJson;
 import org.lodestep.report.ResonanceText;
-import org.lodestep.resonance.Prediction;
-import org.lodestep.resonance.RateUnits;
+import org.lodestep.workflow.ResonancePredict;
 
 import picocli.CommandLine.Command;
 import picocli.CommandLine.Option;
@@ -67,34 +66,29 @@ final class ResonancePredictCommand implements Callable<Integer> {
     picocli.CommandLine.Model.CommandSpec spec;
 
     @Override
-    public Integer call() {
+    public Integer call() throws Exception {
         PrintWriter out = spec.commandLine().getOut();
         if ((phaseResistanceOhm == null) != (phaseInductanceH == null)) {
             throw new UsageException("--phase-resistance-ohm and --phase-inductance-h go together");
         }
-        double r = phaseResistanceOhm == null ? Double.NaN : phaseResistanceOhm;
-        double l = phaseInductanceH == null ? Double.NaN : phaseInductanceH;
-        RateUnits units = ResonanceSweepCommand.usage(() -> new RateUnits(microsteps, rotorTeeth,
-                travelMmPerRev == null ? Double.NaN : travelMmPerRev));
-        Prediction p;
-        if (measuredNaturalHz != null) {
-            double rotor = rotorInertiaKgm2 == null ? Double.NaN : rotorInertiaKgm2;
-            p = ResonanceSweepCommand.usage(() -> Prediction.inverse(measuredNaturalHz, holdingTorqueNm, rotorTeeth,
-                    rotor, units, r, l));
-        } else {
-            if (rotorInertiaKgm2 == null) {
-                throw new UsageException("a prediction needs --inertia-kgm2 (rotor inertia, kg·m²); or give"
-                        + " --measured-natural-hz to infer the inertia");
-            }
-            p = ResonanceSweepCommand.usage(() -> Prediction.forward(holdingTorqueNm, rotorTeeth, rotorInertiaKgm2,
-                    loadInertiaKgm2, units, r, l));
+        if (measuredNaturalHz == null && rotorInertiaKgm2 == null) {
+            throw new UsageException("a prediction needs --inertia-kgm2 (rotor inertia, kg·m²); or give"
+                    + " --measured-natural-hz to infer the inertia");
         }
+        ResonancePredict.Result r = WorkflowCall.run(() -> ResonancePredict.run(
+                new ResonancePredict.Settings(holdingTorqueNm, nanIfNull(rotorInertiaKgm2), loadInertiaKgm2, rotorTeeth,
+                        nanIfNull(measuredNaturalHz), microsteps, nanIfNull(travelMmPerRev),
+                        nanIfNull(phaseResistanceOhm), nanIfNull(phaseInductanceH))));
         if (json) {
-            out.println(ResonanceJson.prediction(p));
+            out.println(ResonanceJson.prediction(r.prediction()));
         } else {
-            ResonanceText.prediction(out, p, units);
+            ResonanceText.prediction(out, r.prediction(), r.units());
         }
         out.flush();
         return ExitCode.OK;
+    }
+
+    private static double nanIfNull(Double v) {
+        return v == null ? Double.NaN : v;
     }
 }

@@ -2,17 +2,13 @@ package org.lodestep.cli;
 
 import java.io.PrintWriter;
 import java.nio.file.Path;
-import java.util.Arrays;
 import java.util.concurrent.Callable;
 
-import org.lodestep.capture.Captures;
-import org.lodestep.sample.InputFormatException;
-import org.lodestep.sample.SampledSignal;
 import org.lodestep.report.ResonanceHtml;
 import org.lodestep.report.ResonanceJson;
 import org.lodestep.report.ResonanceText;
-import org.lodestep.resonance.RingDownFit;
-import org.lodestep.resonance.RingDownResult;
+import org.lodestep.workflow.Progress;
+import org.lodestep.workflow.ResonanceRingdown;
 
 import picocli.CommandLine.Command;
 import picocli.CommandLine.Option;
@@ -58,35 +54,15 @@ final class ResonanceRingdownCommand implements Callable<Integer> {
     @Override
     public Integer call() throws Exception {
         PrintWriter out = spec.commandLine().getOut();
-        String source = file.toString();
-        SampledSignal sig = Captures.readAll(file);
-        if (sig.channels().isEmpty()) {
-            throw new InputFormatException(source, InputFormatException.NO_LINE, null, null, "has no data channels");
-        }
-        int c = channel == null ? 0 : ResonanceSweepCommand.index(sig.channels(), channel, source, "--channel");
-        String name = sig.channels().get(c).name();
-        double[] x = sig.channel(c);
-        double fs = sig.sampleRateHz();
-        int from = fromS == null ? 0 : (int) Math.max(0, Math.ceil((fromS - sig.startTimeS()) * fs));
-        int to = toS == null ? x.length : (int) Math.min(x.length, Math.floor((toS - sig.startTimeS()) * fs) + 1);
-        if (to <= from) {
-            throw new UsageException("--from-s/--to-s select no samples of " + source + " (it runs from "
-                    + sig.startTimeS() + " s for " + x.length / fs + " s)");
-        }
-        double[] part = Arrays.copyOfRange(x, from, to);
-        double t0 = sig.startTimeS() + from / fs;
-        RingDownResult r = ResonanceSweepCommand.analysis(() -> RingDownFit.fit(part, fs, t0), source, name);
+        ResonanceRingdown.Result r = WorkflowCall.run(() -> ResonanceRingdown.fit(file,
+                new ResonanceRingdown.Settings(channel, fromS, toS), Progress.NONE));
         if (report != null) {
-            double[] t = new double[part.length];
-            for (int i = 0; i < t.length; i++) {
-                t[i] = t0 + i / fs;
-            }
-            ResonanceHtml.ringDown(source, name, sig.channels().get(c).unit(), t, part, r).write(report);
+            ResonanceHtml.ringDown(r.source(), r.channel(), r.unit(), r.timeS(), r.values(), r.fit()).write(report);
         }
         if (json) {
-            out.println(ResonanceJson.ringDown(source, name, r));
+            out.println(ResonanceJson.ringDown(r.source(), r.channel(), r.fit()));
         } else {
-            ResonanceText.ringDown(out, source, name, r);
+            ResonanceText.ringDown(out, r.source(), r.channel(), r.fit());
         }
         out.flush();
         return ExitCode.OK;

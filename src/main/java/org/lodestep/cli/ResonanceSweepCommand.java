@@ -1,31 +1,17 @@
 package org.lodestep.cli;
 
-import java.io.IOException;
 import java.io.PrintWriter;
 import java.nio.file.Path;
-import java.util.List;
-import java.util.Locale;
 import java.util.concurrent.Callable;
 
-import org.lodestep.capture.Captures;
-import org.lodestep.sample.Channel;
-import org.lodestep.sample.InputFormatException;
-import org.lodestep.sample.SampleStream;
-import org.lodestep.capture.SweepProfile;
 import org.lodestep.report.OutputFile;
 import org.lodestep.report.ResonanceHtml;
 import org.lodestep.report.ResonanceJson;
 import org.lodestep.report.ResonanceText;
-import org.lodestep.resonance.AvoidList;
 import org.lodestep.resonance.BandSettings;
-import org.lodestep.resonance.RateUnits;
-import org.lodestep.resonance.Recommendations;
-import org.lodestep.resonance.SweepAnalyzer;
-import org.lodestep.resonance.SweepLaw;
-import org.lodestep.resonance.SweepResult;
-import org.lodestep.resonance.SweepSettings;
-import org.lodestep.signal.Detrend;
-import org.lodestep.signal.SpectralSettings;
+import org.lodestep.sample.SweepShape;
+import org.lodestep.workflow.Progress;
+import org.lodestep.workflow.ResonanceSweep;
 import org.lodestep.signal.Window;
 
 import picocli.CommandLine.Command;
@@ -50,8 +36,6 @@ import picocli.CommandLine.Parameters;
             "Safety: a sweep moves the axis through its whole speed range; clear the",
             "travel, fit the guards, keep the emergency stop in reach; follow local codes."})
 final class ResonanceSweepCommand implements Callable<Integer> {
-    private static final int BLOCK_FRAMES = 1 << 16;
-
     @Parameters(index = "0", paramLabel = "FILE", description = "Capture: time-series CSV, WAV, or rig capture.")
     Path file;
 
@@ -64,7 +48,7 @@ final class ResonanceSweepCommand implements Callable<Integer> {
     String pulseChannel;
 
     @Option(names = "--sweep", paramLabel = "LAW", description = "Programmed sweep law: linear or log.")
-    SweepLaw.Shape shape;
+    SweepShape shape;
 
     @Option(names = "--start", paramLabel = "RATE", description = "Sweep start rate, full steps/s.")
     Double start;
@@ -155,94 +139,21 @@ final class ResonanceSweepCommand implements Callable<Integer> {
     @Override
     public Integer call() throws Exception {
         PrintWriter out = spec.commandLine().getOut();
-        String source = file.toString();
-        int vib;
-        int pulse;
-        SweepLaw law;
-        RateUnits units;
-        double sampleRateHz;
-        String unit;
-        String vibName;
-        String lawText;
-        try (SampleStream s = Captures.open(file)) {
-            List<Channel> chans = s.channels();
-            pulse = pulseChannel == null ? -1 : index(chans, pulseChannel, source, "--pulse-channel");
-            vib = channel != null ? index(chans, channel, source, "--channel") : firstOtherThan(chans, pulse, source);
-            unit = chans.get(vib).unit();
-            vibName = chans.get(vib).name();
-            sampleRateHz = s.sampleRateHz();
-            SweepProfile profile = SweepProfile.fromMetadata(s.metadata(), source);
-            int micro = microsteps != null ? microsteps
-                    : profile != null && profile.microsteps().isPresent() ? profile.microsteps().getAsInt() : 1;
-            units = units(micro);
-            if (pulse >= 0) {
-                law = null;
-                lawText = "from the rising edges of channel " + chans.get(pulse).name() + " at " + micro
-                        + (micro == 1 ? " pulse" : " pulses") + " per full step";
-            } else {
-                SweepLaw.Shape sh = shape != null ? shape : profile == null ? null
-                        : profile.law() == SweepProfile.Law.LINEAR ? SweepLaw.Shape.LINEAR : SweepLaw.Shape.LOG;
-                Double st = start != null ? start : profile == null ? null : profile.startFullStepsPerS();
-                Double en = end != null ? end : profile == null ? null : profile.endFullStepsPerS();
-                Double du = duration != null ? duration
-                        : profile != null && profile.durationS().isPresent() ? profile.durationS().getAsDouble() : null;
-                if (sh == null || st == null || en == null) {
-                    throw new InputFormatException(source, InputFormatException.NO_LINE, null, null,
-                            "has no sweep law: expected '# sweep=linear|log' with '# sweep_start_full_steps_per_s='"
-                                    + " and '# sweep_end_full_steps_per_s=' in the file, or the options --sweep,"
-                                    + " --start and --end, or a step-pulse channel (--pulse-channel)");
-                }
-                // Without a stated duration the sweep is taken to span the capture: one counting pass finds its length.
-                double dur = du != null ? du : countFrames(s) / sampleRateHz;
-                law = usage(() -> new SweepLaw(sh, st, en, dur));
-                lawText = String.format(Locale.ROOT, "%s sweep %s to %s full steps/s over %s s",
-                        sh.name().toLowerCase(Locale.ROOT), fmt(st), fmt(en), fmt(dur));
-            }
-        }
-        SweepSettings settings = settings(sampleRateHz);
-        BandSettings d = BandSettings.defaults();
-        BandSettings bands = usage(() -> new BandSettings(thresholdDb,
-                absoluteLevel == null ? Double.NaN : absoluteLevel, hysteresisDb, d.baselineHalfWidth(),
-                d.baselineQuantile(), mergeGap, d.minPoints(), edgeDropDb));
-        SweepAnalyzer analyzer = law != null ? SweepAnalyzer.programmed(settings, sampleRateHz, law)
-                : usage(() -> SweepAnalyzer.fromPulses(settings, sampleRateHz, units.microsteps()));
-        SweepResult result;
-        // Parsing runs on a second thread, a few blocks ahead of the spectra.
-        try (SampleStream s = Captures.readAhead(Captures.open(file), BLOCK_FRAMES)) {
-            double[][] buf = new double[s.channels().size()][BLOCK_FRAMES];
-            double[] pulses = pulse >= 0 ? buf[pulse] : null;
-            int got;
-            while ((got = s.read(buf, 0, BLOCK_FRAMES)) >= 0) {
-                int n = got;
-                analysis(() -> {
-                    analyzer.feed(buf[vib], pulses, 0, n);
-                    return null;
-                }, source, vibName);
-            }
-            result = analysis(() -> analyzer.finish(bands, naturalHz == null ? Double.NaN : naturalHz), source,
-                    vibName);
-        }
-        AvoidList avoid = usage(() -> Recommendations.avoidList(result.bands(), units, result.naturalFrequencyHz(),
-                dampingRatio == null ? Double.NaN : dampingRatio, crossingPeriods, margin));
+        ResonanceSweep.Settings settings = WorkflowCall.run(this::settings);
+        ResonanceSweep.Result r = WorkflowCall.run(() -> ResonanceSweep.analyse(file, settings, Progress.NONE));
         if (avoidListFile != null) {
-            OutputFile.write(avoidListFile, ResonanceJson.avoidList(avoid) + System.lineSeparator());
+            OutputFile.write(avoidListFile, ResonanceJson.avoidList(r.avoid()) + System.lineSeparator());
         }
-        ResonanceText.SweepHeader header = new ResonanceText.SweepHeader(source, vibName, unit,
-                sampleRateHz, lawText);
+        ResonanceText.SweepHeader header = new ResonanceText.SweepHeader(r.source(), r.channel(), r.unit(),
+                r.sampleRateHz(), r.rateLaw());
         if (report != null) {
-            double[] columnRates = null;
-            if (law != null && result.spectrogram() != null) {
-                columnRates = new double[result.spectrogram().columnCount()];
-                for (int c = 0; c < columnRates.length; c++) {
-                    columnRates[c] = law.rateFullStepsPerSAt(result.spectrogram().columnTimeS(c));
-                }
-            }
-            ResonanceHtml.sweep(header, result, units, avoid, columnRates).write(report);
+            ResonanceHtml.sweep(header, r.sweep(), r.units(), r.avoid(), r.spectrogramColumnRatesFullStepsPerS())
+                    .write(report);
         }
         if (json) {
-            out.println(ResonanceJson.sweep(header, result, units, avoid, response));
+            out.println(ResonanceJson.sweep(header, r.sweep(), r.units(), r.avoid(), response));
         } else {
-            ResonanceText.sweep(out, header, result, units, avoid);
+            ResonanceText.sweep(out, header, r.sweep(), r.units(), r.avoid());
             if (avoidListFile != null) {
                 out.println();
                 out.println("Avoid-list written to " + avoidListFile);
@@ -252,77 +163,12 @@ final class ResonanceSweepCommand implements Callable<Integer> {
         return ExitCode.OK;
     }
 
-    private SweepSettings settings(double sampleRateHz) {
-        SweepSettings d = SweepSettings.forSampleRate(sampleRateHz);
-        int n = segment != null ? segment : d.spectral().segmentLength();
-        return usage(() -> new SweepSettings(new SpectralSettings(n, n / 2, window, Detrend.MEAN),
-                d.rateResolution(), d.spectrogramColumns()));
-    }
-
-    private RateUnits units(int micro) {
-        return usage(() -> new RateUnits(micro, rotorTeeth, travelMmPerRev == null ? Double.NaN : travelMmPerRev));
-    }
-
-    private static long countFrames(SampleStream s) throws IOException, InputFormatException {
-        if (s.knownFrameCount() >= 0) {
-            return s.knownFrameCount(); // WAV and rig captures state it: no need to read the data twice
-        }
-        double[][] buf = new double[s.channels().size()][BLOCK_FRAMES];
-        long n = 0;
-        int got;
-        while ((got = s.read(buf, 0, BLOCK_FRAMES)) >= 0) {
-            n += got;
-        }
-        return n;
-    }
-
-    static int index(List<Channel> chans, String name, String source, String option) throws InputFormatException {
-        for (int i = 0; i < chans.size(); i++) {
-            if (chans.get(i).name().equals(name) || chans.get(i).header().equals(name)) {
-                return i;
-            }
-        }
-        throw new InputFormatException(source, InputFormatException.NO_LINE, option, name,
-                "is not a channel of this file; expected one of " + names(chans));
-    }
-
-    static int firstOtherThan(List<Channel> chans, int pulse, String source) throws InputFormatException {
-        for (int i = 0; i < chans.size(); i++) {
-            if (i != pulse) {
-                return i;
-            }
-        }
-        throw new InputFormatException(source, InputFormatException.NO_LINE, null, null,
-                "has no channel to analyse besides the pulse channel");
-    }
-
-    static String names(List<Channel> chans) {
-        StringBuilder b = new StringBuilder();
-        for (Channel c : chans) {
-            b.append(b.length() == 0 ? "" : ", ").append(c.name());
-        }
-        return b.toString();
-    }
-
-    private static String fmt(double v) {
-        return v == Math.rint(v) ? String.format(Locale.ROOT, "%.0f", v) : String.format(Locale.ROOT, "%.4g", v);
-    }
-
-    /** Runs a constructor or engine call whose IllegalArgumentException is the user's option at fault. */
-    static <T> T usage(java.util.function.Supplier<T> s) {
-        try {
-            return s.get();
-        } catch (IllegalArgumentException e) {
-            throw new UsageException(e.getMessage());
-        }
-    }
-
-    /** Runs an analysis whose IllegalArgumentException means the input cannot give an answer. */
-    static <T> T analysis(java.util.function.Supplier<T> s, String source, String column) throws InputFormatException {
-        try {
-            return s.get();
-        } catch (IllegalArgumentException e) {
-            throw new InputFormatException(source, InputFormatException.NO_LINE, column, null, e.getMessage());
-        }
+    private ResonanceSweep.Settings settings() {
+        BandSettings d = BandSettings.defaults();
+        BandSettings bands = new BandSettings(thresholdDb, absoluteLevel == null ? Double.NaN : absoluteLevel,
+                hysteresisDb, d.baselineHalfWidth(), d.baselineQuantile(), mergeGap, d.minPoints(), edgeDropDb);
+        return new ResonanceSweep.Settings(channel, pulseChannel, shape, start, end, duration, microsteps, rotorTeeth,
+                travelMmPerRev == null ? Double.NaN : travelMmPerRev, naturalHz == null ? Double.NaN : naturalHz,
+                dampingRatio == null ? Double.NaN : dampingRatio, bands, segment, window, crossingPeriods, margin);
     }
 }

@@ -6,9 +6,9 @@ import java.util.concurrent.Callable;
 
 import org.lodestep.report.Json;
 import org.lodestep.report.RigText;
-import org.lodestep.rig.RigCapture;
-import org.lodestep.rig.RigClient;
 import org.lodestep.rig.SweepPlan;
+import org.lodestep.workflow.RigCaptureFile;
+import org.lodestep.workflow.RigSweepCapture;
 
 import picocli.CommandLine.Command;
 import picocli.CommandLine.Option;
@@ -74,33 +74,29 @@ final class RigCaptureCommand implements Callable<Integer> {
             throw new UsageException("KIND '" + kind + "' is not sweep (step responses and back-EMF: rig measure "
                     + "... --out FILE)");
         }
-        SweepPlan plan;
-        try {
-            plan = new SweepPlan(from, to, seconds, microsteps, rateHz);
-        } catch (IllegalArgumentException e) {
-            throw new UsageException(e.getMessage());
-        }
-        RigCaptureFiles.checkTarget(out);
+        RigSweepCapture.Settings settings = WorkflowCall.run(() -> {
+            RigSweepCapture.Settings s = new RigSweepCapture.Settings(address,
+                    new SweepPlan(from, to, seconds, microsteps, rateHz), out, VersionProvider.version());
+            RigCaptureFile.checkTarget(out); // before the caution: nothing moves for a file that cannot be written
+            return s;
+        });
         PrintWriter o = spec.commandLine().getOut();
         // with --json the caution goes to stderr, so standard output stays one JSON document
         PrintWriter caution = json ? spec.commandLine().getErr() : o;
         caution.printf(RigCautions.MOVING + "%n", Math.max(from, to));
         caution.flush();
-        RigCapture cap;
-        try (RigClient c = RigCli.connect(address);
-             RigCli.Bar bar = new RigCli.Bar("sweep", spec.commandLine().getErr(), quiet)) {
-            cap = c.sweep(plan, bar);
+        RigSweepCapture.Result r;
+        try (RigCli.Bar bar = new RigCli.Bar("sweep", spec.commandLine().getErr(), quiet)) {
+            r = WorkflowCall.run(() -> RigSweepCapture.run(settings, bar));
         }
-        Path written = RigCaptureFiles.save(cap, out, plan);
         if (json) {
-            o.println(Json.write(cap.metadata()));
-            spec.commandLine().getErr().println("saved " + written);
+            o.println(Json.write(r.capture().metadata()));
+            spec.commandLine().getErr().println("saved " + r.saved());
         } else {
-            o.print(RigText.capture(cap));
-            o.println("saved " + written);
+            o.print(RigText.capture(r.capture()));
+            o.println("saved " + r.saved());
         }
         o.flush();
         return ExitCode.OK;
     }
-
 }

@@ -6,6 +6,7 @@ import java.util.List;
 
 import org.lodestep.rig.RigClient;
 import org.lodestep.rig.RigException;
+import org.lodestep.workflow.Progress;
 
 import me.tongfei.progressbar.DelegatingProgressBarConsumer;
 import me.tongfei.progressbar.ProgressBar;
@@ -55,7 +56,7 @@ final class RigCli {
      * A progress bar with ETA on the command's error stream when it is a terminal and not {@code quiet}; otherwise
      * a no-op. Close it when the stream ends.
      */
-    static final class Bar implements AutoCloseable, RigClient.Progress {
+    static final class Bar implements AutoCloseable, RigClient.Progress, Progress {
         private final ProgressBar bar;
         private final PrintWriter err;
 
@@ -79,6 +80,11 @@ final class RigCli {
                 bar.maxHint(total);
                 bar.stepTo(received);
             }
+        }
+
+        @Override
+        public void advanced(long done, long total) {
+            frames(done, total);
         }
 
         @Override

@@ -5,8 +5,9 @@ import java.util.concurrent.Callable;
 
 import org.lodestep.report.Json;
 import org.lodestep.report.RigText;
-import org.lodestep.rig.RigClient;
-import org.lodestep.rig.Scenarios;
+import org.lodestep.rig.RigInfo;
+import org.lodestep.workflow.Progress;
+import org.lodestep.workflow.RigDescribe;
 
 import picocli.CommandLine.Command;
 import picocli.CommandLine.Option;
@@ -34,11 +35,11 @@ final class RigInfoCommand implements Callable<Integer> {
     public Integer call() throws Exception {
         PrintWriter out = spec.commandLine().getOut();
         if (address.equals("sim:")) {
-            out.print(json ? Json.write(Scenarios.all()) + "\n" : RigText.scenarios(Scenarios.all()));
+            var scenarios = RigDescribe.scenarios();
+            out.print(json ? Json.write(scenarios) + "\n" : RigText.scenarios(scenarios));
         } else {
-            try (RigClient c = RigCli.connect(address)) {
-                out.print(json ? Json.write(c.info()) + "\n" : RigText.info(c.info()));
-            }
+            RigInfo info = WorkflowCall.run(() -> RigDescribe.info(address, Progress.NONE));
+            out.print(json ? Json.write(info) + "\n" : RigText.info(info));
         }
         out.flush();
         return ExitCode.OK;

@@ -10,10 +10,8 @@ import java.util.concurrent.Callable;
 
 import org.lodestep.report.Json;
 import org.lodestep.report.RigText;
-import org.lodestep.rig.InsulationReading;
-import org.lodestep.rig.ResistanceReading;
-import org.lodestep.rig.RigCapture;
-import org.lodestep.rig.RigClient;
+import org.lodestep.workflow.RigCaptureFile;
+import org.lodestep.workflow.RigMeasure;
 
 import picocli.CommandLine.Command;
 import picocli.CommandLine.Option;
@@ -35,8 +33,6 @@ import picocli.CommandLine.Model.CommandSpec;
                 "%nThe insulation test applies high voltage; it prints a caution and needs",
                 "--yes-i-have-read-the-caution, or typing ARM at the prompt on a terminal."})
 final class RigMeasureCommand implements Callable<Integer> {
-    enum Kind { RESISTANCE, INSULATION, STEP_RESPONSE, BACK_EMF }
-
     @Parameters(index = "0", paramLabel = "ADDR", description = RigCli.ADDRESS_HELP)
     String address;
 
@@ -87,105 +83,71 @@ final class RigMeasureCommand implements Callable<Integer> {
 
     @Override
     public Integer call() throws Exception {
-        Kind k;
+        RigMeasure.Kind k;
         try {
-            k = Kind.valueOf(kind.replace('-', '_').toUpperCase(Locale.ROOT));
+            k = RigMeasure.Kind.valueOf(kind.replace('-', '_').toUpperCase(Locale.ROOT));
         } catch (IllegalArgumentException e) {
             throw new UsageException("KIND '" + kind + "' is not resistance, insulation, step-response or back-emf");
         }
         PrintWriter o = spec.commandLine().getOut();
-        List<int[]> pairs = RigCli.pairs(pairTexts, "--pair");
-        if (out != null) {
-            if (k != Kind.STEP_RESPONSE && k != Kind.BACK_EMF) {
-                throw new UsageException("--out saves step-response and back-emf captures only");
-            }
-            RigCaptureFiles.checkTarget(out);
+        List<RigMeasure.LeadPair> pairs = new ArrayList<>();
+        for (int[] p : RigCli.pairs(pairTexts, "--pair")) {
+            pairs.add(new RigMeasure.LeadPair(p[0], p[1]));
         }
+        if (out != null && k != RigMeasure.Kind.STEP_RESPONSE && k != RigMeasure.Kind.BACK_EMF) {
+            throw new UsageException("--out saves step-response and back-emf captures only");
+        }
+        if (k == RigMeasure.Kind.STEP_RESPONSE && pairs.size() != 1) {
+            throw new UsageException("step-response needs exactly one --pair A-B");
+        }
+        RigMeasure.Settings settings = WorkflowCall.run(() -> {
+            RigMeasure.Settings s = new RigMeasure.Settings(address, k, pairs, leads, volts, seconds, ms, rateHz, out,
+                    VersionProvider.version());
+            if (out != null) {
+                RigCaptureFile.checkTarget(out); // before any caution: nothing is energised for an unwritable file
+            }
+            return s;
+        });
         // cautions go to stderr with --json, so standard output stays one JSON document
         PrintWriter caution = json ? spec.commandLine().getErr() : o;
-        if (k == Kind.INSULATION) {
-            int v = volts == null ? 500 : (int) Math.round(volts);
+        if (k == RigMeasure.Kind.INSULATION) {
+            int v = settings.insulationVolts();
             caution.printf(RigCautions.INSULATION + "%n", v);
             caution.flush();
             if (!confirmed && !confirmAtConsole(v)) {
                 throw new UsageException("insulation test not confirmed: read the caution, then add "
                         + "--yes-i-have-read-the-caution (or type ARM at the prompt)");
             }
-        } else if (k == Kind.STEP_RESPONSE) {
-            caution.printf(RigCautions.ENERGISED + "%n", volts == null ? 2.0 : volts);
-        } else if (k == Kind.BACK_EMF) {
+        } else if (k == RigMeasure.Kind.STEP_RESPONSE) {
+            caution.printf(RigCautions.ENERGISED + "%n", settings.stepVolts());
+        } else if (k == RigMeasure.Kind.BACK_EMF) {
             caution.println(RigCautions.HAND_TURN);
         }
-        try (RigClient c = RigCli.connect(address)) {
-            List<String> labels = c.info().labels();
-            switch (k) {
-                case RESISTANCE -> {
-                    List<int[]> todo = pairs;
-                    if (todo.isEmpty()) {
-                        todo = new ArrayList<>();
-                        for (int a = 1; a <= c.info().leads(); a++) {
-                            for (int b = a + 1; b <= c.info().leads(); b++) {
-                                todo.add(new int[] {a, b});
-                            }
-                        }
-                    }
-                    List<ResistanceReading> rs = new ArrayList<>();
-                    for (int[] p : todo) {
-                        rs.add(c.resistance(p[0], p[1]));
-                    }
-                    o.print(json ? Json.write(rs) + "\n" : RigText.resistances(rs, labels));
+        RigMeasure.Result r;
+        // a bar for streamed captures only; readings come one by one and print as a table
+        boolean streams = k == RigMeasure.Kind.STEP_RESPONSE || k == RigMeasure.Kind.BACK_EMF;
+        try (RigCli.Bar bar = new RigCli.Bar(k == RigMeasure.Kind.BACK_EMF ? "back-emf" : "step",
+                spec.commandLine().getErr(), quiet || !streams)) {
+            r = WorkflowCall.run(() -> RigMeasure.run(settings, bar));
+        }
+        switch (k) {
+            case RESISTANCE -> o.print(json ? Json.write(r.resistances()) + "\n"
+                    : RigText.resistances(r.resistances(), r.labels()));
+            case INSULATION -> o.print(json ? Json.write(r.insulation()) + "\n"
+                    : RigText.insulation(r.insulation(), r.labels()));
+            default -> {
+                if (json) {
+                    o.println(Json.write(r.capture().metadata()));
+                } else {
+                    o.print(RigText.capture(r.capture()));
                 }
-                case INSULATION -> {
-                    int v = volts == null ? 500 : (int) Math.round(volts);
-                    List<Integer> which = leads;
-                    if (which.isEmpty()) {
-                        which = new ArrayList<>();
-                        for (int a = 1; a <= c.info().leads(); a++) {
-                            which.add(a);
-                        }
-                    }
-                    List<InsulationReading> rs = new ArrayList<>();
-                    for (int lead : which) {
-                        rs.add(c.insulation(lead, v, seconds == null ? 60 : seconds));
-                    }
-                    o.print(json ? Json.write(rs) + "\n" : RigText.insulation(rs, labels));
+                if (r.saved() != null) {
+                    (json ? spec.commandLine().getErr() : o).println("saved " + r.saved());
                 }
-                case STEP_RESPONSE -> {
-                    if (pairs.size() != 1) {
-                        throw new UsageException("step-response needs exactly one --pair A-B");
-                    }
-                    RigCapture cap;
-                    try (RigCli.Bar bar = new RigCli.Bar("step", spec.commandLine().getErr(), quiet)) {
-                        cap = c.stepResponse(pairs.get(0)[0], pairs.get(0)[1], volts == null ? 2.0 : volts, ms,
-                                rateHz == null ? 50_000 : rateHz, bar);
-                    }
-                    report(o, cap, null);
-                }
-                case BACK_EMF -> {
-                    List<int[]> ps = pairs.isEmpty() ? List.of(new int[] {1, 2}) : pairs;
-                    RigCapture cap;
-                    try (RigCli.Bar bar = new RigCli.Bar("back-emf", spec.commandLine().getErr(), quiet)) {
-                        cap = c.backEmf(ps, seconds == null ? 2.0 : seconds, rateHz == null ? 20_000 : rateHz, bar);
-                    }
-                    report(o, cap, null);
-                }
-                default -> throw new IllegalStateException(k.toString());
             }
         }
         o.flush();
         return ExitCode.OK;
-    }
-
-    private void report(PrintWriter o, RigCapture cap, org.lodestep.rig.SweepPlan plan) throws Exception {
-        if (json) {
-            o.println(Json.write(cap.metadata()));
-        } else {
-            o.print(RigText.capture(cap));
-        }
-        if (out != null) {
-            Path saved = RigCaptureFiles.save(cap, out, plan);
-            (json ? spec.commandLine().getErr() : o).println("saved " + saved);
-        }
     }
 
     private boolean confirmAtConsole(int v) {

@@ -201,8 +201,9 @@ public final class ResonanceHtml {
     }
 
     /**
-     * The report of a ring-down fit: the measured response and the fitted decay envelope
-     * ±A·e^(−σ(t − t0)) around the settled value (the fit's own model, evaluated for drawing).
+     * The report of a ring-down fit: the measured response, the fitted damped oscillation and its decay envelope
+     * around the settled value, as the fit result evaluates them ({@link RingDownResult#fittedAt},
+     * {@link RingDownResult#upperEnvelopeAt}, {@link RingDownResult#lowerEnvelopeAt}).
      */
     public static HtmlReport ringDown(String source, String channel, String unit, double[] timeS, double[] x,
                                       RingDownResult r) {
@@ -212,27 +213,31 @@ public final class ResonanceHtml {
                 .meta("Fitted from", String.format(Locale.ROOT, "t = %.4f s, %.1f periods", r.startTimeS(),
                         r.periodsFitted()));
         boolean good = r.rSquared() >= 0.9;
+        List<Double> risky = r.riskyRatesFullStepsPerS(3);
         b.verdict(good ? Status.PASS : Status.WARN, String.format(Locale.ROOT,
                 "Natural frequency %.1f Hz, damping ratio %.3f", r.naturalFrequencyHz(), r.dampingRatio()),
                 good ? String.format(Locale.ROOT, "Low-speed resonance expected near %.0f, %.0f and %.0f full steps/s.",
-                        r.naturalFrequencyHz(), r.naturalFrequencyHz() / 2, r.naturalFrequencyHz() / 3)
+                        risky.get(0), risky.get(1), risky.get(2))
                         : "The fit is poor (R\u00B2 below 0.9): the response is not a single damped oscillation.");
         b.safety(SafetyNote.ENERGISED_COILS);
         double[] env = new double[timeS.length];
         double[] envLow = new double[timeS.length];
+        double[] curve = new double[timeS.length];
         for (int i = 0; i < timeS.length; i++) {
-            double dt = timeS[i] - r.startTimeS();
-            double a = dt >= 0 ? r.amplitude() * Math.exp(-r.decayRatePerS() * dt) : Double.NaN;
-            env[i] = r.offset() + a;
-            envLow[i] = r.offset() - a;
+            env[i] = r.upperEnvelopeAt(timeS[i]);
+            envLow[i] = r.lowerEnvelopeAt(timeS[i]);
+            curve[i] = r.fittedAt(timeS[i]);
         }
         String fit = String.format(Locale.ROOT, "fitted envelope: f\u2099 %.1f Hz, \u03B6 %.3f", r.naturalFrequencyHz(),
                 r.dampingRatio());
         b.section("Response and fit");
         b.figure(XyChart.builder("", "time (s)", channel + " (" + u + ")")
                 .points("measured", timeS, x).line(fit, timeS, env).sameAsPrevious(timeS, envLow)
-                .describe("Measured ring-down with the fitted exponential envelope drawn over it.").build().toSvg(),
-                "The measured response (points, or a thin line when dense) and the fitted decay envelope (dashed).");
+                .line("fitted damped oscillation", timeS, curve)
+                .describe("Measured ring-down with the fitted damped oscillation and its exponential envelope drawn"
+                        + " over it.").build().toSvg(),
+                "The measured response (points, or a thin line when dense), the fitted decay envelope and the fitted"
+                        + " damped oscillation, from the fitted stretch on.");
         Map<String, String> facts = new LinkedHashMap<>();
         facts.put("Natural frequency", String.format(Locale.ROOT, "%.2f Hz", r.naturalFrequencyHz()));
         facts.put("Damped frequency", String.format(Locale.ROOT, "%.2f Hz", r.dampedFrequencyHz()));

@@ -40,7 +40,7 @@ public final class ResonanceJson {
         m.put("full_steps_per_rev", u.fullStepsPerRev());
         m.put("travel_mm_per_rev", u.travelMmPerRev());
         m.put("segments", r.segments());
-        m.put("psd_peak_hz", r.psd().frequencyHz(r.psd().peakBin(r.psd().binHz() * 2)));
+        m.put("psd_peak_hz", r.psdPeakHz());
         List<Map<String, Object>> bands = new ArrayList<>();
         for (ResonanceBand b : r.bands()) {
             Map<String, Object> j = new LinkedHashMap<>();
@@ -146,6 +146,7 @@ public final class ResonanceJson {
         m.put("start_time_s", r.startTimeS());
         m.put("fitted_duration_s", r.fittedDurationS());
         m.put("periods_fitted", r.periodsFitted());
+        m.put("phase_rad", r.phaseRad());
         return Json.write(m);
     }
 

@@ -104,8 +104,8 @@ public final class ResonanceText {
                     + " figures as rough.");
         }
         out.println("  Low-speed resonance is expected near full-step rates of f_n, f_n/2, f_n/3:");
-        out.printf(Locale.ROOT, "  %.1f, %.1f, %.1f full steps/s%n", r.naturalFrequencyHz(),
-                r.naturalFrequencyHz() / 2, r.naturalFrequencyHz() / 3);
+        java.util.List<Double> risky = r.riskyRatesFullStepsPerS(3);
+        out.printf(Locale.ROOT, "  %.1f, %.1f, %.1f full steps/s%n", risky.get(0), risky.get(1), risky.get(2));
     }
 
     public static void prediction(PrintWriter out, Prediction p, RateUnits u) {

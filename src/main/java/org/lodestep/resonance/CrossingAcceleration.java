@@ -7,7 +7,7 @@ package org.lodestep.resonance;
  * <p>Common practice (no published source): a lightly damped resonance grows over roughly Q periods, so crossing in
  * fewer periods than that keeps it small. The number of periods is the user's choice; 5 is a cautious default.
  */
-public final class CrossingAcceleration {
+final class CrossingAcceleration {
     private CrossingAcceleration() {
     }
 

@@ -7,7 +7,7 @@ package org.lodestep.resonance;
  * <p>Source: S. S. Rao, <i>Mechanical Vibrations</i>, 5th ed., Prentice Hall 2011, ch. 2 (free vibration with viscous
  * damping): δ = (1/n)·ln(x_0/x_n); ζ = δ/√(4π² + δ²); ω_d = ω_n·√(1 - ζ²); envelope e^(-ζ·ω_n·t); Q = 1/(2ζ).
  */
-public final class DampedOscillation {
+final class DampedOscillation {
     private DampedOscillation() {
     }
 
@@ -42,5 +42,16 @@ public final class DampedOscillation {
     /** Quality factor 1/(2ζ). */
     public static double qualityFactor(double dampingRatio) {
         return 1 / (2 * dampingRatio);
+    }
+
+    /** Envelope A·e^(-σ·t) of a free damped oscillation t seconds after its start (σ = ζ·ω_n). */
+    public static double envelope(double amplitude, double decayRatePerS, double t) {
+        return amplitude * Math.exp(-decayRatePerS * t);
+    }
+
+    /** Displacement A·e^(-σ·t)·cos(ω_d·t + φ) + c of a free damped oscillation t seconds after its start. */
+    public static double displacement(double amplitude, double decayRatePerS, double dampedRadPerS, double phaseRad,
+                                      double offset, double t) {
+        return envelope(amplitude, decayRatePerS, t) * Math.cos(dampedRadPerS * t + phaseRad) + offset;
     }
 }

@@ -10,7 +10,7 @@ import java.util.List;
  * <p>Source: P. P. Acarnley, <i>Stepping Motors: A Guide to Theory and Practice</i>, 4th ed., IEE 2002, section 4.3
  * (mechanical resonances). Resonance is strongest at k = 1 and weaker as k grows.
  */
-public final class LowSpeedResonance {
+final class LowSpeedResonance {
     private LowSpeedResonance() {
     }
 

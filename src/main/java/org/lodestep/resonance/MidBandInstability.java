@@ -8,7 +8,7 @@ package org.lodestep.resonance;
  * With four full steps per electrical cycle the full-step rate there is 4·(R/L)/(2π). This is the centre of a
  * region whose width depends on the load and the drive, not a sharp limit.
  */
-public final class MidBandInstability {
+final class MidBandInstability {
     private MidBandInstability() {
     }
 

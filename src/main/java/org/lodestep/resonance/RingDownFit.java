@@ -198,6 +198,9 @@ public final class RingDownFit {
         }
         double sigma = p[1];
         double omegaD = Math.abs(p[2]);
+        if (p[2] < 0) {
+            phase = -phase; // cos(-ω·t + φ) = cos(ω·t - φ): the same curve with a positive frequency
+        }
         if (!(sigma > 0)) {
             throw new IllegalArgumentException("the fitted oscillation does not decay (decay rate " + sigma
                     + " 1/s): not a ring-down");
@@ -208,7 +211,7 @@ public final class RingDownFit {
         double duration = m * dt;
         return new RingDownResult(omegaN / (2 * Math.PI), omegaD / (2 * Math.PI), zeta, sigma, amplitude, p[4],
                 DampedOscillation.qualityFactor(zeta), 1 - ssr / sst, opt.getRMS(), startTimeS + start * dt,
-                duration, duration * omegaD / (2 * Math.PI));
+                duration, duration * omegaD / (2 * Math.PI), phase);
     }
 
     /** Index of the first sample after {@code from} on the other side of {@code level}, or x.length. */

@@ -1,12 +1,14 @@
 package org.lodestep.resonance;
 
 /**
- * A damped sinusoid fitted to a ring-down: x(t) = A·e^(-σt)·cos(ω_d·t + φ) + c, with t from {@code startTimeS}.
+ * A ring-down measured cycle by cycle, with a damped sinusoid x(t) = A·e^(-σt)·cos(ω_d·t + φ) + c fitted to its
+ * settled tail (t from {@code startTimeS}). With a backbone, the natural frequency and damping ratio are the
+ * small-signal values extrapolated to zero swing; σ, ω_d, A, φ and c stay those of the tail's fit, which draw it.
  *
- * @param naturalFrequencyHz undamped natural frequency f_n = √(σ² + ω_d²)/2π, Hz
- * @param dampedFrequencyHz  damped frequency f_d = ω_d/2π, Hz
- * @param dampingRatio       ζ = σ/ω_n, 0 ... 1
- * @param decayRatePerS      envelope decay rate σ = ζ·ω_n, 1/s
+ * @param naturalFrequencyHz small-signal undamped natural frequency f_n, Hz (without a backbone √(σ² + ω_d²)/2π)
+ * @param dampedFrequencyHz  damped frequency f_d = ω_d/2π of the fitted tail, Hz
+ * @param dampingRatio       small-signal ζ, 0 ... 1 (without a backbone σ/ω_n)
+ * @param decayRatePerS      envelope decay rate σ of the fitted tail, 1/s
  * @param amplitude          A, in signal units
  * @param offset             c, the settled value, in signal units
  * @param qualityFactor      Q = 1/(2ζ)
@@ -15,6 +17,7 @@ package org.lodestep.resonance;
  * @param startTimeS         time of the first fitted sample (the largest excursion), s
  * @param fittedDurationS    length of the fitted stretch, s
  * @param periodsFitted      damped periods within the fitted stretch
+ * @param phaseRad           φ, rad, at {@code startTimeS}
  * @param naturalFrequencyErrorHz standard error of the small-signal natural frequency, Hz (NaN without a backbone)
  * @param dampingRatioError  standard error of the small-signal damping ratio (NaN without a backbone)
  * @param largeSwingFrequencyHz frequency of the first, largest cycle, Hz (NaN without a backbone)
@@ -26,9 +29,9 @@ package org.lodestep.resonance;
 public record RingDownResult(double naturalFrequencyHz, double dampedFrequencyHz, double dampingRatio,
                              double decayRatePerS, double amplitude, double offset, double qualityFactor,
                              double rSquared, double rmsResidual, double startTimeS, double fittedDurationS,
-                             double periodsFitted, double naturalFrequencyErrorHz, double dampingRatioError,
-                             double largeSwingFrequencyHz, double wholeRingFrequencyHz, double wholeRingRSquared,
-                             java.util.List<BackbonePoint> backbone) {
+                             double periodsFitted, double phaseRad, double naturalFrequencyErrorHz,
+                             double dampingRatioError, double largeSwingFrequencyHz, double wholeRingFrequencyHz,
+                             double wholeRingRSquared, java.util.List<BackbonePoint> backbone) {
     public RingDownResult {
         backbone = java.util.List.copyOf(backbone);
         Require.positive(naturalFrequencyHz, "natural frequency", "Hz");
@@ -44,9 +47,9 @@ public record RingDownResult(double naturalFrequencyHz, double dampedFrequencyHz
     /** A fit without a backbone (too few cycles above the noise). */
     RingDownResult(double naturalFrequencyHz, double dampedFrequencyHz, double dampingRatio, double decayRatePerS,
                    double amplitude, double offset, double qualityFactor, double rSquared, double rmsResidual,
-                   double startTimeS, double fittedDurationS, double periodsFitted) {
+                   double startTimeS, double fittedDurationS, double periodsFitted, double phaseRad) {
         this(naturalFrequencyHz, dampedFrequencyHz, dampingRatio, decayRatePerS, amplitude, offset, qualityFactor,
-                rSquared, rmsResidual, startTimeS, fittedDurationS, periodsFitted, Double.NaN, Double.NaN,
+                rSquared, rmsResidual, startTimeS, fittedDurationS, periodsFitted, phaseRad, Double.NaN, Double.NaN,
                 Double.NaN, naturalFrequencyHz, rSquared, java.util.List.of());
     }
 
@@ -54,10 +57,37 @@ public record RingDownResult(double naturalFrequencyHz, double dampedFrequencyHz
     RingDownResult withBackbone(double smallSignalHz, double smallSignalErrorHz, double smallSignalZeta,
                                 double zetaError, double largeSwingHz, double wholeHz, double wholeR2,
                                 java.util.List<BackbonePoint> cycles) {
-        double fd = smallSignalHz * Math.sqrt(1 - smallSignalZeta * smallSignalZeta);
-        return new RingDownResult(smallSignalHz, fd, smallSignalZeta, smallSignalZeta * 2 * Math.PI * smallSignalHz,
-                amplitude, offset, DampedOscillation.qualityFactor(smallSignalZeta), rSquared, rmsResidual,
-                startTimeS, fittedDurationS, periodsFitted, smallSignalErrorHz, zetaError, largeSwingHz, wholeHz,
+        // the tail's own σ, ω_d and φ stay: they draw the fitted curve
+        return new RingDownResult(smallSignalHz, dampedFrequencyHz, smallSignalZeta, decayRatePerS, amplitude,
+                offset, DampedOscillation.qualityFactor(smallSignalZeta), rSquared, rmsResidual, startTimeS,
+                fittedDurationS, periodsFitted, phaseRad, smallSignalErrorHz, zetaError, largeSwingHz, wholeHz,
                 wholeR2, cycles);
+    }
+
+    /** The fitted curve x(t) at time t (s, on the capture's clock); NaN before the fitted stretch starts. */
+    public double fittedAt(double timeS) {
+        double dt = timeS - startTimeS;
+        return dt < 0 ? Double.NaN : DampedOscillation.displacement(amplitude, decayRatePerS,
+                2 * Math.PI * dampedFrequencyHz, phaseRad, offset, dt);
+    }
+
+    /** Upper decay envelope c + A·e^(-σ(t - t0)) at time t; NaN before the fitted stretch starts. */
+    public double upperEnvelopeAt(double timeS) {
+        double dt = timeS - startTimeS;
+        return dt < 0 ? Double.NaN : offset + DampedOscillation.envelope(amplitude, decayRatePerS, dt);
+    }
+
+    /** Lower decay envelope c - A·e^(-σ(t - t0)) at time t; NaN before the fitted stretch starts. */
+    public double lowerEnvelopeAt(double timeS) {
+        double dt = timeS - startTimeS;
+        return dt < 0 ? Double.NaN : offset - DampedOscillation.envelope(amplitude, decayRatePerS, dt);
+    }
+
+    /**
+     * Full-step rates where low-speed resonance is expected from this natural frequency: f_n/k for k = 1 ... count
+     * ({@link LowSpeedResonance}), highest first.
+     */
+    public java.util.List<Double> riskyRatesFullStepsPerS(int count) {
+        return LowSpeedResonance.riskyRatesFullStepsPerS(naturalFrequencyHz, count);
     }
 }

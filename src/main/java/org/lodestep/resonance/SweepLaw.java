@@ -1,5 +1,7 @@
 package org.lodestep.resonance;
 
+import org.lodestep.sample.SweepShape;
+
 /**
  * How the commanded full-step rate changed with time during a sweep, when it was programmed rather than recorded.
  *
@@ -7,24 +9,18 @@ package org.lodestep.resonance;
  * measured from the start of the capture; outside 0 ... T the rate is undefined (NaN) and those samples are not
  * analysed.
  *
- * @param shape                  linear or logarithmic
+ * @param shape                  linear or logarithmic ({@link SweepShape}, the type a capture records its sweep in)
  * @param startFullStepsPerS     rate at t = 0, full steps/s: zero or more for a linear sweep, positive for a log one
  * @param endFullStepsPerS       rate at t = T, full steps/s, positive and different from the start
  * @param durationS              sweep duration T, s, positive
  */
-public record SweepLaw(Shape shape, double startFullStepsPerS, double endFullStepsPerS, double durationS) {
-
-    /** Shape of the programmed rate ramp. */
-    public enum Shape {
-        LINEAR,
-        LOG
-    }
+public record SweepLaw(SweepShape shape, double startFullStepsPerS, double endFullStepsPerS, double durationS) {
 
     public SweepLaw {
         if (shape == null) {
             throw new IllegalArgumentException("sweep shape is missing (linear or log)");
         }
-        if (shape == Shape.LOG || startFullStepsPerS != 0) {
+        if (shape == SweepShape.LOG || startFullStepsPerS != 0) {
             Require.positive(startFullStepsPerS, "sweep start rate", "full steps/s");
         }
         Require.positive(endFullStepsPerS, "sweep end rate", "full steps/s");
@@ -41,7 +37,7 @@ public record SweepLaw(Shape shape, double startFullStepsPerS, double endFullSte
             return Double.NaN;
         }
         double u = timeS / durationS;
-        return shape == Shape.LINEAR
+        return shape == SweepShape.LINEAR
                 ? startFullStepsPerS + (endFullStepsPerS - startFullStepsPerS) * u
                 : startFullStepsPerS * Math.pow(endFullStepsPerS / startFullStepsPerS, u);
     }
@@ -54,7 +50,7 @@ public record SweepLaw(Shape shape, double startFullStepsPerS, double endFullSte
         if (!(timeS >= 0 && timeS <= durationS)) {
             return Double.NaN;
         }
-        if (shape == Shape.LINEAR) {
+        if (shape == SweepShape.LINEAR) {
             return startFullStepsPerS * timeS
                     + (endFullStepsPerS - startFullStepsPerS) * timeS * timeS / (2 * durationS);
         }
@@ -65,7 +61,7 @@ public record SweepLaw(Shape shape, double startFullStepsPerS, double endFullSte
     /** Rate of change of the commanded rate at time t, in full steps/s² (the sweep's acceleration). */
     public double accelerationFullStepsPerS2At(double timeS) {
         double r = rateFullStepsPerSAt(timeS);
-        return shape == Shape.LINEAR
+        return shape == SweepShape.LINEAR
                 ? (endFullStepsPerS - startFullStepsPerS) / durationS
                 : r * Math.log(endFullStepsPerS / startFullStepsPerS) / durationS;
     }

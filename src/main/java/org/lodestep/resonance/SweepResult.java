@@ -50,4 +50,9 @@ public record SweepResult(List<ResponsePoint> response, List<ResonanceBand> band
         }
         return best;
     }
+
+    /** Frequency of the whole-capture PSD's strongest bin above twice the bin width (clear of DC), Hz. */
+    public double psdPeakHz() {
+        return psd.frequencyHz(psd.peakBin(psd.binHz() * 2));
+    }
 }

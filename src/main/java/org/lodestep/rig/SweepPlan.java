@@ -1,5 +1,7 @@
 package org.lodestep.rig;
 
+import org.lodestep.sample.SweepShape;
+
 /**
  * A step-rate sweep: the rate rises (or falls) linearly from {@code fromFullStepsPerS} to {@code toFullStepsPerS}
  * over {@code seconds}, at 1/{@code microsteps} resolution, sampled at {@code sampleRateHz}.
@@ -21,5 +23,10 @@ public record SweepPlan(double fromFullStepsPerS, double toFullStepsPerS, double
         if (!(sampleRateHz > 0) || !Double.isFinite(sampleRateHz)) {
             throw new IllegalArgumentException("sample rate must be positive, got " + sampleRateHz + " Hz");
         }
+    }
+
+    /** The rig ramps the rate linearly in time (firmware-protocol.md, the sweep command). */
+    public SweepShape shape() {
+        return SweepShape.LINEAR;
     }
 }

@@ -1,5 +1,6 @@
 package org.lodestep.capture;
 
+import org.lodestep.sample.SweepShape;
 import org.lodestep.sample.SampleStream;
 import org.lodestep.sample.InputFormatException;
 
@@ -39,7 +40,7 @@ class CaptureWriterTest {
 
     static CaptureInfo info(double rateHz) {
         return new CaptureInfo("Kestrel bench rig KB-2 #0042", "1.3.0", "gantry-x", "HS-23-00917", "0.1.0", START,
-                rateHz, 0.0, CHANNELS, SweepProfile.of(SweepProfile.Law.LINEAR, 50, 1500, 20, 16),
+                rateHz, 0.0, CHANNELS, SweepProfile.of(SweepShape.LINEAR, 50, 1500, 20, 16),
                 Map.of("axis", "x", "operator", "R. Okafor"));
     }
 
@@ -95,7 +96,7 @@ class CaptureWriterTest {
                 assertEquals("R. Okafor", s.metadata().get("operator"));
                 assertEquals("true", s.metadata().get("complete"));
                 assertEquals("16", s.metadata().get("microsteps"));
-                assertEquals(SweepProfile.of(SweepProfile.Law.LINEAR, 50, 1500, 20, 16),
+                assertEquals(SweepProfile.of(SweepShape.LINEAR, 50, 1500, 20, 16),
                         SweepProfile.fromMetadata(s.metadata(), s.source()));
                 double[][] back = TestStreams.readAll(s, 333);
                 double[][] want = block(0, n);

@@ -1,5 +1,6 @@
 package org.lodestep.capture;
 
+import org.lodestep.sample.SweepShape;
 import org.lodestep.sample.InputFormatException;
 import static org.junit.jupiter.api.Assertions.assertEquals;
 import static org.junit.jupiter.api.Assertions.assertNull;
@@ -17,7 +18,7 @@ class SweepProfileTest {
     void readsLawFromMetadataWithOptionalParts() throws Exception {
         SweepProfile p = SweepProfile.fromMetadata(Map.of("sweep", "LOG", "sweep_start_full_steps_per_s", "20",
                 "sweep_end_full_steps_per_s", "2000,5"), "f.csv");
-        assertEquals(new SweepProfile(SweepProfile.Law.LOG, 20, 2000.5, OptionalDouble.empty(), OptionalInt.empty()),
+        assertEquals(new SweepProfile(SweepShape.LOG, 20, 2000.5, OptionalDouble.empty(), OptionalInt.empty()),
                 p);
         assertNull(SweepProfile.fromMetadata(Map.of("microsteps", "8"), "f.csv"));
         assertEquals(p, SweepProfile.fromMetadata(p.toMetadata(), "f.csv"));

@@ -52,6 +52,34 @@ class RingDownFitTest {
     }
 
     @Test
+    void fittedCurveAndEnvelopeReproduceTheAnalyticSignal() {
+        // The noisy case's model without noise: x = 3.0 - e^(-ζω_n t)·sin(ω_d t + 1.2) for t >= 20 ms (S. S. Rao,
+        // Mechanical Vibrations, 5th ed., Prentice Hall 2011, ch. 2, free vibration with viscous damping). The result's
+        // own evaluators must give the signal back from the fitted start on, and bound it by its decay envelope.
+        double fs = 10_000;
+        double wn = 2 * Math.PI * 180;
+        double zeta = 0.08;
+        double wd = wn * Math.sqrt(1 - zeta * zeta);
+        double[] x = new double[3000];
+        for (int i = 0; i < x.length; i++) {
+            double t = i / fs - 0.02;
+            x[i] = 3.0 + (t < 0 ? 0 : -Math.exp(-zeta * wn * t) * Math.sin(wd * t + 1.2));
+        }
+        RingDownResult r = RingDownFit.fit(x, fs, 1.0);
+        assertTrue(Double.isNaN(r.fittedAt(r.startTimeS() - 1e-3)), "no curve before the fitted stretch");
+        int first = (int) Math.ceil((r.startTimeS() - 1.0) * fs);
+        for (int i = first; i < first + 500; i++) {
+            double t = 1.0 + i / fs;
+            assertEquals(x[i], r.fittedAt(t), 1e-3, "t = " + t);
+            assertTrue(x[i] <= r.upperEnvelopeAt(t) + 1e-3 && x[i] >= r.lowerEnvelopeAt(t) - 1e-3, "t = " + t);
+        }
+        // At the start the envelope is the fitted amplitude about the settled value.
+        assertEquals(r.offset() + r.amplitude(), r.upperEnvelopeAt(r.startTimeS()), 1e-12);
+        // f_n/k, highest first (Acarnley 2002, section 4.3)
+        assertEquals(r.naturalFrequencyHz() / 3, r.riskyRatesFullStepsPerS(3).get(2), 1e-12);
+    }
+
+    @Test
     void agreesWithThePredictedNaturalFrequencyOfASimulatedSingleStep() {
         // The simulator's small-angle f_n is (1/2π)·√(N_r·T_h/J) (Acarnley 2002, ch. 4; REFERENCE-CHECKS item 11):
         // a single full step is a large swing, so the sinusoidal torque curve softens it; agreement within 8 %.

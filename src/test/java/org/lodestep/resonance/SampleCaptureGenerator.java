@@ -1,5 +1,6 @@
 package org.lodestep.resonance;
 
+import org.lodestep.sample.SweepShape;
 import java.io.IOException;
 import java.nio.ByteBuffer;
 import java.nio.ByteOrder;
@@ -43,7 +44,7 @@ public final class SampleCaptureGenerator {
     /** Accelerometer on the pulley and the driver's step line, full stepping, linear sweep 30 → 400 in 16 s. */
     static void sweepCsv(Path file) throws IOException {
         double fs = 3000;
-        SweepLaw law = new SweepLaw(SweepLaw.Shape.LINEAR, 30, 400, 16);
+        SweepLaw law = new SweepLaw(SweepShape.LINEAR, 30, 400, 16);
         double[][] sig = rotor().run(law::rateFullStepsPerSAt, fs, (int) (fs * 16));
         Random noise = new Random(41);
         StringBuilder b = new StringBuilder();
@@ -62,7 +63,7 @@ public final class SampleCaptureGenerator {
     /** A phone on the frame: 8 kHz, 16-bit mono, log sweep 40 → 600 in 24 s, room noise; no metadata. */
     static void phoneWav(Path file) throws IOException {
         int fs = 8000;
-        SweepLaw law = new SweepLaw(SweepLaw.Shape.LOG, 40, 600, 24);
+        SweepLaw law = new SweepLaw(SweepShape.LOG, 40, 600, 24);
         double[] a = rotor().run(law::rateFullStepsPerSAt, fs, fs * 24)[0];
         double max = 0;
         for (double v : a) {

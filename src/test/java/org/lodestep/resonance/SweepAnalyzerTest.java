@@ -1,5 +1,6 @@
 package org.lodestep.resonance;
 
+import org.lodestep.sample.SweepShape;
 import static org.junit.jupiter.api.Assertions.assertEquals;
 import static org.junit.jupiter.api.Assertions.assertNotNull;
 import static org.junit.jupiter.api.Assertions.assertThrows;
@@ -27,7 +28,7 @@ class SweepAnalyzerTest {
 
     @Test
     void strongestBandOfASimulatedSweepContainsTheNaturalFrequency() {
-        SweepLaw law = new SweepLaw(SweepLaw.Shape.LINEAR, 30, 400, 20);
+        SweepLaw law = new SweepLaw(SweepShape.LINEAR, 30, 400, 20);
         RotorSimulator sim = rotor(1);
         double[][] sig = sim.run(law::rateFullStepsPerSAt, FS, (int) (FS * 20));
         SweepAnalyzer a = SweepAnalyzer.programmed(SweepSettings.forSampleRate(FS), FS, law);
@@ -47,7 +48,7 @@ class SweepAnalyzerTest {
 
     @Test
     void pulseChannelGivesTheSameBandAsTheProgrammedLaw() {
-        SweepLaw law = new SweepLaw(SweepLaw.Shape.LOG, 40, 400, 16);
+        SweepLaw law = new SweepLaw(SweepShape.LOG, 40, 400, 16);
         RotorSimulator sim = rotor(1);
         double[][] sig = sim.run(law::rateFullStepsPerSAt, FS, (int) (FS * 16));
         SweepAnalyzer a = SweepAnalyzer.fromPulses(SweepSettings.forSampleRate(FS), FS, 1);
@@ -66,7 +67,7 @@ class SweepAnalyzerTest {
 
     @Test
     void subharmonicBandIsClassifiedAtHalfTheNaturalFrequency() {
-        SweepLaw law = new SweepLaw(SweepLaw.Shape.LINEAR, 30, 400, 20);
+        SweepLaw law = new SweepLaw(SweepShape.LINEAR, 30, 400, 20);
         RotorSimulator sim = rotor(1);
         double[][] sig = sim.run(law::rateFullStepsPerSAt, FS, (int) (FS * 20));
         SweepAnalyzer a = SweepAnalyzer.programmed(SweepSettings.forSampleRate(FS), FS, law);
@@ -82,7 +83,7 @@ class SweepAnalyzerTest {
         // one accumulator per occupied 1 % rate bin and a spectrogram capped at 400 columns, whatever the length.
         double fs = 8000;
         double duration = 1200;
-        SweepLaw law = new SweepLaw(SweepLaw.Shape.LOG, 50, 1500, duration);
+        SweepLaw law = new SweepLaw(SweepShape.LOG, 50, 1500, duration);
         SweepAnalyzer a = SweepAnalyzer.programmed(SweepSettings.forSampleRate(fs), fs, law);
         double[] block = new double[8192];
         long n = (long) (fs * duration);
@@ -106,7 +107,7 @@ class SweepAnalyzerTest {
 
     @Test
     void sweepLawThatMissesTheCaptureIsReported() {
-        SweepLaw law = new SweepLaw(SweepLaw.Shape.LINEAR, 30, 400, 0.01);
+        SweepLaw law = new SweepLaw(SweepShape.LINEAR, 30, 400, 0.01);
         SweepAnalyzer a = SweepAnalyzer.programmed(SweepSettings.forSampleRate(FS), FS, law);
         a.feed(new double[8000], null, 0, 8000);
         IllegalArgumentException e = assertThrows(IllegalArgumentException.class,
@@ -116,7 +117,7 @@ class SweepAnalyzerTest {
 
     @Test
     void captureShorterThanOneSegmentIsReported() {
-        SweepLaw law = new SweepLaw(SweepLaw.Shape.LINEAR, 30, 400, 10);
+        SweepLaw law = new SweepLaw(SweepShape.LINEAR, 30, 400, 10);
         SweepAnalyzer a = SweepAnalyzer.programmed(SweepSettings.forSampleRate(FS), FS, law);
         a.feed(new double[100], null, 0, 100);
         IllegalArgumentException e = assertThrows(IllegalArgumentException.class,

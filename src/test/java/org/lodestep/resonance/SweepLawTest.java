@@ -1,5 +1,6 @@
 package org.lodestep.resonance;
 
+import org.lodestep.sample.SweepShape;
 import static org.junit.jupiter.api.Assertions.assertEquals;
 import static org.junit.jupiter.api.Assertions.assertThrows;
 import static org.junit.jupiter.api.Assertions.assertTrue;
@@ -11,8 +12,8 @@ class SweepLawTest {
     @Test
     void linearAndLogLawsPassThroughTheirEndsAndMiddles() {
         // Definitions: linear midpoint is the arithmetic mean, logarithmic midpoint the geometric mean.
-        SweepLaw lin = new SweepLaw(SweepLaw.Shape.LINEAR, 100, 900, 10);
-        SweepLaw log = new SweepLaw(SweepLaw.Shape.LOG, 100, 900, 10);
+        SweepLaw lin = new SweepLaw(SweepShape.LINEAR, 100, 900, 10);
+        SweepLaw log = new SweepLaw(SweepShape.LOG, 100, 900, 10);
         assertEquals(500, lin.rateFullStepsPerSAt(5), 1e-9);
         assertEquals(300, log.rateFullStepsPerSAt(5), 1e-9);
         assertEquals(900, log.rateFullStepsPerSAt(10), 1e-9);
@@ -23,7 +24,7 @@ class SweepLawTest {
     @Test
     void rejectsASweepThatDoesNotMove() {
         IllegalArgumentException e = assertThrows(IllegalArgumentException.class,
-                () -> new SweepLaw(SweepLaw.Shape.LINEAR, 100, 100, 10));
+                () -> new SweepLaw(SweepShape.LINEAR, 100, 100, 10));
         assertTrue(e.getMessage().contains("dwell"), e.getMessage());
     }
 }

@@ -47,6 +47,25 @@ class RotorDynamicsTest {
     }
 
     @Test
+    void oraclesNaturalFrequencyAgreesWithTheEnginesFormulaAndItsOwnIntegratedMotion() {
+        // The virtual rig is an independent oracle (package-info): its closed form and the engine's
+        // motor.NaturalFrequency both state f_n = (1/2π)·√(N_r·T_h/J) (P. P. Acarnley, Stepping Motors: A Guide to
+        // Theory and Practice, 4th ed., IEE 2002, ch. 4); they must agree to rounding, and the rig's integrated
+        // undamped motion after a 1/64 microstep (swing ~1.4 electrical degrees, sin x ≈ x) must ring at it.
+        double[][] cases = {{5.4e-6, 0.4, 50}, {1.08e-5, 0.4, 50}, {5.4e-6, 0.4, 100}, {3.0e-5, 0.3, 50},
+            {2.2e-4, 1.9, 50}};
+        for (double[] c : cases) {
+            RotorDynamics d = new RotorDynamics(c[0], 0, c[1], 0, (int) c[2], 64);
+            double engine = org.lodestep.motor.NaturalFrequency.naturalHz(c[1], (int) c[2], c[0]);
+            assertEquals(engine, d.naturalFrequencyHz(), engine * 1e-12, java.util.Arrays.toString(c));
+            double rate = Math.max(100_000, engine * 300);
+            RotorDynamics.Trace t = d.run(s -> s >= 0.001 ? 1.0 / 64 : 0, 0.001 + 15 / engine, rate, 1000);
+            double f = 1 / meanPeriodS(t.speedRadPerS(), rate, (int) (0.0012 * rate));
+            assertEquals(engine, f, engine * 2e-3, java.util.Arrays.toString(c));
+        }
+    }
+
+    @Test
     void rotorSettlesOnTheCommandedFullStepPositionWithDamping() {
         // one full step of a 50-tooth rotor is 1.8 degrees (item 1, Jones tutorial / Acarnley ch. 1)
         RotorDynamics d = new RotorDynamics(5.4e-6, 2e-3, 0.4, 0.02, 50, 1);

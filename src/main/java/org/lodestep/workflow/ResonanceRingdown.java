@@ -1,0 +1,105 @@
+package org.lodestep.workflow;
+
+import java.io.IOException;
+import java.nio.file.Path;
+import java.util.Arrays;
+import java.util.Objects;
+
+import org.lodestep.capture.Captures;
+import org.lodestep.resonance.RingDownFit;
+import org.lodestep.resonance.RingDownResult;
+import org.lodestep.sample.InputFormatException;
+import org.lodestep.sample.SampledSignal;
+
+/**
+ * Fits a damped oscillation to a single-step (or tap) response: picks the channel, cuts the time window, runs
+ * {@link RingDownFit} and hands back the fitted stretch with the fit, so a report draws both without refitting.
+ *
+ * <p>Errors: a window that selects no samples is an {@link IllegalArgumentException} (the caller's setting); a
+ * capture that holds no ring-down is an {@link InputFormatException} naming the source and channel.
+ */
+public final class ResonanceRingdown {
+    private ResonanceRingdown() {
+    }
+
+    /**
+     * @param channel channel to fit by name or header, or null for the first
+     * @param fromS   ignore samples before this time, s, or null
+     * @param toS     ignore samples after this time, s, or null
+     */
+    public record Settings(String channel, Double fromS, Double toS) {
+        public static final Settings DEFAULT = new Settings(null, null, null);
+    }
+
+    /**
+     * @param source  the capture's name
+     * @param channel the fitted channel's name
+     * @param unit    its unit ("" when none)
+     * @param timeS   time of each sample of the analysed window, s
+     * @param values  the analysed window, in the channel's unit
+     * @param fit     the fitted ring-down; its {@link RingDownResult#fittedAt} and envelope methods give the curves
+     */
+    public record Result(String source, String channel, String unit, double[] timeS, double[] values,
+                         RingDownResult fit) {
+        public Result {
+            Objects.requireNonNull(fit, "fit");
+            if (timeS.length != values.length) {
+                throw new IllegalArgumentException("time and values differ in length: " + timeS.length + " and "
+                        + values.length + " samples");
+            }
+            timeS = timeS.clone();
+            values = values.clone();
+        }
+
+        @Override
+        public double[] timeS() {
+            return timeS.clone();
+        }
+
+        @Override
+        public double[] values() {
+            return values.clone();
+        }
+    }
+
+    /** Reads a capture file (CSV, WAV or rig capture) and fits it. */
+    public static Result fit(Path file, Settings settings, Progress progress) throws IOException, InputFormatException {
+        progress.step("reading " + file);
+        return fit(Captures.readAll(file), settings, progress);
+    }
+
+    /** Fits a capture held in memory. */
+    public static Result fit(SampledSignal sig, Settings settings, Progress progress) throws InputFormatException {
+        String source = sig.source();
+        if (sig.channels().isEmpty()) {
+            throw new InputFormatException(source, InputFormatException.NO_LINE, null, null, "has no data channels");
+        }
+        int c = settings.channel() == null ? 0
+                : ResonanceSweep.index(sig.channels(), settings.channel(), source, "channel");
+        String name = sig.channels().get(c).name();
+        double[] x = sig.channel(c);
+        double fs = sig.sampleRateHz();
+        int from = settings.fromS() == null ? 0
+                : (int) Math.max(0, Math.ceil((settings.fromS() - sig.startTimeS()) * fs));
+        int to = settings.toS() == null ? x.length
+                : (int) Math.min(x.length, Math.floor((settings.toS() - sig.startTimeS()) * fs) + 1);
+        if (to <= from) {
+            throw new IllegalArgumentException("the time window (from-s/to-s) selects no samples of " + source
+                    + " (it runs from " + sig.startTimeS() + " s for " + x.length / fs + " s)");
+        }
+        double[] part = Arrays.copyOfRange(x, from, to);
+        double t0 = sig.startTimeS() + from / fs;
+        progress.step("fitting the ring-down of channel " + name);
+        RingDownResult r;
+        try {
+            r = RingDownFit.fit(part, fs, t0);
+        } catch (IllegalArgumentException e) {
+            throw ResonanceSweep.cannot(source, name, e);
+        }
+        double[] t = new double[part.length];
+        for (int i = 0; i < t.length; i++) {
+            t[i] = t0 + i / fs;
+        }
+        return new Result(source, name, sig.channels().get(c).unit(), t, part, r);
+    }
+}
