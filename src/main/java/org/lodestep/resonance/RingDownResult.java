@@ -3,12 +3,12 @@ package org.lodestep.resonance;
 /**
  * A ring-down measured cycle by cycle, with a damped sinusoid x(t) = A·e^(-σt)·cos(ω_d·t + φ) + c fitted to its
  * settled tail (t from {@code startTimeS}). With a backbone, the natural frequency and damping ratio are the
- * small-signal values extrapolated to zero swing; σ, ω_d, A, φ and c stay those of the tail's fit, which draw it.
+ * small-signal values extrapolated to zero swing, and σ and ω_d follow them; A, φ and c are the tail fit's.
  *
  * @param naturalFrequencyHz small-signal undamped natural frequency f_n, Hz (without a backbone √(σ² + ω_d²)/2π)
- * @param dampedFrequencyHz  damped frequency f_d = ω_d/2π of the fitted tail, Hz
+ * @param dampedFrequencyHz  damped frequency f_d = ω_d/2π, Hz
  * @param dampingRatio       small-signal ζ, 0 ... 1 (without a backbone σ/ω_n)
- * @param decayRatePerS      envelope decay rate σ of the fitted tail, 1/s
+ * @param decayRatePerS      envelope decay rate σ = ζ·ω_n, 1/s
  * @param amplitude          A, in signal units
  * @param offset             c, the settled value, in signal units
  * @param qualityFactor      Q = 1/(2ζ)
@@ -57,11 +57,12 @@ public record RingDownResult(double naturalFrequencyHz, double dampedFrequencyHz
     RingDownResult withBackbone(double smallSignalHz, double smallSignalErrorHz, double smallSignalZeta,
                                 double zetaError, double largeSwingHz, double wholeHz, double wholeR2,
                                 java.util.List<BackbonePoint> cycles) {
-        // the tail's own σ, ω_d and φ stay: they draw the fitted curve
-        return new RingDownResult(smallSignalHz, dampedFrequencyHz, smallSignalZeta, decayRatePerS, amplitude,
-                offset, DampedOscillation.qualityFactor(smallSignalZeta), rSquared, rmsResidual, startTimeS,
-                fittedDurationS, periodsFitted, phaseRad, smallSignalErrorHz, zetaError, largeSwingHz, wholeHz,
-                wholeR2, cycles);
+        // σ and ω_d follow the small-signal values (the tail's own differ by well under 1 %); A, φ, c stay the tail's
+        double fd = smallSignalHz * Math.sqrt(1 - smallSignalZeta * smallSignalZeta);
+        return new RingDownResult(smallSignalHz, fd, smallSignalZeta, smallSignalZeta * 2 * Math.PI * smallSignalHz,
+                amplitude, offset, DampedOscillation.qualityFactor(smallSignalZeta), rSquared, rmsResidual,
+                startTimeS, fittedDurationS, periodsFitted, phaseRad, smallSignalErrorHz, zetaError, largeSwingHz,
+                wholeHz, wholeR2, cycles);
     }
 
     /** The fitted curve x(t) at time t (s, on the capture's clock); NaN before the fitted stretch starts. */
