@@ -17,56 +17,56 @@ import java.util.function.DoubleUnaryOperator;
  * over each step. Outputs: tangential acceleration at a radius (g) with Gaussian noise, rotor and commanded angle,
  * phase currents, and a step-pulse channel (5 V for the first half of each pulse).
  */
-final class StepperSweepSimulator {
-    static final double G0 = 9.80665;
-    double inertiaKgM2 = 6.3e-5;
-    double holdingTorqueNm = 0.5;
-    double detentTorqueNm = 0;
-    double dampingNmsPerRad = 1.6e-3;
-    int rotorTeeth = 50;
-    int microsteps = 1;
-    double radiusM = 0.03;
-    double accelNoiseG = 0.0;
-    double currentNoiseA = 0.0;
-    long seed = 1;
-    int substeps = 16;
+public final class StepperSweepSimulator {
+    public static final double G0 = 9.80665;
+    public double inertiaKgM2 = 6.3e-5;
+    public double holdingTorqueNm = 0.5;
+    public double detentTorqueNm = 0;
+    public double dampingNmsPerRad = 1.6e-3;
+    public int rotorTeeth = 50;
+    public int microsteps = 1;
+    public double radiusM = 0.03;
+    public double accelNoiseG = 0.0;
+    public double currentNoiseA = 0.0;
+    public long seed = 1;
+    public int substeps = 16;
     /** Electrical drive: when {@code supplyV > 0}, a constant-voltage H-bridge with these winding values. */
-    double supplyV = 0;
-    double resistanceOhm = 1.3;
-    double inductanceH = 2.8e-3;
-    double motorConstant = 0.14;
+    public double supplyV = 0;
+    public double resistanceOhm = 1.3;
+    public double inductanceH = 2.8e-3;
+    public double motorConstant = 0.14;
 
     /** Results, one value per sample. */
-    record Run(double[] accelG, double[] angleRad, double[] commandRad, double[] currentA, double[] currentB,
+    public record Run(double[] accelG, double[] angleRad, double[] commandRad, double[] currentA, double[] currentB,
                double[] pulses, double sampleRateHz) {
     }
 
     /** Small-signal natural frequency at a full-step rest position: √((N_r·T_h + 4·N_r·T_d)/J)/2π, Hz. */
-    double naturalHzAtFullStep() {
+    public double naturalHzAtFullStep() {
         return Math.sqrt((rotorTeeth * holdingTorque() + 4 * rotorTeeth * detentTorqueNm) / inertiaKgM2)
                 / (2 * Math.PI);
     }
 
     /** Holding torque with both phases on: T_h, or √2·K·V/R under the constant-voltage drive. */
-    double holdingTorque() {
+    public double holdingTorque() {
         return supplyV > 0 ? Math.sqrt(2) * motorConstant * supplyV / resistanceOhm : holdingTorqueNm;
     }
 
     /** Damping ratio about a full-step rest position, c/(2·√(k·J)). */
-    double dampingRatioAtFullStep() {
+    public double dampingRatioAtFullStep() {
         double k = rotorTeeth * holdingTorque() + 4 * rotorTeeth * detentTorqueNm;
         return dampingNmsPerRad / (2 * Math.sqrt(k * inertiaKgM2));
     }
 
     /** Damping coefficient for a damping ratio about a full-step rest position. */
-    StepperSweepSimulator dampingRatio(double zeta) {
+    public StepperSweepSimulator dampingRatio(double zeta) {
         double k = rotorTeeth * holdingTorque() + 4 * rotorTeeth * detentTorqueNm;
         dampingNmsPerRad = 2 * zeta * Math.sqrt(k * inertiaKgM2);
         return this;
     }
 
     /** A constant-voltage drive with these winding values (holding torque then √2·K·V/R). */
-    StepperSweepSimulator constantVoltage(double volts, double ohm, double henry, double k) {
+    public StepperSweepSimulator constantVoltage(double volts, double ohm, double henry, double k) {
         supplyV = volts;
         resistanceOhm = ohm;
         inductanceH = henry;
@@ -75,7 +75,7 @@ final class StepperSweepSimulator {
     }
 
     /** A linear sweep from r0 to r1 full steps/s over the record. */
-    Run linearSweep(double r0, double r1, double seconds, double sampleRateHz) {
+    public Run linearSweep(double r0, double r1, double seconds, double sampleRateHz) {
         double slope = (r1 - r0) / seconds;
         return run(t -> r0 * t + 0.5 * slope * t * t, seconds, sampleRateHz);
     }
@@ -85,7 +85,7 @@ final class StepperSweepSimulator {
      *
      * @param fullSteps full steps commanded by time t (the k-th microstep happens when fullSteps·m passes k)
      */
-    Run run(DoubleUnaryOperator fullSteps, double seconds, double sampleRateHz) {
+    public Run run(DoubleUnaryOperator fullSteps, double seconds, double sampleRateHz) {
         int n = (int) Math.round(seconds * sampleRateHz);
         double h = 1 / sampleRateHz / substeps;
         Random rnd = new Random(seed);
@@ -159,7 +159,7 @@ final class StepperSweepSimulator {
     }
 
     /** Steps lost at each sample: (θ_cmd − θ) in full steps, rounded. */
-    static double[] lagFullSteps(Run r, int rotorTeeth) {
+    public static double[] lagFullSteps(Run r, int rotorTeeth) {
         double[] lag = new double[r.angleRad().length];
         for (int i = 0; i < lag.length; i++) {
             lag[i] = (r.commandRad()[i] - r.angleRad()[i]) / (Math.PI / (2 * rotorTeeth));
