@@ -63,6 +63,8 @@ public final class ResonanceHtml {
                     (Double.isNaN(stall.relockFullStepsPerS()) ? "It did not re-lock before the end of the sweep. "
                             : "Re-locked from " + rateText(u, stall.relockFullStepsPerS()) + ". ")
                             + stall.advice() + " Evidence: " + stall.evidence() + "." + bandsLine(r, u, avoid));
+        } else if (r.responseChannel() == org.lodestep.resonance.ResponseChannel.CURRENT_CHOPPER) {
+            b.verdict(Status.INFO, "No bands from this capture", r.evidenceNote());
         } else if (r.bands().isEmpty()) {
             b.verdict(Status.PASS, "No resonance found in the swept range",
                     "No band rises over the baseline of the response; the rotor kept synchronism."

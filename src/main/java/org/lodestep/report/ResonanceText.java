@@ -43,7 +43,9 @@ public final class ResonanceText {
                 num(r.response().get(r.response().size() - 1).rateFullStepsPerS()), r.segments(),
                 r.segmentsOutsideSweep() > 0 ? " (" + r.segmentsOutsideSweep() + " outside the sweep, skipped)" : "");
         out.println();
-        if (r.bands().isEmpty()) {
+        if (r.responseChannel() == org.lodestep.resonance.ResponseChannel.CURRENT_CHOPPER) {
+            out.println("No bands reported: a chopper's regulated current cannot support them (see Evidence below).");
+        } else if (r.bands().isEmpty()) {
             out.println("No band rises over the baseline: no resonance found in the swept range.");
         } else {
             out.println(r.responseChannel().isCurrent()
