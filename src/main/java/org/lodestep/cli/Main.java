@@ -105,7 +105,7 @@ public final class Main implements Runnable {
         } else if (t instanceof AccessDeniedException) {
             code = ExitCode.USAGE;
             message = t.getMessage() + ": permission denied";
-        } else if (t instanceof UsageException) {
+        } else if (t instanceof UsageException || t instanceof org.lodestep.workflow.SettingsException) {
             code = ExitCode.USAGE;
             message = t.getMessage();
         } else if (t instanceof RigException) {

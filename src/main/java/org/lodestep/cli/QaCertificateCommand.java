@@ -2,17 +2,16 @@ package org.lodestep.cli;
 
 import java.io.PrintWriter;
 import java.util.LinkedHashMap;
-import java.util.List;
 import java.util.Map;
 import java.util.concurrent.Callable;
 
-import org.lodestep.qa.RecordQuery;
 import org.lodestep.qa.RecordStore;
 import org.lodestep.qa.StoredRecord;
-import org.lodestep.qa.Verdict;
 import org.lodestep.report.Json;
 import org.lodestep.report.OutputFile;
 import org.lodestep.report.QaText;
+import org.lodestep.workflow.Progress;
+import org.lodestep.workflow.QaCertificate;
 
 import picocli.CommandLine.Command;
 import picocli.CommandLine.Mixin;
@@ -52,31 +51,21 @@ final class QaCertificateCommand implements Callable<Integer> {
 
     @Override
     public Integer call() throws Exception {
-        List<StoredRecord> history;
-        String where;
+        QaCertificate.Result c;
         try (RecordStore rs = store.openExisting()) {
-            history = rs.find(new RecordQuery(serial, null, part, null, null));
-            where = rs.location();
+            c = QaCertificate.run(serial, part, rs, Progress.NONE);
         }
-        if (history.isEmpty()) {
-            throw new UsageException("no record of serial '" + serial.replaceAll("\\p{Cntrl}", "?") + "'"
-                    + (part == null ? "" : " for part " + part) + " in " + where);
-        }
-        List<String> parts = history.stream().map(r -> r.submission().partNumber()).distinct().toList();
-        if (parts.size() > 1) {
-            throw new UsageException("serial '" + serial + "' was tested as several parts " + parts + ": add --part");
-        }
-        StoredRecord latest = history.get(history.size() - 1);
+        StoredRecord latest = c.latest();
         PrintWriter out = spec.commandLine().getOut();
         String text;
         if (json) {
             Map<String, Object> doc = new LinkedHashMap<>();
             doc.put("serial", serial);
             doc.put("latest", latest);
-            doc.put("history", history.subList(0, history.size() - 1));
+            doc.put("history", c.earlier());
             text = Json.write(doc) + System.lineSeparator();
         } else {
-            text = QaText.certificate(history);
+            text = QaText.certificate(c.history());
         }
         if (outFile != null) {
             OutputFile.write(outFile, text);
@@ -86,6 +75,6 @@ final class QaCertificateCommand implements Callable<Integer> {
             out.print(text);
         }
         out.flush();
-        return latest.submission().verdict() == Verdict.PASS && latest.intact() ? ExitCode.OK : ExitCode.FINDING;
+        return c.certifies() ? ExitCode.OK : ExitCode.FINDING;
     }
 }

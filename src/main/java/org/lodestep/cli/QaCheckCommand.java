@@ -15,19 +15,19 @@ import java.util.Map;
 import java.util.concurrent.Callable;
 
 import org.lodestep.sample.InputFormatException;
-import org.lodestep.qa.Inspection;
-import org.lodestep.qa.Measurements;
 import org.lodestep.qa.Parameters;
 import org.lodestep.qa.PartSpec;
 import org.lodestep.qa.PartSpecReader;
 import org.lodestep.qa.RecordStore;
 import org.lodestep.qa.StoreException;
-import org.lodestep.qa.Submission;
-import org.lodestep.qa.Timestamps;
+import org.lodestep.qa.Tally;
 import org.lodestep.qa.Verdict;
 import org.lodestep.report.Json;
 import org.lodestep.report.QaHtml;
 import org.lodestep.report.QaText;
+import org.lodestep.workflow.Progress;
+import org.lodestep.workflow.QaCheck;
+import org.lodestep.workflow.SettingsException;
 
 import picocli.CommandLine.Command;
 import picocli.CommandLine.Mixin;
@@ -126,11 +126,15 @@ final class QaCheckCommand implements Callable<Integer> {
         }
         partSpec = PartSpecReader.read(specFile);
         if (!json && partSpec.limit(Parameters.INSULATION_RESISTANCE).isPresent()) {
-            out.println(caution(partSpec.insulationTestVoltageV()));
+            out.println(QaText.insulationCaution(partSpec.insulationTestVoltageV()));
         }
+        QaCheck.Settings settings = new QaCheck.Settings(partSpec, lot, readings.sources(),
+                ambientC == null ? Double.NaN : ambientC, operator(), station(), VersionProvider.version(),
+                readings.confirmation());
         try (RecordStore records = store.open()) {
+            QaCheck check = new QaCheck(settings, records);
             if (serial != null) {
-                RecordStore.Appended a = checkOne(records, serial);
+                RecordStore.Appended a = check.check(serial, progress());
                 if (report != null) {
                     QaHtml.check(serial, List.of(a.record()), partSpec.insulationTestVoltageV(), Map.of())
                             .write(report);
@@ -143,16 +147,14 @@ final class QaCheckCommand implements Callable<Integer> {
                 out.flush();
                 return a.record().submission().verdict() == Verdict.PASS ? ExitCode.OK : ExitCode.FINDING;
             }
-            return lot(records, out);
+            return lot(check, records, out);
         }
     }
 
-    private int lot(RecordStore records, PrintWriter out)
+    private int lot(QaCheck check, RecordStore records, PrintWriter out)
             throws IOException, StoreException {
         PrintWriter err = spec.commandLine().getErr();
-        int passed = 0;
-        int failed = 0;
-        int incomplete = 0;
+        Tally tally = Tally.NONE;
         List<RecordStore.Appended> results = new ArrayList<>();
         List<Map<String, String>> errors = new ArrayList<>();
         try (BufferedReader in = serialsFile == null || serialsFile.equals("-")
@@ -170,26 +172,23 @@ final class QaCheckCommand implements Callable<Integer> {
                 }
                 RecordStore.Appended a;
                 try {
-                    a = checkOne(records, sn);
-                } catch (InputFormatException | UsageException | IOException | org.lodestep.rig.RigException e) {
+                    a = check.check(sn, progress());
+                } catch (InputFormatException | UsageException | SettingsException | IOException
+                         | org.lodestep.rig.RigException e) {
                     // One unreadable capture must not stop the lot: say so, record nothing for it, go on.
                     String msg = e instanceof java.nio.file.NoSuchFileException ? e.getMessage() + ": no such file"
                             : e.getMessage();
                     err.println("lodestep qa check: serial " + sn.replaceAll("\\p{Cntrl}", "?") + " not recorded: " + msg);
                     err.flush();
                     errors.add(Map.of("serial", sn, "message", msg));
-                    incomplete++;
+                    tally = tally.plus(Verdict.INCOMPLETE);
                     continue;
                 }
                 results.add(a);
-                switch (a.record().submission().verdict()) {
-                    case PASS -> passed++;
-                    case FAIL -> failed++;
-                    default -> incomplete++;
-                }
+                tally = tally.plus(a.record().submission().verdict());
                 if (!json) {
                     out.print(QaText.check(a.record(), a.created(), records.location()));
-                    out.println(QaText.tally(passed + failed + incomplete, passed, failed, incomplete));
+                    out.println(QaText.tally(tally));
                     out.println();
                     out.flush();
                 }
@@ -206,48 +205,36 @@ final class QaCheckCommand implements Callable<Integer> {
         if (json) {
             Map<String, Object> doc = new LinkedHashMap<>();
             doc.put("lot", lot);
-            doc.put("tested", passed + failed + incomplete);
-            doc.put("passed", passed);
-            doc.put("failed", failed);
-            doc.put("incomplete", incomplete);
+            doc.put("tested", tally.tested());
+            doc.put("passed", tally.passed());
+            doc.put("failed", tally.failed());
+            doc.put("incomplete", tally.incomplete());
             doc.put("results", results);
             doc.put("errors", errors);
             out.println(Json.write(doc));
         } else {
-            out.println("lot " + lot + " done: " + QaText.tally(passed + failed + incomplete, passed, failed, incomplete));
+            out.println("lot " + lot + " done: " + QaText.tally(tally));
         }
         out.flush();
-        return failed + incomplete == 0 ? ExitCode.OK : ExitCode.FINDING;
+        return tally.allPassed() ? ExitCode.OK : ExitCode.FINDING;
     }
 
-    private RecordStore.Appended checkOne(RecordStore records, String sn)
-            throws IOException, InputFormatException, StoreException, org.lodestep.rig.RigException {
-        String started = Timestamps.now();
-        double ambient = ambientC == null ? Double.NaN : ambientC;
-        Measurements m = readings.measure(sn, ambient, partSpec.insulationTestVoltageV(),
-                json ? spec.commandLine().getErr() : spec.commandLine().getOut());
-        Inspection.Judgement j = Inspection.judge(partSpec, m);
-        Submission s;
-        try {
-            s = Submission.of(sn, lot == null ? "" : lot, partSpec, j, m, ambient, operator(), station(), started,
-                    Timestamps.now(), VersionProvider.version());
-        } catch (IllegalArgumentException e) {
-            throw new UsageException(e.getMessage());
-        }
-        return records.append(s);
+    /** Rig readings and capture notes as indented lines: on stdout, or on stderr when stdout carries JSON. */
+    private Progress progress() {
+        PrintWriter log = json ? spec.commandLine().getErr() : spec.commandLine().getOut();
+        return new Progress() {
+            @Override
+            public void note(String message) {
+                log.println("  " + message);
+                log.flush();
+            }
+        };
     }
 
     private static void positive(Double v, String option) {
         if (v != null && !(v > 0 && Double.isFinite(v))) {
             throw new UsageException(option + " must be a positive number, got " + v);
         }
-    }
-
-    /** The one-line caution printed before checks that include an insulation test. */
-    static String caution(double testVoltageV) {
-        return "Caution: the insulation test applies " + Math.round(testVoltageV) + " V DC. Motor disconnected from any"
-                + " driver, hands off leads and frame while the tester runs, windings discharged afterwards; local"
-                + " electrical-safety rules take precedence.";
     }
 
     private String operator() {

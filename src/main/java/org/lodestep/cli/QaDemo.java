@@ -1,20 +1,42 @@
 package org.lodestep.cli;
 
-import java.io.IOException;
 import java.io.PrintWriter;
 import java.io.StringWriter;
 import java.nio.file.Files;
 import java.nio.file.Path;
 import java.util.ArrayList;
 import java.util.List;
+import java.util.Map;
+
+import org.lodestep.qa.PartSpec;
+import org.lodestep.qa.PartSpecReader;
+import org.lodestep.qa.RecordQuery;
+import org.lodestep.qa.RecordStore;
+import org.lodestep.qa.RecordStores;
+import org.lodestep.qa.Tally;
+import org.lodestep.qa.Verdict;
+import org.lodestep.report.OutputFile;
+import org.lodestep.report.QaCsv;
+import org.lodestep.report.QaHtml;
+import org.lodestep.report.QaText;
+import org.lodestep.workflow.Progress;
+import org.lodestep.workflow.QaCertificate;
+import org.lodestep.workflow.QaCheck;
+import org.lodestep.workflow.QaExport;
+import org.lodestep.workflow.QaLotReport;
+import org.lodestep.workflow.QaReadingSources;
+import org.lodestep.workflow.QaReadingSources.TypedInsulation;
 
 /**
  * Demo section: the incoming-QA desk of an invented instrument works checks a delivered lot of twelve motors of an
  * invented part, re-tests the one that failed insulation after drying it, and prints the lot report and a certificate.
+ * It calls the QA workflows directly, as any front end does, and renders through {@code report}.
  */
 final class QaDemo implements DemoCommand.Section {
 
     static final String LOT = "L-2607";
+    private static final String OPERATOR = "R. Okafor";
+    private static final String STATION = "harrow-fen-2";
 
     @Override
     public String title() {
@@ -30,80 +52,93 @@ final class QaDemo implements DemoCommand.Section {
         for (String suffix : List.of("", "-wal", "-shm")) {
             Files.deleteIfExists(Path.of(db + suffix)); // the same story on every run
         }
-        String spec = qa.resolve("kv-4218-m.toml").toString();
+        PartSpec spec = PartSpecReader.read(qa.resolve("kv-4218-m.toml"));
         out.println("Harrow Fen instrument works (invented) receives lot " + LOT + ": twelve KV-4218-M steppers from"
                 + " Kestrel Vale Motion (invented). The inspector scans each serial number; resistance comes from the"
                 + " lead-pair CSVs, insulation and inductance from the bench meter log.");
         out.println("Safety: the insulation tester applies 500 V DC. Motor disconnected from any driver, hands off the"
                 + " leads while it runs, windings discharged afterwards; local rules take precedence.");
         int worst = ExitCode.OK;
+        try (RecordStore store = RecordStores.open(db.toString(), Map.of())) {
+            worst = expect(worst, lot(spec, qa, dir, store, out), ExitCode.FINDING);
 
-        Result lot = run(err, "qa", "check", "--spec", spec, "--lot", LOT,
-                "--serials", qa.resolve("lot-L2607-serials.txt").toString(),
-                "--resistance-pattern", qa.resolve("{serial}.csv").toString(),
-                "--meter-log", qa.resolve("lot-L2607-meter-log.csv").toString(),
-                "--ambient-c", "22", "--operator", "R. Okafor", "--station", "harrow-fen-2", "--db", db.toString(),
-                "--report", dir.resolve("qa-check-" + LOT + ".html").toString());
-        worst = expect(worst, lot.code, ExitCode.FINDING);
-        out.println();
-        out.println("$ lodestep qa check --spec kv-4218-m.toml --lot " + LOT + " ... < lot-L2607-serials.txt");
-        for (String block : lot.text.split("\\R\\R")) {
-            // Compact: every motor's one-line tally, and the full verdict only for motors that did not pass.
-            List<String> lines = block.lines().toList();
-            boolean passed = lines.stream().anyMatch(l -> l.startsWith("===="));
-            if (!passed && lines.size() > 3) {
-                lines.forEach(out::println);
-                out.println();
-            } else {
-                lines.stream().filter(l -> l.startsWith("tally") || l.startsWith("lot ") || l.startsWith("=   serial"))
-                        .map(l -> l.startsWith("=") ? "PASS  " + l.substring(1, l.length() - 1).strip() : l)
-                        .forEach(out::println);
-            }
+            out.println();
+            out.println("KV24-00124 read 62 Mohm phase B to frame. After a night in the drying cabinet it is re-tested:");
+            QaReadingSources retest = new QaReadingSources(qa.resolve("KV24-00124.csv"), null, null,
+                    List.of(2.79, 2.81), List.of(new TypedInsulation("a-frame", 1320, Double.NaN),
+                    new TypedInsulation("b-frame", 1150, Double.NaN), new TypedInsulation("a-b", 1710, Double.NaN)),
+                    null, 1.8, null, null, null, null, null, null, null, null, null, null);
+            RecordStore.Appended a = new QaCheck(settings(spec, retest, 21), store).check("KV24-00124", Progress.NONE);
+            worst = expect(worst, a.record().submission().verdict() == Verdict.PASS ? ExitCode.OK : ExitCode.FINDING,
+                    ExitCode.OK);
+            out.print(QaText.check(a.record(), a.created(), store.location()));
+
+            out.println();
+            out.println("$ lodestep qa report --lot " + LOT);
+            RecordQuery lot = new RecordQuery(null, LOT, null, null, null);
+            QaLotReport.Result report = QaLotReport.run(lot, store, Progress.NONE);
+            String title = "QA report, lot " + LOT;
+            QaHtml.lot(title, report.summary()).write(dir.resolve("qa-report-" + LOT + ".html"));
+            out.print(QaText.lotReport(title, report.summary()));
+            out.println("reports: " + dir.resolve("qa-check-" + LOT + ".html") + ", " + dir.resolve("qa-report-" + LOT
+                    + ".html"));
+
+            out.println();
+            out.println("$ lodestep qa certificate --serial KV24-00124");
+            QaCertificate.Result cert = QaCertificate.run("KV24-00124", null, store, Progress.NONE);
+            worst = expect(worst, cert.certifies() ? ExitCode.OK : ExitCode.FINDING, ExitCode.OK);
+            out.print(QaText.certificate(cert.history()));
+
+            Path csv = dir.resolve("lot-" + LOT + ".csv");
+            QaExport.Result export = QaExport.run(lot, store, Progress.NONE);
+            StringWriter text = new StringWriter();
+            QaCsv.write(export.records(), text);
+            OutputFile.write(csv, text.toString());
+            out.println();
+            out.println("wrote " + export.rows() + " rows from " + export.records().size() + " records to " + csv);
         }
-
-        out.println();
-        out.println("KV24-00124 read 62 Mohm phase B to frame. After a night in the drying cabinet it is re-tested:");
-        Result retest = run(err, "qa", "check", "--spec", spec, "--serial", "KV24-00124", "--lot", LOT,
-                "--resistance", qa.resolve("KV24-00124.csv").toString(),
-                "--insulation", "a-frame=1320", "--insulation", "b-frame=1150", "--insulation", "a-b=1710",
-                "--inductance-mh", "2.79,2.81", "--step-angle-deg", "1.8", "--ambient-c", "21",
-                "--operator", "R. Okafor", "--station", "harrow-fen-2", "--db", db.toString());
-        worst = expect(worst, retest.code, ExitCode.OK);
-        out.print(retest.text);
-
-        out.println();
-        out.println("$ lodestep qa report --lot " + LOT);
-        Result report = run(err, "qa", "report", "--lot", LOT, "--db", db.toString(),
-                "--report", dir.resolve("qa-report-" + LOT + ".html").toString());
-        worst = expect(worst, report.code, ExitCode.OK);
-        out.print(report.text);
-        out.println("reports: " + dir.resolve("qa-check-" + LOT + ".html") + ", " + dir.resolve("qa-report-" + LOT
-                + ".html"));
-
-        out.println();
-        out.println("$ lodestep qa certificate --serial KV24-00124");
-        Result cert = run(err, "qa", "certificate", "--serial", "KV24-00124", "--db", db.toString());
-        worst = expect(worst, cert.code, ExitCode.OK);
-        out.print(cert.text);
-
-        Path csv = dir.resolve("lot-" + LOT + ".csv");
-        Result export = run(err, "qa", "export", "--lot", LOT, "--out", csv.toString(), "--db", db.toString());
-        worst = expect(worst, export.code, ExitCode.OK);
-        out.println();
-        out.print(export.text);
         out.println("records: " + db);
         out.flush();
         return worst;
     }
 
-    private record Result(int code, String text) {
+    /** The lot as the scanner types it: one check per serial, compact lines for motors that passed. */
+    private static int lot(PartSpec spec, Path qa, Path dir, RecordStore store, PrintWriter out) throws Exception {
+        QaReadingSources sources = new QaReadingSources(null, qa.resolve("{serial}.csv").toString(), null, null, null,
+                null, null, null, qa.resolve("lot-L2607-meter-log.csv"), null, null, null, null, null, null, null, null);
+        QaCheck check = new QaCheck(settings(spec, sources, 22), store);
+        out.println();
+        out.println("$ lodestep qa check --spec kv-4218-m.toml --lot " + LOT + " ... < lot-L2607-serials.txt");
+        List<RecordStore.Appended> results = new ArrayList<>();
+        Tally tally = Tally.NONE;
+        for (String line : Files.readAllLines(qa.resolve("lot-L2607-serials.txt"))) {
+            String sn = line.strip();
+            if (sn.isEmpty() || sn.startsWith("#")) {
+                continue;
+            }
+            RecordStore.Appended a = check.check(sn, Progress.NONE);
+            results.add(a);
+            tally = tally.plus(a.record().submission().verdict());
+            if (a.record().submission().verdict() == Verdict.PASS) {
+                // Compact: the framed serial line and the tally; the full verdict only for motors that did not pass.
+                QaText.check(a.record(), a.created(), store.location()).lines().filter(l -> l.startsWith("=   serial"))
+                        .map(l -> "PASS  " + l.substring(1, l.length() - 1).strip()).forEach(out::println);
+                out.println(QaText.tally(tally));
+            } else {
+                out.print(QaText.check(a.record(), a.created(), store.location()));
+                out.println(QaText.tally(tally));
+                out.println();
+            }
+        }
+        QaHtml.check("lot " + LOT, results.stream().map(RecordStore.Appended::record).toList(),
+                spec.insulationTestVoltageV(), Map.of()).write(dir.resolve("qa-check-" + LOT + ".html"));
+        out.println("lot " + LOT + " done: " + QaText.tally(tally));
+        return tally.allPassed() ? ExitCode.OK : ExitCode.FINDING;
     }
 
-    private static Result run(PrintWriter err, String... args) throws IOException {
-        StringWriter text = new StringWriter();
-        List<String> a = new ArrayList<>(List.of(args));
-        int code = Main.run(new PrintWriter(text, true), err, a.toArray(String[]::new));
-        return new Result(code, text.toString());
+    private static QaCheck.Settings settings(PartSpec spec, QaReadingSources sources, double ambientC) {
+        return new QaCheck.Settings(spec, LOT, sources, ambientC, OPERATOR, STATION, VersionProvider.version(),
+                QaCheck.InsulationConfirmation.REFUSE);
     }
 
     private static int expect(int worst, int code, int expected) {

@@ -3,15 +3,15 @@ package org.lodestep.cli;
 import java.io.PrintWriter;
 import java.nio.file.Path;
 import java.util.LinkedHashMap;
-import java.util.List;
 import java.util.Map;
 import java.util.concurrent.Callable;
 
 import org.lodestep.qa.RecordStore;
-import org.lodestep.qa.StoredRecord;
 import org.lodestep.report.Json;
 import org.lodestep.report.OutputFile;
 import org.lodestep.report.QaCsv;
+import org.lodestep.workflow.Progress;
+import org.lodestep.workflow.QaExport;
 
 import picocli.CommandLine.Command;
 import picocli.CommandLine.Mixin;
@@ -43,23 +43,24 @@ final class QaExportCommand implements Callable<Integer> {
 
     @Override
     public Integer call() throws Exception {
-        List<StoredRecord> records;
+        QaExport.Result r;
         try (RecordStore rs = store.openExisting()) {
-            records = rs.find(filter.query());
+            r = QaExport.run(filter.query(), rs, Progress.NONE);
         }
         java.io.StringWriter csv = new java.io.StringWriter();
-        QaCsv.write(records, csv);
+        QaCsv.write(r.records(), csv);
         OutputFile.write(outFile, csv.toString());
-        int rows = records.stream().mapToInt(r -> r.submission().checks().size()).sum();
+        int rows = r.rows();
+        int records = r.records().size();
         PrintWriter out = spec.commandLine().getOut();
         if (json) {
             Map<String, Object> doc = new LinkedHashMap<>();
             doc.put("out", outFile.toString());
-            doc.put("records", records.size());
+            doc.put("records", records);
             doc.put("rows", rows);
             out.println(Json.write(doc));
         } else {
-            out.println("wrote " + rows + " rows from " + records.size() + " records to " + outFile);
+            out.println("wrote " + rows + " rows from " + records + " records to " + outFile);
         }
         out.flush();
         return ExitCode.OK;

@@ -2,16 +2,15 @@ package org.lodestep.cli;
 
 import java.io.PrintWriter;
 import java.util.LinkedHashMap;
-import java.util.List;
 import java.util.Map;
 import java.util.concurrent.Callable;
 
-import org.lodestep.qa.LotStatistics;
 import org.lodestep.qa.RecordStore;
-import org.lodestep.qa.StoredRecord;
 import org.lodestep.report.Json;
 import org.lodestep.report.QaHtml;
 import org.lodestep.report.QaText;
+import org.lodestep.workflow.Progress;
+import org.lodestep.workflow.QaLotReport;
 
 import picocli.CommandLine.Command;
 import picocli.CommandLine.Mixin;
@@ -48,13 +47,12 @@ final class QaReportCommand implements Callable<Integer> {
     @Override
     public Integer call() throws Exception {
         PrintWriter out = spec.commandLine().getOut();
-        List<StoredRecord> records;
+        QaLotReport.Result r;
         try (RecordStore rs = store.openExisting()) {
-            records = rs.find(filter.query());
+            r = QaLotReport.run(filter.query(), rs, Progress.NONE);
         }
-        LotStatistics.Summary summary = LotStatistics.of(records);
         if (report != null) {
-            QaHtml.lot(filter.title(), records, summary).write(report);
+            QaHtml.lot(filter.title(), r.summary()).write(report);
         }
         if (json) {
             Map<String, Object> doc = new LinkedHashMap<>();
@@ -62,10 +60,10 @@ final class QaReportCommand implements Callable<Integer> {
             doc.put("part", filter.part);
             doc.put("from", filter.from);
             doc.put("to", filter.to);
-            doc.put("summary", summary);
+            doc.put("summary", r.summary());
             out.println(Json.write(doc));
         } else {
-            out.print(QaText.lotReport(filter.title(), summary));
+            out.print(QaText.lotReport(filter.title(), r.summary()));
         }
         out.flush();
         return ExitCode.OK;

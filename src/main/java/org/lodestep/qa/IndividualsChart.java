@@ -15,11 +15,11 @@ import java.util.List;
 public final class IndividualsChart {
 
     /** d2 for subgroups of 2: 2/√π = 1.128379. */
-    public static final double D2 = 2.0 / Math.sqrt(Math.PI);
+    static final double D2 = 2.0 / Math.sqrt(Math.PI);
     /** d3 for subgroups of 2: √(2 − 4/π) = 0.852502. */
-    public static final double D3_FACTOR = Math.sqrt(2.0 - 4.0 / Math.PI);
+    static final double D3_FACTOR = Math.sqrt(2.0 - 4.0 / Math.PI);
     /** D4 for subgroups of 2: 1 + 3·d3/d2 = 3.266532. */
-    public static final double D4 = 1.0 + 3.0 * D3_FACTOR / D2;
+    static final double D4 = 1.0 + 3.0 * D3_FACTOR / D2;
 
     /**
      * The chart of a series.
@@ -44,8 +44,22 @@ public final class IndividualsChart {
     private IndividualsChart() {
     }
 
+    /** The moving range of span 2 ending at point {@code i} (1 or more): MR_i = |x_i − x_(i−1)|. */
+    static double movingRange(double[] x, int i) {
+        return Math.abs(x[i] - x[i - 1]);
+    }
+
+    /** Every moving range of {@code x}: element i−1 is MR_i, so there is one fewer than there are points. */
+    static double[] movingRanges(double[] x) {
+        double[] mr = new double[Math.max(0, x.length - 1)];
+        for (int i = 1; i < x.length; i++) {
+            mr[i - 1] = movingRange(x, i);
+        }
+        return mr;
+    }
+
     /** Limits for {@code x} in production order; needs at least two values (else every figure is NaN). */
-    public static Limits of(double[] x) {
+    static Limits of(double[] x) {
         int n = x.length;
         if (n < 2) {
             return new Limits(n == 1 ? x[0] : Double.NaN, Double.NaN, Double.NaN, Double.NaN, Double.NaN, Double.NaN,
@@ -56,7 +70,7 @@ public final class IndividualsChart {
         for (int i = 0; i < n; i++) {
             sum += x[i];
             if (i > 0) {
-                mrSum += Math.abs(x[i] - x[i - 1]);
+                mrSum += movingRange(x, i);
             }
         }
         double centre = sum / n;
@@ -73,7 +87,7 @@ public final class IndividualsChart {
             if (x[i] > ucl || x[i] < lcl) {
                 outX.add(i);
             }
-            if (i > 0 && Math.abs(x[i] - x[i - 1]) > uclMr) {
+            if (i > 0 && movingRange(x, i) > uclMr) {
                 outMr.add(i);
             }
         }

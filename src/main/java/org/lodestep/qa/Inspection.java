@@ -1,5 +1,6 @@
 package org.lodestep.qa;
 
+import org.lodestep.rig.InsulationReading;
 import java.util.ArrayList;
 import java.util.List;
 import java.util.Locale;
@@ -128,7 +129,8 @@ public final class Inspection {
             String note = "raw reading judged (small-motor practice)";
             if (Double.isInfinite(r.resistanceOhm())) {
                 note = "above the tester's range";
-            } else if (!Double.isNaN(m.windingTemperatureC())) {
+            } else if (r.resistanceOhm() > 0 && !Double.isNaN(m.windingTemperatureC())) {
+                // a dead short (0 Ω) fails as it reads; there is nothing to refer to 40 °C
                 note += "; " + fmt(InsulationResistance.correctedTo40C(r.resistanceOhm(), m.windingTemperatureC()) / 1e6)
                         + " Mohm at 40 °C for trending (IEEE 43 clause 6.3)";
             }

@@ -10,13 +10,13 @@ package org.lodestep.qa;
  * 500 V DC is a small-motor datasheet habit (common practice, no published source), compared with the raw
  * room-temperature reading; the 40 °C value is kept for trending only, as IEEE 43's own minima assume it.
  */
-public final class InsulationResistance {
+final class InsulationResistance {
 
     /** Default minimum insulation resistance, 100 MΩ: small-motor datasheet habit (common practice). */
-    public static final double DEFAULT_MINIMUM_OHM = 100e6;
+    static final double DEFAULT_MINIMUM_OHM = 100e6;
 
     /** IEEE 43 correction base temperature, 40 °C (clause 6.3). */
-    public static final double BASE_TEMPERATURE_C = 40.0;
+    static final double BASE_TEMPERATURE_C = 40.0;
 
     private InsulationResistance() {
     }
@@ -29,7 +29,7 @@ public final class InsulationResistance {
      * @param ratedVoltageV winding rated voltage, V, positive
      * @return test voltage, V
      */
-    public static double testVoltageV(double ratedVoltageV) {
+    static double testVoltageV(double ratedVoltageV) {
         if (!(ratedVoltageV > 0) || Double.isInfinite(ratedVoltageV)) {
             throw new IllegalArgumentException("rated voltage must be positive, got " + ratedVoltageV + " V");
         }
@@ -51,7 +51,7 @@ public final class InsulationResistance {
      * @param windingTemperatureC winding temperature during the test, °C
      * @return the reading referred to 40 °C, Ω
      */
-    public static double correctedTo40C(double resistanceOhm, double windingTemperatureC) {
+    static double correctedTo40C(double resistanceOhm, double windingTemperatureC) {
         if (!(resistanceOhm > 0) || Double.isInfinite(resistanceOhm)) {
             throw new IllegalArgumentException("insulation resistance must be positive, got " + resistanceOhm + " Ω");
         }

@@ -22,7 +22,7 @@ import com.fasterxml.jackson.databind.json.JsonMapper;
  * the submission as JSON, kept verbatim with its SHA-256; on reading, the hash and the indexed columns are checked
  * against it, so an edit made behind the tool's back shows as a record that is not intact.
  */
-public final class JdbcRecordStore implements RecordStore {
+final class JdbcRecordStore implements RecordStore {
 
     /** Storage JSON: NaN kept as "NaN" so it reads back as NaN (not 0), snake_case like every other JSON. */
     private static final ObjectMapper BODY = JsonMapper.builder()

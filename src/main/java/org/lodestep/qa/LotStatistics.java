@@ -33,6 +33,16 @@ public final class LotStatistics {
                          double firstPassYieldPct, double finalYieldPct, int notIntact) {
     }
 
+    /**
+     * One value of a parameter, in production order.
+     *
+     * @param serial serial number of the motor
+     * @param label  phase or pair label, "" for a single value
+     * @param value  the judged value, SI
+     */
+    public record Point(String serial, String label, double value) {
+    }
+
     /** One value that is outside a control limit. */
     public record OutOfControl(String chart, int index, String serial, String label, double value) {
     }
@@ -58,15 +68,31 @@ public final class LotStatistics {
      * @param chart       individuals and moving-range limits
      * @param outOfControl points outside the chart limits, with their serial numbers
      * @param outOfSpec   values outside the specification limits
-     * @param histogram   equal-width bins spanning the data and the limits
+     * @param histogram   equal-width bins spanning the data and the limits ({@link Histogram})
+     * @param points      the values behind the statistics: the latest record of each motor, production order
      */
     public record ParameterStatistics(String parameter, String unit, int n, double mean, double stdDev, double min,
                                       double max, double lsl, double usl, boolean limitsVaried, double cp, double cpk,
                                       double pp, double ppk, IndividualsChart.Limits chart,
-                                      List<OutOfControl> outOfControl, int outOfSpec, List<Histogram.Bin> histogram) {
+                                      List<OutOfControl> outOfControl, int outOfSpec, List<Histogram.Bin> histogram,
+                                      List<Point> points) {
         public ParameterStatistics {
             outOfControl = List.copyOf(outOfControl);
             histogram = List.copyOf(histogram);
+            points = List.copyOf(points);
+        }
+
+        /** The individuals, production order (the X chart's points). */
+        public double[] individuals() {
+            return points.stream().mapToDouble(Point::value).toArray();
+        }
+
+        /**
+         * The moving ranges |x_i − x_(i−1)| for i = 1..n−1 (the MR chart's points; element i−1 belongs to point i),
+         * as {@link IndividualsChart} computes its limits from them.
+         */
+        public double[] movingRanges() {
+            return IndividualsChart.movingRanges(individuals());
         }
     }
 
@@ -139,9 +165,6 @@ public final class LotStatistics {
         return new Summary(counts, notPassed, parameters(List.copyOf(latest.values())));
     }
 
-    private record Point(String serial, String label, double value) {
-    }
-
     private static List<ParameterStatistics> parameters(List<StoredRecord> motors) {
         Map<String, List<Point>> points = new LinkedHashMap<>();
         Map<String, Limit> limits = new LinkedHashMap<>();
@@ -184,7 +207,8 @@ public final class LotStatistics {
             ooc.add(new OutOfControl("X", i, pts.get(i).serial(), pts.get(i).label(), x[i]));
         }
         for (int i : chart.outsideMr()) {
-            ooc.add(new OutOfControl("MR", i, pts.get(i).serial(), pts.get(i).label(), Math.abs(x[i] - x[i - 1])));
+            ooc.add(new OutOfControl("MR", i, pts.get(i).serial(), pts.get(i).label(),
+                    IndividualsChart.movingRange(x, i)));
         }
         int outOfSpec = 0;
         for (double v : x) {
@@ -194,6 +218,6 @@ public final class LotStatistics {
         }
         return new ParameterStatistics(name, limit.unit(), x.length, d.getMean(), s, d.getMin(), d.getMax(),
                 limit.lower(), limit.upper(), varied, within.potential(), within.actual(), overall.potential(),
-                overall.actual(), chart, ooc, outOfSpec, Histogram.of(x, limit.lower(), limit.upper()));
+                overall.actual(), chart, ooc, outOfSpec, Histogram.of(x, limit.lower(), limit.upper()), pts);
     }
 }

@@ -1,5 +1,6 @@
 package org.lodestep.qa;
 
+import org.lodestep.rig.InsulationReading;
 import java.util.List;
 import java.util.Objects;
 
@@ -51,7 +52,7 @@ public record Measurements(List<Double> phaseResistancesOhm, double windingTempe
     }
 
     /** Nothing measured yet. */
-    public static Measurements none() {
+    static Measurements none() {
         return new Measurements(List.of(), Double.NaN, List.of(), List.of(), Double.NaN, Double.NaN, List.of());
     }
 }

@@ -9,10 +9,10 @@ package org.lodestep.qa;
  * Pp/Ppk are the same formulas with the overall sample standard deviation s. With one limit only, Cp is undefined
  * (NaN) and Cpk is the one-sided index (Cpl for a minimum, Cpu for a maximum).
  */
-public final class ProcessCapability {
+final class ProcessCapability {
 
     /** Cp and Cpk (or Pp and Ppk), NaN where undefined. */
-    public record Indices(double potential, double actual) {
+    record Indices(double potential, double actual) {
     }
 
     private ProcessCapability() {
@@ -24,7 +24,7 @@ public final class ProcessCapability {
      * @param lsl   lower specification limit, or NaN
      * @param usl   upper specification limit, or NaN
      */
-    public static Indices of(double mean, double sigma, double lsl, double usl) {
+    static Indices of(double mean, double sigma, double lsl, double usl) {
         if (!(sigma > 0) || !Double.isFinite(mean)) {
             return new Indices(Double.NaN, Double.NaN);
         }

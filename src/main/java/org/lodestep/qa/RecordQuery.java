@@ -19,15 +19,15 @@ public record RecordQuery(String serial, String lot, String partNumber, String f
         }
     }
 
-    public static RecordQuery all() {
+    static RecordQuery all() {
         return new RecordQuery(null, null, null, null, null);
     }
 
-    public static RecordQuery serial(String serial) {
+    static RecordQuery serial(String serial) {
         return new RecordQuery(serial, null, null, null, null);
     }
 
-    public static RecordQuery lot(String lot) {
+    static RecordQuery lot(String lot) {
         return new RecordQuery(null, lot, null, null, null);
     }
 }

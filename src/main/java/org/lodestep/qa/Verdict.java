@@ -12,7 +12,7 @@ public enum Verdict {
     INCOMPLETE;
 
     /** The overall verdict: any failure fails the motor; otherwise anything unjudged leaves it incomplete. */
-    public static Verdict overall(Collection<Verdict> checks) {
+    static Verdict overall(Collection<Verdict> checks) {
         if (checks.contains(FAIL)) {
             return FAIL;
         }

@@ -1,52 +1,24 @@
 package org.lodestep.report;
 
 import java.io.IOException;
-import java.nio.charset.StandardCharsets;
-import java.nio.file.AtomicMoveNotSupportedException;
-import java.nio.file.Files;
 import java.nio.file.Path;
-import java.nio.file.StandardCopyOption;
-import java.nio.file.attribute.PosixFilePermissions;
 
 /**
- * Writes an output file (report, avoid-list, export, certificate) whole or not at all: a temporary file in the same
- * folder, then an atomic move over the target, so a reader never sees half a file and a failed write leaves the old
- * one in place.
+ * The whole-or-nothing writer for callers outside the report packages; the implementation is
+ * {@link org.lodestep.report.html.OutputFile}, in the leaf package, so that {@code report.html} depends on nothing of
+ * ours and {@code report} depends on it, not both ways.
  */
 public final class OutputFile {
     private OutputFile() {
     }
 
-    /** Writes text as UTF-8. */
+    /** Writes text as UTF-8, whole or not at all. */
     public static void write(Path target, String text) throws IOException {
-        write(target, text.getBytes(StandardCharsets.UTF_8));
+        org.lodestep.report.html.OutputFile.write(target, text);
     }
 
-    /** Writes bytes. */
+    /** Writes bytes, whole or not at all. */
     public static void write(Path target, byte[] content) throws IOException {
-        Path abs = target.toAbsolutePath();
-        Path dir = abs.getParent();
-        if (dir != null) {
-            Files.createDirectories(dir);
-        }
-        Path tmp = Files.createTempFile(dir, "." + abs.getFileName() + ".", ".tmp");
-        try {
-            Files.write(tmp, content);
-            readableByAll(tmp);
-            try {
-                Files.move(tmp, abs, StandardCopyOption.ATOMIC_MOVE, StandardCopyOption.REPLACE_EXISTING);
-            } catch (AtomicMoveNotSupportedException e) {
-                Files.move(tmp, abs, StandardCopyOption.REPLACE_EXISTING);
-            }
-        } finally {
-            Files.deleteIfExists(tmp);
-        }
-    }
-
-    /** A temporary file starts private (rw-------); an output is meant to be shared like any other file. */
-    private static void readableByAll(Path tmp) throws IOException {
-        if (tmp.getFileSystem().supportedFileAttributeViews().contains("posix")) {
-            Files.setPosixFilePermissions(tmp, PosixFilePermissions.fromString("rw-r--r--"));
-        }
+        org.lodestep.report.html.OutputFile.write(target, content);
     }
 }

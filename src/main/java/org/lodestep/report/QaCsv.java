@@ -16,7 +16,7 @@ import org.lodestep.qa.Submission;
  */
 public final class QaCsv {
     /** The header, in column order. */
-    public static final List<String> HEADER = List.of("record_id", "retest_of", "serial", "lot", "part_number",
+    static final List<String> HEADER = List.of("record_id", "retest_of", "serial", "lot", "part_number",
             "part_revision", "spec_version", "spec_sha256", "verdict", "started_at", "finished_at", "recorded_at",
             "operator", "station", "tool_version", "ambient_c", "winding_c", "parameter", "label", "measured", "judged",
             "unit", "lower", "upper", "check_verdict", "note", "record_sha256", "intact");

@@ -7,10 +7,12 @@ import java.util.Locale;
 import java.util.Map;
 
 import org.lodestep.qa.CheckResult;
+import org.lodestep.qa.Histogram;
 import org.lodestep.qa.LotStatistics;
 import org.lodestep.qa.Parameters;
 import org.lodestep.qa.StoredRecord;
 import org.lodestep.qa.Submission;
+import org.lodestep.qa.Tally;
 import org.lodestep.qa.Verdict;
 import org.lodestep.report.html.Cell;
 import org.lodestep.report.html.ControlChart;
@@ -39,29 +41,21 @@ public final class QaHtml {
     public static HtmlReport check(String title, List<StoredRecord> records, double testVoltageV,
                                    Map<String, String> notRecorded) {
         HtmlReport.Builder b = HtmlReport.builder("Incoming QA check", title);
-        int passed = 0;
-        int failed = 0;
-        int incomplete = notRecorded.size();
-        for (StoredRecord r : records) {
-            switch (r.submission().verdict()) {
-                case PASS -> passed++;
-                case FAIL -> failed++;
-                default -> incomplete++;
-            }
-        }
+        Tally tally = Tally.of(records);
+        tally = new Tally(tally.passed(), tally.failed(), tally.incomplete() + notRecorded.size());
         if (!records.isEmpty()) {
             Submission s = records.get(0).submission();
             b.meta("Part", s.partNumber() + " rev " + s.partRevision() + ", spec v" + s.specVersion())
                     .meta("Lot", s.lot()).meta("Operator", s.operator()).meta("Station", s.station());
         }
-        int tested = records.size() + notRecorded.size();
-        Status overall = failed > 0 ? Status.FAIL : incomplete > 0 ? Status.WARN : Status.PASS;
+        int tested = tally.tested();
+        Status overall = tally.failed() > 0 ? Status.FAIL : tally.incomplete() > 0 ? Status.WARN : Status.PASS;
         if (tested == 1 && records.size() == 1) {
             Submission s = records.get(0).submission();
             b.verdict(status(s.verdict()), s.verdict().name() + ": serial " + s.serial(), failing(s));
         } else {
-            b.verdict(overall, String.format(Locale.ROOT, "%d tested: %d pass, %d fail, %d incomplete", tested, passed,
-                    failed, incomplete), null);
+            b.verdict(overall, String.format(Locale.ROOT, "%d tested: %d pass, %d fail, %d incomplete", tested,
+                    tally.passed(), tally.failed(), tally.incomplete()), null);
         }
         if (!Double.isNaN(testVoltageV)) {
             b.safety(SafetyNote.INSULATION_TEST);
@@ -108,12 +102,8 @@ public final class QaHtml {
         return b.build();
     }
 
-    /**
-     * The lot (part, date range) report.
-     *
-     * @param records the records the summary was made from, oldest first (for the values in production order)
-     */
-    public static HtmlReport lot(String title, List<StoredRecord> records, LotStatistics.Summary sum) {
+    /** The lot (part, date range) report: every number, series and bin comes from {@code sum}. */
+    public static HtmlReport lot(String title, LotStatistics.Summary sum) {
         LotStatistics.Counts c = sum.counts();
         HtmlReport.Builder b = HtmlReport.builder("Incoming QA lot report", title)
                 .meta("Motors", c.motors() + " (" + c.records() + " records, " + c.retests() + " re-tests)")
@@ -123,7 +113,6 @@ public final class QaHtml {
         b.verdict(st, String.format(Locale.ROOT, "%d pass, %d fail, %d incomplete", c.passed(), c.failed(),
                 c.incomplete()), c.notIntact() > 0 ? c.notIntact() + " record(s) no longer match their SHA-256: the"
                 + " database was changed outside Lodestep." : null);
-        Map<String, List<String[]>> points = points(records);
         for (LotStatistics.ParameterStatistics p : sum.parameters()) {
             String name = p.parameter();
             String unit = QaFormat.unit(name, p.unit());
@@ -139,27 +128,31 @@ public final class QaHtml {
             facts.put("Cp / Cpk", QaFormat.index(p.cp()) + " / " + QaFormat.index(p.cpk()));
             facts.put("Pp / Ppk", QaFormat.index(p.pp()) + " / " + QaFormat.index(p.ppk()));
             b.facts(facts);
-            List<String[]> pts = points.getOrDefault(name, List.of());
-            double[] x = new double[pts.size()];
-            String[] labels = new String[pts.size()];
-            for (int i = 0; i < x.length; i++) {
-                x[i] = Double.parseDouble(pts.get(i)[2]) * k;
-                labels[i] = pts.get(i)[0] + (pts.get(i)[1].isEmpty() ? "" : " " + pts.get(i)[1]);
+            double[] x = scaled(p.individuals(), k);
+            String[] labels = p.points().stream()
+                    .map(pt -> pt.serial() + (pt.label().isEmpty() ? "" : " " + pt.label())).toArray(String[]::new);
+            List<Histogram.Bin> bins = p.histogram();
+            double[] edges = new double[bins.size() + 1];
+            int[] inside = new int[bins.size()];
+            int[] outside = new int[bins.size()];
+            for (int i = 0; i < bins.size(); i++) {
+                edges[i] = bins.get(i).lower() * k;
+                edges[i + 1] = bins.get(i).upper() * k;
+                inside[i] = bins.get(i).insideSpec();
+                outside[i] = bins.get(i).outsideSpec();
             }
-            if (x.length != p.n()) {
-                b.paragraph("The charts are left out: the records give " + x.length + " values but the statistics "
-                        + p.n() + ".");
-                continue;
+            if (!bins.isEmpty()) {
+                HistogramChart.Builder h = HistogramChart.builder("", title(name) + " (" + unit + ")", edges, inside,
+                        outside);
+                if (!Double.isNaN(p.lsl())) {
+                    h.lowerLimit(p.lsl() * k, "LSL " + QaFormat.value(name, p.lsl()) + " " + unit);
+                }
+                if (!Double.isNaN(p.usl())) {
+                    h.upperLimit(p.usl() * k, "USL " + QaFormat.value(name, p.usl()) + " " + unit);
+                }
+                b.figure(h.build().toSvg(), "Histogram of " + title(name).toLowerCase(Locale.ROOT) + " with the spec"
+                        + " limits (dashed); values outside them are counted in their own dark bars.");
             }
-            HistogramChart.Builder h = HistogramChart.builder("", title(name) + " (" + unit + ")", x);
-            if (!Double.isNaN(p.lsl())) {
-                h.lowerLimit(p.lsl() * k, "LSL " + QaFormat.value(name, p.lsl()) + " " + unit);
-            }
-            if (!Double.isNaN(p.usl())) {
-                h.upperLimit(p.usl() * k, "USL " + QaFormat.value(name, p.usl()) + " " + unit);
-            }
-            b.figure(h.build().toSvg(), "Histogram of " + title(name).toLowerCase(Locale.ROOT) + " with the spec"
-                    + " limits (dashed); values outside them are counted in their own dark bars.");
             if (x.length >= 2 && Double.isFinite(p.chart().upperX())) {
                 boolean[] outX = new boolean[x.length];
                 boolean[] outMr = new boolean[x.length - 1];
@@ -176,12 +169,8 @@ public final class QaHtml {
                         .flagged(outX).build().toSvg(),
                         "Individuals chart in production order; points outside the control limits are hollow diamonds"
                         + " named by serial.");
-                double[] mr = new double[x.length - 1];
-                String[] mrLabels = new String[mr.length];
-                for (int i = 1; i < x.length; i++) {
-                    mr[i - 1] = Math.abs(x[i] - x[i - 1]);
-                    mrLabels[i - 1] = labels[i];
-                }
+                double[] mr = scaled(p.movingRanges(), k);
+                String[] mrLabels = java.util.Arrays.copyOfRange(labels, 1, labels.length);
                 b.figure(ControlChart.builder("", "moving range (" + unit + ")", mr, mrLabels).firstIndex(2)
                         .centre(p.chart().movingRangeMean() * k, "MR\u0304 "
                                 + QaFormat.value(name, p.chart().movingRangeMean()))
@@ -196,25 +185,11 @@ public final class QaHtml {
         return b.build();
     }
 
-    /**
-     * The values behind each parameter's statistics, as {serial, label, value}: the latest record of each motor in
-     * production order, its judged values (the selection {@link LotStatistics#of} makes).
-     */
-    private static Map<String, List<String[]>> points(List<StoredRecord> records) {
-        Map<String, StoredRecord> latest = new LinkedHashMap<>();
-        for (StoredRecord r : records) {
-            String motor = r.submission().partNumber() + "\u0000" + r.submission().serial();
-            latest.remove(motor);
-            latest.put(motor, r);
-        }
-        Map<String, List<String[]>> out = new LinkedHashMap<>();
-        for (StoredRecord r : latest.values()) {
-            for (CheckResult c : r.submission().checks()) {
-                if (Double.isFinite(c.judged())) {
-                    out.computeIfAbsent(c.parameter(), k -> new ArrayList<>())
-                            .add(new String[] {r.submission().serial(), c.label(), Double.toString(c.judged())});
-                }
-            }
+    /** Values in display units (a pure change of unit, as every number shown). */
+    private static double[] scaled(double[] si, double k) {
+        double[] out = new double[si.length];
+        for (int i = 0; i < si.length; i++) {
+            out[i] = si[i] * k;
         }
         return out;
     }

@@ -7,9 +7,10 @@ import java.util.Locale;
 import org.lodestep.qa.CaptureRef;
 import org.lodestep.qa.CheckResult;
 import org.lodestep.qa.Histogram;
-import org.lodestep.qa.InsulationReading;
+import org.lodestep.rig.InsulationReading;
 import org.lodestep.qa.LotStatistics;
 import org.lodestep.qa.StoredRecord;
+import org.lodestep.qa.Tally;
 import org.lodestep.qa.Submission;
 import org.lodestep.qa.Verdict;
 
@@ -64,9 +65,16 @@ public final class QaText {
     }
 
     /** The running tally printed after each motor in lot mode. */
-    public static String tally(int tested, int passed, int failed, int incomplete) {
-        return String.format(Locale.ROOT, "tally: %d tested, %d PASS, %d FAIL, %d INCOMPLETE", tested, passed, failed,
-                incomplete);
+    public static String tally(Tally t) {
+        return String.format(Locale.ROOT, "tally: %d tested, %d PASS, %d FAIL, %d INCOMPLETE", t.tested(), t.passed(),
+                t.failed(), t.incomplete());
+    }
+
+    /** The one-line caution printed before checks that include an insulation test. */
+    public static String insulationCaution(double testVoltageV) {
+        return "Caution: the insulation test applies " + Math.round(testVoltageV) + " V DC. Motor disconnected from any"
+                + " driver, hands off leads and frame while the tester runs, windings discharged afterwards; local"
+                + " electrical-safety rules take precedence.";
     }
 
     /** The lot (or part, or date-range) report. */

@@ -67,13 +67,22 @@ public final class RigText {
 
     /** A table of insulation readings. */
     public static String insulation(List<InsulationReading> readings, List<String> labels) {
-        StringBuilder b = new StringBuilder(String.format(Locale.ROOT, "%-16s %8s %8s %16s%n", "lead to frame",
-                "test V", "dwell s", "insulation"));
+        StringBuilder b = new StringBuilder(String.format(Locale.ROOT, "%-16s %8s %16s%n", "lead to frame",
+                "test V", "insulation"));
         for (InsulationReading r : readings) {
-            b.append(String.format(Locale.ROOT, "%-16s %8d %8.0f %16s%n", lead(r.lead(), labels), r.testVolts(),
-                    r.seconds(), Double.isInfinite(r.resistanceOhm()) ? "above range" : ohm(r.resistanceOhm())));
+            b.append(String.format(Locale.ROOT, "%-16s %8.0f %16s%n", between(r.label(), labels), r.testVoltageV(),
+                    Double.isInfinite(r.resistanceOhm()) ? "above range" : ohm(r.resistanceOhm())));
         }
         return b.toString();
+    }
+
+    /** A rig label {@code <position>-frame} with the position's lead label, when the rig named its leads. */
+    private static String between(String label, List<String> labels) {
+        int dash = label.indexOf('-');
+        if (dash > 0 && label.substring(0, dash).chars().allMatch(Character::isDigit)) {
+            return lead(Integer.parseInt(label.substring(0, dash)), labels);
+        }
+        return label;
     }
 
     /** Ohms with an SI prefix, 4 significant figures. */

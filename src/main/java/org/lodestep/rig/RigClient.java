@@ -107,7 +107,8 @@ public final class RigClient implements Closeable {
 
     /**
      * Insulation resistance from one lead to the frame: arms the tester, then fires within the arm's validity.
-     * The caller must have shown the caution and had it confirmed; this method is the confirmation.
+     * The caller must have shown the caution and had it confirmed; this method is the confirmation. The reading is
+     * labelled {@code <position>-frame}.
      */
     public InsulationReading insulation(int lead, int testVolts, double seconds) throws RigException {
         Fields arm = Fields.parse(command("INS ARM lead=" + lead + " volts=" + testVolts,
@@ -116,8 +117,8 @@ public final class RigClient implements Closeable {
         Fields r = Fields.parse(command("INS FIRE token=" + token + " seconds=" + StreamSpec.fmt(seconds),
                 (int) (seconds * 1000) + settings.replyTimeoutMs() * 5).text());
         String ohm = r.get("ohm");
-        return new InsulationReading(lead, testVolts, seconds,
-                ohm.equals("over") ? Double.POSITIVE_INFINITY : r.number("ohm"));
+        return new InsulationReading(lead + "-frame", ohm.equals("over") ? Double.POSITIVE_INFINITY : r.number("ohm"),
+                testVolts);
     }
 
     /** A coil current step response between two positions: channels current (A) and voltage (V). */

@@ -31,4 +31,20 @@ public record RigInfo(String address, int protocolVersion, String rig, String fi
     public String capability(String key, String fallback) {
         return capabilities.getOrDefault(key, fallback);
     }
+
+    /**
+     * The label of each relay position: the rig's own labels when it names every lead once, else the positions
+     * {@code 1..leads}.
+     */
+    public List<String> leadLabels() {
+        if (labels.size() == leads && labels.stream().distinct().count() == leads
+                && labels.stream().noneMatch(String::isBlank)) {
+            return labels;
+        }
+        List<String> out = new java.util.ArrayList<>();
+        for (int i = 1; i <= leads; i++) {
+            out.add(Integer.toString(i));
+        }
+        return out;
+    }
 }

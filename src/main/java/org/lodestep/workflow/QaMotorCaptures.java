@@ -24,7 +24,7 @@ import org.lodestep.qa.Hashes;
  * Phase inductance, back-EMF constant and step angle of one motor from its step-response and back-EMF captures, read
  * and fitted exactly as {@code motor identify} does ({@link MotorCaptureInputs}, {@link MotorIdentifier}).
  */
-public final class QaMotorCaptures {
+final class QaMotorCaptures {
     private QaMotorCaptures() {
     }
 
@@ -36,7 +36,7 @@ public final class QaMotorCaptures {
      * @param stepAngleDeg  full-step angle from the rotor teeth, degrees
      * @param captures      each file with its SHA-256
      */
-    public record Result(List<Double> inductancesH, double keVsPerRad, double stepAngleDeg, List<CaptureRef> captures) {
+    record Result(List<Double> inductancesH, double keVsPerRad, double stepAngleDeg, List<CaptureRef> captures) {
         public Result {
             inductancesH = List.copyOf(inductancesH);
             captures = List.copyOf(captures);
@@ -44,7 +44,7 @@ public final class QaMotorCaptures {
     }
 
     /** Reads, fits and combines the given captures (either may be empty or null). */
-    public static Result read(List<Path> stepFiles, Double stepSupplyV, Double seriesOhm, Path backEmfFile, Double revolutions,
+    static Result read(List<Path> stepFiles, Double stepSupplyV, Double seriesOhm, Path backEmfFile, Double revolutions,
                        Progress progress) throws IOException, InputFormatException {
         List<CaptureRef> captures = new ArrayList<>();
         List<StepInput> steps = new ArrayList<>();

@@ -178,7 +178,9 @@ class RigCommandTest {
                 "--yes-i-have-read-the-caution");
         assertEquals(0, r.code(), r.err());
         com.fasterxml.jackson.databind.JsonNode j = org.lodestep.report.Json.mapper().readTree(r.out());
-        assertEquals(2, j.get(0).get("lead").asInt());
+        // the one insulation-reading type names what was measured: relay position 2 to the frame
+        assertEquals("2-frame", j.get(0).get("label").asText());
+        assertEquals(500, j.get(0).get("test_voltage_v").asInt());
         assertTrue(r.err().contains("CAUTION - insulation test"), r.err());
     }
 

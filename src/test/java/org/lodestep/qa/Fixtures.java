@@ -1,5 +1,6 @@
 package org.lodestep.qa;
 
+import org.lodestep.rig.InsulationReading;
 import java.nio.charset.StandardCharsets;
 import java.util.List;
 

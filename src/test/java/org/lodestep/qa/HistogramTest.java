@@ -36,4 +36,22 @@ class HistogramTest {
         assertEquals(1, bins.size());
         assertEquals(3, bins.get(0).count());
     }
+
+    @Test
+    void countsEveryValueOnceAndSeparatesOutOfSpec() {
+        double[] v = {1.74, 1.95, 2.0, 2.02, 2.05, 2.24, 2.27};
+        List<Histogram.Bin> bins = Histogram.of(v, 1.80, 2.20);
+        assertEquals(4, bins.stream().mapToInt(Histogram.Bin::insideSpec).sum());
+        assertEquals(3, bins.stream().mapToInt(Histogram.Bin::outsideSpec).sum());
+        // the values outside sit in the outer bins: 1.74 in the first, 2.24 and 2.27 in the last
+        assertEquals(1, bins.get(0).outsideSpec());
+        assertEquals(2, bins.get(bins.size() - 1).outsideSpec());
+    }
+
+    @Test
+    void valuesExactlyAtTheLimitsCountAsInside() {
+        List<Histogram.Bin> bins = Histogram.of(new double[] {1.80, 2.00, 2.20}, 1.80, 2.20);
+        assertEquals(0, bins.stream().mapToInt(Histogram.Bin::outsideSpec).sum());
+        assertEquals(3, bins.stream().mapToInt(Histogram.Bin::count).sum());
+    }
 }

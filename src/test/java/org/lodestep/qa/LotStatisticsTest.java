@@ -66,5 +66,16 @@ class LotStatisticsTest {
         assertEquals(3, p.n());
         assertEquals(1, p.outOfSpec());
         assertEquals((2.00 + 2.25 + 2.05) / 3, p.mean(), 1e-12);
+        // The series every chart draws: the latest record of each motor, in the order of those latest tests.
+        assertEquals(List.of("S2", "S3", "S1"), p.points().stream().map(LotStatistics.Point::serial).toList());
+        assertEquals(List.of(2.00, 2.25, 2.05), p.points().stream().map(LotStatistics.Point::value).toList());
+        // Montgomery, Introduction to Statistical Quality Control, 7th ed., section 6.4: MR_i = |x_i - x_(i-1)|
+        double[] mr = p.movingRanges();
+        assertEquals(2, mr.length);
+        assertEquals(0.25, mr[0], 1e-12);
+        assertEquals(0.20, mr[1], 1e-12);
+        assertEquals((0.25 + 0.20) / 2, p.chart().movingRangeMean(), 1e-12);
+        // one value outside the spec (2.25 > 2.20), counted in its bin
+        assertEquals(1, p.histogram().stream().mapToInt(Histogram.Bin::outsideSpec).sum());
     }
 }

@@ -39,7 +39,7 @@ class QaFormatTest {
     @Test
     void histogramMarksLimitsAndDrawsOneHashPerValue() {
         String h = QaText.histogram(Parameters.PHASE_RESISTANCE,
-                List.of(new Histogram.Bin(1.7, 1.9, 2), new Histogram.Bin(1.9, 2.1, 5)), 1.71, 2.09);
+                List.of(new Histogram.Bin(1.7, 1.9, 2, 0), new Histogram.Bin(1.9, 2.1, 5, 0)), 1.71, 2.09);
         assertTrue(h.contains("|2    ## <LSL"), h);
         assertTrue(h.contains("|5    ##### <USL"), h);
         assertFalse(h.contains("######"), h);

@@ -69,6 +69,18 @@ class QaHtmlTest {
                 assertTrue(svgText.stream().anyMatch(t -> t.startsWith(serial)), serial + " named on a chart");
             }
         }
+        // One histogram rule: the HTML draws the bins of the JSON (and text) report, value for value.
+        List<String> figures = new java.util.ArrayList<>();
+        org.w3c.dom.NodeList fs = d.getElementsByTagNameNS(ReportCli.XHTML, "figure");
+        for (int i = 0; i < fs.getLength(); i++) {
+            figures.add(((org.w3c.dom.Element) fs.item(i)).getAttribute("aria-label"));
+        }
+        for (JsonNode p : params) {
+            int bins = p.get("histogram").size();
+            int n = p.get("n").asInt();
+            assertTrue(figures.stream().anyMatch(f -> f.contains(n + " values of ")
+                    && f.contains(" in " + bins + (bins == 1 ? " bin," : " bins,"))), p.get("parameter") + " " + figures);
+        }
         assertTrue(svgText.stream().anyMatch(t -> t.startsWith("USL ")), svgText.toString());
         assertTrue(svgText.stream().anyMatch(t -> t.startsWith("UCL ")), svgText.toString());
     }

@@ -30,7 +30,7 @@ class RigTextTest {
 
     @Test
     void insulationAboveRangeIsSaidInWords() {
-        String t = RigText.insulation(List.of(new InsulationReading(2, 500, 60, Double.POSITIVE_INFINITY)), List.of());
+        String t = RigText.insulation(List.of(new InsulationReading("2-frame", Double.POSITIVE_INFINITY, 500)), List.of());
         assertTrue(t.contains("above range"), t);
         assertTrue(t.contains("500"), t);
     }

@@ -15,7 +15,6 @@ import org.jfree.chart.JFreeChart;
 import org.jfree.svg.SVGGraphics2D;
 import org.jfree.svg.ViewBox;
 
-import org.lodestep.report.OutputFile;
 
 /**
  * A finished chart, ready to render as inline SVG (through JFreeSVG) or as PNG at its design size.

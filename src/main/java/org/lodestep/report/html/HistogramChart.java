@@ -27,88 +27,54 @@ public final class HistogramChart {
     private HistogramChart() {
     }
 
-    /** Starts a histogram of {@code values} (non-finite values are ignored). */
-    public static Builder builder(String title, String valueLabel, double[] values) {
-        return new Builder(title, valueLabel, values);
+    /**
+     * Starts a histogram of bins computed by the caller (the analysis packages bin; this chart only draws).
+     *
+     * @param edges   the k + 1 bin edges, ascending, equally spaced (a single bin may have zero width: every value
+     *                equal)
+     * @param inside  per bin, values within the limits
+     * @param outside per bin, values outside the limits, drawn as their own darker bars
+     */
+    public static Builder builder(String title, String valueLabel, double[] edges, int[] inside, int[] outside) {
+        return new Builder(title, valueLabel, edges, inside, outside);
     }
 
     private record Limit(double at, String label, boolean spec) {
     }
 
-    /** Equal-width bins from {@code start}; counts within and outside the limits, kept apart. */
-    record Bins(double start, double width, int[] inside, int[] outside) {
-        int outsideCount() {
-            int c = 0;
-            for (int o : outside) {
-                c += o;
-            }
-            return c;
-        }
-    }
-
-    /**
-     * Bins the finite values into about {@code k} bins. With both limits given, the limits fall on bin edges (no bar
-     * straddles a limit) and a value exactly at a limit is counted inside; NaN limits mean none.
-     */
-    static Bins bins(double[] values, double lower, double upper, int k) {
-        double lo = Double.POSITIVE_INFINITY;
-        double hi = Double.NEGATIVE_INFINITY;
-        for (double v : values) {
-            if (Double.isFinite(v)) {
-                lo = Math.min(lo, v);
-                hi = Math.max(hi, v);
-            }
-        }
-        double width = hi > lo ? (hi - lo) / k : Math.max(Math.abs(lo) * 0.01, 1e-9);
-        double start = hi > lo ? lo : lo - width * k / 2.0;
-        if (!Double.isNaN(lower) && !Double.isNaN(upper) && upper > lower) {
-            double span = Math.max(hi, upper) - Math.min(lo, lower);
-            int within = Math.max(2, (int) Math.round(k * (upper - lower) / span));
-            width = (upper - lower) / within;
-            start = lower - Math.ceil((lower - Math.min(lo, lower)) / width - 1e-9) * width;
-            k = Math.min(500, (int) Math.ceil((Math.max(hi, upper) - start) / width - 1e-9));
-            if (start + k * width <= hi) {
-                k = Math.min(500, k + 1);
-            }
-        }
-        int[] inside = new int[k];
-        int[] outside = new int[k];
-        for (double v : values) {
-            if (!Double.isFinite(v)) {
-                continue;
-            }
-            int b = Math.min(k - 1, Math.max(0, (int) Math.floor((v - start) / width + 1e-9)));
-            if ((!Double.isNaN(lower) && v < lower) || (!Double.isNaN(upper) && v > upper)) {
-                outside[b]++;
-            } else {
-                if (!Double.isNaN(upper) && b > 0 && start + b * width >= upper - 1e-9 * width) {
-                    b--; // a value exactly at the upper limit is in spec: keep it left of the line
-                }
-                inside[b]++;
-            }
-        }
-        return new Bins(start, width, inside, outside);
-    }
-
-    /** Collects the values, the limits and the bin count. */
+    /** Collects the bins and the limits. */
     public static final class Builder {
         private final String title;
         private final String valueLabel;
-        private final double[] values;
+        private final double[] edges;
+        private final int[] inside;
+        private final int[] outside;
         private double lower = Double.NaN;
         private double upper = Double.NaN;
         private String lowerLabel;
         private String upperLabel;
         private final List<Limit> lines = new ArrayList<>();
-        private int bins;
         private int widthPx = 760;
         private int heightPx = 340;
         private String description;
 
-        private Builder(String title, String valueLabel, double[] values) {
+        private Builder(String title, String valueLabel, double[] edges, int[] inside, int[] outside) {
             this.title = Html.clean(title);
             this.valueLabel = Html.clean(valueLabel);
-            this.values = Objects.requireNonNull(values, "values").clone();
+            this.edges = Objects.requireNonNull(edges, "edges").clone();
+            this.inside = Objects.requireNonNull(inside, "inside").clone();
+            this.outside = Objects.requireNonNull(outside, "outside").clone();
+            if (inside.length == 0 || edges.length != inside.length + 1 || outside.length != inside.length) {
+                throw new IllegalArgumentException("histogram '" + title + "' needs k >= 1 bins, k + 1 edges and k"
+                        + " outside counts; got " + edges.length + " edges, " + inside.length + " and "
+                        + outside.length + " counts");
+            }
+            for (int b = 0; b < edges.length; b++) {
+                finite(edges[b], "bin edge");
+                if (b > 0 && edges[b] < edges[b - 1]) {
+                    throw new IllegalArgumentException("histogram '" + title + "': bin edges must ascend");
+                }
+            }
         }
 
         /** The lower spec limit, drawn and labelled (e.g. "LSL 1.80 Ω"). */
@@ -128,15 +94,6 @@ public final class HistogramChart {
         /** Another labelled reference line (nominal, lot mean). */
         public Builder reference(double value, String label) {
             lines.add(new Limit(finite(value, "reference"), Html.clean(label), false));
-            return this;
-        }
-
-        /** The number of bins (default: about twice the square root of the count, 8 to 40). */
-        public Builder bins(int count) {
-            if (count < 1 || count > 500) {
-                throw new IllegalArgumentException("bin count must be 1..500, got " + count);
-            }
-            this.bins = count;
             return this;
         }
 
@@ -161,31 +118,29 @@ public final class HistogramChart {
         }
 
         public Chart build() {
-            double lo = Double.POSITIVE_INFINITY;
-            double hi = Double.NEGATIVE_INFINITY;
+            int k = inside.length;
             int n = 0;
-            for (double v : values) {
-                if (Double.isFinite(v)) {
-                    lo = Math.min(lo, v);
-                    hi = Math.max(hi, v);
-                    n++;
-                }
+            int outCount = 0;
+            for (int b = 0; b < k; b++) {
+                n += inside[b] + outside[b];
+                outCount += outside[b];
             }
             if (n == 0) {
-                throw new IllegalArgumentException("histogram '" + title + "' has no finite value");
+                throw new IllegalArgumentException("histogram '" + title + "' has no value");
             }
-            Bins h = HistogramChart.bins(values, lower, upper, bins > 0 ? bins
-                    : Math.max(8, Math.min(40, (int) Math.ceil(2 * Math.sqrt(n)))));
-            int k = h.inside().length;
-            double start = h.start();
-            double width = h.width();
-            int outCount = h.outsideCount();
+            double start = edges[0];
+            double hi = edges[k];
+            // Every value equal: one bin of zero width, drawn one percent of the value wide so it shows.
+            double width = hi > start ? (hi - start) / k : Math.max(Math.abs(start) * 0.01, 1e-9);
+            if (!(hi > start)) {
+                start -= width / 2;
+            }
             XYSeries in = new XYSeries("within limits (" + (n - outCount) + ")", false, false);
             XYSeries out = new XYSeries("\u2716 outside limits (" + outCount + ")", false, false);
             for (int b = 0; b < k; b++) {
                 double centre = start + (b + 0.5) * width;
-                in.add(centre, h.inside()[b]);
-                out.add(centre, h.outside()[b]);
+                in.add(centre, inside[b]);
+                out.add(centre, outside[b]);
             }
             DefaultTableXYDataset data = new DefaultTableXYDataset();
             data.addSeries(in);
@@ -223,8 +178,8 @@ public final class HistogramChart {
             }
             JFreeChart chart = new JFreeChart(title.isEmpty() ? null : title, ChartStyle.TITLE, plot, true);
             String desc = description != null ? description
-                    : (title.isEmpty() ? "Histogram" : title) + ": " + n + " values of " + valueLabel + ", "
-                    + outCount + " outside the limits.";
+                    : (title.isEmpty() ? "Histogram" : title) + ": " + n + " values of " + valueLabel + " in " + k
+                    + (k == 1 ? " bin, " : " bins, ") + outCount + " outside the limits.";
             return new Chart(chart, widthPx, heightPx, desc);
         }
 

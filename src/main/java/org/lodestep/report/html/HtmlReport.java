@@ -8,7 +8,6 @@ import java.util.List;
 import java.util.Map;
 import java.util.Objects;
 
-import org.lodestep.report.OutputFile;
 
 /**
  * One self-contained HTML report: inline CSS and SVG, no scripts, no network. The markup is XHTML-compatible (it

@@ -96,7 +96,18 @@ final class SampleReports {
         r[5] = 2.27;
         r[17] = 1.74;
         r[30] = 2.24;
-        return HistogramChart.builder("Winding resistance, lot L-2207", "resistance at 20 \u00B0C (\u03A9)", r)
+        List<org.lodestep.qa.Histogram.Bin> bins = org.lodestep.qa.Histogram.of(r, 1.80, 2.20);
+        double[] edges = new double[bins.size() + 1];
+        int[] inside = new int[bins.size()];
+        int[] outside = new int[bins.size()];
+        for (int i = 0; i < bins.size(); i++) {
+            edges[i] = bins.get(i).lower();
+            edges[i + 1] = bins.get(i).upper();
+            inside[i] = bins.get(i).insideSpec();
+            outside[i] = bins.get(i).outsideSpec();
+        }
+        return HistogramChart.builder("Winding resistance, lot L-2207", "resistance at 20 \u00B0C (\u03A9)", edges,
+                        inside, outside)
                 .lowerLimit(1.80, "LSL 1.80 \u03A9").upperLimit(2.20, "USL 2.20 \u03A9")
                 .reference(2.00, "nominal 2.00 \u03A9")
                 .build();

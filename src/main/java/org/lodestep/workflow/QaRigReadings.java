@@ -1,6 +1,5 @@
-package org.lodestep.cli;
+package org.lodestep.workflow;
 
-import java.io.PrintWriter;
 import java.util.ArrayList;
 import java.util.List;
 import java.util.Locale;
@@ -9,7 +8,8 @@ import java.util.OptionalDouble;
 
 import org.lodestep.qa.CaptureRef;
 import org.lodestep.qa.Hashes;
-import org.lodestep.qa.InsulationReading;
+import org.lodestep.rig.InsulationReading;
+import org.lodestep.rig.InsulationReading;
 import org.lodestep.rig.ResistanceReading;
 import org.lodestep.rig.RigClient;
 import org.lodestep.rig.RigException;
@@ -26,7 +26,7 @@ import org.lodestep.wiring.Winding;
  * voltage (1-minute reading, IEEE 43 practice). Every reading goes into a canonical text whose SHA-256 is recorded
  * as the record's rig capture.
  */
-final class QaRig {
+final class QaRigReadings {
 
     /** IEEE 43's 1-minute insulation reading, s. */
     static final double INSULATION_DWELL_S = 60;
@@ -35,15 +35,15 @@ final class QaRig {
     record Readings(List<Double> phaseResistancesOhm, List<InsulationReading> insulation, CaptureRef capture) {
     }
 
-    private QaRig() {
+    private QaRigReadings() {
     }
 
-    static Readings measure(RigClient c, String address, double insulationTestVoltageV, PrintWriter log)
+    static Readings measure(RigClient c, String address, double insulationTestVoltageV, Progress progress)
             throws RigException {
         StringBuilder raw = new StringBuilder();
         raw.append("rig ").append(c.info().rig()).append(" id ").append(c.info().id()).append(" fw ")
                 .append(c.info().firmware()).append('\n');
-        List<String> leads = RigLeadsIdentify.labels(c.info().labels(), c.info().leads());
+        List<String> leads = c.info().leadLabels();
         ProbeSession session = new ProbeSession(leads, IdentifySettings.DEFAULT);
         while (!session.determined()) {
             Optional<LeadPair> next = session.nextPair();
@@ -51,6 +51,7 @@ final class QaRig {
                 break;
             }
             LeadPair p = next.get();
+            progress.step("measuring " + p.a() + "\u2013" + p.b());
             ResistanceReading r = c.resistance(leads.indexOf(p.a()) + 1, leads.indexOf(p.b()) + 1);
             session.record(p, r.open() ? OptionalDouble.empty() : OptionalDouble.of(r.resistanceOhm()));
             raw.append(String.format(Locale.ROOT, "res %s %s %s%n", p.a(), p.b(),
@@ -67,17 +68,17 @@ final class QaRig {
         if (!Double.isNaN(insulationTestVoltageV)) {
             for (Winding w : id.windings()) {
                 String lead = w.ends().get(0);
-                org.lodestep.rig.InsulationReading r = c.insulation(leads.indexOf(lead) + 1,
-                        (int) Math.round(insulationTestVoltageV), INSULATION_DWELL_S);
-                raw.append(String.format(Locale.ROOT, "ins %s %d %s %s%n", lead, r.testVolts(),
-                        Double.toString(r.seconds()), Double.toString(r.resistanceOhm())));
-                ins.add(new InsulationReading(lead + "-frame", r.resistanceOhm(), r.testVolts()));
-                log.printf(Locale.ROOT, "  insulation %s to frame at %d V DC: %s%n", lead, r.testVolts(),
-                        Double.isInfinite(r.resistanceOhm()) ? "above range"
-                                : String.format(Locale.ROOT, "%.4g Mohm", r.resistanceOhm() / 1e6));
+                progress.step("insulation " + lead + " to frame");
+                InsulationReading r = c.insulation(leads.indexOf(lead) + 1, (int) Math.round(insulationTestVoltageV),
+                        INSULATION_DWELL_S).withLabel(lead + "-frame");
+                raw.append(String.format(Locale.ROOT, "ins %s %d %s %s%n", lead, Math.round(r.testVoltageV()),
+                        Double.toString(INSULATION_DWELL_S), Double.toString(r.resistanceOhm())));
+                ins.add(r);
+                progress.note(String.format(Locale.ROOT, "insulation %s to frame at %d V DC: %s", lead,
+                        Math.round(r.testVoltageV()), Double.isInfinite(r.resistanceOhm()) ? "above range"
+                                : String.format(Locale.ROOT, "%.4g Mohm", r.resistanceOhm() / 1e6)));
             }
         }
-        log.flush();
         String text = raw.toString();
         return new Readings(phases, ins, new CaptureRef("rig " + address, "rig", Hashes.sha256(text)));
     }
