@@ -256,9 +256,21 @@ public final class ResonanceHtml {
                 "The measured response (points, or a thin line when dense), the fitted decay envelope and the fitted"
                         + " damped oscillation, from the fitted stretch on.");
         Map<String, String> facts = new LinkedHashMap<>();
-        facts.put("Natural frequency", String.format(Locale.ROOT, "%.2f Hz", r.naturalFrequencyHz()));
+        boolean bb = !r.backbone().isEmpty();
+        facts.put(bb ? "Natural frequency (small-signal)" : "Natural frequency", bb
+                ? String.format(Locale.ROOT, "%.2f Hz (\u00B1 %.2f)", r.naturalFrequencyHz(), r.naturalFrequencyErrorHz())
+                : String.format(Locale.ROOT, "%.2f Hz", r.naturalFrequencyHz()));
         facts.put("Damped frequency", String.format(Locale.ROOT, "%.2f Hz", r.dampedFrequencyHz()));
-        facts.put("Damping ratio \u03B6", String.format(Locale.ROOT, "%.4f", r.dampingRatio()));
+        facts.put(bb ? "Damping ratio \u03B6 (small-signal)" : "Damping ratio \u03B6", bb
+                ? String.format(Locale.ROOT, "%.4f \u00B1 %.4f", r.dampingRatio(), r.dampingRatioError())
+                : String.format(Locale.ROOT, "%.4f", r.dampingRatio()));
+        if (bb) {
+            facts.put("Large-swing frequency (first cycle)", String.format(Locale.ROOT, "%.2f Hz",
+                    r.largeSwingFrequencyHz()));
+            facts.put("One sinusoid over the whole ring", String.format(Locale.ROOT, "%.2f Hz, R\u00B2 %.3f",
+                    r.wholeRingFrequencyHz(), r.wholeRingRSquared()));
+            facts.put("Cycles measured", Integer.toString(r.backbone().size()));
+        }
         facts.put("Quality factor Q", String.format(Locale.ROOT, "%.1f", r.qualityFactor()));
         facts.put("Decay rate \u03C3", String.format(Locale.ROOT, "%.2f 1/s", r.decayRatePerS()));
         facts.put("Fit quality R\u00B2", String.format(Locale.ROOT, "%.4f", r.rSquared()));
