@@ -90,7 +90,8 @@ public final class ResonanceText {
     /** The synchronism verdict: the first thing a sweep's text says. */
     static void stall(PrintWriter out, Stall s, RateUnits u) {
         if (!s.lostSynchronism()) {
-            out.println("Synchronism: kept; " + s.evidence() + ".");
+            out.println((s.evidence().startsWith("not judged") ? "Synchronism: " : "Synchronism: kept; ")
+                    + s.evidence() + ".");
             return;
         }
         out.printf(Locale.ROOT, "WARNING: LOST SYNCHRONISM from %s full steps/s = %s pulses/s = %s rpm%s.%n",

@@ -264,11 +264,15 @@ public final class SweepAnalyzer {
                 ? WatchList.find(rates, levels, BandDetector.baseline(rates, levels, bandSettings.baselineHalfWidth(),
                 bandSettings.baselineQuantile()), bands, fn, bandSettings.thresholdDb())
                 : List.of();
+        // A phase current is dominated by the drive's own switching pattern, periodic in the step count whatever
+        // the rotor does: on a simulated constant-voltage sweep that slipped poles its synchronous share stayed at
+        // 0.99, so it cannot say the rotor kept step.
         Stall stall = kind == ResponseChannel.CURRENT_CHOPPER
                 ? Stall.notJudged("not judged: a current-regulating chopper holds the phase current to its setting,"
-                + " so a slipping rotor barely shows in it")
-                : SynchronismJudge.judge(sync.finish(), kind == ResponseChannel.VIBRATION ? "the vibration"
-                : "the phase current");
+                + " so a slipping rotor barely shows in it; record vibration or sound to see lost steps")
+                : kind.isCurrent() ? Stall.notJudged("not judged: a phase current follows the drive's switching"
+                + " pattern even while the rotor slips, so it cannot show lost steps; record vibration or sound")
+                : SynchronismJudge.judge(sync.finish(), "the vibration");
         return new SweepResult(points, bands, fn, source, law != null ? "law" : "pulses",
                 welch.spectrum(SpectrumScaling.DENSITY), spectrogram, framer.segmentCount(), outside,
                 fed / sampleRateHz, kind, stall, watch, CurrentBands.note(kind));
