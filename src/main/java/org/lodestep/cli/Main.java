@@ -29,6 +29,7 @@ import picocli.CommandLine.Option;
             ResonanceCommand.class,
             QaCommand.class,
             RigCommand.class,
+            DriveCommand.class,
             CommandLine.HelpCommand.class
         },
         footerHeading = "%nExit codes:%n",
