@@ -9,7 +9,7 @@ import org.lodestep.wiring.Finding;
  * Phases the coils of a motor from a multi-channel back-EMF capture taken while the shaft is turned by hand, tracks
  * the electrical frequency through the varying speed, and counts rotor teeth.
  *
- * <p>Model (Acarnley, <i>Stepping Motors</i>, 4th ed., hybrid-motor chapters; REFERENCE-CHECKS item 14, from memory
+ * <p>Model (Acarnley, <i>Stepping Motors</i>, 4th ed., hybrid-motor chapters; references §14, from memory
  * there): {@code eA = -Ke·omega·sin(Nr·theta)}, {@code eB = Ke·omega·cos(Nr·theta)}. Coils of one phase are in phase
  * or in antiphase; the two phases are 90° apart and which one leads depends on the direction turned. Method:
  * <ol>

@@ -5,7 +5,8 @@ package org.lodestep.motor;
  * value, and rule-of-thumb supply voltage and current ratings.
  *
  * <p>The rate limit applies the RL step response (Alexander and Sadiku, <i>Fundamentals of Electric Circuits</i>,
- * first-order circuits; REFERENCE-CHECKS item 10) to a current reversal: in full stepping each phase current reverses
+ * first-order circuits; Alexander and Sadiku, Fundamentals of Electric Circuits, first-order circuits, references
+ * §10) to a current reversal: in full stepping each phase current reverses
  * once every two full steps, and with the whole supply across the winding a swing from {@code -I} to {@code +I}
  * takes {@code t = tau·ln((V + R·I)/(V - R·I))}. Back-EMF, which lowers the voltage left for the current at speed,
  * and driver dead time are ignored, so the real limit is lower. The supply and current rules are common practice

@@ -6,7 +6,8 @@ package org.lodestep.motor;
  * <p>With SI units and the same per-phase peak convention, {@code Ke [V·s/rad] = Kt [N·m/A]} (power balance
  * {@code e·i = T·omega}); with sinusoidal back-EMF and quadrature phase currents of peak {@code I}, {@code T = Kt·I}.
  * Sources: "Motor constants" (unit identity N·m/A = V·s) and the energy-balance derivation cited in
- * REFERENCE-CHECKS item 15; Acarnley, <i>Stepping Motors</i>, 4th ed., hybrid-motor model chapters. The torque is
+ * power balance e·i = T·ω, references §15; Acarnley, <i>Stepping Motors</i>, 4th ed., hybrid-motor model chapters.
+ * The torque is
  * ideal: detent torque, saturation and losses are ignored.
  */
 final class MotorConstants {

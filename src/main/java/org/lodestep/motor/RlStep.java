@@ -4,7 +4,8 @@ package org.lodestep.motor;
  * First-order RL circuit driven by a voltage step: {@code i(t) = (V/R)(1 - e^(-t/tau))}, {@code tau = L/R}.
  *
  * <p>Source: C. K. Alexander, M. N. O. Sadiku, <i>Fundamentals of Electric Circuits</i>, chapter on first-order
- * circuits (step response of an RL circuit); REFERENCE-CHECKS item 10. {@code R} is the whole loop resistance
+ * circuits (step response of an RL circuit); Alexander and Sadiku, Fundamentals of Electric Circuits, first-order
+ * circuits, references §10. {@code R} is the whole loop resistance
  * (winding plus sense resistor plus source).
  */
 public final class RlStep {

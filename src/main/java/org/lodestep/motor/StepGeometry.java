@@ -5,7 +5,8 @@ package org.lodestep.motor;
  *
  * <p>Source: P. P. Acarnley, <i>Stepping Motors: A Guide to Theory and Practice</i>, 4th ed., IEE 2002, ch. 1-2;
  * D. W. Jones, <i>Stepping Motors</i> tutorial, part 2 "Stepping Motor Physics" (torque-angle period = 4 steps);
- * REFERENCE-CHECKS item 1. One electrical cycle of the back-EMF is one rotor-tooth pitch, so the rotor tooth count is
+ * Acarnley, Stepping Motors, 4th ed., ch. 1-2, references §1. One electrical cycle of the back-EMF is one rotor-tooth
+ * pitch, so the rotor tooth count is
  * the number of electrical cycles per mechanical revolution (item 14).
  */
 public final class StepGeometry {

@@ -8,7 +8,8 @@ import org.lodestep.wiring.Connection;
 import org.lodestep.wiring.Finding;
 
 /**
- * Turns two oriented phases into driver terminals for one connection (REFERENCE-CHECKS item 5): series aiding joins
+ * Turns two oriented phases into driver terminals for one connection (coupled coils L = L1 + L2 ± 2M, Alexander and
+ * Sadiku; current factors common practice, references §5): series aiding joins
  * the end of the first coil to the start of the second; parallel joins starts together and ends together; half uses
  * the first coil of each phase; unipolar takes the joint (or centre tap) as the common.
  */

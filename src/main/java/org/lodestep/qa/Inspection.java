@@ -13,7 +13,7 @@ import org.lodestep.wiring.PhaseImbalance;
  *
  * <p>Phase resistance is referred to the spec's reference temperature with the copper formula before judging;
  * without a winding temperature it is judged as measured and the note says so. Insulation is judged on the raw
- * reading (REFERENCE-CHECKS item 9, small-motor practice) and its 40 °C value (IEEE 43 clause 6.3) is noted for
+ * reading (references §9, small-motor practice) and its 40 °C value (IEEE 43 clause 6.3) is noted for
  * trending. A reading at another test voltage than the spec's leaves the check incomplete.
  */
 public final class Inspection {

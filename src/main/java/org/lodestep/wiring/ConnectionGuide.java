@@ -8,7 +8,8 @@ import java.util.Map;
 /**
  * The driver connections a topology allows, with the user's lead labels on the driver terminals.
  *
- * <p>Factors come from {@link Connection} (REFERENCE-CHECKS item 5). Resistance cannot tell which two
+ * <p>Factors come from {@link Connection} (coupled coils L = L1 + L2 ± 2M, Alexander and Sadiku; current factors
+ * common practice, references §5). Resistance cannot tell which two
  * half-windings of an 8-lead motor form one phase, nor the polarity of any coil, nor (5-lead) which two ends belong
  * to one phase: those mappings are given as provisional and marked unverified; back-EMF phasing settles them.
  */

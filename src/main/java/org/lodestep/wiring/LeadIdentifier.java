@@ -8,7 +8,7 @@ import java.util.List;
  * Works out windings, centre taps, topology, findings and driver connections from lead-pair resistances, complete or
  * not.
  *
- * <p>Method (circuit topology, common practice; REFERENCE-CHECKS item 4): leads joined by continuity form a group;
+ * <p>Method (circuit topology, common practice; references §4): leads joined by continuity form a group;
  * a group of two is one winding (or one half-winding of an 8-lead motor), a group of three is a centre-tapped winding
  * whose tap reads about half the end-to-end resistance to both ends, a group of five is four half-windings sharing
  * one common lead. The tap or common lead is found by fitting coil resistances (see {@link HubFit}), which tolerates

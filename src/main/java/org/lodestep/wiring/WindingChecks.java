@@ -12,7 +12,8 @@ import java.util.OptionalDouble;
  *
  * <p>Series relation (circuit topology): end-to-end = half 1 + half 2. Probe contact adds 0 to
  * {@code contactAllowanceOhm} to every reading, so end-to-end − (half 1 + half 2) lies between −2·allowance and
- * +allowance, plus 2 % of the reading for the meter. Imbalance = (max − min)/mean (REFERENCE-CHECKS item 4).
+ * +allowance, plus 2 % of the reading for the meter. Imbalance = (max − min)/mean (common practice, from the circuit
+ * topology, references §4).
  */
 final class WindingChecks {
     private static final double METER_FRACTION = 0.02;

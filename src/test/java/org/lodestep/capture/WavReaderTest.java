@@ -23,7 +23,8 @@ import org.junit.jupiter.api.io.TempDir;
 
 class WavReaderTest {
 
-    // REFERENCE-CHECKS item 22: IBM/Microsoft Multimedia Programming Interface and Data Specifications 1.0 (1991),
+    // IBM/Microsoft RIFF specification, 1991, references §22: IBM/Microsoft Multimedia Programming Interface and Data
+    // Specifications 1.0 (1991),
     // as summarised on the Stanford CCRMA "WAVE PCM soundfile format" page: the 44-byte header of 48 kHz mono
     // 16-bit PCM with 96000 data bytes (RIFF size 96036).
     private static final String HEADER_48K_MONO_16 = "52494646247701005741564566 6d7420100000000100010080bb0000"

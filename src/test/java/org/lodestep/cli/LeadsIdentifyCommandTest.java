@@ -15,7 +15,8 @@ import com.fasterxml.jackson.databind.ObjectMapper;
 import org.junit.jupiter.api.Test;
 
 /**
- * End-to-end tests of {@code leads identify} on the bundled sample captures (layouts of REFERENCE-CHECKS item 4) and
+ * End-to-end tests of {@code leads identify} on the bundled sample captures (layouts of common practice, from the
+ * circuit topology, references §4) and
  * on the broken fixtures of {@code capture/resistance/bad}.
  */
 class LeadsIdentifyCommandTest {
@@ -38,7 +39,7 @@ class LeadsIdentifyCommandTest {
         assertEquals("blue", w.get("ends").get(1).asText());
         assertTrue(w.get("tap").isNull());
         assertEquals(2.48, w.get("resistance_ohm").asDouble(), 1e-9);
-        // 22.5 °C → 20 °C with k = 235 (IEC 60034-1): 2.48 × 255/257.5 (REFERENCE-CHECKS item 3 formula).
+        // 22.5 °C → 20 °C with k = 235 (IEC 60034-1): 2.48 × 255/257.5 (references §3 formula).
         assertEquals(2.48 * 255 / 257.5, w.get("resistance_at_reference_ohm").asDouble(), 1e-9);
         assertEquals(0, j.get("findings").size());
         assertEquals(0, j.get("missing_pairs").size());
@@ -132,7 +133,7 @@ class LeadsIdentifyCommandTest {
     void ambientOptionOverridesTheFileAndCopperKCanBeIeee() throws Exception {
         CliRun r = CliRun.of("leads", "identify", "--json", "--ambient-c", "25", "--copper-k", "234.5",
                 "--pair", "a-b=1.5", "--pair", "c-d=1.5", "--pair", "a-c=OL");
-        // REFERENCE-CHECKS item 3: 1.500 Ω at 25 °C → 1.47110 Ω at 20 °C with k = 234.5.
+        // IEC 60034-1, references §3: 1.500 Ω at 25 °C → 1.47110 Ω at 20 °C with k = 234.5.
         assertEquals(1.47110, json(r).get("windings").get(0).get("resistance_at_reference_ohm").asDouble(), 1.5e-5);
         assertEquals(2, CliRun.of("leads", "identify", "--copper-k", "240", "--pair", "a-b=1").code());
     }

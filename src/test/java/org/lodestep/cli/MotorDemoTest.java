@@ -23,7 +23,8 @@ class MotorDemoTest {
         assertEquals(ExitCode.OK, code, err.toString());
         assertTrue(text.toString().contains("MOTOR CARD  8-lead motor, bipolar series"), text.toString());
         JsonNode card = Json.mapper().readTree(Files.readString(out.resolve("motor-card.json")));
-        // sample generator: 50 rotor teeth (REFERENCE-CHECKS item 1: 200 full steps per revolution)
+        // sample generator: 50 rotor teeth (Acarnley, Stepping Motors, 4th ed., ch. 1-2, references §1: 200 full
+        // steps per revolution)
         assertEquals(200, card.get("full_steps_per_revolution").asInt());
         assertTrue(card.get("natural_frequency_hz").isNumber());
     }

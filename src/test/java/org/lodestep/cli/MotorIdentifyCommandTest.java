@@ -68,7 +68,7 @@ class MotorIdentifyCommandTest {
         String bMinus = terminal(card, "B-").get(0).asText();
         // B lags A: with A+ = 7 the truth gives B+ = 2 (B- = 3); with A reversed, B reversed too
         assertEquals(aPlus.equals("7") ? "2-3" : "5-8", bPlus + "-" + bMinus);
-        // REFERENCE-CHECKS item 1: 50 teeth -> 1.8°
+        // Acarnley, Stepping Motors, 4th ed., ch. 1-2, references §1: 50 teeth -> 1.8°
         assertEquals(50, card.get("rotor_teeth").asInt());
         assertEquals(1.8, card.get("step_angle_deg").asDouble(), 1e-12);
         // generator: Ke 0.090 V·s/rad per coil (issue 5 key ke_v_s_per_rad), 2 % for the hand-turn envelope
@@ -122,7 +122,8 @@ class MotorIdentifyCommandTest {
 
     @Test
     void openCoilInResistanceMatrixExitsWithFinding(@TempDir Path tmp) throws Exception {
-        // REFERENCE-CHECKS item 4: an 8-lead motor reads 4 coils; here 7-8 reads open, so one coil is broken.
+        // common practice, from the circuit topology, references §4: an 8-lead motor reads 4 coils; here 7-8 reads
+        // open, so one coil is broken.
         StringBuilder b = new StringBuilder("lead_a,lead_b,resistance_ohm\n");
         for (int i = 1; i <= 8; i++) {
             for (int j = i + 1; j <= 8; j++) {

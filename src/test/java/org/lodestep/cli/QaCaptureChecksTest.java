@@ -22,7 +22,8 @@ import com.fasterxml.jackson.databind.ObjectMapper;
 /**
  * {@code qa check} judging phase inductance, back-EMF constant and step angle from step-response and back-EMF captures.
  *
- * <p>The captures are made from the analytic models (REFERENCE-CHECKS item 10: RL step {@code i = V/R·(1 − e^(−t/τ))},
+ * <p>The captures are made from the analytic models (Alexander and Sadiku, Fundamentals of Electric Circuits,
+ * first-order circuits, references §10: RL step {@code i = V/R·(1 − e^(−t/τ))},
  * {@code τ = L/R}; item 14: {@code e = Ke·ω·sin(Nr·θ)}, Ke in peak V per mechanical rad/s as item 15 defines it), so
  * the expected values are the inductance and Ke the files were made with, not anything the code computes; the step
  * angle is item 1's {@code 360°/(4·Nr)}.
@@ -92,13 +93,15 @@ class QaCaptureChecksTest {
         assertEquals(ExitCode.OK, r.code(), r.err() + r.out());
         JsonNode doc = new ObjectMapper().readTree(r.out());
         assertEquals("PASS", doc.at("/record/submission/verdict").asText());
-        // REFERENCE-CHECKS item 10: the files were made with L = 2.80 mH and 2.70 mH; the fit recovers them within 2 %
+        // Alexander and Sadiku, Fundamentals of Electric Circuits, first-order circuits, references §10: the files
+        // were made with L = 2.80 mH and 2.70 mH; the fit recovers them within 2 %
         assertEquals(2.80e-3, check(doc, "phase_inductance", "A").get("measured").asDouble(), 0.02 * 2.80e-3);
         assertEquals(2.70e-3, check(doc, "phase_inductance", "B").get("measured").asDouble(), 0.02 * 2.70e-3);
-        // REFERENCE-CHECKS items 14 and 15 (Acarnley 4th ed.; SI peak convention): made with Ke = 0.090 V·s/rad per
+        // references §14; power balance e·i = T·ω, references §15 (Acarnley 4th ed.; SI peak convention): made with
+        // Ke = 0.090 V·s/rad per
         // phase; recovered within 3 %
         assertEquals(0.090, check(doc, "back_emf_constant", "").get("measured").asDouble(), 0.03 * 0.090);
-        // REFERENCE-CHECKS item 1 (Jones, Stepping Motors tutorial part 2; Acarnley 4th ed. ch. 1-2):
+        // references §1 (Jones, Stepping Motors tutorial part 2; Acarnley 4th ed. ch. 1-2):
         // 50 rotor teeth -> 360/(4·50) = 1.8°
         assertEquals(1.8, check(doc, "step_angle", "").get("measured").asDouble(), 1e-9);
         assertEquals("PASS", check(doc, "step_angle", "").get("verdict").asText());
@@ -119,7 +122,7 @@ class QaCaptureChecksTest {
     @Test
     void eightLeadSampleIsJudgedAsWiredInSeries() throws IOException {
         // sample-captures/motor: coils of 2.10 mH, coupling 0.96, Ke 0.090 V·s/rad per coil (its README). Wired in
-        // series, REFERENCE-CHECKS item 5 (L = L1 + L2 + 2M, any circuit-theory text): L = 2·2.10·(1 + 0.96)
+        // series, references §5 (L = L1 + L2 + 2M, any circuit-theory text): L = 2·2.10·(1 + 0.96)
         // = 8.232 mH per phase, and the two coils' EMFs add: Ke = 0.180 V·s/rad per phase.
         Path series = dir.resolve("hx.toml");
         Files.writeString(series, """

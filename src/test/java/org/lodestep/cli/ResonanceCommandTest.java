@@ -49,12 +49,13 @@ class ResonanceCommandTest {
             }
         }
         assertTrue(strongest != null, r.out());
-        // Low-speed resonance at a full-step rate equal to f_n (Acarnley 2002, section 4.3; REFERENCE-CHECKS item 12):
+        // Low-speed resonance at a full-step rate equal to f_n (Acarnley 2002, section 4.3; references §12):
         // the band must reach within 8 % of the model's 120 Hz.
         assertTrue(strongest.get("start_full_steps_per_s").asDouble() <= MODEL_NATURAL_HZ * 1.08
                 && strongest.get("end_full_steps_per_s").asDouble() >= MODEL_NATURAL_HZ * 0.92, strongest.toString());
         assertEquals("low_speed_resonance", strongest.get("class").asText());
-        // 16 pulses per full step; 200 steps/rev and 40 mm/rev (REFERENCE-CHECKS item 1): mm/s = rate / 200 × 40.
+        // 16 pulses per full step; 200 steps/rev and 40 mm/rev (Acarnley, Stepping Motors, 4th ed., ch. 1-2,
+        // references §1): mm/s = rate / 200 × 40.
         double start = strongest.get("start_full_steps_per_s").asDouble();
         assertEquals(start * 16, strongest.get("start_pulses_per_s").asDouble(), 1e-9);
         assertEquals(start / 200 * 40, strongest.get("start_mm_per_s").asDouble(), 1e-9);
@@ -124,7 +125,7 @@ class ResonanceCommandTest {
         Run r = run("resonance", "ringdown", RINGDOWN_CSV, "--json");
         assertEquals(0, r.code(), r.err());
         JsonNode j = r.json();
-        // The model's small-angle f_n is 120 Hz (Acarnley 2002, ch. 4; REFERENCE-CHECKS item 11); a full step is a
+        // The model's small-angle f_n is 120 Hz (Acarnley 2002, ch. 4; references §11); a full step is a
         // large swing that softens the sinusoidal torque curve, so agreement within 8 %. ζ of the model is 0.08.
         assertEquals(MODEL_NATURAL_HZ, j.get("natural_frequency_hz").asDouble(), MODEL_NATURAL_HZ * 0.08);
         assertEquals(0.08, j.get("damping_ratio").asDouble(), 0.02);
@@ -137,7 +138,7 @@ class ResonanceCommandTest {
 
     @Test
     void predictMatchesTheReferenceCheckValues() throws Exception {
-        // REFERENCE-CHECKS item 11 (Acarnley 2002, ch. 4; from memory): 0.4 N·m, 5.4e-6 kg·m², N_r 50 → 306.294 Hz;
+        // references §11 (Acarnley 2002, ch. 4; from memory): 0.4 N·m, 5.4e-6 kg·m², N_r 50 → 306.294 Hz;
         // item 12: sub-multiples 153.15 and 102.10 full steps/s, 91.89 rpm at f_n.
         Run r = run("resonance", "predict", "--holding-torque-nm", "0.4", "--inertia-kgm2", "5.4e-6", "--json");
         assertEquals(0, r.code(), r.err());

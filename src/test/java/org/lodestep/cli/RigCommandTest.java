@@ -44,7 +44,8 @@ class RigCommandTest {
     void resistanceOfAllPairsOfASixLeadMotorShowsSixConductingPairs() {
         Result r = run("rig", "measure", "sim:salvage-6", "resistance");
         assertEquals(0, r.code(), r.err());
-        // 6 leads: 15 pairs, of which each phase's 3 leads give 3 conducting pairs (REFERENCE-CHECKS item 4)
+        // 6 leads: 15 pairs, of which each phase's 3 leads give 3 conducting pairs (common practice, from the circuit
+        // topology, references §4)
         long open = r.out().lines().filter(l -> l.endsWith("open")).count();
         assertEquals(15 - 6, open, r.out());
     }

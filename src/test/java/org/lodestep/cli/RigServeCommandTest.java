@@ -95,7 +95,8 @@ class RigServeCommandTest {
                         conducting++;
                     }
                 }
-                // an 8-lead motor: each lead belongs to exactly one isolated half-winding (REFERENCE-CHECKS item 4)
+                // an 8-lead motor: each lead belongs to exactly one isolated half-winding (common practice, from the
+                // circuit topology, references §4)
                 assertEquals(1, conducting);
                 RigCapture cap = c.sweep(new SweepPlan(50, 150, 0.5, 2, 5000), RigClient.Progress.NONE);
                 assertEquals(2500, cap.signal().length());

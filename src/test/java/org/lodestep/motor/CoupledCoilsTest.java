@@ -5,7 +5,7 @@ import static org.junit.jupiter.api.Assertions.assertEquals;
 import org.junit.jupiter.api.Test;
 
 class CoupledCoilsTest {
-    // REFERENCE-CHECKS item 5 (common practice; L = L1 + L2 + 2M from circuit theory): r = 1.20 ohm, Lc = 2.00 mH,
+    // references §5 (common practice; L = L1 + L2 + 2M from circuit theory): r = 1.20 ohm, Lc = 2.00 mH,
     // Iu = 1.00 A; the series and parallel factors are checked in wiring.ConnectionTest.
 
     @Test

@@ -8,7 +8,8 @@ class DriveLimitsTest {
 
     @Test
     void fullCurrentRateFollowsReversalTime() {
-        // Derived from REFERENCE-CHECKS item 10 (first-order RL response): R = 2 ohm, L = 4 mH, V = 24 V, I = 1 A;
+        // Derived from Alexander and Sadiku, Fundamentals of Electric Circuits, first-order circuits, references §10
+        // (first-order RL response): R = 2 ohm, L = 4 mH, V = 24 V, I = 1 A;
         // reversal -1 A -> +1 A takes tau·ln((24 + 2)/(24 - 2)) = 2 ms x 0.167054 = 0.334108 ms; two full steps per
         // reversal -> 5986.1 full steps/s. Computed by hand from the published formula.
         assertEquals(5986.1, DriveLimits.fullCurrentRateFullStepsPerS(24, 2.0, 4.0e-3, 1.0), 0.1);

@@ -8,7 +8,8 @@ import java.util.Locale;
 
 /**
  * Step-response and back-EMF capture files of an invented 4-lead motor (phase A on leads 1-2, phase B on 3-4), made
- * from the analytic models of {@link SyntheticMotor} (REFERENCE-CHECKS items 10 and 14), for tests outside this
+ * from the analytic models of {@link SyntheticMotor} (Alexander and Sadiku, Fundamentals of Electric Circuits,
+ * first-order circuits, references §10; Acarnley, Stepping Motors, 4th ed., references §14), for tests outside this
  * package that need the files rather than the engine.
  */
 public final class FourLeadCaptures {

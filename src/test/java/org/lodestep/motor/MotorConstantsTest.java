@@ -5,7 +5,8 @@ import static org.junit.jupiter.api.Assertions.assertEquals;
 import org.junit.jupiter.api.Test;
 
 class MotorConstantsTest {
-    // REFERENCE-CHECKS item 15: "Motor constants" encyclopaedia article (N·m/A = V·s) and the energy-balance
+    // power balance e·i = T·ω, references §15: "Motor constants" encyclopaedia article (N·m/A = V·s) and the
+    // energy-balance
     // derivation cited there; checks rel 1e-5.
     private static final double TOL = 1e-5;
 

@@ -17,7 +17,8 @@ import org.lodestep.wiring.Topology;
 class MotorIdentifierTest {
     private static final double FS = 10_000;
     // 8-lead motor with shuffled labels (see BackEmfAnalyzerTest): A = 1-2 (start 1) and 5-6 (start 6);
-    // B = 3-4 (start 4) and 7-8 (start 7). Coils 1.20 ohm, 2.00 mH, kappa 0.95 (REFERENCE-CHECKS item 5 values).
+    // B = 3-4 (start 4) and 7-8 (start 7). Coils 1.20 ohm, 2.00 mH, kappa 0.95 (coupled coils L = L1 + L2 ± 2M,
+    // Alexander and Sadiku; current factors common practice, references §5 values).
     private static final List<SyntheticMotor.Coil> EIGHT = List.of(
             new SyntheticMotor.Coil("1", "2", true, false),
             new SyntheticMotor.Coil("3", "4", false, true),
@@ -67,7 +68,7 @@ class MotorIdentifierTest {
         assertEquals(List.of("8"), leadsOf(card, "B-"));
         assertEquals(List.of(List.of("2", "6"), List.of("3", "7")), card.wiring().joinTogether());
         assertEquals(50, card.rotorTeeth());
-        // REFERENCE-CHECKS item 1: 50 teeth -> 200 full steps, 1.8°
+        // Acarnley, Stepping Motors, 4th ed., ch. 1-2, references §1: 50 teeth -> 200 full steps, 1.8°
         assertEquals(200, card.fullStepsPerRevolution());
         assertEquals(1.8, card.stepAngleDeg(), 1e-12);
         PhaseCard a = card.phases().get(0);

@@ -9,7 +9,7 @@ class NaturalFrequencyTest {
 
     @Test
     void predictsTheRotorNaturalFrequencyFromHoldingTorqueTeethAndInertia() {
-        // Acarnley (2002), ch. 4 / REFERENCE-CHECKS item 11 (from memory): T_h = 0.4 N·m, J = 5.4e-6 kg·m², N_r = 50
+        // Acarnley (2002), ch. 4 / references §11 (from memory): T_h = 0.4 N·m, J = 5.4e-6 kg·m², N_r = 50
         // → k = 20 N·m/rad, f_n = 306.294 Hz (rel 1e-4).
         assertEquals(20.0, NaturalFrequency.stiffnessNmPerRad(0.4, 50), 1e-12);
         assertEquals(306.294, NaturalFrequency.naturalHz(0.4, 50, 5.4e-6), 306.294 * 1e-4);

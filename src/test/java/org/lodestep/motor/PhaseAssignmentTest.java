@@ -22,7 +22,8 @@ class PhaseAssignmentTest {
 
     @Test
     void sixLeadEndToEndChannelsOrientBothHalvesThroughTheTap() {
-        // REFERENCE-CHECKS item 4, 6-lead: windings 1-(2)-3 and 4-(5)-6, taps 2 and 5; channels across the ends.
+        // common practice, from the circuit topology, references §4, 6-lead: windings 1-(2)-3 and 4-(5)-6, taps 2 and
+        // 5; channels across the ends.
         WindingInput w = new WindingInput(Topology.SIX_LEAD, List.of("1", "2", "3", "4", "5", "6"), List.of(
                 new CoilResistance(new OrientedLeads("1", "2"), 1.2), new CoilResistance(new OrientedLeads("2", "3"), 1.2),
                 new CoilResistance(new OrientedLeads("4", "5"), 1.2), new CoilResistance(new OrientedLeads("5", "6"), 1.2)),

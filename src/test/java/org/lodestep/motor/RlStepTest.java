@@ -5,7 +5,7 @@ import static org.junit.jupiter.api.Assertions.assertEquals;
 import org.junit.jupiter.api.Test;
 
 class RlStepTest {
-    // REFERENCE-CHECKS item 10: V = 2.0 V, R = 2.0 ohm, L = 4.0 mH (Alexander & Sadiku, Fundamentals of Electric
+    // references §10: V = 2.0 V, R = 2.0 ohm, L = 4.0 mH (Alexander and Sadiku, Fundamentals of Electric
     // Circuits, first-order circuits chapter; "RL circuit" encyclopaedia article).
     private static final double V = 2.0;
     private static final double R = 2.0;

@@ -6,7 +6,7 @@ import static org.junit.jupiter.api.Assertions.assertThrows;
 import org.junit.jupiter.api.Test;
 
 class StepGeometryTest {
-    // REFERENCE-CHECKS item 1 (exact): Acarnley, Stepping Motors, 4th ed., ch. 1-2; Jones, Stepping Motors tutorial
+    // references §1 (exact): Acarnley, Stepping Motors, 4th ed., ch. 1-2; Jones, Stepping Motors tutorial
     // part 2 (torque-angle period = 4 steps).
 
     @Test

@@ -11,7 +11,8 @@ class StepResponseFitterTest {
 
     @Test
     void fitsInductanceOfNoisyQuantisedResponseWithinHalfPercent() {
-        // REFERENCE-CHECKS item 10: V = 2.0 V, R = 2.0 ohm, L = 4.0 mH sampled at 10 us -> fitted L = 4.000 mH
+        // Alexander and Sadiku, Fundamentals of Electric Circuits, first-order circuits, references §10: V = 2.0 V, R
+        // = 2.0 ohm, L = 4.0 mH sampled at 10 us -> fitted L = 4.000 mH
         // (rel 5e-3). Noise 5 mA RMS and a 12-bit converter over 2 A (0.49 mA per count) are our own choice.
         double[] t = SyntheticMotor.times(2000, 10e-6);
         double[] i = SyntheticMotor.rlStep(t, 2.0, 2.0, 4.0e-3, 1.0e-3, 0.005, 2.0 / 4096, 7);

@@ -6,7 +6,8 @@ import java.util.Random;
 
 /**
  * Analytic test signals of a two-phase hybrid motor: RL current steps and hand-turned back-EMF, from the formulas of
- * REFERENCE-CHECKS items 10 and 14 (nothing here comes from the code under test).
+ * Alexander and Sadiku, Fundamentals of Electric Circuits, first-order circuits, references §10; Acarnley, Stepping
+ * Motors, 4th ed., references §14 (nothing here comes from the code under test).
  */
 final class SyntheticMotor {
     private SyntheticMotor() {

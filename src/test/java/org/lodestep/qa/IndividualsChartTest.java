@@ -9,11 +9,11 @@ import org.junit.jupiter.api.Test;
 
 class IndividualsChartTest {
 
-    /** REFERENCE-CHECKS item 20 data set. */
+    /** Montgomery, Statistical Quality Control, 7th ed., ch. 6, references §20 data set. */
     static final double[] X = {2.02, 2.05, 1.98, 2.01, 2.04, 2.00, 1.97, 2.03, 2.06, 1.99};
 
     // Montgomery 7th ed., Appendix VI, n = 2: d2 = 1.128, D4 = 3.267 (table, rounded); exact forms 2/sqrt(pi) and
-    // 1 + 3 d3/d2 = 3.266532 (REFERENCE-CHECKS item 20).
+    // 1 + 3 d3/d2 = 3.266532 (Montgomery, Statistical Quality Control, 7th ed., ch. 6, references §20).
     @Test
     void factorsForSpanTwoMatchTheTable() {
         assertEquals(1.128, IndividualsChart.D2, 5e-4);
@@ -21,7 +21,8 @@ class IndividualsChartTest {
         assertEquals(3.266532, IndividualsChart.D4, 1e-6);
     }
 
-    // PQ Systems "Individuals and moving range chart formulas" and JMP documentation (REFERENCE-CHECKS item 20):
+    // PQ Systems "Individuals and moving range chart formulas" and JMP documentation (Montgomery, Statistical Quality
+    // Control, 7th ed., ch. 6, references §20):
     // mean 2.0150, MRbar 0.043333, sigma 0.038416, UCL_X 2.13027, LCL_X 1.89973, UCL_MR 0.14157 (table constants;
     // exact constants differ in the 5th digit, hence rel 1e-3).
     @Test

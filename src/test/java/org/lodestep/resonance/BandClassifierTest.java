@@ -16,7 +16,7 @@ class BandClassifierTest {
 
     @Test
     void bandsAtTheNaturalFrequencyAndItsSubMultiplesAreLowSpeedResonance() {
-        // Acarnley (2002), section 4.3 / REFERENCE-CHECKS item 12: f_n = 306.29 Hz → risky 306.29, 153.15, 102.10.
+        // Acarnley (2002), section 4.3 / references §12: f_n = 306.29 Hz → risky 306.29, 153.15, 102.10.
         double fn = 306.294;
         ResonanceBand at = BandClassifier.classify(band(290, 320, 300, 10, 300), fn);
         assertEquals(BandClass.LOW_SPEED_RESONANCE, at.bandClass());

@@ -8,7 +8,7 @@ class DampedOscillationTest {
 
     @Test
     void logDecrementAndDampingRatioMatchTheWorkedExample() {
-        // Rao, Mechanical Vibrations, 5th ed., ch. 2 / REFERENCE-CHECKS item 16: x0 = 10, x1 = 7.5 → δ = 0.287682,
+        // Rao, Mechanical Vibrations, 5th ed., ch. 2 / references §16: x0 = 10, x1 = 7.5 → δ = 0.287682,
         // ζ = 0.0457381, Q = 10.9318 (rel 1e-5).
         double d = DampedOscillation.logDecrement(10, 7.5, 1);
         assertEquals(0.287682, d, 0.287682 * 1e-5);
@@ -18,7 +18,8 @@ class DampedOscillationTest {
 
     @Test
     void naturalFrequencyFollowsFromDampedFrequencyAndDamping() {
-        // REFERENCE-CHECKS item 16: x0 = 1.0, x5 = 0.25 → δ = 0.277259, ζ = 0.0440842; f_d = 250 Hz → f_n = 250.243 Hz.
+        // Rao, Mechanical Vibrations, 5th ed., ch. 2, references §16: x0 = 1.0, x5 = 0.25 → δ = 0.277259, ζ =
+        // 0.0440842; f_d = 250 Hz → f_n = 250.243 Hz.
         double d = DampedOscillation.logDecrement(1.0, 0.25, 5);
         assertEquals(0.277259, d, 0.277259 * 1e-5);
         double z = DampedOscillation.dampingRatio(d);
@@ -28,7 +29,8 @@ class DampedOscillationTest {
 
     @Test
     void dampingRatioFromDecayRateAgreesWithTheSyntheticCase() {
-        // REFERENCE-CHECKS item 16: f_n = 300 Hz, ζ = 0.05 → σ = 94.2478 1/s, f_d = 299.625 Hz.
+        // Rao, Mechanical Vibrations, 5th ed., ch. 2, references §16: f_n = 300 Hz, ζ = 0.05 → σ = 94.2478 1/s, f_d =
+        // 299.625 Hz.
         double wd = 2 * Math.PI * 299.625;
         assertEquals(0.05, DampedOscillation.dampingRatio(94.2478, wd), 0.05 * 1e-5);
     }

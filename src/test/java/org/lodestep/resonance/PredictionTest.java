@@ -10,12 +10,12 @@ class PredictionTest {
 
     @Test
     void forwardAddsLoadInertiaAndListsRiskyRatesInUserUnits() {
-        // REFERENCE-CHECKS item 11 (Acarnley 2002, ch. 4): 0.4 N·m, N_r 50, J = 5.4e-6 + 5.4e-6 → 216.582 Hz.
+        // references §11 (Acarnley 2002, ch. 4): 0.4 N·m, N_r 50, J = 5.4e-6 + 5.4e-6 → 216.582 Hz.
         Prediction p = Prediction.forward(0.4, 50, 5.4e-6, 5.4e-6, new RateUnits(8, 50, 40), 2.0, 4.0e-3);
         assertEquals(216.582, p.naturalFrequencyHz(), 216.582 * 1e-4);
         assertEquals(4, p.riskyRates().size());
         assertEquals(216.582 / 2 * 8, p.riskyRates().get(1).pulsesPerS(), 1e-2);
-        // REFERENCE-CHECKS item 13 (Acarnley, section 5.5): R = 2 Ω, L = 4 mH → 318.310 full steps/s.
+        // references §13 (Acarnley, section 5.5): R = 2 Ω, L = 4 mH → 318.310 full steps/s.
         assertEquals(318.310, p.midBandCentreFullStepsPerS(), 318.310 * 1e-5);
     }
 

@@ -12,7 +12,7 @@ class RateUnitsTest {
 
     @Test
     void convertsFullStepsToPulsesRpmAndAxisSpeed() {
-        // REFERENCE-CHECKS item 1 (Jones, Stepping Motors tutorial; Acarnley ch. 1-2): N_r = 50 → 200 steps/rev;
+        // references §1 (Jones, Stepping Motors tutorial; Acarnley ch. 1-2): N_r = 50 → 200 steps/rev;
         // 1/16 microstepping → 3200 pulses/rev.
         RateUnits u = new RateUnits(16, 50, 40.0);
         assertEquals(200, u.fullStepsPerRev());

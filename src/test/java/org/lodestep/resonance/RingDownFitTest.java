@@ -12,7 +12,7 @@ class RingDownFitTest {
 
     @Test
     void fitsAnAnalyticDampedSinusoid() {
-        // REFERENCE-CHECKS item 16 (Rao, Mechanical Vibrations, 5th ed., ch. 2): x = e^(-ζω_n t)·cos(ω_d t),
+        // references §16 (Rao, Mechanical Vibrations, 5th ed., ch. 2): x = e^(-ζω_n t)·cos(ω_d t),
         // f_n = 300 Hz, ζ = 0.05 → f_d = 299.625 Hz; a fit should return f_n and ζ within rel 5e-3.
         double fs = 20_000;
         double wn = 2 * Math.PI * 300;
@@ -81,7 +81,7 @@ class RingDownFitTest {
 
     @Test
     void agreesWithThePredictedNaturalFrequencyOfASimulatedSingleStep() {
-        // The simulator's small-angle f_n is (1/2π)·√(N_r·T_h/J) (Acarnley 2002, ch. 4; REFERENCE-CHECKS item 11):
+        // The simulator's small-angle f_n is (1/2π)·√(N_r·T_h/J) (Acarnley 2002, ch. 4; references §11):
         // a single full step is a large swing, so the sinusoidal torque curve softens it; agreement within 8 %.
         RotorSimulator sim = new RotorSimulator(0.4, 50, 5.4e-6 * 4, 0.1, 1, 0.02, 1e-5);
         double[] theta = sim.singleStep(20_000, 2000);

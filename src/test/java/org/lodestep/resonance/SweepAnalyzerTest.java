@@ -13,7 +13,7 @@ class SweepAnalyzerTest {
 
     /** Belt-axis-like rotor: T_h = 0.45 N·m, N_r = 50, J chosen for f_n = 120 Hz, ζ = 0.08, L/R = 0.8 ms. */
     static RotorSimulator rotor(int microsteps) {
-        // Acarnley (2002), ch. 4 / REFERENCE-CHECKS item 11: J = N_r·T_h/(2π·f_n)².
+        // Acarnley (2002), ch. 4 / references §11: J = N_r·T_h/(2π·f_n)².
         double j = 50 * 0.45 / Math.pow(2 * Math.PI * 120, 2);
         return new RotorSimulator(0.45, 50, j, 0.08, microsteps, 0.02, 0.0008);
     }
@@ -36,7 +36,7 @@ class SweepAnalyzerTest {
         SweepResult r = a.finish(BandSettings.defaults(), Double.NaN);
         ResonanceBand strongest = r.strongestBand();
         assertNotNull(strongest, "no band found");
-        // Low-speed resonance at step rate = f_n (Acarnley 2002, section 4.3; REFERENCE-CHECKS item 12), within 8 %.
+        // Low-speed resonance at step rate = f_n (Acarnley 2002, section 4.3; references §12), within 8 %.
         double fn = sim.naturalHz();
         assertTrue(strongest.startFullStepsPerS() <= fn * 1.08 && strongest.endFullStepsPerS() >= fn * 0.92,
                 "strongest band " + strongest + " vs f_n " + fn);
@@ -73,7 +73,7 @@ class SweepAnalyzerTest {
         SweepAnalyzer a = SweepAnalyzer.programmed(SweepSettings.forSampleRate(FS), FS, law);
         feed(a, sig, false);
         SweepResult r = a.finish(BandSettings.defaults(), sim.naturalHz());
-        // Acarnley (2002), section 4.3 / REFERENCE-CHECKS item 12: a weaker band near f_n/2 = 60 full steps/s.
+        // Acarnley (2002), section 4.3 / references §12: a weaker band near f_n/2 = 60 full steps/s.
         assertTrue(r.bands().stream().anyMatch(b -> b.subharmonic() == 2), r.bands().toString());
     }
 

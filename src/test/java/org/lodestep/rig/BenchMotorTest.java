@@ -30,7 +30,7 @@ class BenchMotorTest {
 
     @Test
     void stepResponseHasTheRlTimeConstant() {
-        // REFERENCE-CHECKS item 10 (RL circuit; Alexander & Sadiku, first-order circuits): V = 2.0 V,
+        // references §10 (RL circuit; Alexander and Sadiku, first-order circuits): V = 2.0 V,
         // R = 2.0 ohm, L = 4.0 mH -> tau = 2.000 ms, I_inf = 1.000 A, i(tau) = 0.632121 A.
         // Two uncoupled 0.95 ohm, 2 mH halves in series plus the rig's 0.1 ohm drive resistance make that loop.
         BenchMotor m = new BenchMotor(motor(0.95, 0.002, 0.0, 60, List.of(), 4));
@@ -58,7 +58,7 @@ class BenchMotorTest {
     @Test
     void stepResponseAgreesWithTheEnginesRlStep() {
         // The rig's step is an independent oracle (rig/package-info.java): its noise-free current must equal
-        // motor.RlStep for the same loop. Alexander & Sadiku, Fundamentals of Electric Circuits, first-order RL step:
+        // motor.RlStep for the same loop. Alexander and Sadiku, Fundamentals of Electric Circuits, first-order RL step:
         // i(t) = (V/R)(1 - e^(-t/tau)), tau = L/R; here V = 2.0 V, R = 0.95 + 0.95 + 0.1 ohm, L = 4.0 mH (uncoupled).
         BenchMotor m = new BenchMotor(motor(0.95, 0.002, 0.0, 60, List.of(), 4));
         double rate = 50_000;
@@ -74,7 +74,7 @@ class BenchMotorTest {
 
     @Test
     void seriesHalvesAddMutualInductance() {
-        // coupled coils in series aiding: L = L1 + L2 + 2M, M = k sqrt(L1 L2) (REFERENCE-CHECKS item 5 source:
+        // coupled coils in series aiding: L = L1 + L2 + 2M, M = k sqrt(L1 L2) (references §5 source:
         // any circuit-theory text). k = 1, L1 = L2 = 0.5 mH -> 2.0 mH, four times a half (item 5 checks).
         BenchMotor m = new BenchMotor(motor(1.0, 0.0005, 1.0, 60, List.of(), 6));
         assertEquals(0.0005, m.inductanceH(1, 2), 1e-12);
@@ -103,7 +103,7 @@ class BenchMotorTest {
 
     @Test
     void handTurnBackEmfHasTheElectricalFrequencyAndQuarterPeriodPhase() {
-        // REFERENCE-CHECKS item 14 (Acarnley; Kenjo & Sugawara; from memory there): 300 rpm, N_r = 50 ->
+        // references §14 (Acarnley; Kenjo & Sugawara; from memory there): 300 rpm, N_r = 50 ->
         // f_e = 250 Hz, period 4.000 ms, A-B zero-crossing offset 1.000 ms.
         BenchMotor m = new BenchMotor(motor(1.0, 0.001, 0.97, 300, List.of(), 4));
         double rate = 50_000;
@@ -159,7 +159,7 @@ class BenchMotorTest {
 
     @Test
     void hundredToothRotorDoublesTheElectricalFrequency() {
-        // REFERENCE-CHECKS item 14: N_r = 100 at 300 rpm -> f_e = 500 Hz (period 2.000 ms)
+        // Acarnley, Stepping Motors, 4th ed., references §14: N_r = 100 at 300 rpm -> f_e = 500 Hz (period 2.000 ms)
         BenchMotor m = new BenchMotor(motor(1.0, 0.001, 0.97, 300, List.of(), 4, 100));
         double rate = 50_000;
         double[][] e = m.handTurnEmf(List.of(new int[] {1, 2}), 1.0, rate, (int) rate);

@@ -32,7 +32,7 @@ class FrameCodecTest {
     @Test
     void crcIsTheIsoHdlcVariantWithItsCatalogueCheckValue() {
         // G. Cook, Catalogue of parametrised CRC algorithms: CRC-32/ISO-HDLC check over "123456789" = 0xCBF43926
-        // (REFERENCE-CHECKS item 21)
+        // (Cook, Catalogue of parametrised CRC algorithms, references §21)
         assertEquals(0xCBF43926L, FrameCodec.crc32(ascii("123456789"), 0, 9));
         // same catalogue conventions: CRC of the empty input is 0x00000000 (item 21, computed)
         assertEquals(0x00000000L, FrameCodec.crc32(new byte[0], 0, 0));

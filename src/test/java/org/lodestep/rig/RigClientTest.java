@@ -37,7 +37,8 @@ class RigClientTest {
                     }
                 }
             }
-            // an 8-lead motor has 4 isolated half-windings: 4 of the 28 pairs conduct (REFERENCE-CHECKS item 4,
+            // an 8-lead motor has 4 isolated half-windings: 4 of the 28 pairs conduct (common practice, from the
+            // circuit topology, references §4,
             // common practice)
             assertEquals(4, finite);
         }

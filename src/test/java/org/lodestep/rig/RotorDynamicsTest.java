@@ -28,7 +28,7 @@ class RotorDynamicsTest {
 
     @Test
     void naturalFrequencyFormulaMatchesPublishedCheckValues() {
-        // REFERENCE-CHECKS item 11 (Acarnley, Stepping Motors, 4th ed., ch. 4; from memory there):
+        // references §11 (Acarnley, Stepping Motors, 4th ed., ch. 4; from memory there):
         // T_h = 0.4 N·m, J = 5.4e-6 kg·m², N_r = 50 -> f_n = 306.294 Hz; N_r = 100 -> 433.165 Hz; J doubled -> 216.582 Hz
         assertEquals(306.294, new RotorDynamics(5.4e-6, 0, 0.4, 0, 50, 1).naturalFrequencyHz(), 306.294 * 1e-4);
         assertEquals(433.165, new RotorDynamics(5.4e-6, 0, 0.4, 0, 100, 1).naturalFrequencyHz(), 433.165 * 1e-4);

@@ -22,7 +22,7 @@ class SpectrumTest {
 
     @Test
     void densityOfSixteenPointExampleMatchesHandComputedBins() {
-        // REFERENCE-CHECKS item 18(a) (computed from the Welch 1967 / SciPy welch density definition):
+        // references §18(a) (computed from the Welch 1967 / SciPy welch density definition):
         // x = 1 + 2cos(2π·3n/16) + 0.5cos(πn), f_s = 16 Hz, rectangular, no detrend → P0 = 1, P3 = 2, P8 = 0.25.
         double[] x = new double[16];
         for (int n = 0; n < 16; n++) {
@@ -41,7 +41,8 @@ class SpectrumTest {
 
     @Test
     void binCentredToneHasItsAmplitudeWithRectangularAndHann() {
-        // REFERENCE-CHECKS item 18(c); Harris (1978): amplitude of a bin-centred sine = 2|X_k|/Σw.
+        // Welch, IEEE Trans. Audio Electroacoust. 15(2), 1967, references §18(c); Harris (1978): amplitude of a
+        // bin-centred sine = 2|X_k|/Σw.
         double[] x = tone(1000, 1000, 50, 1.0, 0.3);
         assertEquals(1.0, Spectrum.of(x, 1000, Window.RECTANGULAR, Detrend.NONE, SpectrumScaling.AMPLITUDE)
                 .value(50), 1e-9);
@@ -51,7 +52,8 @@ class SpectrumTest {
 
     @Test
     void halfBinOffsetToneShowsTheScallopingLossOfEachWindow() {
-        // REFERENCE-CHECKS item 18(c): at 50.5 Hz, N = 1000, Hann reads 0.8488 (abs 1e-3), rectangular 0.640 (5e-3);
+        // Welch, IEEE Trans. Audio Electroacoust. 15(2), 1967, references §18(c): at 50.5 Hz, N = 1000, Hann reads
+        // 0.8488 (abs 1e-3), rectangular 0.640 (5e-3);
         // Harris (1978) Table 1 scalloping loss 1.42 dB (Hann), 3.92 dB (rectangular).
         double[] x = tone(1000, 1000, 50.5, 1.0, 0.0);
         Spectrum hann = Spectrum.of(x, 1000, Window.HANN, Detrend.NONE, SpectrumScaling.AMPLITUDE);
@@ -62,7 +64,7 @@ class SpectrumTest {
 
     @Test
     void flatTopReadsAHalfBinOffsetToneWithinItsScallopingLoss() {
-        // Harris (1978) / REFERENCE-CHECKS item 17: flat-top scalloping loss about 0.01 dB.
+        // Harris (1978) / references §17: flat-top scalloping loss about 0.01 dB.
         double[] x = tone(4096, 4096, 300.5, 1.0, 1.0);
         Spectrum p = Spectrum.of(x, 4096, Window.FLAT_TOP, Detrend.NONE, SpectrumScaling.AMPLITUDE);
         assertEquals(1.0, Math.max(p.value(300), p.value(301)), 0.003);

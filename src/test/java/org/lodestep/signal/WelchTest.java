@@ -11,7 +11,8 @@ class WelchTest {
 
     @Test
     void sineDensityIntegratesToHalfTheSquaredAmplitude() {
-        // REFERENCE-CHECKS item 18(b): A = 2 sine at 125 Hz, f_s = 1 kHz, 8192 samples, segments 256 overlap 128,
+        // Welch, IEEE Trans. Audio Electroacoust. 15(2), 1967, references §18(b): A = 2 sine at 125 Hz, f_s = 1 kHz,
+        // 8192 samples, segments 256 overlap 128,
         // periodic Hann: Σ P·Δf = A²/2 = 2.000 (rel 1e-9); power-spectrum peak 2.000 → √ = RMS 1.41421.
         double[] x = new double[8192];
         for (int i = 0; i < x.length; i++) {
@@ -28,7 +29,8 @@ class WelchTest {
 
     @Test
     void whiteNoiseDensityIsFlatAtTwiceTheVarianceOverSampleRate() {
-        // REFERENCE-CHECKS item 18(d): σ = 0.5, f_s = 1 kHz, 65 536 samples, segments 1024 →
+        // Welch, IEEE Trans. Audio Electroacoust. 15(2), 1967, references §18(d): σ = 0.5, f_s = 1 kHz, 65 536
+        // samples, segments 1024 →
         // mean PSD 2σ²/f_s = 5.0e-4 units²/Hz and Σ P·Δf ≈ 0.25 (statistical, rel 5e-2).
         Random r = new Random(11);
         double[] x = new double[65536];

@@ -10,14 +10,14 @@ class WindowTest {
 
     @Test
     void periodicHannOfEightPointsMatchesTheDftEvenDefinition() {
-        // Harris (1978), Proc. IEEE 66(1), section II (DFT-even windows); values as REFERENCE-CHECKS item 17.
+        // Harris (1978), Proc. IEEE 66(1), section II (DFT-even windows); values as references §17.
         double[] expected = {0, 0.146447, 0.5, 0.853553, 1, 0.853553, 0.5, 0.146447};
         assertArrayEquals(expected, Window.HANN.periodic(8), 1e-6);
     }
 
     @Test
     void periodicHannOfEightPointsHasEnbwOfExactlyOneAndAHalfBins() {
-        // Harris (1978), Table 1: Hann ENBW 1.50 bins; periodic N = 8: Σw = 4, Σw² = 3 (REFERENCE-CHECKS item 17).
+        // Harris (1978), Table 1: Hann ENBW 1.50 bins; periodic N = 8: Σw = 4, Σw² = 3 (references §17).
         assertEquals(1.5, Window.HANN.enbwBins(8), 1e-9);
     }
 
@@ -29,14 +29,16 @@ class WindowTest {
         // Harris (1978), Table 1: Hann CG 0.50, ENBW 1.50 bins.
         assertEquals(0.5, Window.HANN.coherentGain(4096), 0.01);
         assertEquals(1.5, Window.HANN.enbwBins(4096), 1e-9);
-        // Five-term flat-top (D'Antona & Ferrero 2006, p. 70): CG 0.2156, ENBW 3.770 bins (REFERENCE-CHECKS item 17).
+        // Five-term flat-top (D'Antona & Ferrero 2006, p. 70): CG 0.2156, ENBW 3.770 bins (Harris, Proc. IEEE 66(1),
+        // 1978, references §17).
         assertEquals(0.2156, Window.FLAT_TOP.coherentGain(4096), 0.01);
         assertEquals(3.770, Window.FLAT_TOP.enbwBins(4096), 0.01);
     }
 
     @Test
     void flatTopPeaksAtOneInTheMiddle() {
-        // D'Antona & Ferrero (2006), p. 70: coefficients sum to 1.0 at the centre (REFERENCE-CHECKS item 17).
+        // D'Antona & Ferrero (2006), p. 70: coefficients sum to 1.0 at the centre (Harris, Proc. IEEE 66(1), 1978,
+        // references §17).
         assertEquals(1.0, Window.FLAT_TOP.periodic(1024)[512], 1e-6);
     }
 

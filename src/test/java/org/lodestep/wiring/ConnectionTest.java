@@ -6,7 +6,7 @@ import org.junit.jupiter.api.Test;
 
 
 /**
- * Checks from REFERENCE-CHECKS item 5 (coupled coils L = L1 + L2 ± 2M, any circuit-theory text; current factors a
+ * Checks from references §5 (coupled coils L = L1 + L2 ± 2M, any circuit-theory text; current factors a
  * trade convention from equal I²R loss): r = 1.20 Ω, L_c = 2.00 mH, I_u = 1.00 A, rel 1e-4.
  */
 class ConnectionTest {
@@ -48,7 +48,7 @@ class ConnectionTest {
         assertEquals(1.667e-3, half, 1e-6);
     }
 
-    // Moved from motor.CoupledCoilsTest with the factors: REFERENCE-CHECKS item 5 (common practice; L = L1 + L2 + 2M
+    // Moved from motor.CoupledCoilsTest with the factors: references §5 (common practice; L = L1 + L2 + 2M
     // from circuit theory): r = 1.20 ohm, Lc = 2.00 mH, Iu = 1.00 A; checks rel 1e-4.
     private static final double TOL = 1e-4;
 

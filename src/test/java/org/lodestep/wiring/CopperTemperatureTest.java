@@ -5,7 +5,7 @@ import static org.junit.jupiter.api.Assertions.assertThrows;
 
 import org.junit.jupiter.api.Test;
 
-/** Checks from REFERENCE-CHECKS item 3 (electrical-engineering-portal.com formula page; IEC 60034-1 k = 235). */
+/** Checks from references §3 (electrical-engineering-portal.com formula page; IEC 60034-1 k = 235). */
 class CopperTemperatureTest {
     private static final CopperTemperature.Constant IEC = CopperTemperature.Constant.IEC_60034_1;
     private static final CopperTemperature.Constant IEEE = CopperTemperature.Constant.IEEE_234_5;

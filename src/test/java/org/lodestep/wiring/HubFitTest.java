@@ -8,7 +8,7 @@ import java.util.List;
 
 import org.junit.jupiter.api.Test;
 
-/** Tap finding (REFERENCE-CHECKS item 4: tap-to-end r, end-to-end 2r). */
+/** Tap finding (common practice, from the circuit topology, references §4: tap-to-end r, end-to-end 2r). */
 class HubFitTest {
 
     @Test

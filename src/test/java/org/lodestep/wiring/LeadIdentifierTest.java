@@ -12,7 +12,8 @@ import java.util.stream.Collectors;
 import org.junit.jupiter.api.Test;
 
 /**
- * Engine tests. Expected layouts follow from series circuits (REFERENCE-CHECKS item 4, "follows from circuit
+ * Engine tests. Expected layouts follow from series circuits (common practice, from the circuit topology, references
+ * §4, "follows from circuit
  * topology; no standard", common practice): coil r, two coils in series 2r, separate windings open.
  */
 class LeadIdentifierTest {
@@ -43,7 +44,7 @@ class LeadIdentifierTest {
 
     @Test
     void identifiesEveryFourLeadLayoutWithContactResistanceAndNoise() {
-        // 2.4 Ω phases: REFERENCE-CHECKS item 4 (r = 1.20 Ω, phase 2.40 Ω).
+        // 2.4 Ω phases: common practice, from the circuit topology, references §4 (r = 1.20 Ω, phase 2.40 Ω).
         identifiesEveryLayout(4, Topology.FOUR_LEAD, 2.40);
     }
 
@@ -64,7 +65,8 @@ class LeadIdentifierTest {
 
     @Test
     void sixLeadWindingCarriesHalvesAndEndToEndOfItem4() {
-        // REFERENCE-CHECKS item 4: r = 1.20 Ω → A1–A2 2.40, A1–Acom 1.20, A1–B1 open (ideal meter, no contact).
+        // common practice, from the circuit topology, references §4: r = 1.20 Ω → A1–A2 2.40, A1–Acom 1.20, A1–B1
+        // open (ideal meter, no contact).
         ResistanceMatrix m = ResistanceMatrix.builder()
                 .reading("A1", "A2", 2.40).reading("A1", "Acom", 1.20).reading("A2", "Acom", 1.20)
                 .reading("B1", "B2", 2.40).reading("B1", "Bcom", 1.20).reading("B2", "Bcom", 1.20)
@@ -140,7 +142,7 @@ class LeadIdentifierTest {
 
     @Test
     void phaseImbalanceBeyondTenPercentIsAWarning() {
-        // Common practice: ±10 % phase-resistance tolerance (REFERENCE-CHECKS item 4).
+        // Common practice: ±10 % phase-resistance tolerance (references §4).
         ResistanceMatrix m = ResistanceMatrix.builder().reading("1", "2", 10.0).reading("3", "4", 12.0)
                 .open("1", "3").build();
         Identification id = identify(m);
@@ -164,7 +166,7 @@ class LeadIdentifierTest {
 
     @Test
     void imbalanceFractionMatchesItem4() {
-        // REFERENCE-CHECKS item 4: coils 1.20 and 1.26 Ω → 4.878 % (abs 1e-3 %).
+        // common practice, from the circuit topology, references §4: coils 1.20 and 1.26 Ω → 4.878 % (abs 1e-3 %).
         assertEquals(4.878, PhaseImbalance.percent(1.20, 1.26), 1e-3);
     }
 
@@ -214,7 +216,8 @@ class LeadIdentifierTest {
 
     @Test
     void endsReadingOpenWhileBothHalvesConductIsAnInconsistentMatrixError() {
-        // Series relation of a tapped winding (circuit topology, REFERENCE-CHECKS item 4): end-end = end-CT + CT-end,
+        // Series relation of a tapped winding (circuit topology, common practice, from the circuit topology,
+        // references §4): end-end = end-CT + CT-end,
         // so both halves conducting forces the ends to conduct. Before this check the open end-end reading was taken
         // as "not measured" and the winding was drawn with a computed 4.90 ohm and no finding.
         ResistanceMatrix m = ResistanceMatrix.builder()
@@ -303,7 +306,7 @@ class LeadIdentifierTest {
 
     @Test
     void temperatureCorrectionUsesTheChosenConstant() {
-        // REFERENCE-CHECKS item 3: 1.500 Ω at 25 °C → 1.47110 Ω at 20 °C (k = 234.5) / 1.47115 Ω (k = 235).
+        // IEC 60034-1, references §3: 1.500 Ω at 25 °C → 1.47110 Ω at 20 °C (k = 234.5) / 1.47115 Ω (k = 235).
         ResistanceMatrix m = ResistanceMatrix.builder().reading("1", "2", 1.5).reading("3", "4", 1.5)
                 .open("1", "3").build();
         Identification iec = LeadIdentifier.identify(m, IdentifySettings.DEFAULT.withTemperatures(25, 20));

@@ -29,7 +29,8 @@ class MotorHypothesesTest {
                     assertEquals(k[i][j], k[j][i]);
                 }
             }
-            // REFERENCE-CHECKS item 4: per phase two end-to-CT pairs and one end-to-end pair; 9 cross pairs open.
+            // common practice, from the circuit topology, references §4: per phase two end-to-CT pairs and one
+            // end-to-end pair; 9 cross pairs open.
             assertEquals(4, ones);
             assertEquals(2, twos);
         }

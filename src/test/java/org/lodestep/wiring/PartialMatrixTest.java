@@ -12,8 +12,8 @@ import org.junit.jupiter.api.Test;
 
 /**
  * Missing pairs: whenever the identifier says "determined" on a random subset of readings, its answer must be the
- * true layout; when it is not, every pair it asks for must be unmeasured. Series-circuit values (REFERENCE-CHECKS
- * item 4) with contact resistance and noise.
+ * true layout; when it is not, every pair it asks for must be unmeasured. Series-circuit values (common practice,
+ * from the circuit topology, references §4) with contact resistance and noise.
  */
 class PartialMatrixTest {
 

@@ -18,7 +18,8 @@ import java.util.Random;
 import org.junit.jupiter.api.Test;
 
 /**
- * Guided measurement against simulated motors (series-circuit values, REFERENCE-CHECKS item 4; contact resistance
+ * Guided measurement against simulated motors (series-circuit values, common practice, from the circuit topology,
+ * references §4; contact resistance
  * 0.05 to 0.3 Ω and meter noise per reading). The mean reading counts quoted in the README come from
  * {@link #meanReadingsOverAllLabelings}, which also writes them to {@code target/probe-reading-counts.txt}.
  */

@@ -9,7 +9,7 @@ import java.util.Random;
  * Test helper: the true resistance between any two leads of an ideal motor layout, and meter readings of it with
  * probe contact resistance (uniform 0.05 to 0.3 Ω per reading, the range issue 2 asks for) and ±0.5 % meter noise.
  *
- * <p>Values follow from series circuits (REFERENCE-CHECKS item 4, common practice): a coil reads r, two coils in
+ * <p>Values follow from series circuits (references §4, common practice): a coil reads r, two coils in
  * series 2r, isolated leads read open.
  */
 final class SimulatedMotor {

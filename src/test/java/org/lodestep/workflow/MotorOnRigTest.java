@@ -42,7 +42,7 @@ class MotorOnRigTest {
         // Series aiding joins the end of one coil to the start of the other coil of the same phase.
         assertTrue(joins.contains(Set.of("blk/wht", "org")) || joins.contains(Set.of("org/wht", "blk")), joins.toString());
         assertTrue(joins.contains(Set.of("red/wht", "yel")) || joins.contains(Set.of("yel/wht", "red")), joins.toString());
-        // REFERENCE-CHECKS item 1: 50 teeth -> 1.8°
+        // Acarnley, Stepping Motors, 4th ed., ch. 1-2, references §1: 50 teeth -> 1.8°
         assertEquals(1.8, card.stepAngleDeg(), 1e-12);
         assertEquals(0.13, card.keVsPerRad(), 0.13 * 0.03);
         HalfWinding hw = card.phases().get(0).halfWindings().get(0);

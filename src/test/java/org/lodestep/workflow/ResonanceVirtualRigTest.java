@@ -28,7 +28,7 @@ class ResonanceVirtualRigTest {
     @Test
     void strongestBandOfAVirtualRigSweepContainsTheModelsNaturalFrequency(@TempDir Path dir) throws Exception {
         Scenario sc = Scenarios.get("gantry-axis");
-        // Acarnley (2002), ch. 4 / REFERENCE-CHECKS item 11: f_n = (1/2π)·√(N_r·T_h/J) of the scenario's rotor + load.
+        // Acarnley (2002), ch. 4 / references §11: f_n = (1/2π)·√(N_r·T_h/J) of the scenario's rotor + load.
         double fn = NaturalFrequency.naturalHz(sc.holdingTorqueNm(), sc.rotorTeeth(), sc.totalInertiaKgM2());
         SweepPlan plan = new SweepPlan(20, 400, 20, 1, 5000);
         RigSweepCapture.Result cap = RigSweepCapture.run(new RigSweepCapture.Settings("sim:gantry-axis", plan,
@@ -44,8 +44,8 @@ class ResonanceVirtualRigTest {
             assertEquals("accel", res.channel());
             ResonanceBand strongest = r.strongestBand();
             assertNotNull(strongest, "no band in " + r.response().size() + " points");
-            // Low-speed resonance at a full-step rate equal to f_n (Acarnley 2002, section 4.3; REFERENCE-CHECKS item
-            // 12): the strongest band must reach within 8 % of the model's f_n.
+            // Low-speed resonance at a full-step rate equal to f_n (Acarnley 2002, section 4.3; references §12): the
+            // strongest band must reach within 8 % of the model's f_n.
             assertTrue(strongest.startFullStepsPerS() <= fn * 1.08 && strongest.endFullStepsPerS() >= fn * 0.92,
                     strongest + " vs f_n " + fn);
             // The estimate from the band's vibration agrees with the model within 8 % too.

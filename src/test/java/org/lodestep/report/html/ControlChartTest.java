@@ -14,7 +14,8 @@ class ControlChartTest {
     @Test
     void marksAndNamesOnlyThePointBeyondTheLimits() throws Exception {
         // Limits of the individuals chart from Montgomery, Introduction to Statistical Quality Control, 7th ed.,
-        // ch. 6 (x-bar +/- 2.66 MR-bar), as worked for these ten values in REFERENCE-CHECKS item 20:
+        // ch. 6 (x-bar +/- 2.66 MR-bar), as worked for these ten values in Montgomery, Statistical Quality Control,
+        // 7th ed., ch. 6, references §20:
         // UCL 2.13027, LCL 1.89973. The sample adds an eleventh value, 2.16, above the UCL.
         Document d = XmlCheck.parse(SampleReports.individuals().toSvg().markup());
         List<String> texts = XmlCheck.texts(d, XmlCheck.SVG, "text");
@@ -28,7 +29,8 @@ class ControlChartTest {
 
     @Test
     void movingRangeChartMarksTheLargeRange() throws Exception {
-        // MR chart UCL = D4 * MR-bar = 3.267 * 0.043333 = 0.14157 (REFERENCE-CHECKS item 20, n = 2 constants);
+        // MR chart UCL = D4 * MR-bar = 3.267 * 0.043333 = 0.14157 (Montgomery, Statistical Quality Control, 7th ed.,
+        // ch. 6, references §20, n = 2 constants);
         // the range from 1.99 to 2.16 (0.17) lies above it and is run number 11.
         Document d = XmlCheck.parse(SampleReports.movingRange().toSvg().markup());
         assertTrue(XmlCheck.texts(d, XmlCheck.SVG, "text").contains("#11"));
