@@ -26,7 +26,7 @@ import io.javalin.http.NotFoundResponse;
 /**
  * Sweep: a step-rate sweep through the rig once the moving-axis caution is acknowledged, with live progress, then
  * the response curve, the resonance bands and the avoid-list ({@link RigSweepCapture}, then {@link ResonanceSweep}
- * on the capture in memory, as {@code rig capture} and {@code resonance sweep} do on the command line).
+ * on the saved capture, as {@code rig capture} and {@code resonance sweep} do on the command line).
  */
 final class SweepPages {
     private static final int KEEP = 16;
@@ -108,8 +108,8 @@ final class SweepPages {
 
     private Map<String, Object> sweep(RigSweepCapture.Settings settings, Progress progress) throws Exception {
         RigSweepCapture.Result cap = RigSweepCapture.run(settings, progress);
-        ResonanceSweep.Result r = ResonanceSweep.analyse(cap.capture().signal(), ResonanceSweep.Settings.defaults(),
-                progress);
+        // the saved capture carries its sweep law, as `resonance sweep FILE` reads it after `rig capture`
+        ResonanceSweep.Result r = ResonanceSweep.analyse(cap.saved(), ResonanceSweep.Settings.defaults(), progress);
         ResonanceText.SweepHeader header = new ResonanceText.SweepHeader(r.source(), r.channel(), r.unit(),
                 r.sampleRateHz(), r.rateLaw());
         String id = Access.random();

@@ -10,6 +10,9 @@ import java.util.concurrent.ExecutorService;
 import java.util.concurrent.Executors;
 
 import org.lodestep.report.Json;
+
+import com.fasterxml.jackson.core.JsonProcessingException;
+import com.fasterxml.jackson.databind.SerializationFeature;
 import org.lodestep.workflow.Progress;
 
 import io.javalin.http.sse.SseClient;
@@ -66,11 +69,20 @@ final class Tasks implements AutoCloseable {
             Map<String, Object> e = new LinkedHashMap<>();
             e.put("type", type);
             e.putAll(fields);
-            events.add(Json.write(e));
+            events.add(compact(e));
             if (type.equals("done") || type.equals("failed")) {
                 finished = true;
             }
             notifyAll();
+        }
+
+        /** One line of JSON: an SSE data field must not span lines. */
+        private static String compact(Map<String, Object> e) {
+            try {
+                return Json.mapper().writer().without(SerializationFeature.INDENT_OUTPUT).writeValueAsString(e);
+            } catch (JsonProcessingException ex) {
+                throw new IllegalStateException("event not serialisable: " + ex.getMessage(), ex);
+            }
         }
 
         /** Sends every event from {@code from} on, waiting for new ones, until the task ends or the page leaves. */
