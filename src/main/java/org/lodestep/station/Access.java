@@ -101,7 +101,7 @@ final class Access {
                 + "'unsafe-inline'; script-src 'self'; object-src 'none'; frame-ancestors 'self'; form-action 'self'; "
                 + "base-uri 'none'");
         ctx.header("X-Content-Type-Options", "nosniff");
-        ctx.header("Referrer-Policy", "no-referrer");
+        ctx.header("Referrer-Policy", "same-origin"); // "no-referrer" would make the browser send Origin: null
         ctx.header("X-Frame-Options", "SAMEORIGIN");
         ctx.header("Cache-Control", "no-store");
     }
