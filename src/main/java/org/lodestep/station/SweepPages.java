@@ -62,19 +62,21 @@ final class SweepPages {
                 + "<form id=\"sweep-form\" class=\"stack\">"
                 + "<label class=\"choice ack\"><input type=\"checkbox\" id=\"ack\" name=\"ack\" value=\"yes\"> I have read "
                 + "the caution: the travel is clear, the guards are on and the emergency stop is within reach</label>"
-                + "<fieldset><legend>Sweep</legend>"
-                + "<label for=\"rig\">Rig</label><input id=\"rig\" name=\"rig\" value=\"" + Layout.esc(rigDefault())
-                + "\" spellcheck=\"false\">"
-                + "<label for=\"from\">From, full steps/s</label><input id=\"from\" name=\"from\" inputmode=\"decimal\" "
-                + "value=\"40\">"
-                + "<label for=\"to\">To, full steps/s</label><input id=\"to\" name=\"to\" inputmode=\"decimal\" value=\"200\">"
-                + "<label for=\"seconds\">Duration, s</label><input id=\"seconds\" name=\"seconds\" inputmode=\"decimal\" "
-                + "value=\"8\">"
-                + "<label for=\"microsteps\">Microsteps per full step (set on the driver)</label><input id=\"microsteps\" "
-                + "name=\"microsteps\" inputmode=\"numeric\" value=\"1\"></fieldset>"
+                + "<fieldset class=\"grid\"><legend>Sweep</legend>"
+                + field("rig", "Rig", rigDefault(), "")
+                + field("from", "From, full steps/s", "40", "decimal")
+                + field("to", "To, full steps/s", "200", "decimal")
+                + field("seconds", "Duration, s", "8", "decimal")
+                + field("microsteps", "Microsteps (driver setting)", "1", "numeric") + "</fieldset>"
                 + "<button type=\"submit\" class=\"primary\" id=\"sweep-start\">Start the sweep</button></form>"
                 + Layout.progressArea("sweep-progress")
                 + "<div id=\"sweep-result\" aria-live=\"polite\"></div>";
+    }
+
+    private static String field(String name, String label, String value, String inputMode) {
+        return "<label>" + Layout.esc(label) + " <input id=\"" + name + "\" name=\"" + name + "\" value=\""
+                + Layout.esc(value) + "\"" + (inputMode.isEmpty() ? " spellcheck=\"false\"" : " inputmode=\"" + inputMode
+                + "\"") + "></label>";
     }
 
     private void start(Context ctx) throws Exception {
