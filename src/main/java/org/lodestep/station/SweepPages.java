@@ -42,6 +42,7 @@ final class SweepPages {
     void routes(RoutesConfig r) {
         r.get("/sweep", ctx -> ctx.html(desk.page("Sweep", "/sweep", form())));
         r.post("/api/sweep", this::start);
+        r.post("/api/sweep/upload", this::upload);
         r.get("/sweep/reports/{id}", ctx -> {
             String html = reports.get(ctx.pathParam("id"));
             if (html == null) {
@@ -69,6 +70,10 @@ final class SweepPages {
                 + field("seconds", "Duration, s", "8", "decimal")
                 + field("microsteps", "Microsteps (driver setting)", "1", "numeric") + "</fieldset>"
                 + "<button type=\"submit\" class=\"primary\" id=\"sweep-start\">Start the sweep</button></form>"
+                + "<form id=\"upload-form\" class=\"stack\" enctype=\"multipart/form-data\"><fieldset><legend>Or "
+                + "analyse a recorded sweep</legend><label for=\"capture\">Capture file (CSV, WAV or rig capture, with its "
+                + "sweep law in the file)</label><input type=\"file\" id=\"capture\" name=\"capture\" "
+                + "accept=\".csv,.wav\"><button type=\"submit\" id=\"upload-start\">Analyse</button></fieldset></form>"
                 + Layout.progressArea("sweep-progress")
                 + "<div id=\"sweep-result\" aria-live=\"polite\"></div>";
     }
@@ -108,10 +113,32 @@ final class SweepPages {
         Desk.json(ctx, Map.of("task", task.id));
     }
 
+    /** An uploaded capture, analysed by the same reader and workflow as {@code resonance sweep FILE}. */
+    private void upload(Context ctx) throws Exception {
+        io.javalin.http.UploadedFile up = ctx.uploadedFile("capture");
+        if (up == null || up.size() == 0) {
+            throw new SettingsException("choose a capture file to analyse");
+        }
+        // a folder of its own per upload, so the reader's messages name the file as the user knows it
+        Path folder = desk.settings.out().resolve("uploads").resolve(Access.random().substring(0, 12));
+        Files.createDirectories(folder);
+        Path file = folder.resolve(Uploads.safeName(up.filename()).replace('/', '_'));
+        Files.write(file, Uploads.bytes(up));
+        Tasks.Task task = desk.tasks.submit(progress -> {
+            ResonanceSweep.Result r = ResonanceSweep.analyse(file, ResonanceSweep.Settings.defaults(), progress);
+            return result(r, "Uploaded capture " + Uploads.safeName(up.filename()));
+        });
+        Desk.json(ctx, Map.of("task", task.id));
+    }
+
     private Map<String, Object> sweep(RigSweepCapture.Settings settings, Progress progress) throws Exception {
         RigSweepCapture.Result cap = RigSweepCapture.run(settings, progress);
         // the saved capture carries its sweep law, as `resonance sweep FILE` reads it after `rig capture`
         ResonanceSweep.Result r = ResonanceSweep.analyse(cap.saved(), ResonanceSweep.Settings.defaults(), progress);
+        return result(r, "Capture saved to " + cap.saved());
+    }
+
+    private Map<String, Object> result(ResonanceSweep.Result r, String origin) {
         ResonanceText.SweepHeader header = new ResonanceText.SweepHeader(r.source(), r.channel(), r.unit(),
                 r.sampleRateHz(), r.rateLaw());
         String id = Access.random();
@@ -125,8 +152,8 @@ final class SweepPages {
             ResonanceText.sweep(out, header, r.sweep(), r.units(), r.avoid());
         }
         String html = "<h2>Result: " + r.sweep().bands().size() + " resonance band"
-                + (r.sweep().bands().size() == 1 ? "" : "s") + "</h2><p>Capture saved to <code>"
-                + Layout.esc(cap.saved().toString()) + "</code>. <a href=\"/sweep/reports/" + id
+                + (r.sweep().bands().size() == 1 ? "" : "s") + "</h2><p>" + Layout.esc(origin)
+                + ". <a href=\"/sweep/reports/" + id
                 + "\">Sweep report (print view)</a></p><iframe class=\"report\" title=\"Sweep report: response curve, "
                 + "bands and avoid-list\" src=\"/sweep/reports/" + id + "\"></iframe><details><summary>Bands and "
                 + "avoid-list as text</summary><pre class=\"text\">" + Layout.esc(text.toString()) + "</pre></details>";

@@ -117,11 +117,11 @@
     function sync() { start.disabled = !ack.checked; }
     ack.addEventListener('change', sync);
     sync();
-    form.addEventListener('submit', function (ev) {
-      ev.preventDefault();
+    function run(url, body) {
       start.disabled = true;
       result.innerHTML = '';
-      post('/api/sweep', new URLSearchParams(new FormData(form))).then(function (j) {
+      delete result.dataset.bands;
+      post(url, body).then(function (j) {
         follow(j.task, area, function (e) {
           if (e.type === 'done') { result.innerHTML = e.html; result.dataset.bands = String(e.bands); }
           sync();
@@ -131,6 +131,15 @@
         area.querySelector('.progress-text').textContent = '\u2716 ' + err.message;
         sync();
       });
+    }
+    form.addEventListener('submit', function (ev) {
+      ev.preventDefault();
+      run('/api/sweep', new URLSearchParams(new FormData(form)));
+    });
+    var upload = document.getElementById('upload-form');
+    upload.addEventListener('submit', function (ev) {
+      ev.preventDefault();
+      run('/api/sweep/upload', new FormData(upload));
     });
   }
 

@@ -77,13 +77,19 @@ class StationServerTest {
 
     static HttpResponse<String> multipart(String url, String key, String fileName, byte[] content, String... fields)
             throws Exception {
+        return multipart(url, key, "spec_file", fileName, content, fields);
+    }
+
+    static HttpResponse<String> multipart(String url, String key, String fieldName, String fileName, byte[] content,
+                                          String... fields) throws Exception {
         String boundary = "----lodestep" + System.nanoTime();
         StringBuilder sb = new StringBuilder();
         for (int i = 0; i < fields.length; i += 2) {
             sb.append("--").append(boundary).append("\r\nContent-Disposition: form-data; name=\"").append(fields[i])
                     .append("\"\r\n\r\n").append(fields[i + 1]).append("\r\n");
         }
-        sb.append("--").append(boundary).append("\r\nContent-Disposition: form-data; name=\"spec_file\"; filename=\"")
+        sb.append("--").append(boundary).append("\r\nContent-Disposition: form-data; name=\"").append(fieldName)
+                .append("\"; filename=\"")
                 .append(fileName).append("\"\r\nContent-Type: application/octet-stream\r\n\r\n");
         byte[] head = sb.toString().getBytes(StandardCharsets.UTF_8);
         byte[] tail = ("\r\n--" + boundary + "--\r\n").getBytes(StandardCharsets.UTF_8);
@@ -271,5 +277,33 @@ class StationServerTest {
     void anUnknownRunOrTaskIsAClearMessage() throws Exception {
         assertEquals(404, get(base(station) + "/qa/runs/nope").statusCode());
         assertTrue(events(station, "nope").contains("no such task"));
+    }
+
+    @Test
+    void anUploadedSweepIsReadByTheSameReaderWithItsOneLineError() throws Exception {
+        String key = formKey(station);
+        HttpResponse<String> bad = multipart(base(station) + "/api/sweep/upload", key, "capture", "bench-run.csv",
+                "time_s,accel_g\n0.0,zero\n".getBytes(StandardCharsets.UTF_8));
+        assertEquals(200, bad.statusCode(), bad.body());
+        String ev = events(station, field(bad.body(), "task"));
+        assertTrue(ev.contains("\"type\":\"failed\"") && ev.contains("bench-run.csv"), ev);
+        assertTrue(ev.contains("\"kind\":\"input\""), ev);
+        // a recorded sweep from the sample captures, the one `resonance sweep` reads in the README
+        Path sample = Path.of("sample-captures", "resonance", "belt-axis-sweep.csv");
+        HttpResponse<String> good = multipart(base(station) + "/api/sweep/upload", key, "capture",
+                "belt-axis-sweep.csv", java.nio.file.Files.readAllBytes(sample));
+        assertTrue(events(station, field(good.body(), "task")).contains("\"type\":\"done\""));
+    }
+
+    @Test
+    void aRigThatDoesNotAnswerIsARigFaultWithNothingRecorded() throws Exception {
+        try (Station dead = Station.start(new Station.Settings("127.0.0.1", 0, null, dir.resolve("qa3.sqlite").toString(),
+                "tcp:127.0.0.1:9", QA, QA, dir.resolve("out3"), "test"))) {
+            String key = formKey(dead);
+            HttpResponse<String> r = post(base(dead) + "/api/sweep", "ack=yes&rig=tcp:127.0.0.1:9",
+                    Access.FORM_KEY_HEADER, key);
+            String ev = events(dead, field(r.body(), "task"));
+            assertTrue(ev.contains("\"kind\":\"rig\"") && ev.contains("nothing was recorded"), ev);
+        }
     }
 }
