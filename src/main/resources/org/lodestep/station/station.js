@@ -143,7 +143,48 @@
     });
   }
 
+  function leadsProbe(root) {
+    var probe = root.dataset.probe;
+    var panel = document.getElementById('probe-panel');
+    var status = document.createElement('p');
+    status.className = 'problem';
+    status.setAttribute('role', 'alert');
+    status.hidden = true;
+    root.insertBefore(status, panel);
+
+    function send(value) {
+      var data = new URLSearchParams();
+      data.set('value', value);
+      post('/api/leads/probes/' + encodeURIComponent(probe) + '/answer', data).then(function (j) {
+        status.hidden = true;
+        panel.innerHTML = j.html;
+        root.dataset.answers = String((+root.dataset.answers || 0) + 1);
+        if (j.done) { root.dataset.done = 'true'; }
+        var input = document.getElementById('ohms');
+        if (input) { input.focus(); }
+      }).catch(function (err) {
+        status.hidden = false;
+        status.textContent = '\u2716 ' + err.message;
+        var input = document.getElementById('ohms');
+        if (input) { input.select(); input.focus(); }
+      });
+    }
+
+    panel.addEventListener('submit', function (ev) {
+      if (ev.target.id !== 'answer-form') { return; }
+      ev.preventDefault();
+      var input = document.getElementById('ohms');
+      if (input.value.trim()) { send(input.value.trim()); }
+    });
+    panel.addEventListener('click', function (ev) {
+      var b = ev.target.closest('button[data-value]');
+      if (b) { send(b.dataset.value); }
+    });
+  }
+
   document.addEventListener('DOMContentLoaded', function () {
+    var probeRoot = document.querySelector('[data-page="leads-probe"]');
+    if (probeRoot) { leadsProbe(probeRoot); }
     var root = document.querySelector('[data-page="qa-run"]');
     if (root) { qaRun(root); }
     if (document.getElementById('sweep-form')) { sweep(); }
