@@ -55,7 +55,7 @@ if python3 -c 'import numpy, scipy' 2>/dev/null; then
   for i in $(seq "$RUNS"); do
     /usr/bin/time -f "%e %U %S" -o "$work/time.txt" python3 -c "
 import numpy as np, sys
-d = np.loadtxt(sys.argv[1], delimiter=',', comments='#', skiprows=6)
+d = np.loadtxt(sys.argv[1], delimiter=',', comments='#', skiprows=7)
 assert d.shape[0] == $FRAMES" "$work/sweep.csv"
     cat "$work/time.txt" >> "$work/numpy-csv.txt"
     /usr/bin/time -f "%e %U %S" -o "$work/time.txt" python3 -c "

@@ -6,7 +6,6 @@ import java.nio.file.Files;
 import java.nio.file.Path;
 import java.util.List;
 import java.util.Locale;
-import java.util.Optional;
 import java.util.OptionalDouble;
 import java.util.stream.Stream;
 
@@ -15,12 +14,12 @@ import org.lodestep.capture.ResistanceCsvReader;
 import org.lodestep.capture.ResistanceReadings;
 import org.lodestep.report.LeadsHtml;
 import org.lodestep.report.LeadsTextReport;
-import org.lodestep.wiring.IdentifySettings;
 import org.lodestep.wiring.Identification;
-import org.lodestep.wiring.LeadIdentifier;
 import org.lodestep.wiring.LeadPair;
-import org.lodestep.wiring.ProbeSession;
-import org.lodestep.wiring.ResistanceMatrix;
+import org.lodestep.workflow.LeadsFromReadings;
+import org.lodestep.workflow.LeadsProbe;
+import org.lodestep.workflow.LeadsSettings;
+import org.lodestep.workflow.Progress;
 
 /**
  * The leads part of {@code lodestep demo}: the Kestrel Lane repair bench sorts stepper motors salvaged from retired
@@ -47,18 +46,17 @@ final class LeadsDemo implements DemoCommand.Section {
         int faulty = 0;
         ResistanceReadings probeTarget = null;
         for (Path f : files) {
-            ResistanceReadings r = ResistanceCsvReader.read(f);
-            IdentifySettings settings = IdentifySettings.DEFAULT.withTemperatures(r.temperatureC().orElse(Double.NaN),
-                    20);
-            Identification id = LeadIdentifier.identify(LeadsIdentifyCommand.matrix(r, List.of()), settings);
+            LeadsFromReadings.Motor m = LeadsFromReadings.run(new LeadsFromReadings.Settings(List.of(f), List.of(),
+                    LeadsSettings.DEFAULT), Progress.NONE).motors().get(0);
+            Identification id = m.identification();
             faulty += id.hasError() ? 1 : 0;
-            String title = (r.motor() != null ? r.motor() : f.getFileName().toString());
+            String title = (m.motor() != null ? m.motor() : f.getFileName().toString());
             LeadsTextReport.writeBrief(out, title, id);
             Path html = outDir.resolve("leads-" + f.getFileName().toString().replaceAll("\\.(csv|tsv)$", "") + ".html");
-            LeadsHtml.report(r.motor() != null ? "Motor " + r.motor() : title, f.toString(), id).write(html);
+            LeadsHtml.report(m.motor() != null ? "Motor " + m.motor() : title, f.toString(), id).write(html);
             out.println("  report: " + html);
             if (probeTarget == null && id.leads().size() == 6 && !id.hasError() && id.determined()) {
-                probeTarget = r;
+                probeTarget = ResistanceCsvReader.read(f);
             }
         }
         out.printf(Locale.ROOT, "%d motors sorted, %d rejected with an error finding (exit code 3 from"
@@ -70,24 +68,18 @@ final class LeadsDemo implements DemoCommand.Section {
     }
 
     /** Replays a capture through the guided probe, answering each question from the file. */
-    private static void guidedRerun(ResistanceReadings r, PrintWriter out) {
-        ProbeSession session = new ProbeSession(r.leads(), IdentifySettings.DEFAULT);
-        while (!session.determined()) {
-            Optional<LeadPair> p = session.nextPair();
-            if (p.isEmpty()) {
-                break;
-            }
+    private static void guidedRerun(ResistanceReadings r, PrintWriter out) throws IOException {
+        LeadsProbe.Result result = LeadsProbe.run(new LeadsProbe.Settings(r.leads(), LeadsSettings.DEFAULT), q -> {
             OptionalDouble v = OptionalDouble.empty();
-            for (LeadPairReading q : r.readings()) {
-                if (LeadPair.of(q.leadA(), q.leadB()).equals(p.get()) && !q.open()) {
-                    v = OptionalDouble.of(q.resistanceOhm());
+            for (LeadPairReading p : r.readings()) {
+                if (LeadPair.of(p.leadA(), p.leadB()).equals(q.pair()) && !p.open()) {
+                    v = OptionalDouble.of(p.resistanceOhm());
                 }
             }
-            session.record(p.get(), v);
-        }
-        ResistanceMatrix m = session.matrix();
+            return new LeadsProbe.Answer.Reading(v);
+        }, Progress.NONE);
         out.printf(Locale.ROOT, "Guided probe on %s (`leads probe --leads %d`): %s after %d readings of %d.%n",
-                r.motor() != null ? r.motor() : r.source(), r.leads().size(), session.result().topology().label(),
-                m.readings().size(), m.allPairs().size());
+                r.motor() != null ? r.motor() : r.source(), r.leads().size(), result.identification().topology()
+                        .label(), result.readings(), result.allPairs());
     }
 }

@@ -4,19 +4,15 @@ import java.io.PrintWriter;
 import java.nio.file.Path;
 import java.util.ArrayList;
 import java.util.List;
-import java.util.OptionalDouble;
 import java.util.concurrent.Callable;
 
 import org.lodestep.capture.LeadPairArgument;
 import org.lodestep.capture.LeadPairReading;
-import org.lodestep.capture.ResistanceCsvReader;
-import org.lodestep.capture.ResistanceReadings;
 import org.lodestep.report.LeadsHtml;
 import org.lodestep.report.LeadsJsonView;
 import org.lodestep.report.LeadsTextReport;
-import org.lodestep.wiring.Identification;
-import org.lodestep.wiring.LeadIdentifier;
-import org.lodestep.wiring.ResistanceMatrix;
+import org.lodestep.workflow.LeadsFromReadings;
+import org.lodestep.workflow.Progress;
 
 import picocli.CommandLine.Command;
 import picocli.CommandLine.Mixin;
@@ -72,7 +68,8 @@ final class LeadsIdentifyCommand implements Callable<Integer> {
                 throw new UsageException("--rig measures the motor itself: give no FILE or --pair with it");
             }
             PrintWriter out = spec.commandLine().getOut();
-            return RigLeadsIdentify.run(rig, options, out, options.json ? spec.commandLine().getErr() : out);
+            return RigLeadsIdentify.run(rig, options.settings(), options.json, out,
+                    options.json ? spec.commandLine().getErr() : out);
         }
         if (files.isEmpty() && pairs.isEmpty()) {
             throw new UsageException("give at least one FILE or --pair (see --help)");
@@ -84,29 +81,22 @@ final class LeadsIdentifyCommand implements Callable<Integer> {
         for (String p : pairs) {
             extra.add(LeadPairArgument.parse(p, "--pair"));
         }
+        LeadsFromReadings.Result result = WorkflowCall.run(() -> LeadsFromReadings.run(
+                new LeadsFromReadings.Settings(files, extra, options.settings()), Progress.NONE));
         PrintWriter out = spec.commandLine().getOut();
         List<LeadsJsonView.MotorJson> json = new ArrayList<>();
-        boolean error = false;
-        List<ResistanceReadings> inputs = new ArrayList<>();
-        for (Path f : files) {
-            inputs.add(ResistanceCsvReader.read(f));
-        }
-        if (inputs.isEmpty()) {
-            inputs.add(new ResistanceReadings("--pair", List.of(), List.of(), java.util.Map.of(), List.of()));
-        }
-        for (ResistanceReadings r : inputs) {
-            Identification id = LeadIdentifier.identify(matrix(r, extra), options.settings(r.temperatureC()));
-            error |= id.hasError();
-            String title = r.motor() != null ? "Motor " + r.motor() + " (" + r.source() + ")"
-                    : files.isEmpty() ? "Readings from --pair" : r.source();
+        for (LeadsFromReadings.Motor m : result.motors()) {
+            String source = m.source() != null ? m.source() : "--pair";
+            String title = m.motor() != null ? "Motor " + m.motor() + " (" + source + ")"
+                    : m.source() == null ? "Readings from --pair" : source;
             if (report != null) {
-                LeadsHtml.report(r.motor() != null ? "Motor " + r.motor() : title, files.isEmpty() ? null
-                        : r.source(), id).write(report);
+                LeadsHtml.report(m.motor() != null ? "Motor " + m.motor() : title, m.source(), m.identification())
+                        .write(report);
             }
             if (options.json) {
-                json.add(LeadsJsonView.of(r.source(), r.motor(), id, null));
+                json.add(LeadsJsonView.of(source, m.motor(), m.identification(), null));
             } else {
-                LeadsTextReport.write(out, title, id);
+                LeadsTextReport.write(out, title, m.identification());
                 out.println();
             }
         }
@@ -116,18 +106,6 @@ final class LeadsIdentifyCommand implements Callable<Integer> {
             out.println(LeadsTextReport.CAUTION);
         }
         out.flush();
-        return error ? ExitCode.FINDING : ExitCode.OK;
-    }
-
-    /** The readings of a file plus command-line readings (which replace the file's value for the same pair). */
-    static ResistanceMatrix matrix(ResistanceReadings r, List<LeadPairReading> extra) {
-        ResistanceMatrix.Builder b = ResistanceMatrix.builder();
-        r.leads().forEach(b::lead);
-        List<LeadPairReading> all = new ArrayList<>(r.readings());
-        all.addAll(extra);
-        for (LeadPairReading p : all) {
-            b.reading(p.leadA(), p.leadB(), p.open() ? OptionalDouble.empty() : OptionalDouble.of(p.resistanceOhm()));
-        }
-        return b.build();
+        return result.hasError() ? ExitCode.FINDING : ExitCode.OK;
     }
 }

@@ -1,9 +1,7 @@
 package org.lodestep.cli;
 
-import java.util.OptionalDouble;
-
 import org.lodestep.wiring.CopperTemperature;
-import org.lodestep.wiring.IdentifySettings;
+import org.lodestep.workflow.LeadsSettings;
 
 import picocli.CommandLine.Option;
 
@@ -37,8 +35,8 @@ final class LeadsIdentifyOptions {
     @Option(names = "--json", description = "Write JSON instead of text (contract in the README).")
     boolean json;
 
-    /** The settings, with {@code fileTemperatureC} used when --ambient-c is not given. */
-    IdentifySettings settings(OptionalDouble fileTemperatureC) {
+    /** The settings the leads workflows take; a file's temperature applies where --ambient-c is not given. */
+    LeadsSettings settings() {
         CopperTemperature.Constant k = switch (copperK.strip()) {
             case "235" -> CopperTemperature.Constant.IEC_60034_1;
             case "234.5" -> CopperTemperature.Constant.IEEE_234_5;
@@ -49,16 +47,14 @@ final class LeadsIdentifyOptions {
             throw new UsageException("--imbalance-tolerance " + imbalanceTolerancePercent
                     + ": expected a percentage between 0 and 100");
         }
-        double ambient = ambientC != null ? ambientC : fileTemperatureC.orElse(Double.NaN);
-        if (Double.isFinite(ambient) && ambient <= -k.kC() || !Double.isFinite(referenceC) || referenceC <= -k.kC()) {
+        double ambient = ambientC != null ? ambientC : Double.NaN;
+        if (ambientC != null && !(Double.isFinite(ambient) && ambient > -k.kC()) || !Double.isFinite(referenceC)
+                || referenceC <= -k.kC()) {
             throw new UsageException("temperatures must be above " + (-k.kC()) + " °C");
         }
         if (!(contactAllowanceOhm >= 0 && contactAllowanceOhm < 1e3)) {
             throw new UsageException("--contact-allowance-ohm " + contactAllowanceOhm + ": expected 0 to 1000 ohms");
         }
-        IdentifySettings base = new IdentifySettings(IdentifySettings.DEFAULT.imbalanceTolerance(),
-                contactAllowanceOhm, IdentifySettings.DEFAULT.continuityRatio(), Double.NaN, 20.0, k);
-        return base.withImbalanceTolerance(imbalanceTolerancePercent / 100)
-                .withTemperatures(ambient, referenceC).withCopper(k);
+        return new LeadsSettings(ambient, referenceC, k, imbalanceTolerancePercent / 100, contactAllowanceOhm);
     }
 }

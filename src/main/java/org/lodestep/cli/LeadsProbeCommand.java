@@ -1,6 +1,7 @@
 package org.lodestep.cli;
 
 import java.io.BufferedReader;
+import java.io.IOException;
 import java.io.InputStreamReader;
 import java.io.PrintWriter;
 import java.nio.charset.StandardCharsets;
@@ -9,18 +10,18 @@ import java.nio.file.Path;
 import java.util.ArrayList;
 import java.util.List;
 import java.util.Locale;
-import java.util.Optional;
 import java.util.OptionalDouble;
 import java.util.concurrent.Callable;
 
 import org.lodestep.sample.InputFormatException;
 import org.lodestep.capture.LeadPairArgument;
 import org.lodestep.capture.LeadPairReading;
+import org.lodestep.report.IdentifyProgressText;
 import org.lodestep.report.LeadsJsonView;
 import org.lodestep.report.LeadsTextReport;
 import org.lodestep.wiring.Identification;
-import org.lodestep.wiring.LeadPair;
-import org.lodestep.wiring.ProbeSession;
+import org.lodestep.workflow.LeadsProbe;
+import org.lodestep.workflow.Progress;
 
 import picocli.CommandLine.Command;
 import picocli.CommandLine.Mixin;
@@ -60,53 +61,26 @@ final class LeadsProbeCommand implements Callable<Integer> {
 
     @Override
     public Integer call() throws Exception {
-        List<String> leads = leads();
-        ProbeSession session = new ProbeSession(leads, options.settings(OptionalDouble.empty()));
+        LeadsProbe.Settings settings = new LeadsProbe.Settings(leads(), options.settings());
+        List<String> leads = settings.leads();
         PrintWriter out = spec.commandLine().getOut();
         // Prompts go to stderr in JSON mode so that standard output stays one JSON document.
         PrintWriter prompts = options.json ? spec.commandLine().getErr() : out;
-        int all = leads.size() * (leads.size() - 1) / 2;
+        int all = settings.allPairs();
         prompts.printf(Locale.ROOT, "Probing %d leads (%s); up to %d pairs.%n%s%n", leads.size(), String.join(", ",
                 leads), all, LeadsTextReport.CAUTION);
         boolean scripted = answers != null || System.console() == null;
         try (BufferedReader in = answers != null ? Files.newBufferedReader(answers, StandardCharsets.UTF_8)
                 : new BufferedReader(new InputStreamReader(System.in, StandardCharsets.UTF_8))) {
-            boolean ended = false;
-            while (!session.determined()) {
-                Optional<LeadPair> next = session.nextPair();
-                if (next.isEmpty()) {
-                    break;
-                }
-                LeadPair p = next.get();
-                // In the user's label order (red-blue as listed), not the pair's canonical order.
-                String shown = leads.indexOf(p.a()) < leads.indexOf(p.b()) ? p.a() + "-" + p.b() : p.b() + "-" + p.a();
-                prompts.printf(Locale.ROOT, "Reading %d: measure %s (ohms, OL, undo, quit): ",
-                        session.readingCount() + 1, shown);
-                prompts.flush();
-                String line = in.readLine();
-                if (line == null) {
-                    prompts.println();
-                    prompts.println("Input ended before the answer was certain.");
-                    ended = true;
-                    break;
-                }
-                if (scripted) {
-                    prompts.println(line);
-                }
-                if (!answer(session, p, line.strip(), prompts)) {
-                    ended = true;
-                    break;
-                }
-            }
-            Identification id = session.result();
-            int taken = session.readingCount();
+            LeadsProbe.Result r = WorkflowCall.run(() -> LeadsProbe.run(settings, new Prompt(in, prompts, scripted),
+                    Progress.NONE));
+            Identification id = r.identification();
             if (options.json) {
                 out.println(LeadsJsonView.write(List.of(LeadsJsonView.of("probe", null, id,
-                        new LeadsJsonView.ProbeJson(taken, all)))));
+                        new LeadsJsonView.ProbeJson(r.readings(), all)))));
             } else {
                 out.println();
-                out.printf(Locale.ROOT, "Took %d readings of %d (N(N-1)/2 for %d leads)%s.%n", taken, all,
-                        leads.size(), ended ? ", stopped early" : "");
+                out.println(IdentifyProgressText.probeDone(r.readings(), all, leads.size(), r.stopped() != null));
                 LeadsTextReport.write(out, "Probed motor", id);
             }
             out.flush();
@@ -114,34 +88,68 @@ final class LeadsProbeCommand implements Callable<Integer> {
         }
     }
 
-    /** Handles one answer; false when the user quits. */
-    private static boolean answer(ProbeSession session, LeadPair asked, String line, PrintWriter prompts) {
-        String lower = line.toLowerCase(Locale.ROOT);
-        if (lower.equals("quit") || lower.equals("q") || lower.equals("exit")) {
-            return false;
-        }
-        if (lower.equals("undo") || lower.equals("u")) {
-            prompts.println(session.undo() ? "  withdrew the last reading" : "  nothing to undo");
-            return true;
-        }
-        if (line.indexOf('=') > 0) {
-            try {
-                LeadPairReading r = LeadPairArgument.parse(line, "answer");
-                session.record(LeadPair.of(r.leadA(), r.leadB()),
-                        r.open() ? OptionalDouble.empty() : OptionalDouble.of(r.resistanceOhm()));
-            } catch (InputFormatException | IllegalArgumentException e) {
-                prompts.println("  not recorded: " + e.getMessage());
+    /** Puts each question as a prompt line and reads the answer typed (or piped) in reply. */
+    private record Prompt(BufferedReader in, PrintWriter prompts, boolean scripted) implements LeadsProbe.Meter {
+
+        @Override
+        public LeadsProbe.Answer ask(LeadsProbe.Question q) throws IOException {
+            while (true) {
+                prompts.printf(Locale.ROOT, "Reading %d: measure %s-%s (ohms, OL, undo, quit): ", q.number(),
+                        q.first(), q.second());
+                prompts.flush();
+                String line = in.readLine();
+                if (line == null) {
+                    prompts.println();
+                    prompts.println("Input ended before the answer was certain.");
+                    return new LeadsProbe.Answer.Stop(LeadsProbe.StopReason.END_OF_ANSWERS);
+                }
+                if (scripted) {
+                    prompts.println(line);
+                }
+                LeadsProbe.Answer a = parse(line.strip());
+                if (a != null) {
+                    return a;
+                }
             }
-            return true;
         }
-        OptionalDouble v = LeadPairArgument.parseValue(line);
-        if (v.isEmpty()) {
-            prompts.println("  '" + line + "' is not a reading: expected ohms (e.g. 2.4), OL for open, undo or quit");
-            return true;
+
+        @Override
+        public void undone(boolean withdrew) {
+            prompts.println(withdrew ? "  withdrew the last reading" : "  nothing to undo");
         }
-        double ohms = v.getAsDouble();
-        session.record(asked, Double.isInfinite(ohms) ? OptionalDouble.empty() : OptionalDouble.of(ohms));
-        return true;
+
+        @Override
+        public void refused(String reason) {
+            prompts.println("  not recorded: " + reason);
+        }
+
+        /** The answer a line gives; null (after saying why) when it is none and the question is put again. */
+        private LeadsProbe.Answer parse(String line) {
+            String lower = line.toLowerCase(Locale.ROOT);
+            if (lower.equals("quit") || lower.equals("q") || lower.equals("exit")) {
+                return new LeadsProbe.Answer.Stop(LeadsProbe.StopReason.QUIT);
+            }
+            if (lower.equals("undo") || lower.equals("u")) {
+                return new LeadsProbe.Answer.Undo();
+            }
+            if (line.indexOf('=') > 0) {
+                try {
+                    LeadPairReading r = LeadPairArgument.parse(line, "answer");
+                    return new LeadsProbe.Answer.OtherPair(r.leadA(), r.leadB(),
+                            r.open() ? OptionalDouble.empty() : OptionalDouble.of(r.resistanceOhm()));
+                } catch (InputFormatException | IllegalArgumentException e) {
+                    refused(e.getMessage());
+                    return null;
+                }
+            }
+            OptionalDouble v = LeadPairArgument.parseValue(line);
+            if (v.isEmpty()) {
+                prompts.println("  '" + line + "' is not a reading: expected ohms (e.g. 2.4), OL for open, undo or "
+                        + "quit");
+                return null;
+            }
+            return new LeadsProbe.Answer.Reading(v);
+        }
     }
 
     private List<String> leads() {

@@ -6,18 +6,17 @@ import java.util.ArrayList;
 import java.util.List;
 import java.util.concurrent.Callable;
 
-import org.lodestep.capture.Captures;
-import org.lodestep.sample.Channel;
-import org.lodestep.sample.InputFormatException;
-import org.lodestep.sample.SampledSignal;
-import org.lodestep.motor.BackEmfResult;
-import org.lodestep.motor.Connection;
-import org.lodestep.motor.IdentifyRequest;
+import org.lodestep.wiring.Connection;
 import org.lodestep.motor.MotorCard;
-import org.lodestep.motor.MotorIdentifier;
-import org.lodestep.workflow.MotorCaptureInputs;
-import org.lodestep.motor.StepInput;
+import org.lodestep.motor.OrientedLeads;
 import org.lodestep.motor.WindingInput;
+import org.lodestep.rig.RigClient;
+import org.lodestep.rig.RigInfo;
+import org.lodestep.workflow.MotorCardSettings;
+import org.lodestep.workflow.MotorFromFiles;
+import org.lodestep.workflow.MotorOnRig;
+import org.lodestep.workflow.Progress;
+import org.lodestep.report.IdentifyProgressText;
 import org.lodestep.report.MotorHtml;
 import org.lodestep.report.MotorJson;
 import org.lodestep.report.MotorCardText;
@@ -134,6 +133,9 @@ final class MotorIdentifyCommand implements Callable<Integer> {
         if (files && rig != null) {
             throw new UsageException("--rig measures everything itself; give either --rig or files, not both");
         }
+        if (connection == Connection.WHOLE) {
+            throw new UsageException("--connection whole: expected series, parallel, half or unipolar");
+        }
         positive(revolutions, "--revolutions");
         positive(phaseCurrentA, "--phase-current-a");
         positive(supplyV, "--supply-v");
@@ -146,45 +148,77 @@ final class MotorIdentifyCommand implements Callable<Integer> {
             throw new UsageException("--pulses-per-rev must be at least 1, got " + pulsesPerRev);
         }
         PrintWriter out = spec.commandLine().getOut();
-        WindingInput windings;
-        List<StepInput> steps = new ArrayList<>();
-        BackEmfResult emf;
+        MotorCardSettings cardSettings = new MotorCardSettings(connection, phaseCurrentA, supplyV, inertiaKgM2);
+        MotorCard card;
+        List<MotorHtml.Trace> traces = new ArrayList<>();
         if (rig != null) {
             if (!json) {
                 SAFETY.forEach(out::println);
                 out.println();
             }
-            MotorRigSequence.Measurements m = MotorRigSequence.run(rig, revolutions,
-                    json ? spec.commandLine().getErr() : out);
-            windings = m.windings();
-            steps.addAll(m.steps());
-            emf = m.backEmf();
+            PrintWriter log = json ? spec.commandLine().getErr() : out;
+            try (RigClient c = RigCli.connect(rig)) {
+                card = WorkflowCall.run(() -> MotorOnRig.run(c, new MotorOnRig.Settings(revolutions, cardSettings),
+                        new RigLog(log))).card();
+            }
         } else {
-            windings = resistance == null ? null : MotorWindings.read(resistance);
-            for (Path p : stepResponses) {
-                steps.add(MotorCaptureInputs.stepResponse(p, stepSupplyV, seriesOhm, null));
-            }
-            emf = backEmf == null ? null : MotorCaptureInputs.backEmf(backEmf, revolutions, pulsesPerRev);
-        }
-        MotorCard card = MotorIdentifier.identify(new IdentifyRequest(windings, steps, emf, connection,
-                phaseCurrentA, supplyV, inertiaKgM2));
-        if (report != null) {
+            MotorFromFiles.Result r = WorkflowCall.run(() -> MotorFromFiles.run(new MotorFromFiles.Settings(
+                    resistance, stepResponses, backEmf, revolutions, pulsesPerRev, stepSupplyV, seriesOhm,
+                    cardSettings, report != null), Progress.NONE));
+            card = r.card();
             // Recorded step responses are drawn under their fits; the rig's are measured in memory and listed only.
-            List<MotorHtml.Trace> traces = new ArrayList<>();
-            for (Path p : stepResponses) {
-                traces.add(trace(p));
-            }
-            MotorHtml.report(title(), card, traces).write(report);
+            r.traces().forEach(t -> traces.add(new MotorHtml.Trace(t.source(), t.timeS(), t.currentA())));
+        }
+        if (report != null) {
+            MotorHtml.report(title(), card, traces, MotorOptionHints.INSTANCE).write(report);
         }
         if (json) {
-            out.println(MotorJson.write(card));
+            out.println(MotorJson.write(card, MotorOptionHints.INSTANCE));
         } else {
-            out.print(MotorCardText.render(card));
+            out.print(MotorCardText.render(card, MotorOptionHints.INSTANCE));
             out.println();
             SAFETY.forEach(out::println);
         }
         out.flush();
         return card.hasError() ? ExitCode.FINDING : ExitCode.OK;
+    }
+
+    /** Prints the rig sequence's stages as they begin. */
+    record RigLog(PrintWriter out) implements MotorOnRig.Listener {
+        @Override
+        public void connected(RigInfo info, List<String> leads) {
+            out.println(IdentifyProgressText.motorConnected(info, leads));
+        }
+
+        @Override
+        public void measuringResistances(int pairs) {
+            out.println(IdentifyProgressText.motorResistances(pairs));
+            out.flush();
+        }
+
+        @Override
+        public void windingsFound(WindingInput windings) {
+            out.println(IdentifyProgressText.motorWindings(windings));
+        }
+
+        @Override
+        public void stepResponse(int k, int n, double volts, OrientedLeads coil) {
+            out.println(IdentifyProgressText.motorStep(k, n, volts, coil));
+            out.flush();
+        }
+
+        @Override
+        public void turnTheShaft(int coils, double seconds) {
+            out.println(IdentifyProgressText.motorTurnTheShaft(coils, seconds));
+            out.flush();
+        }
+
+        @Override
+        public void outputsOff() {
+            out.println(IdentifyProgressText.motorOutputsOff());
+            out.println();
+            out.flush();
+        }
     }
 
     /** The cautions printed under every text card. */
@@ -201,28 +235,4 @@ final class MotorIdentifyCommand implements Callable<Integer> {
             throw new UsageException(option + " must be a positive number, got " + v);
         }
     }
-
-    /** The recorded current of a step-response capture, for drawing under its fit in the HTML report. */
-    private static org.lodestep.report.MotorHtml.Trace trace(Path file)
-            throws java.io.IOException, org.lodestep.sample.InputFormatException {
-        SampledSignal s = Captures.readAll(file);
-        int current = -1;
-        for (int c = 0; c < s.channels().size(); c++) {
-            Channel ch = s.channels().get(c);
-            if (ch.unit().equals("a") && (current < 0 || ch.name().startsWith("current"))) {
-                current = c; // the same column stepResponse fits
-            }
-        }
-        if (current < 0) {
-            throw new InputFormatException(file.toString(), InputFormatException.NO_LINE, null, null,
-                    "has no current channel");
-        }
-        double[] i = s.channel(current);
-        double[] t = new double[i.length];
-        for (int k = 0; k < t.length; k++) {
-            t[k] = s.startTimeS() + k / s.sampleRateHz();
-        }
-        return new org.lodestep.report.MotorHtml.Trace(file.getFileName().toString(), t, i);
-    }
-
 }

@@ -3,6 +3,7 @@ package org.lodestep.motor;
 import java.util.ArrayList;
 import java.util.Arrays;
 import java.util.List;
+import org.lodestep.wiring.Finding;
 
 /**
  * Phases the coils of a motor from a multi-channel back-EMF capture taken while the shaft is turned by hand, tracks
@@ -50,6 +51,73 @@ public final class BackEmfAnalyzer {
      */
     public BackEmfResult analyze(List<EmfChannel> channels, Double revolutions, double[] indexChannel,
                                  int pulsesPerRevolution) {
+        int n = checkedLength(channels, revolutions, indexChannel, pulsesPerRevolution);
+        List<Finding> findings = new ArrayList<>();
+        Centred c = centred(channels, n);
+        List<Integer> live = liveChannels(channels, c, findings);
+        int m = live.size();
+        double[][][] z = new double[m][][];
+        for (int j = 0; j < m; j++) {
+            z[j] = AnalyticSignal.of(c.x()[live.get(j)]);
+        }
+        int margin = Math.max(1, n / 50); // FFT-based analytic signals are distorted at the record ends
+        Span span = new Span(margin, n - margin, n);
+        Grouping g = group(z, span);
+        Phasing ph = phase(channels, z, live, c.rms(), g, span, findings);
+        Angle angle = electricalAngle(ph, span);
+        Speed speed = speedAndKe(z, angle, span, findings);
+        Revolutions revs = revolutions(indexChannel, revolutions, pulsesPerRevolution, angle, findings);
+        Teeth teeth = teeth(revs, findings);
+
+        List<EmfCoil> coils = new ArrayList<>();
+        for (int j = 0; j < m; j++) {
+            OrientedLeads measured = channels.get(live.get(j)).pair();
+            OrientedLeads oriented = g.polarity()[j] >= 0 ? measured : measured.reversed();
+            double keElec = speed.den() > 0 ? speed.num()[j] / speed.den() : 0;
+            Double keMech = teeth.teeth() != null && keElec > 0 ? keElec * teeth.teeth() : null;
+            coils.add(new EmfCoil(measured, g.group()[j] == 0 ? "A" : "B", oriented, g.group()[j] == 0 ? 0.0 : -90.0,
+                    c.rms()[live.get(j)], keElec, keMech));
+        }
+        return new BackEmfResult(coils, angle.cycles(), speed.movingS(), speed.meanF(), speed.minF(), speed.maxF(),
+                revs.revolutions(), revs.source(), teeth.perRevolution(), teeth.teeth(), ph.lagDeg(), ph.reversals(),
+                findings);
+    }
+
+    /** The samples analysed, {@code from} (inclusive) to {@code to} (exclusive) of {@code n}. */
+    private record Span(int from, int to, int n) {
+    }
+
+    /** Channels with their mean removed, their RMS and the largest RMS. */
+    private record Centred(double[][] x, double[] rms, double maxRms) {
+    }
+
+    /** Which phase each live channel belongs to (0 = A, 1 = B), its polarity, and the first B channel (or -1). */
+    private record Grouping(int[] group, double[] polarity, int firstB) {
+    }
+
+    /** The combined analytic signals of phases A and B (B null with one phase), B's lag and direction changes. */
+    private record Phasing(double[][] za, double[][] zb, Double lagDeg, int reversals) {
+    }
+
+    /** The unwrapped electrical angle, where the shaft moved, and the cycles between the first and last movement. */
+    private record Angle(double[] angle, boolean[] moving, int firstValid, int lastValid, double cycles) {
+    }
+
+    /** Block-wise electrical frequency and the Ke regression sums (per channel numerator, common denominator). */
+    private record Speed(double movingS, double meanF, double minF, double maxF, double[] num, double den) {
+    }
+
+    /** Revolutions and where they came from, and the cycles counted over them. */
+    private record Revolutions(Double revolutions, RevolutionSource source, double countedCycles) {
+    }
+
+    /** Cycles per revolution and the rotor tooth count; null when unknown. */
+    private record Teeth(Double perRevolution, Integer teeth) {
+    }
+
+    /** The common channel length, after checking every argument. */
+    private static int checkedLength(List<EmfChannel> channels, Double revolutions, double[] indexChannel,
+                                     int pulsesPerRevolution) {
         if (channels.isEmpty()) {
             throw new IllegalArgumentException("no back-EMF channels (expected columns named emf_<lead>_<lead>_v)");
         }
@@ -70,9 +138,11 @@ public final class BackEmfAnalyzer {
         if (pulsesPerRevolution < 1) {
             throw new IllegalArgumentException("pulses per revolution must be at least 1, got " + pulsesPerRevolution);
         }
-        List<Finding> findings = new ArrayList<>();
+        return n;
+    }
 
-        // Mean removed: a DC offset of the recorder would bias the correlations.
+    /** Mean removed: a DC offset of the recorder would bias the correlations. */
+    private static Centred centred(List<EmfChannel> channels, int n) {
         double[][] x = new double[channels.size()][];
         double[] rms = new double[channels.size()];
         double maxRms = 0;
@@ -90,26 +160,31 @@ public final class BackEmfAnalyzer {
         if (!(maxRms > 0)) {
             throw new IllegalArgumentException("every back-EMF channel is flat: was the shaft turned?");
         }
+        return new Centred(x, rms, maxRms);
+    }
+
+    /** The channels that carry back-EMF; each dead one becomes an error finding. */
+    private static List<Integer> liveChannels(List<EmfChannel> channels, Centred c, List<Finding> findings) {
+        double[] rms = c.rms();
+        double maxRms = c.maxRms();
         List<Integer> live = new ArrayList<>();
         for (int k = 0; k < channels.size(); k++) {
             if (rms[k] < DEAD_FRACTION * maxRms) {
-                findings.add(Finding.error("no_emf", String.format("channel %s shows no back-EMF (%.3g V RMS against "
+                findings.add(Finding.error(MotorFindingCode.NO_EMF, String.format("channel %s shows no back-EMF (%.3g V RMS against "
                         + "%.3g V on the strongest): an open coil, a broken lead, or two leads that are not one coil",
                         channels.get(k).pair(), rms[k], maxRms)));
             } else {
                 live.add(k);
             }
         }
-        int m = live.size();
-        double[][][] z = new double[m][][];
-        for (int j = 0; j < m; j++) {
-            z[j] = AnalyticSignal.of(x[live.get(j)]);
-        }
-        int margin = Math.max(1, n / 50); // FFT-based analytic signals are distorted at the record ends
-        int from = margin;
-        int to = n - margin;
+        return live;
+    }
 
-        // Group into phases by the direction-independent correlation with the first live channel.
+    /** Groups into phases by the direction-independent correlation with the first live channel. */
+    private static Grouping group(double[][][] z, Span span) {
+        int m = z.length;
+        int from = span.from();
+        int to = span.to();
         int[] group = new int[m];
         double[] polarity = new double[m];
         int firstB = -1;
@@ -129,75 +204,114 @@ public final class BackEmfAnalyzer {
                 }
             }
         }
+        return new Grouping(group, polarity, firstB);
+    }
+
+    /**
+     * Combines each phase's channels, orients B to lag A in the main turning direction (flipping B's polarities when
+     * it led), and measures the lag and the direction changes.
+     */
+    private Phasing phase(List<EmfChannel> channels, double[][][] z, List<Integer> live, double[] rms, Grouping g,
+                          Span span, List<Finding> findings) {
+        int m = z.length;
+        int n = span.n();
+        int[] group = g.group();
+        double[] polarity = g.polarity();
         double[][] za = combine(z, live, rms, group, polarity, 0, n);
-        double[][] zb = firstB < 0 ? null : combine(z, live, rms, group, polarity, 1, n);
-
-        int reversals = 0;
-        Double lagDeg = null;
-        if (zb != null) {
-            int block = blockLength();
-            List<double[]> blocks = new ArrayList<>();
-            double sumIm = 0;
-            for (int s = from; s + block <= to; s += block) {
-                double re = 0;
-                double im = 0;
-                for (int i = s; i < s + block; i++) {
-                    // zb·conj(za): its angle is B's phase relative to A
-                    re += zb[0][i] * za[0][i] + zb[1][i] * za[1][i];
-                    im += zb[1][i] * za[0][i] - zb[0][i] * za[1][i];
-                }
-                blocks.add(new double[] {re, im});
-                sumIm += im;
+        if (g.firstB() < 0) {
+            if (m > 1) {
+                findings.add(Finding.warning(MotorFindingCode.ONE_PHASE, "every live channel is in phase or antiphase "
+                        + "with " + channels.get(live.get(0)).pair() + ": only one phase was recorded"));
             }
-            if (sumIm > 0) {
-                // B leads A in the main direction: take the other end of every B coil as its start.
-                for (int j = 0; j < m; j++) {
-                    if (group[j] == 1) {
-                        polarity[j] = -polarity[j];
-                    }
-                }
-                for (double[] b : blocks) {
-                    b[0] = -b[0];
-                    b[1] = -b[1];
-                }
-                zb = combine(z, live, rms, group, polarity, 1, n);
-            }
-            double maxAbsIm = 0;
-            for (double[] b : blocks) {
-                maxAbsIm = Math.max(maxAbsIm, Math.abs(b[1]));
-            }
-            double sre = 0;
-            double sim = 0;
-            int lastSign = 0;
-            for (double[] b : blocks) {
-                if (Math.abs(b[1]) < 0.2 * maxAbsIm) {
-                    continue;
-                }
-                int sign = b[1] < 0 ? -1 : 1;
-                if (lastSign != 0 && sign != lastSign) {
-                    reversals++;
-                }
-                lastSign = sign;
-                // blocks turned the other way have the mirror-image relation; fold them back
-                sre += b[0];
-                sim += sign < 0 ? b[1] : -b[1];
-            }
-            lagDeg = -Math.toDegrees(Math.atan2(sim, sre));
-            if (Math.abs(lagDeg - 90) > 20) {
-                findings.add(Finding.warning("not_quadrature", String.format("phase B lags phase A by %.0f° "
-                        + "electrical, expected 90°: the channels may not be single coils", lagDeg)));
-            }
-            if (reversals > 0) {
-                findings.add(Finding.warning("direction_reversed", "the shaft changed direction " + reversals
-                        + " time(s) during the capture; the pairing is unaffected, but for a tooth count turn one way "
-                        + "only"));
-            }
-        } else if (m > 1) {
-            findings.add(Finding.warning("one_phase", "every live channel is in phase or antiphase with "
-                    + channels.get(live.get(0)).pair() + ": only one phase was recorded"));
+            return new Phasing(za, null, null, 0);
         }
+        double[][] zb = combine(z, live, rms, group, polarity, 1, n);
+        Cross cross = cross(za, zb, span);
+        if (cross.sumIm() > 0) {
+            // B leads A in the main direction: take the other end of every B coil as its start.
+            for (int j = 0; j < m; j++) {
+                if (group[j] == 1) {
+                    polarity[j] = -polarity[j];
+                }
+            }
+            for (double[] b : cross.blocks()) {
+                b[0] = -b[0];
+                b[1] = -b[1];
+            }
+            zb = combine(z, live, rms, group, polarity, 1, n);
+        }
+        Phasing ph = lag(za, zb, cross.blocks());
+        if (Math.abs(ph.lagDeg() - 90) > 20) {
+            findings.add(Finding.warning(MotorFindingCode.NOT_QUADRATURE, String.format("phase B lags phase A by "
+                    + "%.0f° electrical, expected 90°: the channels may not be single coils", ph.lagDeg())));
+        }
+        if (ph.reversals() > 0) {
+            findings.add(Finding.warning(MotorFindingCode.DIRECTION_REVERSED, "the shaft changed direction "
+                    + ph.reversals() + " time(s) during the capture; the pairing is unaffected, but for a tooth count "
+                    + "turn one way only"));
+        }
+        return ph;
+    }
 
-        // Electrical angle, held still where the shaft is not turning.
+    /** Block-wise {@code zb·conj(za)} (re, im per block) and the sum of the imaginary parts. */
+    private record Cross(List<double[]> blocks, double sumIm) {
+    }
+
+    /** The cross products of phases B and A, block by block: their angle is B's phase relative to A. */
+    private Cross cross(double[][] za, double[][] zb, Span span) {
+        int block = blockLength();
+        List<double[]> blocks = new ArrayList<>();
+        double sumIm = 0;
+        for (int s = span.from(); s + block <= span.to(); s += block) {
+            double re = 0;
+            double im = 0;
+            for (int i = s; i < s + block; i++) {
+                // zb·conj(za): its angle is B's phase relative to A
+                re += zb[0][i] * za[0][i] + zb[1][i] * za[1][i];
+                im += zb[1][i] * za[0][i] - zb[0][i] * za[1][i];
+            }
+            blocks.add(new double[] {re, im});
+            sumIm += im;
+        }
+        return new Cross(blocks, sumIm);
+    }
+
+    /**
+     * B's lag behind A over the blocks that turned clearly one way, folding back the blocks turned the other way, and
+     * the number of direction changes.
+     */
+    private static Phasing lag(double[][] za, double[][] zb, List<double[]> blocks) {
+        double maxAbsIm = 0;
+        for (double[] b : blocks) {
+            maxAbsIm = Math.max(maxAbsIm, Math.abs(b[1]));
+        }
+        double sre = 0;
+        double sim = 0;
+        int lastSign = 0;
+        int reversals = 0;
+        for (double[] b : blocks) {
+            if (Math.abs(b[1]) < 0.2 * maxAbsIm) {
+                continue;
+            }
+            int sign = b[1] < 0 ? -1 : 1;
+            if (lastSign != 0 && sign != lastSign) {
+                reversals++;
+            }
+            lastSign = sign;
+            // blocks turned the other way have the mirror-image relation; fold them back
+            sre += b[0];
+            sim += sign < 0 ? b[1] : -b[1];
+        }
+        return new Phasing(za, zb, -Math.toDegrees(Math.atan2(sim, sre)), reversals);
+    }
+
+    /** Electrical angle, held still where the shaft is not turning. */
+    private static Angle electricalAngle(Phasing ph, Span span) {
+        double[][] za = ph.za();
+        double[][] zb = ph.zb();
+        int n = span.n();
+        int from = span.from();
+        int to = span.to();
         double[] amp = new double[n];
         double[] rawAngle = new double[n];
         for (int i = 0; i < n; i++) {
@@ -249,7 +363,17 @@ public final class BackEmfAnalyzer {
         }
         double cycles = Math.abs(angle[lastValid] - angle[firstValid]) / (2 * Math.PI);
 
-        // Block-wise frequency and Ke.
+        return new Angle(angle, moving, firstValid, lastValid, cycles);
+    }
+
+    /** Block-wise frequency and the Ke regression of each channel's envelope on the electrical angular speed. */
+    private Speed speedAndKe(double[][][] z, Angle a, Span span, List<Finding> findings) {
+        int m = z.length;
+        int from = span.from();
+        int to = span.to();
+        boolean[] moving = a.moving();
+        double[] angle = a.angle();
+        double cycles = a.cycles();
         int block = blockLength();
         List<Double> freqs = new ArrayList<>();
         double[] num = new double[m];
@@ -284,10 +408,17 @@ public final class BackEmfAnalyzer {
         double maxF = freqs.stream().mapToDouble(Double::doubleValue).max().orElse(0);
         double meanF = movingS > 0 ? cycles / movingS : 0;
         if (freqs.isEmpty()) {
-            findings.add(Finding.warning("too_slow", "no 20 ms stretch of steady turning: Ke is not measured"));
+            findings.add(Finding.warning(MotorFindingCode.TOO_SLOW, "no 20 ms stretch of steady turning: Ke is not measured"));
         }
 
-        // Revolutions: stated, or counted between the first and last index pulse.
+        return new Speed(movingS, meanF, minF, maxF, num, den);
+    }
+
+    /** Revolutions: stated, or counted between the first and last index pulse. */
+    private static Revolutions revolutions(double[] indexChannel, Double revolutions, int pulsesPerRevolution,
+                                           Angle a, List<Finding> findings) {
+        double[] angle = a.angle();
+        double cycles = a.cycles();
         RevolutionSource source = RevolutionSource.NONE;
         double countedCycles = cycles;
         Double revs = null;
@@ -298,53 +429,50 @@ public final class BackEmfAnalyzer {
                 countedCycles = Math.abs(angle[edges[edges.length - 1]] - angle[edges[0]]) / (2 * Math.PI);
                 source = RevolutionSource.INDEX_CHANNEL;
                 if (revolutions != null && Math.abs(revolutions - revs) > 0.5) {
-                    findings.add(Finding.warning("revolutions_disagree", String.format("%.3g revolutions stated, "
+                    findings.add(Finding.warning(MotorFindingCode.REVOLUTIONS_DISAGREE, String.format("%.3g revolutions stated, "
                             + "%.3g counted on the index channel; the count is used", revolutions, revs)));
                 }
             } else {
-                findings.add(Finding.warning("index_channel", "the index channel has fewer than two pulses"));
+                findings.add(Finding.warning(MotorFindingCode.INDEX_CHANNEL, "the index channel has fewer than two pulses"));
             }
         }
         if (revs == null && revolutions != null) {
             revs = revolutions;
             source = RevolutionSource.STATED;
         }
+        return new Revolutions(revs, source, countedCycles);
+    }
+
+    /** The rotor tooth count from the cycles per revolution, with findings where it is doubtful or unknown. */
+    private static Teeth teeth(Revolutions r, List<Finding> findings) {
+        Double revs = r.revolutions();
+        double countedCycles = r.countedCycles();
         Double perRev = null;
         Integer teeth = null;
         if (revs != null) {
             perRev = StepGeometry.cyclesPerRevolution(countedCycles, revs);
             teeth = (int) Math.round(perRev);
             if (teeth < 1) {
-                findings.add(Finding.error("no_teeth", String.format("%.3g electrical cycles per revolution: the "
+                findings.add(Finding.error(MotorFindingCode.NO_TEETH, String.format("%.3g electrical cycles per revolution: the "
                         + "revolution count or the capture is wrong", perRev)));
                 teeth = null;
             } else {
                 double offCycles = Math.abs(countedCycles - teeth * revs);
                 if (offCycles > 0.25 * Math.max(1, revs)) {
-                    findings.add(Finding.warning("teeth_not_integer", String.format("%.2f electrical cycles per "
+                    findings.add(Finding.warning(MotorFindingCode.TEETH_NOT_INTEGER, String.format("%.2f electrical cycles per "
                             + "revolution is not close to a whole number; check the revolution count", perRev)));
                 }
                 if (teeth != 50 && teeth != 100) {
-                    findings.add(Finding.warning("unusual_teeth", teeth + " rotor teeth is unusual for a hybrid "
+                    findings.add(Finding.warning(MotorFindingCode.UNUSUAL_TEETH, teeth + " rotor teeth is unusual for a hybrid "
                             + "motor (50 for 1.8°, 100 for 0.9°); check the revolution count"));
                 }
             }
         } else {
-            findings.add(Finding.info("teeth_unknown", "revolutions not given: the rotor tooth count, step angle and "
-                    + "mechanical Ke stay unknown (give --revolutions or a '# revolutions=' line)"));
+            findings.add(Finding.info(MotorFindingCode.TEETH_UNKNOWN, "revolutions not given: the rotor tooth count, "
+                    + "step angle and mechanical Ke stay unknown"));
         }
 
-        List<EmfCoil> coils = new ArrayList<>();
-        for (int j = 0; j < m; j++) {
-            LeadPair measured = channels.get(live.get(j)).pair();
-            LeadPair oriented = polarity[j] >= 0 ? measured : measured.reversed();
-            double keElec = den > 0 ? num[j] / den : 0;
-            Double keMech = teeth != null && keElec > 0 ? keElec * teeth : null;
-            coils.add(new EmfCoil(measured, group[j] == 0 ? "A" : "B", oriented, group[j] == 0 ? 0.0 : -90.0,
-                    rms[live.get(j)], keElec, keMech));
-        }
-        return new BackEmfResult(coils, cycles, movingS, meanF, minF, maxF, revs, source, perRev, teeth, lagDeg,
-                reversals, findings);
+        return new Teeth(perRev, teeth);
     }
 
     private int blockLength() {

@@ -2,6 +2,7 @@ package org.lodestep.motor;
 
 import java.util.List;
 import java.util.Objects;
+import org.lodestep.wiring.Finding;
 
 /**
  * Phasing, electrical frequency and tooth count from a hand-turned back-EMF capture.

@@ -9,7 +9,7 @@ import java.util.Objects;
  * @param leads         the coil's two leads (order carries no polarity)
  * @param resistanceOhm coil resistance, ohm
  */
-public record CoilResistance(LeadPair leads, double resistanceOhm) {
+public record CoilResistance(OrientedLeads leads, double resistanceOhm) {
     public CoilResistance {
         Objects.requireNonNull(leads, "leads");
         Checks.positive(resistanceOhm, "coil resistance", "ohm");

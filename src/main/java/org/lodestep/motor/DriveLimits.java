@@ -11,13 +11,13 @@ package org.lodestep.motor;
  * and driver dead time are ignored, so the real limit is lower. The supply and current rules are common practice
  * (no published source) and say so in their javadoc.
  */
-public final class DriveLimits {
+final class DriveLimits {
     /** Coefficient of the common supply rule {@code V = 32·sqrt(L in mH)}; common practice, no published source. */
-    public static final double SUPPLY_RULE_COEFFICIENT = 32.0;
+    static final double SUPPLY_RULE_COEFFICIENT = 32.0;
     /** Copper loss per phase assumed for the low end of the rated-current range, in W; common practice. */
-    public static final double LOW_LOSS_PER_PHASE_W = 2.0;
+    static final double LOW_LOSS_PER_PHASE_W = 2.0;
     /** Copper loss per phase assumed for the high end of the rated-current range, in W; common practice. */
-    public static final double HIGH_LOSS_PER_PHASE_W = 5.0;
+    static final double HIGH_LOSS_PER_PHASE_W = 5.0;
 
     private DriveLimits() {
     }
@@ -26,7 +26,7 @@ public final class DriveLimits {
      * Highest full-step rate, in full steps/s, at which the phase current still reaches {@code phaseCurrentA} after
      * each reversal; 0 when the supply cannot drive that current through the resistance at all.
      */
-    public static double fullCurrentRateFullStepsPerS(double supplyV, double phaseResistanceOhm,
+    static double fullCurrentRateFullStepsPerS(double supplyV, double phaseResistanceOhm,
                                                       double phaseInductanceH, double phaseCurrentA) {
         double reversalS = RlStep.timeToReachS(supplyV, phaseResistanceOhm, phaseInductanceH,
                 -phaseCurrentA, phaseCurrentA);
@@ -40,7 +40,7 @@ public final class DriveLimits {
      * Suggested supply voltage {@code 32·sqrt(L/mH)} in V, for a chopper driver. Common practice (no published
      * source): a compromise between high-speed torque and iron loss and heating; keep within the driver's rating.
      */
-    public static double suggestedSupplyV(double phaseInductanceH) {
+    static double suggestedSupplyV(double phaseInductanceH) {
         return SUPPLY_RULE_COEFFICIENT * Math.sqrt(phaseInductanceH * 1000.0);
     }
 
@@ -49,7 +49,7 @@ public final class DriveLimits {
      * Used with {@link #LOW_LOSS_PER_PHASE_W} and {@link #HIGH_LOSS_PER_PHASE_W} as a rated-current range for small
      * hybrid motors (frames about 35 to 60 mm); common practice, no published source. Check the case temperature.
      */
-    public static double currentForLossA(double phaseResistanceOhm, double copperLossW) {
+    static double currentForLossA(double phaseResistanceOhm, double copperLossW) {
         return Math.sqrt(copperLossW / phaseResistanceOhm);
     }
 }

@@ -4,10 +4,10 @@ import java.util.Objects;
 
 /** One back-EMF channel: the lead pair it measures ({@code +} on the first lead) and its samples in V. */
 public final class EmfChannel {
-    private final LeadPair pair;
+    private final OrientedLeads pair;
     private final double[] voltageV;
 
-    public EmfChannel(LeadPair pair, double[] voltageV) {
+    public EmfChannel(OrientedLeads pair, double[] voltageV) {
         this.pair = Objects.requireNonNull(pair, "pair");
         this.voltageV = voltageV.clone();
         for (int i = 0; i < this.voltageV.length; i++) {
@@ -18,7 +18,7 @@ public final class EmfChannel {
         }
     }
 
-    public LeadPair pair() {
+    public OrientedLeads pair() {
         return pair;
     }
 

@@ -16,7 +16,7 @@ import java.util.Objects;
  * @param keVsPerElectricalRad  peak volts per electrical rad/s
  * @param keVsPerRad            peak volts per mechanical rad/s; null until the rotor tooth count is known
  */
-public record EmfCoil(LeadPair measured, String phase, LeadPair oriented, double phaseDeg, double rmsV,
+public record EmfCoil(OrientedLeads measured, String phase, OrientedLeads oriented, double phaseDeg, double rmsV,
                       double keVsPerElectricalRad, Double keVsPerRad) {
     public EmfCoil {
         Objects.requireNonNull(measured, "measured");

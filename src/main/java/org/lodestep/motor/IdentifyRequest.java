@@ -2,6 +2,8 @@ package org.lodestep.motor;
 
 import java.util.List;
 
+import org.lodestep.wiring.Connection;
+
 /**
  * Everything {@link MotorIdentifier} may combine; every part is optional.
  *
@@ -16,6 +18,8 @@ import java.util.List;
 public record IdentifyRequest(WindingInput windings, List<StepInput> stepResponses, BackEmfResult backEmf,
                               Connection connection, Double phaseCurrentA, Double supplyV, Double inertiaKgM2) {
     public IdentifyRequest {
+        // A 4-lead winding is its whole phase: for the card that is the series connection with one coil per phase.
+        connection = connection == Connection.WHOLE ? Connection.SERIES : connection;
         stepResponses = stepResponses == null ? List.of() : List.copyOf(stepResponses);
         Checks.positiveOrNull(phaseCurrentA, "phase current", "A");
         Checks.positiveOrNull(supplyV, "supply voltage", "V");

@@ -2,6 +2,8 @@ package org.lodestep.motor;
 
 import java.util.List;
 import java.util.Objects;
+import org.lodestep.wiring.Finding;
+import org.lodestep.wiring.Severity;
 
 /**
  * Everything known about one motor after identification, and what is not known yet. Values that could not be
@@ -31,7 +33,7 @@ import java.util.Objects;
  * @param fullCurrentRateFullStepsPerS full-step rate above which the current no longer reaches its set value
  * @param inertiaKgM2               rotor plus load inertia used for the natural frequency, kg·m²
  * @param naturalFrequencyHz        small-oscillation natural frequency, Hz
- * @param unknowns                  what remains unknown and how to find it
+ * @param unknowns                  what remains unknown and why, coded; each front end phrases it
  * @param findings                  every finding of every input, worst first
  * @param backEmf                   the back-EMF analysis the card used, or null
  * @param stepResponses             the step-response fits the card used
@@ -42,7 +44,7 @@ public record MotorCard(String topology, List<String> leads, String connection, 
                         String phaseCurrentBasis, Double holdingTorqueNm, Double ratedCurrentMinA,
                         Double ratedCurrentMaxA, String ratedCurrentAssumption, Double supplyV, String supplyBasis,
                         Double suggestedSupplyV, Double fullCurrentRateFullStepsPerS, Double inertiaKgM2,
-                        Double naturalFrequencyHz, List<String> unknowns, List<Finding> findings,
+                        Double naturalFrequencyHz, List<Unknown> unknowns, List<Finding> findings,
                         BackEmfResult backEmf, List<StepInput> stepResponses) {
     public MotorCard {
         Objects.requireNonNull(topology, "topology");
@@ -64,6 +66,17 @@ public record MotorCard(String topology, List<String> leads, String connection, 
         unknowns = List.copyOf(unknowns);
         findings = List.copyOf(findings);
         stepResponses = List.copyOf(stepResponses);
+    }
+
+    /** Ke per half-winding in volts per 1000 rpm, the unit of many data sheets; null when Ke is unknown. */
+    public Double keVPerKrpm() {
+        return keVsPerRad == null ? null : MotorConstants.keVPerKrpm(keVsPerRad);
+    }
+
+    /** The full-current step rate in revolutions per second; null when the rate or the steps per turn are unknown. */
+    public Double fullCurrentRateRevPerS() {
+        return fullCurrentRateFullStepsPerS == null || fullStepsPerRevolution == null ? null
+                : fullCurrentRateFullStepsPerS / fullStepsPerRevolution;
     }
 
     /** True when any finding is an error. */

@@ -9,17 +9,17 @@ package org.lodestep.motor;
  * REFERENCE-CHECKS item 15; Acarnley, <i>Stepping Motors</i>, 4th ed., hybrid-motor model chapters. The torque is
  * ideal: detent torque, saturation and losses are ignored.
  */
-public final class MotorConstants {
+final class MotorConstants {
     private MotorConstants() {
     }
 
     /** Mechanical speed in rad/s from revolutions per minute. */
-    public static double radPerSFromRpm(double rpm) {
+    static double radPerSFromRpm(double rpm) {
         return rpm * 2.0 * Math.PI / 60.0;
     }
 
     /** Back-EMF constant, peak volts per mechanical rad/s, from a peak voltage at a known speed. */
-    public static double keFromPeak(double peakV, double speedRadPerS) {
+    static double keFromPeak(double peakV, double speedRadPerS) {
         if (!(speedRadPerS > 0)) {
             throw new IllegalArgumentException("speed must be positive, got " + speedRadPerS + " rad/s");
         }
@@ -27,17 +27,17 @@ public final class MotorConstants {
     }
 
     /** Torque constant in N·m/A, equal to Ke in V·s/rad (same per-phase peak convention). */
-    public static double ktFromKe(double keVsPerRad) {
+    static double ktFromKe(double keVsPerRad) {
         return keVsPerRad;
     }
 
     /** Peak torque, in N·m, with quadrature sinusoidal currents of peak {@code phaseCurrentA}: {@code T = Kt·I}. */
-    public static double peakTorqueNm(double ktNmPerA, double phaseCurrentA) {
+    static double peakTorqueNm(double ktNmPerA, double phaseCurrentA) {
         return ktNmPerA * phaseCurrentA;
     }
 
     /** Ke in volts per 1000 rpm: {@code × 1000·2·pi/60}. */
-    public static double keVPerKrpm(double keVsPerRad) {
+    static double keVPerKrpm(double keVsPerRad) {
         return keVsPerRad * 1000.0 * 2.0 * Math.PI / 60.0;
     }
 }

@@ -4,39 +4,80 @@ import java.util.ArrayList;
 import java.util.Comparator;
 import java.util.HashMap;
 import java.util.List;
+import java.util.Locale;
 import java.util.Map;
 import java.util.Set;
 
 import org.lodestep.motor.PhaseAssignment.OrientedCoil;
+import org.lodestep.wiring.Connection;
+import org.lodestep.wiring.Finding;
 import org.lodestep.wiring.Topology;
 
 /**
  * Combines whatever is known about a motor (resistances, step responses, back-EMF) into a {@link MotorCard}, and says
- * what remains unknown. Each number comes from the formula class that owns it; this class only chooses and combines.
+ * what remains unknown. Each number comes from the formula class that owns it; this class only chooses and combines,
+ * in named steps: phase the coils, gather per-coil values, apply the step responses, plan the wiring, build the phase
+ * cards, then the motor-wide figures (step angle, constants, ratings, drive limits).
  */
 public final class MotorIdentifier {
     private MotorIdentifier() {
     }
 
+    /** What the steps find along the way: findings in the order found, and what stays unknown. */
+    private record Notes(List<Finding> findings, List<Unknown> unknowns) {
+        Notes() {
+            this(new ArrayList<>(), new ArrayList<>());
+        }
+    }
+
+    /** Per-coil values keyed by the unordered lead pair, and the coils of the assigned phases. */
+    private record CoilValues(Map<Set<String>, Double> resistanceOhm, Map<Set<String>, Double> inductanceH,
+                              Map<Set<String>, Double> keVsPerRad, List<Set<String>> phaseCoils) {
+    }
+
+    /** The phase cards and which phases had their coupling assumed. */
+    private record Phases(List<PhaseCard> cards, List<String> kappaAssumedIn, Double sharedKappa) {
+    }
+
     /** Identifies the motor described by {@code request}. */
     public static MotorCard identify(IdentifyRequest request) {
-        List<Finding> findings = new ArrayList<>();
-        List<String> unknowns = new ArrayList<>();
+        Notes notes = new Notes();
         WindingInput windings = request.windings();
         BackEmfResult emf = request.backEmf();
-        if (windings != null) {
-            findings.addAll(windings.findings());
-        }
-        if (emf != null) {
-            emf.findings().forEach(f -> findings.add(prefixed("back-EMF", f)));
-        }
+        inputFindings(windings, emf, notes);
         PhaseAssignment.Result phases = PhaseAssignment.assign(windings, emf);
-        findings.addAll(phases.findings());
+        notes.findings().addAll(phases.findings());
         Topology topology = phases.topology();
 
-        // Per-coil values keyed by the unordered lead pair.
+        CoilValues coils = coilValues(windings, emf, phases);
+        Map<String, Double> fullPhaseL = applyStepResponses(request.stepResponses(), phases, coils, notes);
+        Connection connection = request.connection() != null ? request.connection() : switch (topology) {
+            case FIVE_LEAD -> Connection.UNIPOLAR;
+            default -> Connection.SERIES;
+        };
+        Wiring wiring = planWiring(connection, phases, windings, emf, notes);
+        Phases cards = phaseCards(connection, phases, coils, fullPhaseL, notes);
+        if (!cards.kappaAssumedIn().isEmpty()) {
+            notes.unknowns().add(cards.sharedKappa() == null
+                    ? new Unknown(Unknown.What.COUPLING_ASSUMED_FULL, cards.kappaAssumedIn(), null)
+                    : new Unknown(Unknown.What.COUPLING_FROM_OTHER_PHASE, cards.kappaAssumedIn(), cards.sharedKappa()));
+        }
+        return card(request, topology, phases, connection, wiring, cards.cards(), emf, notes);
+    }
+
+    /** The findings of the inputs themselves: the lead identification's, then the back-EMF analysis's. */
+    private static void inputFindings(WindingInput windings, BackEmfResult emf, Notes notes) {
+        if (windings != null) {
+            notes.findings().addAll(windings.findings());
+        }
+        if (emf != null) {
+            emf.findings().forEach(f -> notes.findings().add(f.at("back-EMF")));
+        }
+    }
+
+    /** Resistances from the matrix and Ke from the back-EMF, per coil of the assigned phases. */
+    private static CoilValues coilValues(WindingInput windings, BackEmfResult emf, PhaseAssignment.Result phases) {
         Map<Set<String>, Double> coilR = new HashMap<>();
-        Map<Set<String>, Double> coilL = new HashMap<>();
         Map<Set<String>, Double> coilKe = new HashMap<>();
         List<Set<String>> coilKeys = new ArrayList<>();
         phases.phaseA().forEach(c -> coilKeys.add(c.key()));
@@ -62,17 +103,26 @@ public final class MotorIdentifier {
                 }
             }
         }
+        return new CoilValues(coilR, new HashMap<>(), coilKe, coilKeys);
+    }
+
+    /**
+     * Per-coil inductance (and resistance where the matrix has none) from the step responses across one coil; the
+     * inductance of whole phases in series, by phase name, from the others.
+     */
+    private static Map<String, Double> applyStepResponses(List<StepInput> steps, PhaseAssignment.Result phases,
+                                                          CoilValues coils, Notes notes) {
+        Map<Set<String>, Double> coilR = coils.resistanceOhm();
         Map<String, Double> fullPhaseL = new HashMap<>();
-        for (StepInput s : request.stepResponses()) {
+        for (StepInput s : steps) {
             String where = "step response " + s.leads();
-            s.fit().findings().forEach(f -> findings.add(prefixed(where, f)));
+            s.fit().findings().forEach(f -> notes.findings().add(f.at(where)));
             Set<String> k = key(s.leads());
-            if (s.joinedLeads().isEmpty() && (coilKeys.contains(k) || coilKeys.isEmpty())) {
+            if (s.joinedLeads().isEmpty() && (coils.phaseCoils().contains(k) || coils.phaseCoils().isEmpty())) {
                 if (s.fit().inductanceH() != null) {
-                    coilL.put(k, s.fit().inductanceH());
+                    coils.inductanceH().put(k, s.fit().inductanceH());
                 } else {
-                    unknowns.add(where + ": inductance needs the supply voltage (--supply-v or '# supply_v=') or "
-                            + "the coil resistance");
+                    notes.unknowns().add(Unknown.of(Unknown.What.STEP_INDUCTANCE, s.leads().toString()));
                 }
                 Double fromStep = s.fit().windingResistanceOhm();
                 if (!coilR.containsKey(k) && fromStep != null && fromStep > 0) {
@@ -80,10 +130,10 @@ public final class MotorIdentifier {
                 } else if (coilR.containsKey(k) && fromStep != null
                         && Math.abs(fromStep - coilR.get(k)) > Math.max(0.05 * coilR.get(k), 0.05)) {
                     // 5 % or 50 mOhm: meter and probe scatter (common practice); beyond that the loop is misdescribed
-                    findings.add(Finding.info("step_resistance", String.format(java.util.Locale.ROOT, "%s gives "
-                            + "%.3g ohm for the coil, the resistance matrix %.3g ohm: the series resistance or the "
-                            + "step voltage may be stated wrongly (the inductance uses the loop as measured)", where,
-                            fromStep, coilR.get(k))));
+                    notes.findings().add(Finding.info(MotorFindingCode.STEP_RESISTANCE, String.format(Locale.ROOT,
+                            "%s gives %.3g ohm for the coil, the resistance matrix %.3g ohm: the series resistance or "
+                                    + "the step voltage may be stated wrongly (the inductance uses the loop as "
+                                    + "measured)", where, fromStep, coilR.get(k))));
                 }
                 continue;
             }
@@ -91,58 +141,62 @@ public final class MotorIdentifier {
             if (match != null && s.fit().inductanceH() != null && match.aiding()) {
                 fullPhaseL.put(match.phase(), s.fit().inductanceH());
             } else if (match != null && s.fit().inductanceH() != null) {
-                findings.add(Finding.warning("series_opposing", where + ": the two coils of phase " + match.phase()
-                        + " were joined start to start (or end to end), so their fluxes cancel; join the end of one "
-                        + "to the start of the other (see the series wiring) to measure the coupling"));
+                notes.findings().add(Finding.warning(MotorFindingCode.SERIES_OPPOSING, where + ": the two coils of "
+                        + "phase " + match.phase() + " were joined start to start (or end to end), so their fluxes "
+                        + "cancel; join the end of one to the start of the other (see the series wiring) to measure "
+                        + "the coupling"));
             } else {
-                findings.add(Finding.warning("step_unmatched", where + " is not across one coil or one whole "
-                        + "phase in series; ignored"));
+                notes.findings().add(Finding.warning(MotorFindingCode.STEP_UNMATCHED, where + " is not across one "
+                        + "coil or one whole phase in series; ignored"));
             }
         }
+        return fullPhaseL;
+    }
 
-        Connection connection = request.connection() != null ? request.connection() : switch (topology) {
-            case FIVE_LEAD -> Connection.UNIPOLAR;
-            default -> Connection.SERIES;
-        };
+    /** The driver wiring when both phases are known; otherwise null, with what is missing noted. */
+    private static Wiring planWiring(Connection connection, PhaseAssignment.Result phases, WindingInput windings,
+                                     BackEmfResult emf, Notes notes) {
+        Topology topology = phases.topology();
         Wiring wiring = null;
         if (phases.complete()) {
-            wiring = WiringPlanner.plan(connection, phases.phaseA(), phases.phaseB(), findings);
+            wiring = WiringPlanner.plan(connection, phases.phaseA(), phases.phaseB(), notes.findings());
         } else if (topology == Topology.EIGHT_LEAD && emf == null) {
-            unknowns.add("which coils share a phase, and their polarity: an 8-lead motor needs a back-EMF capture "
-                    + "(--back-emf) before it can be wired in series or parallel");
+            notes.unknowns().add(Unknown.of(Unknown.What.PHASES_OF_EIGHT_LEAD));
         } else if (topology == Topology.FIVE_LEAD && emf == null) {
-            unknowns.add("which coils form phases A and B: the four coils of a 5-lead motor share one lead, so only a "
-                    + "back-EMF capture can pair them");
+            notes.unknowns().add(Unknown.of(Unknown.What.PHASES_OF_FIVE_LEAD));
         } else if (windings != null && topology == Topology.UNKNOWN) {
-            unknowns.add("the phases: the resistances fit no 4-, 5-, 6- or 8-lead layout (see the findings)");
+            notes.unknowns().add(Unknown.of(Unknown.What.PHASES_NO_LAYOUT));
         } else {
-            unknowns.add("the phases: give a resistance matrix and/or a back-EMF capture");
+            notes.unknowns().add(Unknown.of(Unknown.What.PHASES_NO_DATA));
         }
         if (phases.complete() && !phases.polarityKnown()) {
-            unknowns.add("coil polarity: not needed to wire a " + topology.label() + " motor, it only sets the "
-                    + "direction (swap A+ and A- to reverse); a back-EMF capture fixes it");
+            notes.unknowns().add(Unknown.of(Unknown.What.POLARITY, topology.label()));
         }
+        return wiring;
+    }
 
+    /** Phases A and B with their half-windings and their values in the chosen connection. */
+    private static Phases phaseCards(Connection connection, PhaseAssignment.Result phases, CoilValues coils,
+                                     Map<String, Double> fullPhaseL, Notes notes) {
         // A coupling measured on one phase stands for the other (same construction); kappa = 1 is the upper bound.
         List<String> kappaAssumedIn = new ArrayList<>();
         Double sharedKappa = null;
         for (String name : fullPhaseL.keySet()) {
-            List<OrientedCoil> coils = name.equals("A") ? phases.phaseA() : phases.phaseB();
-            Double lc = mean(coils.stream().map(c -> coilL.get(c.key())).toList());
+            Double lc = mean(coilsOf(phases, name).stream().map(c -> coils.inductanceH().get(c.key())).toList());
             if (lc != null) {
                 sharedKappa = CoupledCoils.couplingFactor(lc, fullPhaseL.get(name));
             }
         }
         List<PhaseCard> cards = new ArrayList<>();
         for (String name : List.of("A", "B")) {
-            List<OrientedCoil> coils = name.equals("A") ? phases.phaseA() : phases.phaseB();
-            if (coils.isEmpty()) {
+            List<OrientedCoil> phaseCoils = coilsOf(phases, name);
+            if (phaseCoils.isEmpty()) {
                 continue;
             }
             List<HalfWinding> hws = new ArrayList<>();
-            for (OrientedCoil c : coils) {
-                hws.add(new HalfWinding(c.start(), c.end(), coilR.get(c.key()), coilL.get(c.key()),
-                        coilKe.get(c.key())));
+            for (OrientedCoil c : phaseCoils) {
+                hws.add(new HalfWinding(c.start(), c.end(), coils.resistanceOhm().get(c.key()),
+                        coils.inductanceH().get(c.key()), coils.keVsPerRad().get(c.key())));
             }
             Double r = mean(hws.stream().map(HalfWinding::resistanceOhm).toList());
             Double lc = mean(hws.stream().map(HalfWinding::inductanceH).toList());
@@ -151,34 +205,34 @@ public final class MotorIdentifier {
             if (fullPhaseL.containsKey(name) && lc != null) {
                 kappa = CoupledCoils.couplingFactor(lc, fullPhaseL.get(name));
                 if (kappa < 0.5 || kappa > 1.05) {
-                    findings.add(Finding.warning("coupling", String.format("phase %s: coupling factor %.3f from the "
-                            + "series response; below 0.5 the coils were joined in opposition, above 1 the "
-                            + "responses disagree", name, kappa)));
+                    notes.findings().add(Finding.warning(MotorFindingCode.COUPLING, String.format("phase %s: "
+                            + "coupling factor %.3f from the series response; below 0.5 the coils were joined in "
+                            + "opposition, above 1 the responses disagree", name, kappa)));
                 }
             }
             Double phaseR = null;
             Double phaseL = null;
             Double phaseKe = null;
-            boolean two = coils.size() == 2;
+            boolean two = phaseCoils.size() == 2;
             switch (two ? connection : Connection.HALF) {
                 case SERIES -> {
-                    phaseR = r == null ? null : CoupledCoils.seriesResistanceOhm(r);
+                    phaseR = r == null ? null : Connection.SERIES.phaseResistanceOhm(r);
                     if (fullPhaseL.containsKey(name)) {
                         phaseL = fullPhaseL.get(name);
                     } else if (lc != null) {
                         kappaAssumedIn.add(name);
-                        phaseL = CoupledCoils.seriesInductanceH(lc, sharedKappa == null ? 1.0 : sharedKappa);
+                        phaseL = Connection.SERIES.phaseInductanceH(lc, sharedKappa == null ? 1.0 : sharedKappa);
                     }
                     phaseKe = ke == null ? null : 2 * ke;
                 }
                 case PARALLEL -> {
-                    phaseR = r == null ? null : CoupledCoils.parallelResistanceOhm(r);
+                    phaseR = r == null ? null : Connection.PARALLEL.phaseResistanceOhm(r);
                     if (lc != null) {
                         if (kappa == null) {
                             kappaAssumedIn.add(name);
                         }
                         double k = kappa != null ? kappa : sharedKappa != null ? sharedKappa : 1.0;
-                        phaseL = CoupledCoils.parallelInductanceH(lc, k);
+                        phaseL = Connection.PARALLEL.phaseInductanceH(lc, k);
                     }
                     phaseKe = ke;
                 }
@@ -191,30 +245,57 @@ public final class MotorIdentifier {
             Double tau = phaseR != null && phaseL != null ? RlStep.timeConstantS(phaseL, phaseR) : null;
             cards.add(new PhaseCard(name, hws, phases.polarityKnown(), phaseR, phaseL, kappa, tau, phaseKe));
         }
-        if (!kappaAssumedIn.isEmpty()) {
-            String phasesText = "phase" + (kappaAssumedIn.size() > 1 ? "s " : " ") + String.join(" and ",
-                    kappaAssumedIn);
-            unknowns.add(sharedKappa == null
-                    ? "coupling of the two coils of a phase: the " + connection.name().toLowerCase(java.util.Locale.ROOT)
-                            + " inductance of " + phasesText + " assumes kappa = 1 (an upper bound); a step response "
-                            + "across a whole phase in series measures it"
-                    : String.format(java.util.Locale.ROOT, "coupling of %s not measured: the coupling %.3f of the "
-                            + "other phase is used", phasesText, sharedKappa));
-        }
+        return new Phases(cards, kappaAssumedIn, sharedKappa);
+    }
 
+    /**
+     * The motor-wide figures (step angle, constants, the drive figures, natural frequency), each noted as unknown
+     * where its inputs are missing, and the card.
+     */
+    private static MotorCard card(IdentifyRequest request, Topology topology, PhaseAssignment.Result phases,
+                                  Connection connection, Wiring wiring, List<PhaseCard> cards, BackEmfResult emf,
+                                  Notes notes) {
+        List<Unknown> unknowns = notes.unknowns();
+        List<Finding> findings = notes.findings();
         Integer teeth = emf == null ? null : emf.rotorTeeth();
         Integer steps = teeth == null ? null : StepGeometry.fullStepsPerRevolution(teeth);
         Double angle = teeth == null ? null : StepGeometry.stepAngleDeg(teeth);
         if (teeth == null) {
-            unknowns.add("step angle: needs a back-EMF capture with the number of revolutions turned "
-                    + "(--revolutions or '# revolutions=') or an index channel");
+            unknowns.add(Unknown.of(Unknown.What.STEP_ANGLE));
         }
         Double keHalf = mean(cards.stream().flatMap(p -> p.halfWindings().stream())
                 .map(HalfWinding::keVsPerRad).toList());
         Double kt = mean(cards.stream().map(PhaseCard::keVsPerRad).toList());
         if (keHalf == null) {
-            unknowns.add("Ke, Kt and torque: need a back-EMF capture with a known number of revolutions");
+            unknowns.add(Unknown.of(Unknown.What.KE));
         }
+        Drive d = drive(request, cards, kt, notes);
+        Double fn = null;
+        if (request.inertiaKgM2() != null) {
+            if (teeth != null && d.torque() != null) {
+                fn = NaturalFrequency.naturalHz(d.torque(), teeth, request.inertiaKgM2());
+            } else {
+                unknowns.add(Unknown.of(Unknown.What.NATURAL_FREQUENCY));
+            }
+        }
+        findings.sort(Comparator.comparing((Finding f) -> f.severity()).reversed());
+        return new MotorCard(topology.label(), phases.leads(), connection.label(), cards, wiring,
+                rotationConvention(emf, phases), teeth, steps, angle, keHalf, kt, d.current(), d.currentBasis(),
+                d.torque(), d.ratedMinA(), d.ratedMaxA(), d.ratedAssumption(), d.supply(), d.supplyBasis(),
+                d.suggestedSupply(), d.rate(), request.inertiaKgM2(), fn, unknowns, findings, emf,
+                request.stepResponses());
+    }
+
+    /** The drive figures: rated-current estimate, the current used and its torque, supply, full-current rate. */
+    private record Drive(Double current, String currentBasis, Double torque, Double ratedMinA, Double ratedMaxA,
+                         String ratedAssumption, Double supply, String supplyBasis, Double suggestedSupply,
+                         Double rate) {
+    }
+
+    /** The drive figures from the phases in the chosen connection, each noted as unknown where inputs are missing. */
+    private static Drive drive(IdentifyRequest request, List<PhaseCard> cards, Double kt, Notes notes) {
+        List<Unknown> unknowns = notes.unknowns();
+        List<Finding> findings = notes.findings();
         Double phaseR = mean(cards.stream().map(PhaseCard::resistanceOhm).toList());
         Double phaseL = mean(cards.stream().map(PhaseCard::inductanceH).toList());
 
@@ -229,7 +310,7 @@ public final class MotorIdentifier {
                     + "temperature-rise test (case below about 80 °C)", DriveLimits.LOW_LOSS_PER_PHASE_W,
                     DriveLimits.HIGH_LOSS_PER_PHASE_W);
         } else {
-            unknowns.add("rated current: needs the phases and their coil resistances");
+            unknowns.add(Unknown.of(Unknown.What.RATED_CURRENT));
         }
         Double current = request.phaseCurrentA();
         String currentBasis = current != null ? "given" : null;
@@ -250,34 +331,27 @@ public final class MotorIdentifier {
         if (supply != null && phaseR != null && phaseL != null && current != null) {
             rate = DriveLimits.fullCurrentRateFullStepsPerS(supply, phaseR, phaseL, current);
             if (rate == 0.0) {
-                findings.add(Finding.error("supply_too_low", String.format("%.3g V cannot drive %.3g A through "
-                        + "%.3g ohm", supply, current, phaseR)));
+                findings.add(Finding.error(MotorFindingCode.SUPPLY_TOO_LOW, String.format("%.3g V cannot drive "
+                        + "%.3g A through %.3g ohm", supply, current, phaseR)));
             }
         } else if (phaseL == null) {
-            unknowns.add("inductance, time constant and the full-current step rate: need step responses");
+            unknowns.add(Unknown.of(Unknown.What.INDUCTANCE));
         }
-        Double fn = null;
-        if (request.inertiaKgM2() != null) {
-            if (teeth != null && torque != null) {
-                fn = NaturalFrequency.naturalHz(torque, teeth, request.inertiaKgM2());
-            } else {
-                unknowns.add("natural frequency: needs the rotor teeth and Ke (back-EMF with revolutions)");
-            }
-        }
+        return new Drive(current, currentBasis, torque, iMin, iMax, assumption, supply, supplyBasis, suggested, rate);
+    }
 
-        String convention;
+    /** What the phase order means for the direction of rotation. */
+    private static String rotationConvention(BackEmfResult emf, PhaseAssignment.Result phases) {
         if (emf != null && phases.polarityKnown() && phases.complete()) {
-            convention = "phase B lags phase A by 90° electrical while the shaft turned as it was turned during the "
+            return "phase B lags phase A by 90° electrical while the shaft turned as it was turned during the "
                     + "back-EMF capture; a driver whose B current lags its A current (A+, B+, A-, B- for full steps) "
                     + "turns it that same way; swap A+ and A- to reverse";
-        } else {
-            convention = "not measured: if the motor turns the wrong way, swap A+ and A-";
         }
-        findings.sort(Comparator.comparing((Finding f) -> f.severity()).reversed());
-        return new MotorCard(topology.label(), phases.leads(), connection.name().toLowerCase(java.util.Locale.ROOT),
-                cards, wiring, convention, teeth, steps, angle, keHalf, kt, current, currentBasis, torque, iMin, iMax,
-                assumption, supply, supplyBasis, suggested, rate, request.inertiaKgM2(), fn, unknowns, findings,
-                emf, request.stepResponses());
+        return "not measured: if the motor turns the wrong way, swap A+ and A-";
+    }
+
+    private static List<OrientedCoil> coilsOf(PhaseAssignment.Result phases, String name) {
+        return name.equals("A") ? phases.phaseA() : phases.phaseB();
     }
 
     /** A step response across both coils of one phase: which phase, and whether the coils aided each other. */
@@ -322,7 +396,7 @@ public final class MotorIdentifier {
         return null;
     }
 
-    private static Set<String> key(LeadPair p) {
+    private static Set<String> key(OrientedLeads p) {
         return Set.of(p.first(), p.second());
     }
 
@@ -333,7 +407,4 @@ public final class MotorIdentifier {
         return values.stream().mapToDouble(Double::doubleValue).average().orElseThrow();
     }
 
-    private static Finding prefixed(String where, Finding f) {
-        return new Finding(f.severity(), f.code(), where + ": " + f.message());
-    }
 }

@@ -11,6 +11,7 @@ import java.util.Set;
 import java.util.TreeSet;
 
 import org.lodestep.wiring.Topology;
+import org.lodestep.wiring.Finding;
 
 /**
  * Puts the coils of a motor into phases A and B and orients them, from the back-EMF phasing when there is one,
@@ -47,7 +48,7 @@ final class PhaseAssignment {
 
     static Result assign(WindingInput windings, BackEmfResult emf) {
         List<Finding> findings = new ArrayList<>();
-        List<LeadPair> coils = new ArrayList<>();
+        List<OrientedLeads> coils = new ArrayList<>();
         Set<String> leads = new TreeSet<>(LABEL_ORDER);
         Topology topology;
         if (windings != null) {
@@ -58,7 +59,7 @@ final class PhaseAssignment {
             emf.coils().forEach(c -> coils.add(c.measured()));
             topology = inferTopology(coils);
             if (topology != Topology.UNKNOWN) {
-                findings.add(Finding.info("topology_assumed", "no resistance matrix: taken as " + topology.label()
+                findings.add(Finding.info(MotorFindingCode.TOPOLOGY_ASSUMED, "no resistance matrix: taken as " + topology.label()
                         + " from the back-EMF channels alone (each channel one coil); measure resistances to confirm"));
             }
         } else {
@@ -95,14 +96,14 @@ final class PhaseAssignment {
                     phase.put(Set.of(s, tap), ec.phase());
                     phase.put(Set.of(tap, e), ec.phase());
                 } else {
-                    findings.add(Finding.warning("channel_unmatched", "back-EMF channel " + ec.measured()
+                    findings.add(Finding.warning(MotorFindingCode.CHANNEL_UNMATCHED, "back-EMF channel " + ec.measured()
                             + " is not across a coil found by the resistance measurement; ignored"));
                 }
             }
             propagate(coils, oriented, phase);
             if (topology != Topology.FIVE_LEAD) {
                 Map<String, Set<String>> phasesOfComponent = new HashMap<>();
-                for (LeadPair c : coils) {
+                for (OrientedLeads c : coils) {
                     String p = phase.get(Set.of(c.first(), c.second()));
                     if (p != null) {
                         phasesOfComponent.computeIfAbsent(component.get(c.first()), k -> new TreeSet<>()).add(p);
@@ -110,15 +111,15 @@ final class PhaseAssignment {
                 }
                 phasesOfComponent.forEach((root, ps) -> {
                     if (ps.size() > 1) {
-                        findings.add(Finding.error("phase_mismatch", "the resistance measurement joins leads "
+                        findings.add(Finding.error(MotorFindingCode.PHASE_MISMATCH, "the resistance measurement joins leads "
                                 + membersOf(component, root) + " in one winding, but their back-EMF falls in both "
                                 + "phases: recheck the lead labels of the two measurements"));
                     }
                 });
             }
-            for (LeadPair c : coils) {
+            for (OrientedLeads c : coils) {
                 if (!phase.containsKey(Set.of(c.first(), c.second()))) {
-                    findings.add(Finding.warning("coil_not_phased", "coil " + c + " was not in the back-EMF capture; "
+                    findings.add(Finding.warning(MotorFindingCode.COIL_NOT_PHASED, "coil " + c + " was not in the back-EMF capture; "
                             + "its phase and polarity are unknown"));
                 }
             }
@@ -134,10 +135,10 @@ final class PhaseAssignment {
                 List<String> rootList = new ArrayList<>(roots);
                 for (int k = 0; k < 2; k++) {
                     String root = rootList.get(k);
-                    List<LeadPair> mine = coils.stream().filter(c -> component.get(c.first()).equals(root)).toList();
+                    List<OrientedLeads> mine = coils.stream().filter(c -> component.get(c.first()).equals(root)).toList();
                     List<String> ends = endsOf(mine);
                     String start = ends.isEmpty() ? mine.get(0).first() : ends.get(0);
-                    LeadPair first = mine.stream().filter(c -> c.first().equals(start) || c.second().equals(start))
+                    OrientedLeads first = mine.stream().filter(c -> c.first().equals(start) || c.second().equals(start))
                             .findFirst().orElseThrow();
                     OrientedCoil oc = first.first().equals(start) ? new OrientedCoil(first.first(), first.second())
                             : new OrientedCoil(first.second(), first.first());
@@ -150,15 +151,15 @@ final class PhaseAssignment {
         List<OrientedCoil> a = seriesOrder(oriented, phase, "A");
         List<OrientedCoil> b = seriesOrder(oriented, phase, "B");
         if (topology == Topology.EIGHT_LEAD && emf != null && (a.size() != 2 || b.size() != 2)) {
-            findings.add(Finding.error("pairing_failed", "an 8-lead motor needs two coils in each phase; back-EMF "
+            findings.add(Finding.error(MotorFindingCode.PAIRING_FAILED, "an 8-lead motor needs two coils in each phase; back-EMF "
                     + "gave " + a.size() + " in A and " + b.size() + " in B"));
         }
         return new Result(topology, List.copyOf(leads), a, b, polarityKnown, findings);
     }
 
-    private static Topology inferTopology(List<LeadPair> coils) {
+    private static Topology inferTopology(List<OrientedLeads> coils) {
         Set<String> all = new java.util.HashSet<>();
-        for (LeadPair c : coils) {
+        for (OrientedLeads c : coils) {
             all.add(c.first());
             all.add(c.second());
         }
@@ -172,8 +173,8 @@ final class PhaseAssignment {
         return Topology.UNKNOWN;
     }
 
-    private static boolean has(List<LeadPair> coils, String x, String y) {
-        for (LeadPair c : coils) {
+    private static boolean has(List<OrientedLeads> coils, String x, String y) {
+        for (OrientedLeads c : coils) {
             if ((c.first().equals(x) && c.second().equals(y)) || (c.first().equals(y) && c.second().equals(x))) {
                 return true;
             }
@@ -182,12 +183,12 @@ final class PhaseAssignment {
     }
 
     /** Orients unphased coils that share a lead (a centre tap) with a phased one, continuing it. */
-    private static void propagate(List<LeadPair> coils, Map<Set<String>, OrientedCoil> oriented,
+    private static void propagate(List<OrientedLeads> coils, Map<Set<String>, OrientedCoil> oriented,
                                   Map<Set<String>, String> phase) {
         boolean changed = true;
         while (changed) {
             changed = false;
-            for (LeadPair c : coils) {
+            for (OrientedLeads c : coils) {
                 Set<String> key = Set.of(c.first(), c.second());
                 if (oriented.containsKey(key)) {
                     continue;
@@ -239,9 +240,9 @@ final class PhaseAssignment {
     }
 
     /** Union-find over leads: each lead mapped to its component's root label. */
-    private static Map<String, String> components(List<LeadPair> coils) {
+    private static Map<String, String> components(List<OrientedLeads> coils) {
         Map<String, String> parent = new HashMap<>();
-        for (LeadPair c : coils) {
+        for (OrientedLeads c : coils) {
             parent.putIfAbsent(c.first(), c.first());
             parent.putIfAbsent(c.second(), c.second());
             String ra = root(parent, c.first());
@@ -279,9 +280,9 @@ final class PhaseAssignment {
     }
 
     /** Leads that appear in only one coil of the group, in label order (the winding ends; the tap is excluded). */
-    private static List<String> endsOf(List<LeadPair> group) {
+    private static List<String> endsOf(List<OrientedLeads> group) {
         Map<String, Integer> count = new HashMap<>();
-        for (LeadPair c : group) {
+        for (OrientedLeads c : group) {
             count.merge(c.first(), 1, Integer::sum);
             count.merge(c.second(), 1, Integer::sum);
         }

@@ -19,6 +19,14 @@ public final class RlStep {
         return supplyV / loopResistanceOhm * (1.0 - Math.exp(-timeS / timeConstantS(inductanceH, loopResistanceOhm)));
     }
 
+    /**
+     * Rise of the same circuit written with its final current {@code I∞ = V/R} and time constant:
+     * {@code I∞·(1 - e^(-t/tau))}, in A, zero before the step. This is the form a fit estimates.
+     */
+    public static double riseA(double finalCurrentA, double timeConstantS, double timeS) {
+        return timeS > 0 ? finalCurrentA * -Math.expm1(-timeS / timeConstantS) : 0.0;
+    }
+
     /** Electrical time constant {@code tau = L/R}, in s. */
     public static double timeConstantS(double inductanceH, double resistanceOhm) {
         return inductanceH / resistanceOhm;

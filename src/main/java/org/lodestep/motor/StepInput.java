@@ -7,7 +7,7 @@ import java.util.Objects;
  * A fitted step response and where it was taken: across {@code leads}, with {@code joinedLeads} (zero or two labels)
  * connected together during the test, as when the two coils of an 8-lead phase are measured in series.
  */
-public record StepInput(LeadPair leads, List<String> joinedLeads, StepResponseFit fit) {
+public record StepInput(OrientedLeads leads, List<String> joinedLeads, StepResponseFit fit) {
     public StepInput {
         Objects.requireNonNull(leads, "leads");
         joinedLeads = List.copyOf(joinedLeads);

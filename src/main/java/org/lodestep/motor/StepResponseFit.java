@@ -2,6 +2,7 @@ package org.lodestep.motor;
 
 import java.util.List;
 import java.util.Objects;
+import org.lodestep.wiring.Finding;
 
 /**
  * Result of fitting {@code i(t) = i0 + Iinf·(1 - e^(-(t - t0)/tau))} to a current step response.
@@ -35,5 +36,10 @@ public record StepResponseFit(double finalCurrentA, double timeConstantS, double
         Checks.nonNegative(rmsResidualA, "RMS residual", "A");
         Objects.requireNonNull(shape, "shape");
         findings = List.copyOf(findings);
+    }
+
+    /** The fitted model at {@code timeS}, A: {@code i0} plus the {@link RlStep} rise from {@code t0}. */
+    public double modelCurrentA(double timeS) {
+        return offsetA + RlStep.riseA(finalCurrentA, timeConstantS, timeS - stepTimeS);
     }
 }

@@ -14,6 +14,7 @@ import org.apache.commons.math3.linear.RealMatrix;
 import org.apache.commons.math3.linear.RealVector;
 import org.apache.commons.math3.stat.regression.SimpleRegression;
 import org.apache.commons.math3.util.Pair;
+import org.lodestep.wiring.Finding;
 
 /**
  * Fits the RL step response of {@link RlStep} to a sampled winding current with Commons Math's Levenberg-Marquardt
@@ -89,13 +90,13 @@ public final class StepResponseFitter {
         if (Double.isFinite(early) && Double.isFinite(late)) {
             if (late < early * (1 - SHAPE_TOLERANCE)) {
                 shape = ResponseShape.SATURATION;
-                findings.add(Finding.warning("saturation", String.format(
+                findings.add(Finding.warning(MotorFindingCode.SATURATION, String.format(
                         "the rise speeds up as current grows (time constant %.3g ms early, %.3g ms late): the iron "
                                 + "saturates; the inductance is current-dependent and the fitted value is an average",
                         early * 1e3, late * 1e3)));
             } else if (early < late * (1 - SHAPE_TOLERANCE)) {
                 shape = ResponseShape.EDDY_CURRENT;
-                findings.add(Finding.warning("eddy_current", String.format(
+                findings.add(Finding.warning(MotorFindingCode.EDDY_CURRENT, String.format(
                         "the rise starts faster than it continues (time constant %.3g ms early, %.3g ms late): eddy "
                                 + "currents; the inductance at driver chopping frequencies is lower than fitted",
                         early * 1e3, late * 1e3)));
@@ -106,7 +107,7 @@ public final class StepResponseFitter {
         }
         double coveredTau = (timeS[n - 1] - stepS) / tauS;
         if (coveredTau < 3.0) {
-            findings.add(Finding.warning("short_record", String.format(
+            findings.add(Finding.warning(MotorFindingCode.SHORT_RECORD, String.format(
                     "the record ends %.1f time constants after the step; capture at least 5 so the final current "
                             + "is measured rather than extrapolated", coveredTau)));
         }
@@ -119,7 +120,7 @@ public final class StepResponseFitter {
         }
         Double windingOhm = loopOhm == null ? null : loopOhm - seriesOhm;
         if (windingOhm != null && windingOhm <= 0) {
-            findings.add(Finding.warning("series_resistance", String.format(
+            findings.add(Finding.warning(MotorFindingCode.SERIES_RESISTANCE, String.format(
                     "the series resistance %.4g ohm is not less than the loop resistance %.4g ohm; check the supply "
                             + "voltage and series resistance", seriesOhm, loopOhm)));
         }

@@ -4,6 +4,7 @@ import java.util.List;
 import java.util.Objects;
 
 import org.lodestep.wiring.Topology;
+import org.lodestep.wiring.Finding;
 
 /**
  * What a resistance matrix told about the windings, in the terms this package needs: the topology, every lead

@@ -4,6 +4,8 @@ import java.util.ArrayList;
 import java.util.List;
 
 import org.lodestep.motor.PhaseAssignment.OrientedCoil;
+import org.lodestep.wiring.Connection;
+import org.lodestep.wiring.Finding;
 
 /**
  * Turns two oriented phases into driver terminals for one connection (REFERENCE-CHECKS item 5): series aiding joins
@@ -29,7 +31,7 @@ final class WiringPlanner {
             OrientedCoil c2 = ph.size() == 2 ? ph.get(1) : null;
             boolean tapped = c2 != null && c1.end().equals(c2.start());
             switch (connection) {
-                case SERIES -> {
+                case SERIES, WHOLE -> {
                     if (c2 == null) {
                         terminals.add(new Terminal(p + "+", List.of(c1.start())));
                         terminals.add(new Terminal(p + "-", List.of(c1.end())));
@@ -45,7 +47,7 @@ final class WiringPlanner {
                 }
                 case PARALLEL -> {
                     if (c2 == null || tapped) {
-                        findings.add(Finding.error("connection_impossible", "a parallel connection needs two "
+                        findings.add(Finding.error(MotorFindingCode.CONNECTION_IMPOSSIBLE, "a parallel connection needs two "
                                 + "separate coils per phase (an 8-lead motor)"));
                         return null;
                     }
@@ -64,7 +66,7 @@ final class WiringPlanner {
                 }
                 case UNIPOLAR -> {
                     if (c2 == null) {
-                        findings.add(Finding.error("connection_impossible", "a unipolar connection needs a centre "
+                        findings.add(Finding.error(MotorFindingCode.CONNECTION_IMPOSSIBLE, "a unipolar connection needs a centre "
                                 + "tap or two coils per phase (5-, 6- or 8-lead motor)"));
                         return null;
                     }

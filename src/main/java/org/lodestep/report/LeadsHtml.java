@@ -11,7 +11,7 @@ import org.lodestep.report.html.HtmlReport;
 import org.lodestep.report.html.HtmlTable;
 import org.lodestep.report.html.SafetyNote;
 import org.lodestep.report.html.Status;
-import org.lodestep.wiring.Connection;
+import org.lodestep.wiring.DriverWiring;
 import org.lodestep.wiring.Finding;
 import org.lodestep.wiring.Identification;
 import org.lodestep.wiring.ReadingUse;
@@ -50,7 +50,7 @@ public final class LeadsHtml {
 
         if (!id.connections().isEmpty()) {
             b.section("How to wire it");
-            for (Connection c : id.connections()) {
+            for (DriverWiring c : id.connections()) {
                 b.figure(WiringDiagrams.of(id, c).toSvg(), caption(c));
                 List<HtmlReport.Finding> notes = new ArrayList<>();
                 notes.add(new HtmlReport.Finding(Status.INFO, c.tradeoff()));
@@ -128,7 +128,7 @@ public final class LeadsHtml {
         }
     }
 
-    private static String caption(Connection c) {
+    private static String caption(DriverWiring c) {
         Map<String, String> parts = new LinkedHashMap<>();
         parts.put("phase", LeadsTextReport.ohm(c.phaseResistanceOhm()));
         return String.format(Locale.ROOT, "%s: phase resistance %s, inductance \u00D7%s and current rating \u00D7%s"

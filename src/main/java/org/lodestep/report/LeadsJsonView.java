@@ -3,7 +3,7 @@ package org.lodestep.report;
 import java.util.ArrayList;
 import java.util.List;
 
-import org.lodestep.wiring.Connection;
+import org.lodestep.wiring.DriverWiring;
 import org.lodestep.wiring.Finding;
 import org.lodestep.wiring.Identification;
 import org.lodestep.wiring.LeadPair;
@@ -19,7 +19,7 @@ public final class LeadsJsonView {
 
     /** One motor. */
     public record MotorJson(String source, String motor, String topology, boolean determined, List<String> leads,
-                            List<WindingJson> windings, List<FindingJson> findings, List<Connection> connections,
+                            List<WindingJson> windings, List<FindingJson> findings, List<DriverWiring> connections,
                             List<List<String>> missingPairs, TemperatureCorrection temperature,
                             List<ReadingJson> readings, int measuredPairs, int totalPairs, ProbeJson probe) {
     }

@@ -5,7 +5,7 @@ import java.util.List;
 import java.util.Locale;
 import java.util.Map;
 
-import org.lodestep.wiring.Connection;
+import org.lodestep.wiring.DriverWiring;
 import org.lodestep.wiring.Finding;
 import org.lodestep.wiring.Identification;
 import org.lodestep.wiring.LeadPair;
@@ -64,7 +64,7 @@ public final class LeadsTextReport {
                     + f.message());
         }
         if (!id.connections().isEmpty()) {
-            Connection c = id.connections().get(0);
+            DriverWiring c = id.connections().get(0);
             String joins = c.jumpers().isEmpty() ? "" : "  join " + String.join(", ",
                     c.jumpers().stream().map(j -> String.join("+", j)).toList());
             out.println("  " + c.name() + ": " + terminals(c.terminals()) + joins
@@ -144,14 +144,14 @@ public final class LeadsTextReport {
         }
     }
 
-    private static void connections(PrintWriter out, List<Connection> cs) {
+    private static void connections(PrintWriter out, List<DriverWiring> cs) {
         if (cs.isEmpty()) {
             return;
         }
         out.println();
         out.println("Driver connections (factors relative to one half-winding, or to the whole winding of a 4-lead"
                 + " motor; current factors are trade convention):");
-        for (Connection c : cs) {
+        for (DriverWiring c : cs) {
             out.printf(Locale.ROOT, "  %s: phase %s, inductance x%s, current rating x%s%s%n", c.name(),
                     ohm(c.phaseResistanceOhm()), num(c.inductanceFactor()), num(c.currentFactor()),
                     c.verified() ? "" : "  [PROVISIONAL]");

@@ -4,7 +4,7 @@ import java.util.List;
 import java.util.Locale;
 
 import org.lodestep.motor.BackEmfResult;
-import org.lodestep.motor.Finding;
+import org.lodestep.wiring.Finding;
 import org.lodestep.motor.HalfWinding;
 import org.lodestep.motor.MotorCard;
 import org.lodestep.motor.PhaseCard;
@@ -20,6 +20,11 @@ public final class MotorCardText {
 
     /** The whole card, lines ending in {@code \n}. */
     public static String render(MotorCard card) {
+        return render(card, MotorPhrasing.PLAIN);
+    }
+
+    /** The card as text, unknowns and findings phrased by {@code phrasing}. */
+    public static String render(MotorCard card, MotorPhrasing phrasing) {
         StringBuilder b = new StringBuilder();
         b.append("MOTOR CARD  ").append(card.topology()).append(" motor");
         if (card.wiring() != null) {
@@ -78,7 +83,7 @@ public final class MotorCardText {
         int before = b.length();
         if (card.keVsPerRad() != null) {
             b.append(String.format(Locale.ROOT, "  Ke per half-winding   %s V·s/rad peak (%s V/krpm); a full phase in "
-                    + "series has twice this%n", num(card.keVsPerRad(), 4), num(card.keVsPerRad() * 104.71975512, 4)));
+                    + "series has twice this%n", num(card.keVsPerRad(), 4), num(card.keVPerKrpm(), 4)));
         }
         if (card.ktNmPerA() != null) {
             b.append(String.format(Locale.ROOT, "  Kt, phase as wired     %s N·m/A (= Ke in SI units)%n",
@@ -102,8 +107,8 @@ public final class MotorCardText {
         }
         if (card.fullCurrentRateFullStepsPerS() != null) {
             double rate = card.fullCurrentRateFullStepsPerS();
-            String revs = card.fullStepsPerRevolution() == null ? ""
-                    : String.format(Locale.ROOT, " = %s rev/s", num(rate / card.fullStepsPerRevolution(), 3));
+            String revs = card.fullCurrentRateRevPerS() == null ? ""
+                    : String.format(Locale.ROOT, " = %s rev/s", num(card.fullCurrentRateRevPerS(), 3));
             b.append(String.format(Locale.ROOT, "  full current up to     %s full steps/s%s at %s V (%s); back-EMF "
                     + "ignored, so the real limit is lower%n", num(rate, 4), revs, num(card.supplyV(), 3),
                     card.supplyBasis()));
@@ -148,13 +153,13 @@ public final class MotorCardText {
 
         if (!card.unknowns().isEmpty()) {
             b.append("Unknown\n");
-            card.unknowns().forEach(u -> b.append("  - ").append(u).append('\n'));
+            card.unknowns().forEach(u -> b.append("  - ").append(phrasing.unknown(u, card.connection())).append('\n'));
             b.append('\n');
         }
         if (!card.findings().isEmpty()) {
             b.append("Findings\n");
             for (Finding f : card.findings()) {
-                b.append(String.format("  %-7s %s%n", f.severity(), f.message()));
+                b.append(String.format("  %-7s %s%n", f.severity(), phrasing.finding(f)));
             }
         }
         return b.toString();

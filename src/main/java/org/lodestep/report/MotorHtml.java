@@ -6,11 +6,11 @@ import java.util.List;
 import java.util.Locale;
 import java.util.Map;
 
-import org.lodestep.motor.Finding;
+import org.lodestep.wiring.Finding;
 import org.lodestep.motor.HalfWinding;
 import org.lodestep.motor.MotorCard;
 import org.lodestep.motor.PhaseCard;
-import org.lodestep.motor.Severity;
+import org.lodestep.wiring.Severity;
 import org.lodestep.motor.StepInput;
 import org.lodestep.motor.StepResponseFit;
 import org.lodestep.motor.Terminal;
@@ -49,13 +49,18 @@ public final class MotorHtml {
      *               fit without its trace is listed but not drawn)
      */
     public static HtmlReport report(String title, MotorCard card, List<Trace> traces) {
+        return report(title, card, traces, MotorPhrasing.PLAIN);
+    }
+
+    /** As {@link #report(String, MotorCard, List)}, unknowns and findings phrased by {@code phrasing}. */
+    public static HtmlReport report(String title, MotorCard card, List<Trace> traces, MotorPhrasing phrasing) {
         HtmlReport.Builder b = HtmlReport.builder("Motor card", title)
                 .meta("Layout", card.topology() + (card.wiring() == null ? "" : ", " + card.connection()))
                 .meta("Leads", String.join(", ", card.leads()));
         boolean warn = card.findings().stream().anyMatch(f -> f.severity() == Severity.WARNING);
         if (card.hasError()) {
             Finding f = card.findings().stream().filter(x -> x.severity() == Severity.ERROR).findFirst().orElseThrow();
-            b.verdict(Status.FAIL, "Fault found", f.message());
+            b.verdict(Status.FAIL, "Fault found", phrasing.finding(f));
         } else {
             String head = card.stepAngleDeg() == null ? card.topology() + " motor"
                     : String.format(Locale.ROOT, "%s motor, %s\u00B0 step (%d steps/rev)", card.topology(),
@@ -132,10 +137,7 @@ public final class MotorHtml {
                     Trace tr = traces.get(k);
                     double[] model = new double[tr.timeS().length];
                     for (int i = 0; i < model.length; i++) {
-                        // The fitted model i0 + I∞·(1 − e^(−(t − t0)/τ)) of StepResponseFit, evaluated for drawing.
-                        double dt = tr.timeS()[i] - fit.stepTimeS();
-                        model[i] = fit.offsetA() + (dt > 0 ? fit.finalCurrentA() * -Math.expm1(-dt / fit.timeConstantS())
-                                : 0);
+                        model[i] = fit.modelCurrentA(tr.timeS()[i]);
                     }
                     b.figure(XyChart.fitOverData("", "time (s)", "current (A)", "measured", tr.timeS(), tr.currentA(),
                             fitLabel, tr.timeS(), model).toSvg(), what + ", " + tr.source() + ": measured current with"
@@ -160,9 +162,9 @@ public final class MotorHtml {
                 case ERROR -> Status.FAIL;
                 case WARNING -> Status.WARN;
                 case INFO -> Status.INFO;
-            }, x.code() + ": " + x.message()));
+            }, x.code().code() + ": " + phrasing.finding(x)));
         }
-        for (String u : card.unknowns()) {
+        for (String u : card.unknowns().stream().map(x -> phrasing.unknown(x, card.connection())).toList()) {
             fs.add(new HtmlReport.Finding(Status.WARN, "Unknown: " + u));
         }
         if (fs.isEmpty()) {

@@ -8,7 +8,7 @@ import java.util.Set;
 
 import org.lodestep.report.html.DriverTerminal;
 import org.lodestep.report.html.WiringDiagram;
-import org.lodestep.wiring.Connection;
+import org.lodestep.wiring.DriverWiring;
 import org.lodestep.wiring.Identification;
 import org.lodestep.wiring.Topology;
 import org.lodestep.wiring.Winding;
@@ -28,7 +28,7 @@ public final class WiringDiagrams {
      *
      * @throws IllegalArgumentException when the connection names a lead or terminal the identification does not have
      */
-    public static WiringDiagram of(Identification id, Connection connection) {
+    public static WiringDiagram of(Identification id, DriverWiring connection) {
         String title = title(id.topology(), connection.name());
         WiringDiagram.Builder b = WiringDiagram.builder(title);
         Map<String, List<String>> terminals = connection.terminals();

@@ -9,6 +9,7 @@
  * {@code motor} or {@code resonance}, so an engine bug cannot hide by appearing on both sides of an end-to-end test.
  * Where the oracle states a closed form the engine also has (the rotor's small-oscillation natural frequency in
  * {@code RotorDynamics} against {@code motor.NaturalFrequency}), a test checks the two against each other and against
- * the integrated motion. Depends on {@code sample} only.
+ * the integrated motion; so is the RL current step of {@code BenchMotor} against {@code motor.RlStep}
+ * ({@code BenchMotorTest}). Depends on {@code sample} only.
  */
 package org.lodestep.rig;

@@ -3,11 +3,17 @@ package org.lodestep.signal;
 import java.util.ArrayList;
 import java.util.List;
 import java.util.Objects;
+import java.util.concurrent.atomic.AtomicInteger;
+import java.util.concurrent.locks.LockSupport;
 
 /**
  * Cuts a stream of samples, fed in blocks of any size, into overlapping segments and hands each segment's squared DFT
  * magnitudes to listeners (Welch averaging, spectrogram, order tracking), so one FFT serves every analysis and memory
- * stays at a few segments whatever the length of the capture. A trailing partial segment is dropped.
+ * stays at a few dozen segments whatever the length of the capture. A trailing partial segment is dropped.
+ *
+ * <p>The segments completed by one {@link #feed} are transformed in a batch shared among one thread per core, then
+ * handed to the listeners in stream order on the feeding thread. Each segment is transformed by the same code with
+ * its own arrays, so the spectra are bit for bit those of a serial run. Not thread-safe: feed from one thread.
  */
 public final class SegmentSpectra {
 
@@ -21,26 +27,64 @@ public final class SegmentSpectra {
         void segment(long firstSample, double[] magnitudeSquared, double meanSquare);
     }
 
+    /** Most segments transformed per batch: enough to share among the lanes (about 1 MiB at 4096 points). */
+    private static final int MAX_BATCH_SEGMENTS = 32;
+    /** Samples a batch may hold, so long segments keep memory to a few MiB: batches of 2 from 2^18 points on. */
+    private static final int BATCH_SAMPLE_BUDGET = 1 << 19;
+    /** Below this many complete segments a batch is transformed on the feeding thread alone. */
+    private static final int PARALLEL_MIN_SEGMENTS = 4;
+    /** Batches transformed on the feeding thread alone after the helpers made it wait (a busy machine). */
+    private static final int BACK_OFF_BATCHES = 16;
+
     private final SpectralSettings settings;
     private final double sampleRateHz;
     private final List<Listener> listeners = new ArrayList<>();
     private final double[] window;
     private final double sumW;
     private final double sumW2;
-    private final RealFft fft;
-    private final double[] ring;
-    private final double[] work;
-    private final double[] mag2;
+    /** Samples from stream index {@link #consumed} on: room for a batch of overlapping segments. */
+    private final double[] samples;
+    private final double[][] mag2;
+    private final double[] meanSquare;
+    /** Per batch slot: stream index of the segment's first non-finite sample, or -1. */
+    private final long[] badSample;
+    private final Lane[] lanes;
     private int filled;
     private long consumed;
     private long segments;
+    /** The batch being transformed: its segment count and the next slot a lane may take. */
+    private int batchCount;
+    private final AtomicInteger nextSlot = new AtomicInteger();
+    /** Whether to fall back to the feeding thread for a while when waiting on helpers costs more than they save. */
+    private final boolean adaptive;
+    private int serialBatchesLeft;
 
+    /** A segmenter that transforms on one thread per core (see {@link TransformThreads#defaultLanes()}). */
     public SegmentSpectra(SpectralSettings settings, double sampleRateHz) {
+        this(settings, sampleRateHz, TransformThreads.defaultLanes(), true);
+    }
+
+    /** A segmenter that always shares batches among {@code lanes} threads, for tests of the parallel path. */
+    SegmentSpectra(SpectralSettings settings, double sampleRateHz, int lanes) {
+        this(settings, sampleRateHz, lanes, false);
+    }
+
+    /**
+     * @param lanes threads that transform segments, the feeding thread included (1 = serial); listeners are called
+     *              in segment order on the feeding thread whatever the lane count, with bit-identical spectra
+     * @param adaptive fall back to the feeding thread alone for a few batches when it waited on a helper longer
+     *              than half its own share of a batch (a helper thread descheduled on a busy machine)
+     */
+    private SegmentSpectra(SpectralSettings settings, double sampleRateHz, int lanes, boolean adaptive) {
         this.settings = Objects.requireNonNull(settings, "settings");
         if (!(sampleRateHz > 0) || !Double.isFinite(sampleRateHz)) {
             throw new IllegalArgumentException("sample rate must be positive and finite, got " + sampleRateHz + " Hz");
         }
+        if (lanes < 1) {
+            throw new IllegalArgumentException("lanes must be at least 1, got " + lanes);
+        }
         this.sampleRateHz = sampleRateHz;
+        this.adaptive = adaptive;
         int n = settings.segmentLength();
         this.window = settings.window().periodic(n);
         double s1 = 0;
@@ -51,55 +95,181 @@ public final class SegmentSpectra {
         }
         this.sumW = s1;
         this.sumW2 = s2;
-        this.fft = new RealFft(n);
-        this.ring = new double[n];
-        this.work = new double[n];
-        this.mag2 = new double[settings.binCount()];
+        int batch = Math.max(2, Math.min(MAX_BATCH_SEGMENTS, BATCH_SAMPLE_BUDGET / n));
+        this.samples = new double[n + settings.hopSamples() * (batch - 1)];
+        this.mag2 = new double[batch][];
+        this.meanSquare = new double[batch];
+        this.badSample = new long[batch];
+        this.lanes = new Lane[Math.min(lanes, batch)];
+        this.lanes[0] = new Lane(n); // the helpers' lanes are made on the first parallel batch
     }
 
-    /** Feeds {@code len} samples from {@code x[off ...]}. Non-finite samples are rejected: the caller repairs or reports. */
+    /**
+     * Feeds {@code len} samples from {@code x[off ...]}; every segment completed by them reaches the listeners before
+     * this returns. Non-finite samples are rejected: the caller repairs or reports.
+     */
     public void feed(double[] x, int off, int len) {
-        int n = ring.length;
-        int hop = settings.hopSamples();
         int i = off;
         int end = off + len;
         while (i < end) {
-            int take = Math.min(n - filled, end - i);
-            System.arraycopy(x, i, ring, filled, take);
+            int take = Math.min(samples.length - filled, end - i);
+            System.arraycopy(x, i, samples, filled, take);
             filled += take;
             i += take;
-            if (filled == n) {
-                emit();
-                System.arraycopy(ring, hop, ring, 0, n - hop);
-                filled = n - hop;
-                consumed += hop;
+            if (filled == samples.length) {
+                transformCompleteSegments();
             }
+        }
+        transformCompleteSegments();
+    }
+
+    /** Transforms the complete segments in {@link #samples}, hands them on in order and keeps the unfinished tail. */
+    private void transformCompleteSegments() {
+        int n = settings.segmentLength();
+        int hop = settings.hopSamples();
+        if (filled < n) {
+            return;
+        }
+        int count = (filled - n) / hop + 1;
+        transform(count);
+        for (int slot = 0; slot < count; slot++) {
+            if (badSample[slot] >= 0) {
+                throw new IllegalArgumentException("sample " + badSample[slot] + " is not a finite number");
+            }
+            segments++;
+            long first = consumed + (long) slot * hop;
+            for (Listener l : listeners) {
+                l.segment(first, mag2[slot], meanSquare[slot]);
+            }
+        }
+        int drop = count * hop;
+        System.arraycopy(samples, drop, samples, 0, filled - drop);
+        filled -= drop;
+        consumed += drop;
+    }
+
+    /** Fills slots 0 ... count-1; the lanes take slots one at a time, so a lane that is held up delays nobody. */
+    private void transform(int count) {
+        batchCount = count;
+        nextSlot.set(0);
+        // Long segments come in small batches, and each of their transforms is worth sharing.
+        int helpers = count < Math.min(PARALLEL_MIN_SEGMENTS, mag2.length) ? 0 : Math.min(lanes.length, count) - 1;
+        if (serialBatchesLeft > 0) {
+            serialBatchesLeft--;
+            helpers = 0;
+        }
+        for (int h = 1; h <= helpers; h++) {
+            if (lanes[h] == null) {
+                lanes[h] = new Lane(settings.segmentLength());
+            }
+            lanes[h].start(Thread.currentThread());
+        }
+        long t0 = adaptive && helpers > 0 ? System.nanoTime() : 0;
+        lanes[0].transformSlots();
+        long t1 = adaptive && helpers > 0 ? System.nanoTime() : 0;
+        for (int h = 1; h <= helpers; h++) {
+            lanes[h].awaitOrCancel();
+        }
+        if (adaptive && helpers > 0 && System.nanoTime() - t1 > (t1 - t0) / 2) {
+            serialBatchesLeft = BACK_OFF_BATCHES; // which thread computes a segment never changes its bits
         }
     }
 
-    private void emit() {
-        int n = ring.length;
-        double mean = 0;
-        if (settings.detrend() == Detrend.MEAN) {
+    /** One thread's FFT and work array; runs as a helper task or on the feeding thread. */
+    private final class Lane implements Runnable {
+        private static final int IDLE = 0;
+        private static final int QUEUED = 1;
+        private static final int RUNNING = 2;
+        private static final int DONE = 3;
+        private static final int SPINS = 2000;
+
+        private final RealFft fft;
+        private final double[] work;
+        private final AtomicInteger state = new AtomicInteger(IDLE);
+        private volatile Thread waiter;
+        private Throwable failure;
+
+        Lane(int n) {
+            this.fft = new RealFft(n);
+            this.work = new double[n];
+        }
+
+        void start(Thread feeder) {
+            waiter = feeder;
+            failure = null;
+            state.set(QUEUED); // publishes the batch fields to the helper that takes this lane
+            TransformThreads.pool().execute(this);
+        }
+
+        @Override
+        public void run() {
+            if (!state.compareAndSet(QUEUED, RUNNING)) {
+                return; // the feeding thread finished this batch without us, or another task took the lane
+            }
+            try {
+                transformSlots();
+            } catch (Throwable t) {
+                failure = t;
+            } finally {
+                state.set(DONE);
+                LockSupport.unpark(waiter);
+            }
+        }
+
+        /** Waits for a helper that started; one still queued is cancelled, its slots were taken by others. */
+        void awaitOrCancel() {
+            if (!state.compareAndSet(QUEUED, IDLE)) {
+                // The helper is at most one segment behind (tens of microseconds): spin briefly before sleeping, as
+                // a wake-up costs about as much as the wait.
+                for (int spin = 0; spin < SPINS && state.get() != DONE; spin++) {
+                    Thread.onSpinWait();
+                }
+                while (state.get() != DONE) {
+                    LockSupport.park(this);
+                }
+                state.set(IDLE);
+            }
+            if (failure != null) {
+                throw new IllegalStateException("a transform thread failed", failure);
+            }
+        }
+
+        void transformSlots() {
+            int slot;
+            while ((slot = nextSlot.getAndIncrement()) < batchCount) {
+                transformSlot(slot);
+            }
+        }
+
+        /** Detrends, windows and transforms the segment of batch slot {@code slot}. */
+        private void transformSlot(int slot) {
+            int n = work.length;
+            int from = slot * settings.hopSamples();
+            double[] x = samples;
+            double mean = 0;
+            if (settings.detrend() == Detrend.MEAN) {
+                for (int i = 0; i < n; i++) {
+                    mean += x[from + i];
+                }
+                mean /= n;
+            }
+            double ms = 0;
             for (int i = 0; i < n; i++) {
-                mean += ring[i];
+                double s = x[from + i];
+                if (!Double.isFinite(s)) {
+                    badSample[slot] = consumed + from + i;
+                    return;
+                }
+                double v = s - mean;
+                ms += v * v;
+                work[i] = v * window[i];
             }
-            mean /= n;
-        }
-        double ms = 0;
-        for (int i = 0; i < n; i++) {
-            if (!Double.isFinite(ring[i])) {
-                throw new IllegalArgumentException("sample " + (consumed + i) + " is not a finite number");
+            badSample[slot] = -1;
+            meanSquare[slot] = ms / n;
+            if (mag2[slot] == null) {
+                mag2[slot] = new double[settings.binCount()];
             }
-            double v = ring[i] - mean;
-            ms += v * v;
-            work[i] = v * window[i];
-        }
-        ms /= n;
-        fft.magnitudeSquared(work, mag2);
-        segments++;
-        for (Listener l : listeners) {
-            l.segment(consumed, mag2, ms);
+            fft.magnitudeSquared(work, mag2[slot]);
         }
     }
 

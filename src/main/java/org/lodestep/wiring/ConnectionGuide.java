@@ -4,12 +4,11 @@ import java.util.LinkedHashMap;
 import java.util.List;
 import java.util.Map;
 
-import org.lodestep.wiring.WindingConnections.Mode;
 
 /**
  * The driver connections a topology allows, with the user's lead labels on the driver terminals.
  *
- * <p>Factors come from {@link WindingConnections} (REFERENCE-CHECKS item 5). Resistance cannot tell which two
+ * <p>Factors come from {@link Connection} (REFERENCE-CHECKS item 5). Resistance cannot tell which two
  * half-windings of an 8-lead motor form one phase, nor the polarity of any coil, nor (5-lead) which two ends belong
  * to one phase: those mappings are given as provisional and marked unverified; back-EMF phasing settles them.
  */
@@ -31,7 +30,7 @@ final class ConnectionGuide {
     private ConnectionGuide() {
     }
 
-    static List<Connection> connections(Topology t, List<Winding> w) {
+    static List<DriverWiring> connections(Topology t, List<Winding> w) {
         return switch (t) {
             case FOUR_LEAD -> List.of(four(w));
             case SIX_LEAD -> six(w);
@@ -41,73 +40,73 @@ final class ConnectionGuide {
         };
     }
 
-    private static Connection four(List<Winding> w) {
+    private static DriverWiring four(List<Winding> w) {
         Winding a = w.get(0);
         Winding b = w.get(1);
-        return new Connection("bipolar", terminals("A+", a.ends().get(0), "A-", a.ends().get(1),
+        return new DriverWiring("bipolar", terminals("A+", a.ends().get(0), "A-", a.ends().get(1),
                 "B+", b.ends().get(0), "B-", b.ends().get(1)), List.of(), List.of(),
-                mean(a.resistanceOhm(), b.resistanceOhm()), Mode.BIPOLAR_WHOLE.resistanceFactor(),
-                Mode.BIPOLAR_WHOLE.inductanceFactor(), Mode.BIPOLAR_WHOLE.currentFactor(), WHOLE, true,
+                mean(a.resistanceOhm(), b.resistanceOhm()), Connection.WHOLE.resistanceFactor(),
+                Connection.WHOLE.inductanceFactor(), Connection.WHOLE.currentFactor(), WHOLE, true,
                 "If the motor turns the wrong way, swap A+ and A-.");
     }
 
-    private static List<Connection> six(List<Winding> w) {
+    private static List<DriverWiring> six(List<Winding> w) {
         Winding a = w.get(0);
         Winding b = w.get(1);
         double half = mean(a.halfResistancesOhm().get(0), a.halfResistancesOhm().get(1),
                 b.halfResistancesOhm().get(0), b.halfResistancesOhm().get(1));
-        Connection series = new Connection("bipolar-series", terminals("A+", a.ends().get(0), "A-", a.ends().get(1),
+        DriverWiring series = new DriverWiring("bipolar-series", terminals("A+", a.ends().get(0), "A-", a.ends().get(1),
                 "B+", b.ends().get(0), "B-", b.ends().get(1)), List.of(), List.of(a.tap(), b.tap()),
-                mean(a.resistanceOhm(), b.resistanceOhm()), Mode.BIPOLAR_SERIES.resistanceFactor(),
-                Mode.BIPOLAR_SERIES.inductanceFactor(), Mode.BIPOLAR_SERIES.currentFactor(), SERIES, true,
+                mean(a.resistanceOhm(), b.resistanceOhm()), Connection.SERIES.resistanceFactor(),
+                Connection.SERIES.inductanceFactor(), Connection.SERIES.currentFactor(), SERIES, true,
                 "Taps insulated. If the motor turns the wrong way, swap A+ and A-.");
-        Connection halfWinding = new Connection("bipolar-half-winding", terminals("A+", a.ends().get(0),
+        DriverWiring halfWinding = new DriverWiring("bipolar-half-winding", terminals("A+", a.ends().get(0),
                 "A-", a.tap(), "B+", b.ends().get(0), "B-", b.tap()), List.of(),
-                List.of(a.ends().get(1), b.ends().get(1)), WindingConnections.phaseResistanceOhm(Mode.BIPOLAR_HALF, half),
-                Mode.BIPOLAR_HALF.resistanceFactor(), Mode.BIPOLAR_HALF.inductanceFactor(),
-                Mode.BIPOLAR_HALF.currentFactor(), HALF, true,
+                List.of(a.ends().get(1), b.ends().get(1)), Connection.HALF.phaseResistanceOhm(half),
+                Connection.HALF.resistanceFactor(), Connection.HALF.inductanceFactor(),
+                Connection.HALF.currentFactor(), HALF, true,
                 "The unused ends insulated. If the motor turns the wrong way, swap A+ and A-.");
-        Connection unipolar = unipolar(List.of(a.tap(), b.tap()), a.ends().get(0), a.ends().get(1), b.ends().get(0),
+        DriverWiring unipolar = unipolar(List.of(a.tap(), b.tap()), a.ends().get(0), a.ends().get(1), b.ends().get(0),
                 b.ends().get(1), List.of(), half, true,
                 "Both taps to the supply common. If the motor turns the wrong way, swap A and A'.");
         return List.of(series, halfWinding, unipolar);
     }
 
-    private static Connection five(List<Winding> w) {
+    private static DriverWiring five(List<Winding> w) {
         String com = w.get(0).ends().get(0);
         double half = mean(w.stream().mapToDouble(Winding::resistanceOhm).toArray());
         return unipolar(List.of(com), w.get(0).ends().get(1), w.get(1).ends().get(1), w.get(2).ends().get(1),
                 w.get(3).ends().get(1), List.of(), half, false, FIVE_PAIRING);
     }
 
-    private static List<Connection> eight(List<Winding> w) {
+    private static List<DriverWiring> eight(List<Winding> w) {
         Winding a1 = w.get(0);
         Winding a2 = w.get(1);
         Winding b1 = w.get(2);
         Winding b2 = w.get(3);
         double half = mean(w.stream().mapToDouble(Winding::resistanceOhm).toArray());
-        Connection series = new Connection("bipolar-series", terminals("A+", a1.ends().get(0), "A-", a2.ends().get(1),
+        DriverWiring series = new DriverWiring("bipolar-series", terminals("A+", a1.ends().get(0), "A-", a2.ends().get(1),
                 "B+", b1.ends().get(0), "B-", b2.ends().get(1)),
                 List.of(List.of(a1.ends().get(1), a2.ends().get(0)), List.of(b1.ends().get(1), b2.ends().get(0))),
-                List.of(), WindingConnections.phaseResistanceOhm(Mode.BIPOLAR_SERIES, half),
-                Mode.BIPOLAR_SERIES.resistanceFactor(), Mode.BIPOLAR_SERIES.inductanceFactor(),
-                Mode.BIPOLAR_SERIES.currentFactor(), SERIES, false, PHASING);
+                List.of(), Connection.SERIES.phaseResistanceOhm(half),
+                Connection.SERIES.resistanceFactor(), Connection.SERIES.inductanceFactor(),
+                Connection.SERIES.currentFactor(), SERIES, false, PHASING);
         Map<String, List<String>> par = new LinkedHashMap<>();
         par.put("A+", List.of(a1.ends().get(0), a2.ends().get(0)));
         par.put("A-", List.of(a1.ends().get(1), a2.ends().get(1)));
         par.put("B+", List.of(b1.ends().get(0), b2.ends().get(0)));
         par.put("B-", List.of(b1.ends().get(1), b2.ends().get(1)));
-        Connection parallel = new Connection("bipolar-parallel", par, List.of(), List.of(),
-                WindingConnections.phaseResistanceOhm(Mode.BIPOLAR_PARALLEL, half),
-                Mode.BIPOLAR_PARALLEL.resistanceFactor(), Mode.BIPOLAR_PARALLEL.inductanceFactor(),
-                Mode.BIPOLAR_PARALLEL.currentFactor(), PARALLEL, false, PHASING);
-        Connection unipolar = unipolar(List.of(a1.ends().get(1), a2.ends().get(0), b1.ends().get(1), b2.ends().get(0)),
+        DriverWiring parallel = new DriverWiring("bipolar-parallel", par, List.of(), List.of(),
+                Connection.PARALLEL.phaseResistanceOhm(half),
+                Connection.PARALLEL.resistanceFactor(), Connection.PARALLEL.inductanceFactor(),
+                Connection.PARALLEL.currentFactor(), PARALLEL, false, PHASING);
+        DriverWiring unipolar = unipolar(List.of(a1.ends().get(1), a2.ends().get(0), b1.ends().get(1), b2.ends().get(0)),
                 a1.ends().get(0), a2.ends().get(1), b1.ends().get(0), b2.ends().get(1), List.of(), half, false,
                 PHASING);
         return List.of(series, parallel, unipolar);
     }
 
-    private static Connection unipolar(List<String> common, String a, String a2, String b, String b2,
+    private static DriverWiring unipolar(List<String> common, String a, String a2, String b, String b2,
                                        List<List<String>> jumpers, double halfOhm, boolean verified, String note) {
         Map<String, List<String>> t = new LinkedHashMap<>();
         t.put("COM", common);
@@ -115,9 +114,9 @@ final class ConnectionGuide {
         t.put("A'", List.of(a2));
         t.put("B", List.of(b));
         t.put("B'", List.of(b2));
-        return new Connection("unipolar", t, jumpers, List.of(),
-                WindingConnections.phaseResistanceOhm(Mode.UNIPOLAR, halfOhm), Mode.UNIPOLAR.resistanceFactor(),
-                Mode.UNIPOLAR.inductanceFactor(), Mode.UNIPOLAR.currentFactor(), UNIPOLAR, verified, note);
+        return new DriverWiring("unipolar", t, jumpers, List.of(),
+                Connection.UNIPOLAR.phaseResistanceOhm(halfOhm), Connection.UNIPOLAR.resistanceFactor(),
+                Connection.UNIPOLAR.inductanceFactor(), Connection.UNIPOLAR.currentFactor(), UNIPOLAR, verified, note);
     }
 
     private static Map<String, List<String>> terminals(String... kv) {

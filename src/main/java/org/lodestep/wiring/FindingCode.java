@@ -1,7 +1,7 @@
 package org.lodestep.wiring;
 
 /** The stable codes of lead-identification findings; scripts may match on {@link #code()}. */
-public enum FindingCode {
+public enum FindingCode implements Finding.Code {
     /** A lead or half-winding has no continuity where the topology needs it. */
     OPEN_WINDING("open-winding"),
     /** Phase (or coil) resistances differ by more than the tolerance. */

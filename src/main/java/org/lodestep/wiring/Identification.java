@@ -21,7 +21,7 @@ import java.util.List;
  */
 public record Identification(List<String> leads, Topology topology, List<Winding> windings,
                              List<Double> windingsAtReferenceOhm, TemperatureCorrection temperature,
-                             List<Finding> findings, List<Connection> connections, List<LeadPair> missingPairs,
+                             List<Finding> findings, List<DriverWiring> connections, List<LeadPair> missingPairs,
                              boolean determined, List<ReadingUse> readings, int measuredPairs, int totalPairs) {
     public Identification {
         leads = List.copyOf(leads);

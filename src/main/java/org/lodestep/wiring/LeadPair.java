@@ -37,7 +37,7 @@ public record LeadPair(String a, String b) implements Comparable<LeadPair> {
     }
 
     /** The lead of this pair that is not {@code label}. */
-    public String other(String label) {
+    String other(String label) {
         if (a.equals(label)) {
             return b;
         }

@@ -36,7 +36,7 @@ public final class ResistanceMatrix {
     }
 
     /** Whether the pair was measured (finite or open). */
-    public boolean isMeasured(LeadPair p) {
+    boolean isMeasured(LeadPair p) {
         return ohms.containsKey(p);
     }
 
@@ -69,7 +69,7 @@ public final class ResistanceMatrix {
     }
 
     /** The pairs not yet measured, in lead order. */
-    public List<LeadPair> unmeasuredPairs() {
+    List<LeadPair> unmeasuredPairs() {
         List<LeadPair> out = new ArrayList<>();
         for (LeadPair p : allPairs()) {
             if (!ohms.containsKey(p)) {

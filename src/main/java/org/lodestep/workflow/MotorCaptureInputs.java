@@ -13,7 +13,7 @@ import org.lodestep.sample.SampledSignal;
 import org.lodestep.motor.BackEmfAnalyzer;
 import org.lodestep.motor.BackEmfResult;
 import org.lodestep.motor.EmfChannel;
-import org.lodestep.motor.LeadPair;
+import org.lodestep.motor.OrientedLeads;
 import org.lodestep.motor.StepInput;
 import org.lodestep.motor.StepResponseFit;
 import org.lodestep.motor.StepResponseFitter;
@@ -33,10 +33,39 @@ public final class MotorCaptureInputs {
         return stepResponse(Captures.readAll(file), supplyFlagV, seriesFlagOhm, knownWindingOhm);
     }
 
-    /** As {@link #stepResponse(Path, Double, Double, Double)}, for a signal already in memory (a rig capture). */
-    public static StepInput stepResponse(SampledSignal s, Double supplyFlagV, Double seriesFlagOhm, Double knownWindingOhm)
-            throws InputFormatException {
-        String src = s.source();
+    /**
+     * The recorded current of a step response, for drawing under its fit.
+     *
+     * @param source   the file's name
+     * @param timeS    sample times, s
+     * @param currentA the current channel the fit used, A
+     */
+    public record StepTrace(String source, double[] timeS, double[] currentA) {
+        public StepTrace {
+            java.util.Objects.requireNonNull(source, "source");
+            if (timeS.length != currentA.length) {
+                throw new IllegalArgumentException("trace of " + source + ": " + timeS.length + " times but "
+                        + currentA.length + " currents");
+            }
+        }
+    }
+
+    /** A fitted step response and the recording it was fitted to. */
+    public record StepCapture(StepInput input, StepTrace trace) {
+    }
+
+    /** As {@link #stepResponse(Path, Double, Double, Double)}, keeping the recorded current with the fit. */
+    public static StepCapture stepCapture(Path file, Double supplyFlagV, Double seriesFlagOhm, Double knownWindingOhm)
+            throws IOException, InputFormatException {
+        SampledSignal s = Captures.readAll(file);
+        StepInput input = stepResponse(s, supplyFlagV, seriesFlagOhm, knownWindingOhm);
+        int current = currentChannel(s);
+        return new StepCapture(input, new StepTrace(file.getFileName().toString(), times(s, s.channel(current).length),
+                s.channel(current)));
+    }
+
+    /** The current channel a step response is fitted on: the first in amperes, or one named current*; -1 if none. */
+    private static int currentChannel(SampledSignal s) {
         int current = -1;
         for (int c = 0; c < s.channels().size(); c++) {
             Channel ch = s.channels().get(c);
@@ -44,6 +73,22 @@ public final class MotorCaptureInputs {
                 current = c;
             }
         }
+        return current;
+    }
+
+    private static double[] times(SampledSignal s, int n) {
+        double[] t = new double[n];
+        for (int k = 0; k < n; k++) {
+            t[k] = s.startTimeS() + k / s.sampleRateHz();
+        }
+        return t;
+    }
+
+    /** As {@link #stepResponse(Path, Double, Double, Double)}, for a signal already in memory (a rig capture). */
+    public static StepInput stepResponse(SampledSignal s, Double supplyFlagV, Double seriesFlagOhm, Double knownWindingOhm)
+            throws InputFormatException {
+        String src = s.source();
+        int current = currentChannel(s);
         if (current < 0) {
             throw new InputFormatException(src, InputFormatException.NO_LINE, null, String.join(",",
                     s.channelNames()), "has no current column: expected a column such as current_a (amperes)");
@@ -80,7 +125,7 @@ public final class MotorCaptureInputs {
             series = seriesFlagOhm == null ? 0.0 : seriesFlagOhm;
         }
         try {
-            return fit(s, current, new LeadPair(leads.get(0), leads.get(1)), joined, supply, series,
+            return fit(s, current, new OrientedLeads(leads.get(0), leads.get(1)), joined, supply, series,
                     joined.isEmpty() ? knownWindingOhm : null);
         } catch (IllegalArgumentException e) {
             throw new InputFormatException(src, InputFormatException.NO_LINE, null, null, e.getMessage());
@@ -88,19 +133,16 @@ public final class MotorCaptureInputs {
     }
 
     /** Fits channel {@code current} of {@code s} as a step across {@code pair}. */
-    public static StepInput fit(SampledSignal s, int current, LeadPair pair, List<String> joined, Double supplyV,
+    static StepInput fit(SampledSignal s, int current, OrientedLeads pair, List<String> joined, Double supplyV,
                          double seriesOhm, Double knownWindingOhm) {
         double[] i = s.channel(current);
-        double[] t = new double[i.length];
-        for (int k = 0; k < t.length; k++) {
-            t[k] = s.startTimeS() + k / s.sampleRateHz();
-        }
+        double[] t = times(s, i.length);
         StepResponseFit fit = new StepResponseFitter(supplyV, seriesOhm, knownWindingOhm).fit(t, i);
         return new StepInput(pair, joined, fit);
     }
 
     /** The level of a recorded drive voltage over the last half of the record, V; null when not positive. */
-    public static Double settledLevel(double[] v) {
+    static Double settledLevel(double[] v) {
         double sum = 0;
         for (int k = v.length / 2; k < v.length; k++) {
             sum += v[k];
@@ -127,7 +169,7 @@ public final class MotorCaptureInputs {
         double[] index = null;
         for (int c = 0; c < s.channels().size(); c++) {
             Channel ch = s.channels().get(c);
-            LeadPair pair = LeadPair.fromChannelName(ch.name());
+            OrientedLeads pair = OrientedLeads.fromChannelName(ch.name());
             if (pair != null) {
                 if (!ch.unit().isEmpty() && !ch.unit().equals("v")) {
                     throw new InputFormatException(src, InputFormatException.NO_LINE, ch.header(), ch.unit(),

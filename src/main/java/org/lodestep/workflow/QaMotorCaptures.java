@@ -10,12 +10,12 @@ import java.util.Locale;
 
 import org.lodestep.sample.InputFormatException;
 import org.lodestep.motor.BackEmfResult;
-import org.lodestep.motor.Finding;
+import org.lodestep.wiring.Finding;
 import org.lodestep.motor.IdentifyRequest;
 import org.lodestep.motor.MotorCard;
 import org.lodestep.motor.MotorIdentifier;
 import org.lodestep.motor.PhaseCard;
-import org.lodestep.motor.Severity;
+import org.lodestep.wiring.Severity;
 import org.lodestep.motor.StepInput;
 import org.lodestep.qa.CaptureRef;
 import org.lodestep.qa.Hashes;

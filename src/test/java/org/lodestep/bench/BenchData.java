@@ -15,7 +15,8 @@ import java.util.SplittableRandom;
  * step-rate sweep) as a canonical CSV and as a 16-bit PCM WAV. Generated on the fly, never committed.
  *
  * <p>Usage: {@code BenchData DIR [FRAMES]} writes {@code DIR/sweep.csv} and {@code DIR/sweep.wav} (default 10 million
- * frames of one channel at 51.2 kS/s).
+ * frames of one channel at 51.2 kS/s); {@code BenchData --wav FILE SECONDS} streams a WAV of any length (one hour is
+ * 368 MB) without holding the signal in memory.
  */
 public final class BenchData {
     /** 51.2 kS/s: a common rate of vibration data acquisition. */
@@ -25,6 +26,10 @@ public final class BenchData {
     }
 
     public static void main(String[] args) throws IOException {
+        if (args[0].equals("--wav")) {
+            wav(Path.of(args[1]), Math.toIntExact(Math.round(Double.parseDouble(args[2]) * RATE_HZ)));
+            return;
+        }
         Path dir = Path.of(args[0]);
         int frames = args.length > 1 ? Integer.parseInt(args[1]) : 10_000_000;
         Files.createDirectories(dir);
@@ -35,16 +40,30 @@ public final class BenchData {
     /** The test signal in g: a tone sweeping 20 Hz to 2 kHz over the record, amplitude 0.5 g, noise 0.05 g rms. */
     static double[] signal(int frames) {
         double[] x = new double[frames];
-        SplittableRandom rnd = new SplittableRandom(20261201L);
-        double duration = (double) frames / RATE_HZ;
-        double phase = 0;
+        Tone tone = new Tone(frames);
         for (int i = 0; i < frames; i++) {
-            double t = (double) i / RATE_HZ;
-            double f = 20 + (2000 - 20) * t / duration;
-            phase += 2 * Math.PI * f / RATE_HZ;
-            x[i] = 0.5 * Math.sin(phase) + 0.05 * (rnd.nextDouble() + rnd.nextDouble() + rnd.nextDouble() - 1.5) * 2;
+            x[i] = tone.next();
         }
         return x;
+    }
+
+    /** The test signal sample by sample, so a file of any length can be written in constant memory. */
+    static final class Tone {
+        private final SplittableRandom rnd = new SplittableRandom(20261201L);
+        private final double duration;
+        private double phase;
+        private long i;
+
+        Tone(long frames) {
+            this.duration = (double) frames / RATE_HZ;
+        }
+
+        double next() {
+            double t = (double) i++ / RATE_HZ;
+            double f = 20 + (2000 - 20) * t / duration;
+            phase += 2 * Math.PI * f / RATE_HZ;
+            return 0.5 * Math.sin(phase) + 0.05 * (rnd.nextDouble() + rnd.nextDouble() + rnd.nextDouble() - 1.5) * 2;
+        }
     }
 
     /**
@@ -55,7 +74,8 @@ public final class BenchData {
         double[] x = signal(frames);
         try (OutputStream out = new BufferedOutputStream(Files.newOutputStream(path), 1 << 20)) {
             out.write(("# sample_rate_hz=" + RATE_HZ + "\n# sweep=linear\n# sweep_start_full_steps_per_s=20\n"
-                    + "# sweep_end_full_steps_per_s=2000\n# microsteps=1\ntime_s,accel_g\n")
+                    + "# sweep_end_full_steps_per_s=2000\n# sweep_duration_s=" + (double) frames / RATE_HZ
+                    + "\n# microsteps=1\ntime_s,accel_g\n")
                     .getBytes(StandardCharsets.US_ASCII));
             byte[] line = new byte[64];
             for (int i = 0; i < frames; i++) {
@@ -91,7 +111,7 @@ public final class BenchData {
 
     /** 16-bit mono PCM WAV of the same signal, full scale = 1 g. */
     public static void wav(Path path, int frames) throws IOException {
-        double[] x = signal(frames);
+        Tone tone = new Tone(frames);
         try (OutputStream out = new BufferedOutputStream(Files.newOutputStream(path), 1 << 20)) {
             int dataBytes = frames * 2;
             ByteBuffer h = ByteBuffer.allocate(44).order(ByteOrder.LITTLE_ENDIAN);
@@ -107,7 +127,7 @@ public final class BenchData {
                     out.write(block.array(), 0, block.position());
                     block.clear();
                 }
-                block.putShort((short) Math.max(-32768, Math.min(32767, Math.round(x[i] * 32768))));
+                block.putShort((short) Math.max(-32768, Math.min(32767, Math.round(tone.next() * 32768))));
             }
             out.write(block.array(), 0, block.position());
         }

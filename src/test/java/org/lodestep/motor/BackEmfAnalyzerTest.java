@@ -8,6 +8,7 @@ import static org.junit.jupiter.api.Assertions.assertTrue;
 import java.util.List;
 
 import org.junit.jupiter.api.Test;
+import org.lodestep.wiring.Severity;
 
 class BackEmfAnalyzerTest {
     private static final double FS = 10_000;
@@ -35,10 +36,10 @@ class BackEmfAnalyzerTest {
         assertEquals("A", coil(r, "5").phase());
         assertEquals("B", coil(r, "3").phase());
         assertEquals("B", coil(r, "7").phase());
-        assertEquals(new LeadPair("1", "2"), coil(r, "1").oriented());
-        assertEquals(new LeadPair("6", "5"), coil(r, "5").oriented());
-        assertEquals(new LeadPair("4", "3"), coil(r, "3").oriented());
-        assertEquals(new LeadPair("7", "8"), coil(r, "7").oriented());
+        assertEquals(new OrientedLeads("1", "2"), coil(r, "1").oriented());
+        assertEquals(new OrientedLeads("6", "5"), coil(r, "5").oriented());
+        assertEquals(new OrientedLeads("4", "3"), coil(r, "3").oriented());
+        assertEquals(new OrientedLeads("7", "8"), coil(r, "7").oriented());
         // item 14: the phases are 90° electrical apart
         assertEquals(90.0, r.quadratureLagDeg(), 2.0);
         // item 14: f_e = Nr x rev/s -> 150 cycles in 3 revolutions -> 50 teeth (item 1: 1.8°)
@@ -64,9 +65,9 @@ class BackEmfAnalyzerTest {
         List<EmfChannel> ch = SyntheticMotor.backEmf(EIGHT_LEAD, theta, FS, 50, 0.05, 0.01, 12);
         BackEmfResult r = new BackEmfAnalyzer(FS).analyze(ch, 3.0, null, 1);
         // Turned the other way, B leads A; orienting B to lag A again means taking its other end as start.
-        assertEquals(new LeadPair("3", "4"), coil(r, "3").oriented());
-        assertEquals(new LeadPair("8", "7"), coil(r, "7").oriented());
-        assertEquals(new LeadPair("1", "2"), coil(r, "1").oriented());
+        assertEquals(new OrientedLeads("3", "4"), coil(r, "3").oriented());
+        assertEquals(new OrientedLeads("8", "7"), coil(r, "7").oriented());
+        assertEquals(new OrientedLeads("1", "2"), coil(r, "1").oriented());
         assertEquals(50, r.rotorTeeth());
     }
 
@@ -85,11 +86,11 @@ class BackEmfAnalyzerTest {
         }
         BackEmfResult r = new BackEmfAnalyzer(FS).analyze(SyntheticMotor.backEmf(EIGHT_LEAD, theta, FS, 50, 0.05,
                 0.005, 16), null, null, 1);
-        assertEquals(new LeadPair("6", "5"), coil(r, "5").oriented());
-        assertEquals(new LeadPair("4", "3"), coil(r, "3").oriented());
-        assertEquals(new LeadPair("7", "8"), coil(r, "7").oriented());
+        assertEquals(new OrientedLeads("6", "5"), coil(r, "5").oriented());
+        assertEquals(new OrientedLeads("4", "3"), coil(r, "3").oriented());
+        assertEquals(new OrientedLeads("7", "8"), coil(r, "7").oriented());
         assertEquals(1, r.directionReversals());
-        assertTrue(r.findings().stream().anyMatch(f -> f.code().equals("direction_reversed")));
+        assertTrue(r.findings().stream().anyMatch(f -> f.code().code().equals("direction_reversed")));
         // item 14: net travel 1 turn = 50 electrical cycles (the angle from both phases follows the direction)
         assertEquals(50.0, r.electricalCycles(), 1.0);
     }
@@ -126,23 +127,23 @@ class BackEmfAnalyzerTest {
         double[] theta = SyntheticMotor.handTurnAngleRad(10_000, FS, 2.0);
         List<EmfChannel> ch = new java.util.ArrayList<>(
                 SyntheticMotor.backEmf(EIGHT_LEAD.subList(0, 2), theta, FS, 50, 0.05, 0.001, 15));
-        ch.add(new EmfChannel(new LeadPair("5", "6"), new double[10_000]));
+        ch.add(new EmfChannel(new OrientedLeads("5", "6"), new double[10_000]));
         BackEmfResult r = new BackEmfAnalyzer(FS).analyze(ch, 2.0, null, 1);
-        assertTrue(r.findings().stream().anyMatch(f -> f.severity() == Severity.ERROR && f.code().equals("no_emf")));
+        assertTrue(r.findings().stream().anyMatch(f -> f.severity() == Severity.ERROR && f.code().code().equals("no_emf")));
         assertEquals(2, r.coils().size());
     }
 
     @Test
     void rejectsChannelsOfDifferentLength() {
-        List<EmfChannel> ch = List.of(new EmfChannel(new LeadPair("1", "2"), new double[300]),
-                new EmfChannel(new LeadPair("3", "4"), new double[301]));
+        List<EmfChannel> ch = List.of(new EmfChannel(new OrientedLeads("1", "2"), new double[300]),
+                new EmfChannel(new OrientedLeads("3", "4"), new double[301]));
         assertThrows(IllegalArgumentException.class, () -> new BackEmfAnalyzer(FS).analyze(ch, null, null, 1));
     }
 
     @Test
     void readsLeadPairFromChannelName() {
-        assertEquals(new LeadPair("1", "2"), LeadPair.fromChannelName("emf_1_2_v"));
-        assertEquals(new LeadPair("A", "b7"), LeadPair.fromChannelName("emf_A_b7"));
-        assertNull(LeadPair.fromChannelName("current_a"));
+        assertEquals(new OrientedLeads("1", "2"), OrientedLeads.fromChannelName("emf_1_2_v"));
+        assertEquals(new OrientedLeads("A", "b7"), OrientedLeads.fromChannelName("emf_A_b7"));
+        assertNull(OrientedLeads.fromChannelName("current_a"));
     }
 }

@@ -52,7 +52,7 @@ class StepResponseFitterTest {
         double[] i = SyntheticMotor.saturatingStep(t, 2.0, 2.0, 4.0e-3, 0.8);
         StepResponseFit fit = new StepResponseFitter(2.0, 0.0, null).fit(t, i);
         assertEquals(ResponseShape.SATURATION, fit.shape());
-        assertTrue(fit.findings().stream().anyMatch(f -> f.code().equals("saturation")));
+        assertTrue(fit.findings().stream().anyMatch(f -> f.code().code().equals("saturation")));
     }
 
     @Test
@@ -68,7 +68,7 @@ class StepResponseFitterTest {
         double[] t = SyntheticMotor.times(400, 10e-6);
         double[] i = SyntheticMotor.rlStep(t, 2.0, 2.0, 4.0e-3, 0.5e-3, 0.0, 0, 1);
         StepResponseFit fit = new StepResponseFitter(2.0, 0.0, null).fit(t, i);
-        assertTrue(fit.findings().stream().anyMatch(f -> f.code().equals("short_record")));
+        assertTrue(fit.findings().stream().anyMatch(f -> f.code().code().equals("short_record")));
     }
 
     @Test

@@ -100,7 +100,7 @@ final class SyntheticMotor {
                 double e = c.phaseA() ? -keVsPerRad * w * Math.sin(phi) : keVsPerRad * w * Math.cos(phi);
                 v[i] = (c.startIsSecond() ? -e : e) + noiseV * rnd.nextGaussian();
             }
-            out.add(new EmfChannel(new LeadPair(c.lead1(), c.lead2()), v));
+            out.add(new EmfChannel(new OrientedLeads(c.lead1(), c.lead2()), v));
         }
         return out;
     }

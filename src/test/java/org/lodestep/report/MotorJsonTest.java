@@ -9,7 +9,7 @@ import com.fasterxml.jackson.databind.JsonNode;
 import org.junit.jupiter.api.Test;
 import org.lodestep.motor.CoilResistance;
 import org.lodestep.motor.IdentifyRequest;
-import org.lodestep.motor.LeadPair;
+import org.lodestep.motor.OrientedLeads;
 import org.lodestep.motor.MotorCard;
 import org.lodestep.motor.MotorIdentifier;
 import org.lodestep.wiring.Topology;
@@ -20,8 +20,8 @@ class MotorJsonTest {
     private static MotorCard sixLeadCard() {
         // REFERENCE-CHECKS item 4: 6-lead, end-tap = r = 1.20 ohm per half
         WindingInput w = new WindingInput(Topology.SIX_LEAD, List.of("1", "2", "3", "4", "5", "6"), List.of(
-                new CoilResistance(new LeadPair("1", "2"), 1.2), new CoilResistance(new LeadPair("2", "3"), 1.2),
-                new CoilResistance(new LeadPair("4", "5"), 1.2), new CoilResistance(new LeadPair("5", "6"), 1.2)),
+                new CoilResistance(new OrientedLeads("1", "2"), 1.2), new CoilResistance(new OrientedLeads("2", "3"), 1.2),
+                new CoilResistance(new OrientedLeads("4", "5"), 1.2), new CoilResistance(new OrientedLeads("5", "6"), 1.2)),
                 List.of());
         return MotorIdentifier.identify(new IdentifyRequest(w, List.of(), null, null, null, null, null));
     }

@@ -19,7 +19,7 @@ import org.lodestep.capture.ResistanceCsvReader;
 import org.lodestep.capture.ResistanceReadings;
 import org.lodestep.report.html.DriverTerminal;
 import org.lodestep.report.html.WiringDiagram;
-import org.lodestep.wiring.Connection;
+import org.lodestep.wiring.DriverWiring;
 import org.lodestep.wiring.IdentifySettings;
 import org.lodestep.wiring.Identification;
 import org.lodestep.wiring.LeadIdentifier;
@@ -49,7 +49,7 @@ class WiringDiagramsTest {
         int drawn = 0;
         for (Path csv : sampleCaptures()) {
             Identification id = identify(csv);
-            for (Connection c : id.connections()) {
+            for (DriverWiring c : id.connections()) {
                 WiringDiagram d = WiringDiagrams.of(id, c);
                 drawn++;
                 // Every lead the identification knows is on the drawing, each once.
@@ -83,7 +83,7 @@ class WiringDiagramsTest {
     void eightLeadSeriesTiesTheInnerEndsOfEachPhase() throws Exception {
         Path eight = sampleCaptures().stream().filter(p -> p.toString().contains("8lead")).findFirst().orElseThrow();
         Identification id = identify(eight);
-        Connection series = id.connections().stream().filter(c -> c.name().equals("bipolar-series")).findFirst()
+        DriverWiring series = id.connections().stream().filter(c -> c.name().equals("bipolar-series")).findFirst()
                 .orElseThrow();
         WiringDiagram d = WiringDiagrams.of(id, series);
         assertEquals(2, d.ties().size());

@@ -8,6 +8,7 @@ import java.util.List;
 
 import org.apache.commons.math3.stat.regression.SimpleRegression;
 import org.junit.jupiter.api.Test;
+import org.lodestep.motor.RlStep;
 
 class BenchMotorTest {
 
@@ -52,6 +53,23 @@ class BenchMotorTest {
         }
         // 16 tau after onset: within 1e-6 of I_inf
         assertEquals(1.000, tail, 1e-3);
+    }
+
+    @Test
+    void stepResponseAgreesWithTheEnginesRlStep() {
+        // The rig's step is an independent oracle (rig/package-info.java): its noise-free current must equal
+        // motor.RlStep for the same loop. Alexander & Sadiku, Fundamentals of Electric Circuits, first-order RL step:
+        // i(t) = (V/R)(1 - e^(-t/tau)), tau = L/R; here V = 2.0 V, R = 0.95 + 0.95 + 0.1 ohm, L = 4.0 mH (uncoupled).
+        BenchMotor m = new BenchMotor(motor(0.95, 0.002, 0.0, 60, List.of(), 4));
+        double rate = 50_000;
+        int frames = 1000;
+        double[][] d = m.stepResponse(1, 2, 2.0, rate, frames, 0.0);
+        int onset = frames / 10;
+        for (int i = 0; i < frames; i += 7) {
+            double t = (i - onset) / rate;
+            // noise-free at a zero LSB; 1e-9 A leaves room for the rig's nodal solution of R
+            assertEquals(RlStep.currentA(2.0, 2.0, 0.004, t), d[0][i], 1e-9, "sample " + i);
+        }
     }
 
     @Test

@@ -1,4 +1,4 @@
-package org.lodestep.cli;
+package org.lodestep.workflow;
 
 import java.io.IOException;
 import java.nio.file.Path;
@@ -9,10 +9,10 @@ import org.lodestep.sample.InputFormatException;
 import org.lodestep.capture.ResistanceCsvReader;
 import org.lodestep.capture.ResistanceReadings;
 import org.lodestep.motor.CoilResistance;
-import org.lodestep.motor.Finding;
-import org.lodestep.motor.LeadPair;
-import org.lodestep.motor.Severity;
+import org.lodestep.motor.OrientedLeads;
+import org.lodestep.motor.MotorFindingCode;
 import org.lodestep.motor.WindingInput;
+import org.lodestep.wiring.Finding;
 import org.lodestep.wiring.Identification;
 import org.lodestep.wiring.IdentifySettings;
 import org.lodestep.wiring.LeadIdentifier;
@@ -28,7 +28,7 @@ final class MotorWindings {
 
     static WindingInput read(Path file) throws IOException, InputFormatException {
         ResistanceReadings r = ResistanceCsvReader.read(file);
-        Identification id = LeadIdentifier.identify(LeadsIdentifyCommand.matrix(r, List.of()),
+        Identification id = LeadIdentifier.identify(LeadsFromReadings.matrix(r, List.of()),
                 IdentifySettings.DEFAULT);
         return of(id);
     }
@@ -38,8 +38,7 @@ final class MotorWindings {
         List<CoilResistance> coils = new ArrayList<>();
         List<Finding> findings = new ArrayList<>();
         for (org.lodestep.wiring.Finding f : id.findings()) {
-            findings.add(new Finding(Severity.valueOf(f.severity().name()), f.code().code(), "resistance: "
-                    + f.message()));
+            findings.add(f.at("resistance"));
         }
         for (Winding w : id.windings()) {
             if (w.tap() != null) {
@@ -54,9 +53,9 @@ final class MotorWindings {
 
     private static void add(List<CoilResistance> coils, List<Finding> findings, String a, String b, double ohm) {
         if (ohm > 0 && Double.isFinite(ohm)) {
-            coils.add(new CoilResistance(new LeadPair(a, b), ohm));
+            coils.add(new CoilResistance(new OrientedLeads(a, b), ohm));
         } else {
-            findings.add(new Finding(Severity.WARNING, "coil_resistance", "resistance: coil " + a + "-" + b
+            findings.add(Finding.warning(MotorFindingCode.COIL_RESISTANCE, "resistance: coil " + a + "-" + b
                     + " reads " + ohm + " ohm; it is left out of the electrical figures"));
         }
     }

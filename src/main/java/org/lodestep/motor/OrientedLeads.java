@@ -5,13 +5,14 @@ import java.util.regex.Matcher;
 import java.util.regex.Pattern;
 
 /**
- * Two lead labels measured as one voltage, {@code +} on {@link #first()}: a back-EMF channel named
- * {@code emf_1_2_v} measures lead 1 against lead 2.
+ * Two lead labels in a stated order, {@code +} on {@link #first()}: a coil with its start and end, or one voltage
+ * measured across two leads (a back-EMF channel named {@code emf_1_2_v} measures lead 1 against lead 2). Unlike
+ * {@link org.lodestep.wiring.LeadPair}, which is the unordered pair a resistance is read across, the order matters.
  */
-public record LeadPair(String first, String second) {
+public record OrientedLeads(String first, String second) {
     private static final Pattern EMF_NAME = Pattern.compile("(?i)emf_([A-Za-z0-9]+)_([A-Za-z0-9]+)(?:_v)?");
 
-    public LeadPair {
+    public OrientedLeads {
         Objects.requireNonNull(first, "first");
         Objects.requireNonNull(second, "second");
         if (first.isBlank() || second.isBlank() || first.equals(second)) {
@@ -24,17 +25,17 @@ public record LeadPair(String first, String second) {
      * Reads a channel name {@code emf_<lead>_<lead>} (with or without the {@code _v} unit suffix); null when the name
      * does not follow that pattern.
      */
-    public static LeadPair fromChannelName(String name) {
+    public static OrientedLeads fromChannelName(String name) {
         Matcher m = EMF_NAME.matcher(name);
         if (!m.matches()) {
             return null;
         }
-        return new LeadPair(m.group(1), m.group(2));
+        return new OrientedLeads(m.group(1), m.group(2));
     }
 
     /** The same pair with the other lead positive. */
-    public LeadPair reversed() {
-        return new LeadPair(second, first);
+    public OrientedLeads reversed() {
+        return new OrientedLeads(second, first);
     }
 
     @Override
