@@ -32,8 +32,8 @@ import org.openqa.selenium.support.ui.Select;
 import org.openqa.selenium.support.ui.WebDriverWait;
 
 /**
- * The bench station in a real browser (Debian's Chromium through its chromium-driver), one shared session: a QA lot of
- * five scanned serial numbers with one failure, the records of that lot, a live sweep of the virtual rig to its bands.
+ * The bench station in a real browser (Debian's Chromium through its chromium-driver), one shared session: a probe
+ * session typed through to the wiring, a QA lot of five scanned serial numbers with one failure, the records of that lot, a live sweep of the virtual rig to its bands.
  * Screenshots of each page at desktop and phone width go to {@code target/station-screenshots}; each is checked for
  * no horizontal scrolling and, on the QA station, for the verdict in view without scrolling. Without the browser or
  * driver the tests skip with a message; with {@code CI=true} they fail.
@@ -116,6 +116,60 @@ class StationBrowserTest {
             }
         }
         driver.manage().window().setSize(new Dimension(DESKTOP, 900));
+    }
+
+    /** A six-lead motor as the technician's meter sees it: two centre-tapped windings, 1.2 Ω per half (invented). */
+    static String meter(String a, String b) {
+        List<String> windingA = List.of("1", "2", "3");
+        List<String> windingB = List.of("4", "5", "6");
+        for (List<String> w : List.of(windingA, windingB)) {
+            if (w.contains(a) && w.contains(b)) {
+                // ends 1-3 read both halves in series; an end to its centre tap reads one half
+                return Math.abs(w.indexOf(a) - w.indexOf(b)) == 2 ? "2.4" : "1.2";
+            }
+        }
+        return "OL";
+    }
+
+    @Test
+    @Order(0)
+    void aProbeSessionTypedThroughToTheWiring() throws Exception {
+        driver.get(base + "/leads");
+        WebElement labels = driver.findElement(By.id("labels"));
+        labels.clear();
+        labels.sendKeys("6", Keys.ENTER);
+        waiting().until(d -> d.findElements(By.cssSelector("[data-page=leads-probe]")).size() == 1);
+        WebElement root = driver.findElement(By.cssSelector("[data-page=leads-probe]"));
+        boolean undone = false;
+        for (int i = 0; i < 40 && root.getAttribute("data-done") == null; i++) {
+            String pair = driver.findElement(By.cssSelector("#next .pair")).getText();
+            String[] ab = pair.split("\\s*\u2013\\s*");
+            WebElement ohms = driver.findElement(By.id("ohms"));
+            assertEquals(ohms, driver.switchTo().activeElement(), "the answer field has the focus");
+            int answers = root.getAttribute("data-answers") == null ? 0 : Integer.parseInt(root.getAttribute("data-answers"));
+            if (!undone && i == 1) {
+                // a slip of the probe: a wrong reading, withdrawn with u
+                ohms.sendKeys("99", Keys.ENTER);
+                waitAnswers(root, answers + 1);
+                driver.findElement(By.id("ohms")).sendKeys("u", Keys.ENTER);
+                waitAnswers(root, answers + 2);
+                undone = true;
+                continue;
+            }
+            ohms.sendKeys(meter(ab[0], ab[1]), Keys.ENTER);
+            waitAnswers(root, answers + 1);
+        }
+        assertEquals("true", root.getAttribute("data-done"));
+        String result = driver.findElement(By.id("next")).getText();
+        assertTrue(result.contains("6-lead"), result);
+        shots("leads", "#next");
+        driver.switchTo().frame(driver.findElement(By.cssSelector("iframe.report")));
+        assertTrue(driver.findElements(By.cssSelector("figure svg")).size() > 0, "the schematic and wiring diagrams");
+        driver.switchTo().defaultContent();
+    }
+
+    static void waitAnswers(WebElement root, int n) {
+        waiting().until(d -> String.valueOf(n).equals(root.getAttribute("data-answers")));
     }
 
     @Test
