@@ -306,4 +306,29 @@ class StationServerTest {
             assertTrue(ev.contains("\"kind\":\"rig\"") && ev.contains("nothing was recorded"), ev);
         }
     }
+
+    @Test
+    void aProbeSessionTakesTypedReadingsUndoAndRefusesNonsense() throws Exception {
+        String key = formKey(station);
+        assertEquals(400, post(base(station) + "/leads/probes", "labels=1&" + Access.FORM_KEY_FIELD + "=" + key)
+                .statusCode());
+        HttpResponse<String> start = post(base(station) + "/leads/probes", "labels=red,blue,green,black&"
+                + Access.FORM_KEY_FIELD + "=" + key);
+        assertEquals(303, start.statusCode(), start.body());
+        String path = start.headers().firstValue("Location").orElseThrow();
+        String id = path.substring(path.lastIndexOf('/') + 1);
+        assertTrue(get(base(station) + path).body().contains("class=\"big pair\">red \u2013 blue"));
+        String answer = base(station) + "/api/leads/probes/" + id + "/answer";
+        HttpResponse<String> nonsense = post(answer, "value=about+two", Access.FORM_KEY_HEADER, key);
+        assertEquals(400, nonsense.statusCode());
+        assertTrue(nonsense.body().contains("expected ohms"), nonsense.body());
+        assertEquals(400, post(answer, "value=-3", Access.FORM_KEY_HEADER, key).statusCode());
+        assertTrue(post(answer, "value=OL", Access.FORM_KEY_HEADER, key).body().contains("OL (open)"));
+        assertTrue(post(answer, "value=u", Access.FORM_KEY_HEADER, key).body().contains("withdrew red"));
+        assertEquals(400, get(base(station) + path + "/report.html").statusCode());
+        String stopped = post(answer, "value=stop", Access.FORM_KEY_HEADER, key).body();
+        assertTrue(stopped.contains("stopped before the answer was certain"), stopped);
+        assertEquals(200, get(base(station) + path + "/report.html").statusCode());
+        assertEquals(400, post(answer, "value=2", Access.FORM_KEY_HEADER, key).statusCode());
+    }
 }
