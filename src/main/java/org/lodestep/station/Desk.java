@@ -87,6 +87,8 @@ final class Desk {
                 + "</code>.</p><ul class=\"cards\">"
                 + "<li><a href=\"/leads\"><strong>Leads</strong></a><span>Guided probe: the next lead pair in large "
                 + "type, type the meter's reading, Enter; then the windings, findings and wiring guide.</span></li>"
+                + "<li><a href=\"/motor\"><strong>Motor</strong></a><span>Upload step responses and a back-EMF capture:"
+                + " the motor card.</span></li>"
                 + "<li><a href=\"/qa\"><strong>QA station</strong></a><span>Incoming inspection: pick a part spec, scan "
                 + "serial numbers, read the verdict, print a certificate.</span></li>"
                 + "<li><a href=\"/records\"><strong>Records</strong></a><span>Lot summaries: yield, capability, control "

@@ -17,7 +17,7 @@ final class Layout {
     private record Nav(String path, String label) {
     }
 
-    private static final List<Nav> NAV = List.of(new Nav("/leads", "Leads"), new Nav("/qa", "QA station"), new Nav("/records", "Records"),
+    private static final List<Nav> NAV = List.of(new Nav("/leads", "Leads"), new Nav("/motor", "Motor"), new Nav("/qa", "QA station"), new Nav("/records", "Records"),
             new Nav("/sweep", "Sweep"));
 
     static String esc(String s) {

@@ -11,7 +11,7 @@ import io.javalin.config.SizeUnit;
 /**
  * The bench station: a browser front end served by Lodestep itself on the bench computer. It calls the same
  * workflows as the command line ({@code org.lodestep.workflow}) and renders through {@code report}; it computes
- * nothing. Pages: Leads, the QA station, Records, Sweep.
+ * nothing. Pages: Leads, Motor, the QA station, Records, Sweep.
  *
  * <p>Security: it listens on loopback unless told otherwise; on any other address every request must carry the
  * access token ({@link Access}); state-changing requests are refused from other sites; uploads are size-limited.
@@ -78,6 +78,7 @@ public final class Station implements AutoCloseable {
             config.routes.before(access::check);
             desk.routes(config.routes);
             new LeadsPages(desk).routes(config.routes);
+            new MotorPages(desk).routes(config.routes);
             new QaPages(desk).routes(config.routes);
             new RecordsPages(desk).routes(config.routes);
             new SweepPages(desk).routes(config.routes);

@@ -182,7 +182,27 @@
     });
   }
 
+  function motor() {
+    var form = document.getElementById('motor-form');
+    var area = document.getElementById('motor-progress');
+    var result = document.getElementById('motor-result');
+    form.addEventListener('submit', function (ev) {
+      ev.preventDefault();
+      result.innerHTML = '';
+      delete result.dataset.done;
+      post('/api/motor', new FormData(form)).then(function (j) {
+        follow(j.task, area, function (e) {
+          if (e.type === 'done') { result.innerHTML = e.html; result.dataset.done = 'true'; }
+        });
+      }).catch(function (err) {
+        area.hidden = false; area.classList.add('failed');
+        area.querySelector('.progress-text').textContent = '\u2716 ' + err.message;
+      });
+    });
+  }
+
   document.addEventListener('DOMContentLoaded', function () {
+    if (document.getElementById('motor-form')) { motor(); }
     var probeRoot = document.querySelector('[data-page="leads-probe"]');
     if (probeRoot) { leadsProbe(probeRoot); }
     var root = document.querySelector('[data-page="qa-run"]');

@@ -10,7 +10,9 @@ import java.net.http.HttpClient;
 import java.net.http.HttpRequest;
 import java.net.http.HttpResponse;
 import java.nio.charset.StandardCharsets;
+import java.nio.file.Files;
 import java.nio.file.Path;
+import java.util.List;
 import java.util.regex.Matcher;
 import java.util.regex.Pattern;
 
@@ -82,25 +84,32 @@ class StationServerTest {
 
     static HttpResponse<String> multipart(String url, String key, String fieldName, String fileName, byte[] content,
                                           String... fields) throws Exception {
+        return multipart(url, key, List.<String[]>of(new String[] {fieldName, fileName}), List.of(content), fields);
+    }
+
+    /** A multipart post of several files: each {field, file name} with its content. */
+    static HttpResponse<String> multipart(String url, String key, List<String[]> files, List<byte[]> contents,
+                                          String... fields) throws Exception {
         String boundary = "----lodestep" + System.nanoTime();
         StringBuilder sb = new StringBuilder();
         for (int i = 0; i < fields.length; i += 2) {
             sb.append("--").append(boundary).append("\r\nContent-Disposition: form-data; name=\"").append(fields[i])
                     .append("\"\r\n\r\n").append(fields[i + 1]).append("\r\n");
         }
-        sb.append("--").append(boundary).append("\r\nContent-Disposition: form-data; name=\"").append(fieldName)
-                .append("\"; filename=\"")
-                .append(fileName).append("\"\r\nContent-Type: application/octet-stream\r\n\r\n");
-        byte[] head = sb.toString().getBytes(StandardCharsets.UTF_8);
-        byte[] tail = ("\r\n--" + boundary + "--\r\n").getBytes(StandardCharsets.UTF_8);
-        byte[] body = new byte[head.length + content.length + tail.length];
-        System.arraycopy(head, 0, body, 0, head.length);
-        System.arraycopy(content, 0, body, head.length, content.length);
-        System.arraycopy(tail, 0, body, head.length + content.length, tail.length);
+        java.io.ByteArrayOutputStream body = new java.io.ByteArrayOutputStream();
+        body.write(sb.toString().getBytes(StandardCharsets.UTF_8));
+        for (int i = 0; i < files.size(); i++) {
+            body.write(("--" + boundary + "\r\nContent-Disposition: form-data; name=\"" + files.get(i)[0]
+                    + "\"; filename=\"" + files.get(i)[1] + "\"\r\nContent-Type: application/octet-stream\r\n\r\n")
+                    .getBytes(StandardCharsets.UTF_8));
+            body.write(contents.get(i));
+            body.write("\r\n".getBytes(StandardCharsets.UTF_8));
+        }
+        body.write(("--" + boundary + "--\r\n").getBytes(StandardCharsets.UTF_8));
         return HTTP.send(HttpRequest.newBuilder(URI.create(url))
                 .header("Content-Type", "multipart/form-data; boundary=" + boundary)
                 .header(Access.FORM_KEY_HEADER, key)
-                .POST(HttpRequest.BodyPublishers.ofByteArray(body)).build(), HttpResponse.BodyHandlers.ofString());
+                .POST(HttpRequest.BodyPublishers.ofByteArray(body.toByteArray())).build(), HttpResponse.BodyHandlers.ofString());
     }
 
     /** Reads a task's events until it ends; returns them all. */
@@ -330,5 +339,30 @@ class StationServerTest {
         assertTrue(stopped.contains("stopped before the answer was certain"), stopped);
         assertEquals(200, get(base(station) + path + "/report.html").statusCode());
         assertEquals(400, post(answer, "value=2", Access.FORM_KEY_HEADER, key).statusCode());
+    }
+
+    @Test
+    void uploadedStepResponsesAndBackEmfGiveTheMotorCard() throws Exception {
+        String key = formKey(station);
+        Path m = Path.of("sample-captures", "motor");
+        List<String[]> files = List.of(new String[] {"step_response", "step-1-7.csv"},
+                new String[] {"step_response", "step-2-5.csv"}, new String[] {"step_response", "step-3-8.csv"},
+                new String[] {"step_response", "step-4-6.csv"}, new String[] {"back_emf", "back-emf.csv"});
+        List<byte[]> contents = new java.util.ArrayList<>();
+        for (String[] f : files) {
+            contents.add(Files.readAllBytes(m.resolve(f[1])));
+        }
+        HttpResponse<String> r = multipart(base(station) + "/api/motor", key, files, contents, "supply_v", "24",
+                "phase_current_a", "1.2");
+        assertEquals(200, r.statusCode(), r.body());
+        String ev = events(station, field(r.body(), "task"));
+        assertTrue(ev.contains("\"type\":\"done\"") && ev.contains("Motor card"), ev);
+        HttpResponse<String> bad = multipart(base(station) + "/api/motor", key, List.<String[]>of(new String[] {
+                "step_response", "coil-a.csv"}), List.of("time_s,current_a\n0,x\n".getBytes(StandardCharsets.UTF_8)));
+        String badEv = events(station, field(bad.body(), "task"));
+        assertTrue(badEv.contains("\"kind\":\"input\"") && badEv.contains("coil-a.csv"), badEv);
+        HttpResponse<String> none = multipart(base(station) + "/api/motor", key, List.<String[]>of(), List.<byte[]>of());
+        assertEquals(400, none.statusCode());
+        assertTrue(none.body().contains("nothing to identify"), none.body());
     }
 }
