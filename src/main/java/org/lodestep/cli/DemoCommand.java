@@ -66,7 +66,7 @@ final class DemoCommand implements Callable<Integer> {
             out.println("HTML reports (open in any browser):");
             reports.forEach(p -> out.println("  " + p));
         }
-        out.println("Bench station in a browser (QA desk, records, sweeps): ./lodestep station --specs "
+        out.println("Bench station in a browser (leads probe, motor card, QA desk, records, sweeps): ./lodestep station --specs "
                 + captures.resolve("qa") + " --captures " + captures.resolve("qa"));
         out.flush();
         return worst;

@@ -12,8 +12,9 @@ import picocli.CommandLine.Option;
 
 /** {@code lodestep station}: serves the bench station to a browser until interrupted. */
 @Command(name = "station", mixinStandardHelpOptions = true,
-        description = {"Serve the bench station: a browser interface for the QA desk (scan serials, big verdicts, "
-                + "certificates), the records (lot yield, capability, control charts, export) and rig sweeps.",
+        description = {"Serve the bench station: a browser interface for the guided lead probe, the motor card from "
+                + "uploaded captures, the QA desk (scan serials, big verdicts, certificates), the records (lot yield, "
+                + "capability, control charts, export) and rig sweeps.",
                 "Listens on 127.0.0.1 unless --listen names another address, which needs the access token printed "
                         + "at start (or $LODESTEP_STATION_TOKEN). Stop with Ctrl-C."},
         footer = {"%nExamples:",

@@ -33,7 +33,8 @@ import org.openqa.selenium.support.ui.WebDriverWait;
 
 /**
  * The bench station in a real browser (Debian's Chromium through its chromium-driver), one shared session: a probe
- * session typed through to the wiring, a QA lot of five scanned serial numbers with one failure, the records of that lot, a live sweep of the virtual rig to its bands.
+ * session typed through to the wiring, a QA lot of five scanned serial numbers with one failure, the records of that
+ * lot, a live sweep of the virtual rig to its bands, the motor card from uploaded captures.
  * Screenshots of each page at desktop and phone width go to {@code target/station-screenshots}; each is checked for
  * no horizontal scrolling and, on the QA station, for the verdict in view without scrolling. Without the browser or
  * driver the tests skip with a message; with {@code CI=true} they fail.
@@ -170,6 +171,22 @@ class StationBrowserTest {
 
     static void waitAnswers(WebElement root, int n) {
         waiting().until(d -> String.valueOf(n).equals(root.getAttribute("data-answers")));
+    }
+
+    @Test
+    @Order(4)
+    void uploadedCapturesGiveTheMotorCard() throws Exception {
+        driver.get(base + "/motor");
+        Path m = Path.of("sample-captures", "motor").toAbsolutePath();
+        driver.findElement(By.id("step_response")).sendKeys(String.join("\n", m.resolve("step-1-7.csv").toString(),
+                m.resolve("step-2-5.csv").toString(), m.resolve("step-3-8.csv").toString(),
+                m.resolve("step-4-6.csv").toString()));
+        driver.findElement(By.id("back_emf")).sendKeys(m.resolve("back-emf.csv").toString());
+        driver.findElement(By.name("supply_v")).sendKeys("24");
+        driver.findElement(By.name("phase_current_a")).sendKeys("1.2", Keys.ENTER);
+        waiting().until(d -> d.findElement(By.id("motor-result")).getAttribute("data-done") != null);
+        assertTrue(driver.findElement(By.id("motor-result")).getText().contains("Motor card"));
+        shots("motor", null);
     }
 
     @Test
