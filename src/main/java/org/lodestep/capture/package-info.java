@@ -7,6 +7,7 @@
  * ({@link org.lodestep.capture.CaptureReader}) as a {@link org.lodestep.sample.SampleStream};
  * {@link org.lodestep.sample.ArraySampleStream} serves arrays already in memory. Rig captures are written by
  * {@link org.lodestep.capture.CaptureWriter}: a canonical CSV and a JSON {@link org.lodestep.capture.CaptureSidecar},
- * whole or not at all.
+ * whole or not at all. Our own JSON inputs are read by {@link org.lodestep.capture.MotorCardReader} (a motor card) and
+ * {@link org.lodestep.capture.AvoidListReader} (an avoid-list), with one-line errors naming file and line.
  */
 package org.lodestep.capture;

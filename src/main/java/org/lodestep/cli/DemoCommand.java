@@ -49,6 +49,7 @@ final class DemoCommand implements Callable<Integer> {
                 new RigDemo(),
                 new MotorDemo(),
                 new ResonanceDemo(),
+                new DriveDemo(),
                 new QaDemo());
         int worst = ExitCode.OK;
         for (Section s : sections) {

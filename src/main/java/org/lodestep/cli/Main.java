@@ -28,6 +28,7 @@ import picocli.CommandLine.Option;
             ResonanceCommand.class,
             QaCommand.class,
             RigCommand.class,
+            DriveCommand.class,
             StationCommand.class,
             CommandLine.HelpCommand.class
         },

@@ -74,9 +74,16 @@ final class ResonanceDemo implements DemoCommand.Section {
         StringWriter rig = new StringWriter();
         PrintWriter rw = new PrintWriter(rig);
         out.println("$ lodestep resonance sweep " + gantry);
-        worst = Math.max(worst, Main.run(rw, err, "resonance", "sweep", gantry.toString()));
+        int lost = Main.run(rw, err, "resonance", "sweep", gantry.toString());
         rw.flush();
         printUntilRecommendations(rig.toString(), out);
+        if (lost == ExitCode.FINDING) {
+            // the gantry axis is lightly damped (ζ = 0.05): full stepping slips poles below f_n, as it should
+            out.println("(exit code 3 from `resonance sweep`: the lightly damped gantry axis lost synchronism at full"
+                    + " step, expected here.)");
+        } else {
+            worst = Math.max(worst, lost);
+        }
         out.println();
         out.println("Avoid-list for the controller written to " + avoid);
         return worst;

@@ -9,6 +9,7 @@ import org.lodestep.report.ResonanceHtml;
 import org.lodestep.report.ResonanceJson;
 import org.lodestep.report.ResonanceText;
 import org.lodestep.resonance.BandSettings;
+import org.lodestep.resonance.ResponseChannel;
 import org.lodestep.sample.SweepShape;
 import org.lodestep.workflow.Progress;
 import org.lodestep.workflow.ResonanceSweep;
@@ -26,6 +27,9 @@ import picocli.CommandLine.Parameters;
                 + " (CSV, WAV or rig capture) taken during a step-rate sweep.",
             "The step rate comes from a recorded step-pulse channel when --pulse-channel is given, else from the"
                 + " options --sweep/--start/--end/--duration, else from the file's '# sweep=' metadata.",
+            "A channel in amperes is read as a phase current (constant-voltage drive unless --drive chopper): bands"
+                + " then come from the current's harmonics, weaker evidence than an accelerometer's.",
+            "The first line says whether the rotor kept synchronism; exit code 3 when it lost it.",
             "Rates are full steps per second unless a name says pulses."},
         footerHeading = "%nExamples:%n",
         footer = {
@@ -119,6 +123,11 @@ final class ResonanceSweepCommand implements Callable<Integer> {
             description = "Widen each avoided band by this fraction on both sides (default: ${DEFAULT-VALUE}).")
     double margin;
 
+    @Option(names = "--drive", paramLabel = "DRIVE",
+            description = "For a phase-current channel (unit A): the drive it was recorded under, voltage"
+                    + " (constant-voltage, the default) or chopper (current-regulating: bands are not reported).")
+    String drive;
+
     @Option(names = "--avoid-list", paramLabel = "FILE.json", description = "Also write the avoid-list as JSON.")
     Path avoidListFile;
 
@@ -160,7 +169,8 @@ final class ResonanceSweepCommand implements Callable<Integer> {
             }
         }
         out.flush();
-        return ExitCode.OK;
+        // a rotor that slipped lost position: an error-severity finding
+        return r.sweep().stall().lostSynchronism() ? ExitCode.FINDING : ExitCode.OK;
     }
 
     private ResonanceSweep.Settings settings() {
@@ -169,6 +179,18 @@ final class ResonanceSweepCommand implements Callable<Integer> {
                 hysteresisDb, d.baselineHalfWidth(), d.baselineQuantile(), mergeGap, d.minPoints(), edgeDropDb);
         return new ResonanceSweep.Settings(channel, pulseChannel, shape, start, end, duration, microsteps, rotorTeeth,
                 travelMmPerRev == null ? Double.NaN : travelMmPerRev, naturalHz == null ? Double.NaN : naturalHz,
-                dampingRatio == null ? Double.NaN : dampingRatio, bands, segment, window, crossingPeriods, margin);
+                dampingRatio == null ? Double.NaN : dampingRatio, bands, segment, window, crossingPeriods, margin,
+                currentDrive());
+    }
+
+    private ResponseChannel currentDrive() {
+        if (drive == null) {
+            return null;
+        }
+        return switch (drive.toLowerCase(java.util.Locale.ROOT)) {
+            case "voltage" -> ResponseChannel.CURRENT_CONSTANT_VOLTAGE;
+            case "chopper" -> ResponseChannel.CURRENT_CHOPPER;
+            default -> throw new IllegalArgumentException("--drive must be voltage or chopper, got '" + drive + "'");
+        };
     }
 }

@@ -6,6 +6,7 @@ import java.util.concurrent.Callable;
 
 import org.lodestep.report.Json;
 import org.lodestep.report.RigText;
+import org.lodestep.rig.DriveMode;
 import org.lodestep.rig.SweepPlan;
 import org.lodestep.workflow.RigCaptureFile;
 import org.lodestep.workflow.RigSweepCapture;
@@ -59,6 +60,16 @@ final class RigCaptureCommand implements Callable<Integer> {
             description = "Capture file to write (must not exist); the sidecar goes beside it as .json.")
     Path out;
 
+    @Option(names = "--drive", paramLabel = "DRIVE",
+            description = "Drive the motor from the rig's own drive and record both phase currents: voltage"
+                    + " (constant-voltage H-bridge, full or half steps) or chopper (current-regulating).")
+    String drive;
+
+    @Option(names = "--supply-v", paramLabel = "V", defaultValue = "0",
+            description = "Supply of the rig's drive, V (default: rated current × phase resistance for voltage,"
+                    + " the rig's chopper supply otherwise).")
+    double supplyV;
+
     @Option(names = "--quiet", description = "No progress bar (it is also off when stderr is not a terminal).")
     boolean quiet;
 
@@ -75,8 +86,15 @@ final class RigCaptureCommand implements Callable<Integer> {
                     + "... --out FILE)");
         }
         RigSweepCapture.Settings settings = WorkflowCall.run(() -> {
+            DriveMode mode = drive == null ? null : switch (drive.toLowerCase(java.util.Locale.ROOT)) {
+                case "voltage" -> DriveMode.CONSTANT_VOLTAGE;
+                case "chopper" -> DriveMode.CHOPPER;
+                default -> throw new IllegalArgumentException("--drive must be voltage or chopper, got '" + drive
+                        + "'");
+            };
             RigSweepCapture.Settings s = new RigSweepCapture.Settings(address,
-                    new SweepPlan(from, to, seconds, microsteps, rateHz), out, VersionProvider.version());
+                    new SweepPlan(from, to, seconds, microsteps, rateHz), out, VersionProvider.version(), mode,
+                    supplyV);
             RigCaptureFile.checkTarget(out); // before the caution: nothing moves for a file that cannot be written
             return s;
         });

@@ -20,7 +20,9 @@ import org.lodestep.resonance.RateUnits;
 import org.lodestep.resonance.ResonanceBand;
 import org.lodestep.resonance.ResponsePoint;
 import org.lodestep.resonance.RingDownResult;
+import org.lodestep.resonance.Stall;
 import org.lodestep.resonance.SweepResult;
+import org.lodestep.resonance.WatchPoint;
 import org.lodestep.signal.Spectrogram;
 import org.lodestep.signal.SpectrumScaling;
 
@@ -54,14 +56,29 @@ public final class ResonanceHtml {
                         : String.format(Locale.ROOT, "%.1f Hz (%s)", r.naturalFrequencyHz(), r.naturalFrequencySource()))
                 .meta("Analysed", String.format(Locale.ROOT, "%.1f s at %s Hz, %d segments", r.durationS(),
                         num(h.sampleRateHz()), r.segments()));
-        if (r.bands().isEmpty()) {
+        Stall stall = r.stall();
+        if (stall.lostSynchronism()) {
+            // the one finding that means lost position: it stands out over everything the bands say
+            b.verdict(Status.FAIL, "Lost synchronism from " + rateText(u, stall.firstSlipFullStepsPerS()),
+                    (Double.isNaN(stall.relockFullStepsPerS()) ? "It did not re-lock before the end of the sweep. "
+                            : "Re-locked from " + rateText(u, stall.relockFullStepsPerS()) + ". ")
+                            + stall.advice() + " Evidence: " + stall.evidence() + "." + bandsLine(r, u, avoid));
+        } else if (r.responseChannel() == org.lodestep.resonance.ResponseChannel.CURRENT_CHOPPER) {
+            b.verdict(Status.INFO, "No bands from this capture", r.evidenceNote());
+        } else if (r.bands().isEmpty()) {
             b.verdict(Status.PASS, "No resonance found in the swept range",
-                    "No band rises over the baseline of the response.");
+                    "No band rises over the baseline of the response; the rotor kept synchronism."
+                            + watchLine(r, u));
         } else {
+            // finding bands is the normal outcome of a sweep: say what was found, not a failure
             ResonanceBand worst = r.strongestBand();
-            b.verdict(avoid.ranges().isEmpty() ? Status.WARN : Status.FAIL,
-                    r.bands().size() + (r.bands().size() == 1 ? " resonance band" : " resonance bands") + " found",
-                    "Strongest at " + rateText(u, worst.peakFullStepsPerS()) + ".");
+            b.verdict(Status.INFO, r.bands().size() + (r.bands().size() == 1 ? " resonance band" : " resonance bands")
+                    + " found; synchronism kept",
+                    "Strongest at " + rateText(u, worst.peakFullStepsPerS()) + "." + bandsLine(r, u, avoid)
+                            + watchLine(r, u));
+        }
+        if (!r.evidenceNote().isEmpty()) {
+            b.meta("Evidence", r.evidenceNote());
         }
         b.safety(SafetyNote.MOVING_AXIS, SafetyNote.HOT_MOTOR);
 
@@ -84,7 +101,7 @@ public final class ResonanceHtml {
                     "Peak level", "Over baseline", "Vibrates at");
             int i = 1;
             for (ResonanceBand band : r.bands()) {
-                t.row(band.bandClass() == BandClass.LOW_SPEED_RESONANCE ? Status.FAIL : Status.WARN,
+                t.row(Status.WARN,
                         Cell.text("R" + i++), Cell.status(status(band.bandClass()), kind(band)),
                         Cell.number(range(band.startFullStepsPerS(), band.endFullStepsPerS())),
                         Cell.number(range(u.pulsesPerS(band.startFullStepsPerS()), u.pulsesPerS(band.endFullStepsPerS()))),
@@ -239,9 +256,21 @@ public final class ResonanceHtml {
                 "The measured response (points, or a thin line when dense), the fitted decay envelope and the fitted"
                         + " damped oscillation, from the fitted stretch on.");
         Map<String, String> facts = new LinkedHashMap<>();
-        facts.put("Natural frequency", String.format(Locale.ROOT, "%.2f Hz", r.naturalFrequencyHz()));
+        boolean bb = !r.backbone().isEmpty();
+        facts.put(bb ? "Natural frequency (small-signal)" : "Natural frequency", bb
+                ? String.format(Locale.ROOT, "%.2f Hz (\u00B1 %.2f)", r.naturalFrequencyHz(), r.naturalFrequencyErrorHz())
+                : String.format(Locale.ROOT, "%.2f Hz", r.naturalFrequencyHz()));
         facts.put("Damped frequency", String.format(Locale.ROOT, "%.2f Hz", r.dampedFrequencyHz()));
-        facts.put("Damping ratio \u03B6", String.format(Locale.ROOT, "%.4f", r.dampingRatio()));
+        facts.put(bb ? "Damping ratio \u03B6 (small-signal)" : "Damping ratio \u03B6", bb
+                ? String.format(Locale.ROOT, "%.4f \u00B1 %.4f", r.dampingRatio(), r.dampingRatioError())
+                : String.format(Locale.ROOT, "%.4f", r.dampingRatio()));
+        if (bb) {
+            facts.put("Large-swing frequency (first cycle)", String.format(Locale.ROOT, "%.2f Hz",
+                    r.largeSwingFrequencyHz()));
+            facts.put("One sinusoid over the whole ring", String.format(Locale.ROOT, "%.2f Hz, R\u00B2 %.3f",
+                    r.wholeRingFrequencyHz(), r.wholeRingRSquared()));
+            facts.put("Cycles measured", Integer.toString(r.backbone().size()));
+        }
         facts.put("Quality factor Q", String.format(Locale.ROOT, "%.1f", r.qualityFactor()));
         facts.put("Decay rate \u03C3", String.format(Locale.ROOT, "%.2f 1/s", r.decayRatePerS()));
         facts.put("Fit quality R\u00B2", String.format(Locale.ROOT, "%.4f", r.rSquared()));
@@ -250,10 +279,35 @@ public final class ResonanceHtml {
         return b.build();
     }
 
+    /** The avoid-list in one line, or "". */
+    private static String bandsLine(SweepResult r, RateUnits u, AvoidList avoid) {
+        if (avoid.ranges().isEmpty()) {
+            return "";
+        }
+        StringBuilder sb = new StringBuilder(" Avoid or cross quickly:");
+        for (AvoidRange a : avoid.ranges()) {
+            sb.append(sb.charAt(sb.length() - 1) == ':' ? " " : "; ")
+                    .append(range(a.fromFullStepsPerS(), a.toFullStepsPerS()));
+        }
+        return sb.append(" full steps/s.").toString();
+    }
+
+    /** Near-threshold bumps in one line, or "". */
+    private static String watchLine(SweepResult r, RateUnits u) {
+        if (r.watch().isEmpty()) {
+            return "";
+        }
+        StringBuilder sb = new StringBuilder(" Watch (under the threshold):");
+        for (WatchPoint w : r.watch()) {
+            sb.append(sb.charAt(sb.length() - 1) == ':' ? " " : "; ").append(rateText(u, w.rateFullStepsPerS()))
+                    .append(String.format(Locale.ROOT, " (f\u2099/%d, %.1f dB)", w.subharmonic(), w.excessDb()));
+        }
+        return sb.append('.').toString();
+    }
+
     private static Status status(BandClass c) {
         return switch (c) {
-            case LOW_SPEED_RESONANCE -> Status.FAIL;
-            case MID_BAND_INSTABILITY -> Status.WARN;
+            case LOW_SPEED_RESONANCE, PARAMETRIC_RESONANCE, MID_BAND_INSTABILITY -> Status.WARN;
             case UNCLASSIFIED -> Status.INFO;
         };
     }
@@ -262,6 +316,8 @@ public final class ResonanceHtml {
         return switch (b.bandClass()) {
             case LOW_SPEED_RESONANCE -> b.subharmonic() > 1 ? "low-speed resonance (f\u2099/" + b.subharmonic() + ")"
                     : "low-speed resonance";
+            case PARAMETRIC_RESONANCE -> b.subharmonic() > 1 ? "parametric resonance (2f\u2099/" + b.subharmonic()
+                    + ")" : "parametric resonance (2f\u2099)";
             case MID_BAND_INSTABILITY -> "mid-band instability";
             case UNCLASSIFIED -> "unclassified";
         };

@@ -12,7 +12,10 @@ import org.lodestep.resonance.Prediction;
 import org.lodestep.resonance.RateUnits;
 import org.lodestep.resonance.ResonanceBand;
 import org.lodestep.resonance.ResponsePoint;
+import org.lodestep.resonance.BackbonePoint;
 import org.lodestep.resonance.RingDownResult;
+import org.lodestep.resonance.Stall;
+import org.lodestep.resonance.WatchPoint;
 import org.lodestep.resonance.SweepResult;
 
 /**
@@ -26,9 +29,12 @@ public final class ResonanceJson {
     public static String sweep(ResonanceText.SweepHeader h, SweepResult r, RateUnits u, AvoidList avoid,
                                boolean withResponse) {
         Map<String, Object> m = new LinkedHashMap<>();
+        m.put("stall", stall(r.stall(), u));
         m.put("source", h.source());
         m.put("channel", h.channel());
         m.put("unit", h.unit());
+        m.put("response_channel", r.responseChannel().name().toLowerCase(Locale.ROOT));
+        m.put("evidence_note", r.evidenceNote().isEmpty() ? null : r.evidenceNote());
         m.put("sample_rate_hz", h.sampleRateHz());
         m.put("duration_s", r.durationS());
         m.put("rate_source", r.rateSource());
@@ -65,6 +71,18 @@ public final class ResonanceJson {
             bands.add(j);
         }
         m.put("bands", bands);
+        List<Map<String, Object>> watch = new ArrayList<>();
+        for (WatchPoint w : r.watch()) {
+            Map<String, Object> j = new LinkedHashMap<>();
+            j.put("subharmonic", w.subharmonic());
+            j.put("rate_full_steps_per_s", w.rateFullStepsPerS());
+            j.put("rate_pulses_per_s", u.pulsesPerS(w.rateFullStepsPerS()));
+            j.put("rate_rpm", u.rpm(w.rateFullStepsPerS()));
+            j.put("excess_db", w.excessDb());
+            j.put("level_db", w.levelDb());
+            watch.add(j);
+        }
+        m.put("watch", watch);
         m.put("avoid_list", avoidMap(avoid));
         if (withResponse) {
             List<Map<String, Object>> pts = new ArrayList<>();
@@ -130,6 +148,22 @@ public final class ResonanceJson {
         return m;
     }
 
+    private static Map<String, Object> stall(Stall s, RateUnits u) {
+        Map<String, Object> j = new LinkedHashMap<>();
+        j.put("lost_synchronism", s.lostSynchronism());
+        j.put("first_slip_full_steps_per_s", s.firstSlipFullStepsPerS());
+        j.put("relock_full_steps_per_s", s.relockFullStepsPerS());
+        j.put("first_slip_pulses_per_s", u.pulsesPerS(s.firstSlipFullStepsPerS()));
+        j.put("first_slip_rpm", u.rpm(s.firstSlipFullStepsPerS()));
+        j.put("relock_pulses_per_s", u.pulsesPerS(s.relockFullStepsPerS()));
+        j.put("relock_rpm", u.rpm(s.relockFullStepsPerS()));
+        j.put("steps_lost", s.stepsLost());
+        j.put("lowest_synchronous_share", s.lowestSynchronousShare());
+        j.put("evidence", s.evidence());
+        j.put("advice", s.advice().isEmpty() ? null : s.advice());
+        return j;
+    }
+
     public static String ringDown(String source, String channel, RingDownResult r) {
         Map<String, Object> m = new LinkedHashMap<>();
         m.put("source", source);
@@ -147,6 +181,21 @@ public final class ResonanceJson {
         m.put("fitted_duration_s", r.fittedDurationS());
         m.put("periods_fitted", r.periodsFitted());
         m.put("phase_rad", r.phaseRad());
+        m.put("natural_frequency_error_hz", r.naturalFrequencyErrorHz());
+        m.put("damping_ratio_error", r.dampingRatioError());
+        m.put("large_swing_frequency_hz", r.largeSwingFrequencyHz());
+        m.put("whole_ring_frequency_hz", r.wholeRingFrequencyHz());
+        m.put("whole_ring_r_squared", r.wholeRingRSquared());
+        List<Map<String, Object>> bb = new ArrayList<>();
+        for (BackbonePoint c : r.backbone()) {
+            Map<String, Object> j = new LinkedHashMap<>();
+            j.put("amplitude", c.amplitude());
+            j.put("frequency_hz", c.frequencyHz());
+            j.put("log_decrement", c.logDecrement());
+            j.put("start_time_s", c.startTimeS());
+            bb.add(j);
+        }
+        m.put("backbone", bb);
         return Json.write(m);
     }
 

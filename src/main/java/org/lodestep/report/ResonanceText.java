@@ -10,6 +10,8 @@ import org.lodestep.resonance.Prediction;
 import org.lodestep.resonance.RateUnits;
 import org.lodestep.resonance.ResonanceBand;
 import org.lodestep.resonance.RingDownResult;
+import org.lodestep.resonance.Stall;
+import org.lodestep.resonance.WatchPoint;
 import org.lodestep.resonance.SweepResult;
 
 /** Plain-text rendering of sweep, ring-down and prediction results, for a terminal; computes nothing. */
@@ -22,6 +24,7 @@ public final class ResonanceText {
     }
 
     public static void sweep(PrintWriter out, SweepHeader h, SweepResult r, RateUnits u, AvoidList avoid) {
+        stall(out, r.stall(), u);
         out.printf(Locale.ROOT, "Resonance sweep: %s, channel %s%s, %s Hz, %.1f s analysed%n", h.source(),
                 h.channel(), h.unit().isEmpty() ? "" : " (" + h.unit() + ")", num(h.sampleRateHz()), r.durationS());
         out.printf(Locale.ROOT, "Step rate: %s%n", h.rateLaw());
@@ -40,10 +43,15 @@ public final class ResonanceText {
                 num(r.response().get(r.response().size() - 1).rateFullStepsPerS()), r.segments(),
                 r.segmentsOutsideSweep() > 0 ? " (" + r.segmentsOutsideSweep() + " outside the sweep, skipped)" : "");
         out.println();
-        if (r.bands().isEmpty()) {
+        if (r.responseChannel() == org.lodestep.resonance.ResponseChannel.CURRENT_CHOPPER) {
+            out.println("No bands reported: a chopper's regulated current cannot support them (see Evidence below).");
+        } else if (r.bands().isEmpty()) {
             out.println("No band rises over the baseline: no resonance found in the swept range.");
         } else {
-            out.println("Bands (level: RMS vibration in the channel's unit; over: dB above the running baseline):");
+            out.println(r.responseChannel().isCurrent()
+                    ? "Bands from phase current (level: harmonic over fundamental; over: dB above the running"
+                    + " baseline; vib. Hz: implied by the harmonic):"
+                    : "Bands (level: RMS vibration in the channel's unit; over: dB above the running baseline):");
             out.printf(Locale.ROOT, "  %-3s %-26s %-19s %-19s %-15s %9s %9s %7s %9s%n", "#", "class", "full steps/s",
                     "pulses/s", "rpm", "peak", "level", "over", "vib. Hz");
             int i = 1;
@@ -63,10 +71,41 @@ public final class ResonanceText {
                 }
             }
         }
+        for (WatchPoint w : r.watch()) {
+            out.printf(Locale.ROOT, "Watch: %s full steps/s = %s pulses/s = %s rpm (f_n/%d): a bump %.1f dB over the"
+                    + " baseline, under the band threshold; not a band to avoid, but keep an eye on it.%n",
+                    num(w.rateFullStepsPerS()), num(u.pulsesPerS(w.rateFullStepsPerS())),
+                    num(u.rpm(w.rateFullStepsPerS())), w.subharmonic(), w.excessDb());
+        }
+        if (!r.evidenceNote().isEmpty()) {
+            out.println();
+            out.println("Evidence: " + r.evidenceNote());
+        }
         out.println();
         avoidList(out, avoid, u);
         out.println();
         safety(out);
+    }
+
+    /** The synchronism verdict: the first thing a sweep's text says. */
+    static void stall(PrintWriter out, Stall s, RateUnits u) {
+        if (!s.lostSynchronism()) {
+            out.println((s.evidence().startsWith("not judged") ? "Synchronism: " : "Synchronism: kept; ")
+                    + s.evidence() + ".");
+            return;
+        }
+        out.printf(Locale.ROOT, "WARNING: LOST SYNCHRONISM from %s full steps/s = %s pulses/s = %s rpm%s.%n",
+                num(s.firstSlipFullStepsPerS()), num(u.pulsesPerS(s.firstSlipFullStepsPerS())),
+                num(u.rpm(s.firstSlipFullStepsPerS())), Double.isNaN(s.relockFullStepsPerS())
+                        ? "; it did not re-lock before the end of the sweep"
+                        : String.format(Locale.ROOT, "; re-locked from %s full steps/s = %s pulses/s = %s rpm",
+                        num(s.relockFullStepsPerS()), num(u.pulsesPerS(s.relockFullStepsPerS())),
+                        num(u.rpm(s.relockFullStepsPerS()))));
+        out.println("  Evidence: " + s.evidence() + ".");
+        if (!Double.isNaN(s.stepsLost())) {
+            out.printf(Locale.ROOT, "  Steps lost: about %.0f full steps.%n", s.stepsLost());
+        }
+        out.println("  " + s.advice());
     }
 
     public static void avoidList(PrintWriter out, AvoidList a, RateUnits u) {
@@ -93,9 +132,23 @@ public final class ResonanceText {
 
     public static void ringDown(PrintWriter out, String source, String channel, RingDownResult r) {
         out.printf(Locale.ROOT, "Ring-down: %s, channel %s%n", source, channel);
-        out.printf(Locale.ROOT, "  natural frequency   %10.2f Hz%n", r.naturalFrequencyHz());
-        out.printf(Locale.ROOT, "  damped frequency    %10.2f Hz%n", r.dampedFrequencyHz());
-        out.printf(Locale.ROOT, "  damping ratio       %10.4f   (Q = %.1f)%n", r.dampingRatio(), r.qualityFactor());
+        boolean bb = !r.backbone().isEmpty();
+        out.printf(Locale.ROOT, "  natural frequency   %10.2f Hz%s%n", r.naturalFrequencyHz(), bb
+                ? String.format(Locale.ROOT, " ± %.2f  (small-signal, extrapolated to zero swing)",
+                r.naturalFrequencyErrorHz()) : "");
+        out.printf(Locale.ROOT, "  damped frequency    %10.2f Hz%s%n", r.dampedFrequencyHz(), "");
+        out.printf(Locale.ROOT, "  damping ratio       %10.4f%s   (Q = %.1f)%n", r.dampingRatio(), bb
+                ? String.format(Locale.ROOT, " ± %.4f", r.dampingRatioError()) : "", r.qualityFactor());
+        if (bb) {
+            out.printf(Locale.ROOT, "  large-swing freq.   %10.2f Hz   (first cycle; %d cycles measured; one sinusoid"
+                    + " over the whole ring would say %.2f Hz, R² %.3f)%n", r.largeSwingFrequencyHz(),
+                    r.backbone().size(), r.wholeRingFrequencyHz(), r.wholeRingRSquared());
+            out.println("  Backbone (cycle amplitude -> frequency): " + backbone(r));
+            out.println("  A large swing rings slower: the torque-angle curve is sinusoidal, so stiffness falls with"
+                    + " amplitude.");
+            out.println("  A microstepped sweep may resonate a little below this: at a full-step rest the detent adds"
+                    + " its stiffness, between full steps it partly cancels.");
+        }
         out.printf(Locale.ROOT, "  decay rate          %10.2f 1/s%n", r.decayRatePerS());
         out.printf(Locale.ROOT, "  fit quality R²      %10.4f   (RMS residual %s, %.1f periods from t = %.4f s)%n",
                 r.rSquared(), sig(r.rmsResidual()), r.periodsFitted(), r.startTimeS());
@@ -106,6 +159,19 @@ public final class ResonanceText {
         out.println("  Low-speed resonance is expected near full-step rates of f_n, f_n/2, f_n/3:");
         java.util.List<Double> risky = r.riskyRatesFullStepsPerS(3);
         out.printf(Locale.ROOT, "  %.1f, %.1f, %.1f full steps/s%n", risky.get(0), risky.get(1), risky.get(2));
+    }
+
+    /** Up to six cycles from the largest swing to the smallest, evenly spread. */
+    private static String backbone(RingDownResult r) {
+        java.util.List<org.lodestep.resonance.BackbonePoint> c = r.backbone();
+        StringBuilder b = new StringBuilder();
+        int shown = Math.min(6, c.size());
+        for (int i = 0; i < shown; i++) {
+            org.lodestep.resonance.BackbonePoint p = c.get(shown == 1 ? 0 : i * (c.size() - 1) / (shown - 1));
+            b.append(i == 0 ? "" : ", ").append(sig(p.amplitude())).append(" -> ")
+                    .append(String.format(Locale.ROOT, "%.2f Hz", p.frequencyHz()));
+        }
+        return b.toString();
     }
 
     public static void prediction(PrintWriter out, Prediction p, RateUnits u) {
@@ -143,6 +209,9 @@ public final class ResonanceText {
     static String className(ResonanceBand b) {
         if (b.bandClass() == BandClass.LOW_SPEED_RESONANCE) {
             return b.subharmonic() == 1 ? "low-speed resonance f_n" : "low-speed resonance f_n/" + b.subharmonic();
+        }
+        if (b.bandClass() == BandClass.PARAMETRIC_RESONANCE) {
+            return b.subharmonic() == 1 ? "parametric resonance 2f_n" : "parametric resonance 2f_n/" + b.subharmonic();
         }
         return b.bandClass() == BandClass.MID_BAND_INSTABILITY ? "mid-band instability" : "unclassified";
     }

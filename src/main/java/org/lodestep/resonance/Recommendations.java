@@ -12,7 +12,9 @@ import java.util.Locale;
  * resonance is excited by the discrete torque impulse of each full step, so microstepping, which splits that impulse
  * into smaller ones, weakens it, and so does damping; mid-band instability is an interaction of the rotor's
  * oscillation with the winding currents, which microstepping barely changes while mechanical damping (or a drive's
- * compensation) suppresses it. The widening margin is common practice (no published source).
+ * compensation) suppresses it. A parametric resonance is driven by the detent's stiffness modulation at the step
+ * rate (A. H. Nayfeh, D. T. Mook, Nonlinear Oscillations, Wiley 1979, ch. 5; from memory), which microstepping
+ * does not remove while damping raises its threshold. The widening margin is common practice (no published source).
  */
 public final class Recommendations {
     /** Damping ratio below which a resonance is called lightly damped: common practice (no published source). */
@@ -72,6 +74,11 @@ public final class Recommendations {
                 return (b.subharmonic() == 1 ? "Low-speed resonance at the natural frequency"
                         : "Low-speed resonance at 1/" + b.subharmonic() + " of the natural frequency")
                         + ": do not dwell here; finer microstepping and more damping both weaken it.";
+            case PARAMETRIC_RESONANCE:
+                return "Parametric resonance (vibration at the natural frequency, step rate near "
+                        + (b.subharmonic() == 1 ? "2" : "2/" + b.subharmonic()) + " × it): the detent modulates"
+                        + " the stiffness; more damping helps, finer microstepping does not remove the detent"
+                        + " modulation; cross it quickly.";
             case MID_BAND_INSTABILITY:
                 return "Mid-band instability: accelerate through it; more load damping or a drive's mid-band"
                         + " compensation helps, finer microstepping barely does.";

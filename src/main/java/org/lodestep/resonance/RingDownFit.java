@@ -20,6 +20,12 @@ import org.apache.commons.math3.util.Pair;
  * fit starts at the first peak of the free oscillation (after a pre-trigger stretch, and for a step response after
  * the first crossing of the settled value, where the rotor is released from the step) and ends where the oscillation
  * has decayed into the noise.
+ *
+ * <p>A hybrid stepper's ring-down is not one sinusoid: its restoring torque is sinusoidal in rotor angle, so the
+ * first large swings ring slower than the small oscillation they decay into. The ring is therefore first measured
+ * cycle by cycle ({@link RingDownBackbone}); the reported natural frequency and damping ratio are the small-signal
+ * values extrapolated to zero amplitude, and the damped sinusoid is fitted to the settled tail (swings at most half
+ * the largest), where the model holds.
  */
 public final class RingDownFit {
     /** The fit stops where the envelope falls below this fraction of the first peak. */
@@ -83,6 +89,55 @@ public final class RingDownFit {
                 break;
             }
         }
+        // Cycle by cycle first: the backbone, and where the small swings (the settled tail) begin.
+        double noise = tailNoise(x, settled);
+        RingDownBackbone.Result bb = RingDownBackbone.measure(x, start, settled, noise, sampleRateHz, startTimeS);
+        int tail = start;
+        if (bb != null && bb.firstTailCycle() > 0) {
+            int at = (int) Math.round((bb.cycles().get(bb.firstTailCycle()).startTimeS() - startTimeS) * sampleRateHz);
+            // the tail's fit starts at the extremum of that cycle's first half-wave
+            int halfEnd = nextCrossing(x, Math.min(n - 2, at + 1), settled);
+            int best = at;
+            for (int i = at; i < Math.min(halfEnd, n); i++) {
+                if (Math.abs(x[i] - settled) > Math.abs(x[best] - settled)) {
+                    best = i;
+                }
+            }
+            if (end - best > 16) {
+                tail = best;
+            }
+        }
+        RingDownResult whole = fitFrom(x, start, end, settled, sampleRateHz, startTimeS);
+        RingDownResult fit = whole;
+        if (tail != start) {
+            try {
+                fit = fitFrom(x, tail, end, settled, sampleRateHz, startTimeS);
+            } catch (IllegalArgumentException tooShort) {
+                fit = whole; // a tail of fewer than two periods: keep the whole-ring fit's shape
+            }
+        }
+        if (bb == null) {
+            return fit;
+        }
+        return fit.withBackbone(bb.smallSignalHz(), bb.smallSignalHzError(), bb.dampingRatio(),
+                bb.dampingRatioError(), bb.largeSwingHz(), whole.naturalFrequencyHz(), whole.rSquared(),
+                bb.cycles());
+    }
+
+    /** RMS about the settled value over the last fifth of the record: the noise once the ring has died away. */
+    private static double tailNoise(double[] x, double settled) {
+        int n = x.length;
+        double s = 0;
+        int from = n - Math.max(4, n / 5);
+        for (int i = from; i < n; i++) {
+            s += (x[i] - settled) * (x[i] - settled);
+        }
+        return Math.sqrt(s / (n - from));
+    }
+
+    /** The damped-sinusoid fit of x[start ... end). */
+    private static RingDownResult fitFrom(double[] x, int start, int end, double settled, double sampleRateHz,
+                                          double startTimeS) {
         int m = end - start;
         double dt = 1 / sampleRateHz;
         // Zero crossings of the oscillation about its settled value give the damped period.

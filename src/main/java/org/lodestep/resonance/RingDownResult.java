@@ -1,11 +1,13 @@
 package org.lodestep.resonance;
 
 /**
- * A damped sinusoid fitted to a ring-down: x(t) = A·e^(-σt)·cos(ω_d·t + φ) + c, with t from {@code startTimeS}.
+ * A ring-down measured cycle by cycle, with a damped sinusoid x(t) = A·e^(-σt)·cos(ω_d·t + φ) + c fitted to its
+ * settled tail (t from {@code startTimeS}). With a backbone, the natural frequency and damping ratio are the
+ * small-signal values extrapolated to zero swing, and σ and ω_d follow them; A, φ and c are the tail fit's.
  *
- * @param naturalFrequencyHz undamped natural frequency f_n = √(σ² + ω_d²)/2π, Hz
+ * @param naturalFrequencyHz small-signal undamped natural frequency f_n, Hz (without a backbone √(σ² + ω_d²)/2π)
  * @param dampedFrequencyHz  damped frequency f_d = ω_d/2π, Hz
- * @param dampingRatio       ζ = σ/ω_n, 0 ... 1
+ * @param dampingRatio       small-signal ζ, 0 ... 1 (without a backbone σ/ω_n)
  * @param decayRatePerS      envelope decay rate σ = ζ·ω_n, 1/s
  * @param amplitude          A, in signal units
  * @param offset             c, the settled value, in signal units
@@ -16,12 +18,22 @@ package org.lodestep.resonance;
  * @param fittedDurationS    length of the fitted stretch, s
  * @param periodsFitted      damped periods within the fitted stretch
  * @param phaseRad           φ, rad, at {@code startTimeS}
+ * @param naturalFrequencyErrorHz standard error of the small-signal natural frequency, Hz (NaN without a backbone)
+ * @param dampingRatioError  standard error of the small-signal damping ratio (NaN without a backbone)
+ * @param largeSwingFrequencyHz frequency of the first, largest cycle, Hz (NaN without a backbone)
+ * @param wholeRingFrequencyHz natural frequency of one damped sinusoid fitted to the whole ring, Hz: what a
+ *                           constant-frequency fit reports, biased low by the large swings
+ * @param wholeRingRSquared  R² of that whole-ring fit
+ * @param backbone           cycle-by-cycle amplitude, frequency and decrement, largest swing first
  */
 public record RingDownResult(double naturalFrequencyHz, double dampedFrequencyHz, double dampingRatio,
                              double decayRatePerS, double amplitude, double offset, double qualityFactor,
                              double rSquared, double rmsResidual, double startTimeS, double fittedDurationS,
-                             double periodsFitted, double phaseRad) {
+                             double periodsFitted, double phaseRad, double naturalFrequencyErrorHz,
+                             double dampingRatioError, double largeSwingFrequencyHz, double wholeRingFrequencyHz,
+                             double wholeRingRSquared, java.util.List<BackbonePoint> backbone) {
     public RingDownResult {
+        backbone = java.util.List.copyOf(backbone);
         Require.positive(naturalFrequencyHz, "natural frequency", "Hz");
         Require.positive(dampedFrequencyHz, "damped frequency", "Hz");
         if (!(dampingRatio >= 0 && dampingRatio < 1)) {
@@ -30,6 +42,27 @@ public record RingDownResult(double naturalFrequencyHz, double dampedFrequencyHz
         if (Double.isNaN(rSquared)) {
             throw new IllegalArgumentException("fit quality R² is NaN");
         }
+    }
+
+    /** A fit without a backbone (too few cycles above the noise). */
+    RingDownResult(double naturalFrequencyHz, double dampedFrequencyHz, double dampingRatio, double decayRatePerS,
+                   double amplitude, double offset, double qualityFactor, double rSquared, double rmsResidual,
+                   double startTimeS, double fittedDurationS, double periodsFitted, double phaseRad) {
+        this(naturalFrequencyHz, dampedFrequencyHz, dampingRatio, decayRatePerS, amplitude, offset, qualityFactor,
+                rSquared, rmsResidual, startTimeS, fittedDurationS, periodsFitted, phaseRad, Double.NaN, Double.NaN,
+                Double.NaN, naturalFrequencyHz, rSquared, java.util.List.of());
+    }
+
+    /** This tail fit with the small-signal values of a backbone in place of its own f_n and ζ. */
+    RingDownResult withBackbone(double smallSignalHz, double smallSignalErrorHz, double smallSignalZeta,
+                                double zetaError, double largeSwingHz, double wholeHz, double wholeR2,
+                                java.util.List<BackbonePoint> cycles) {
+        // σ and ω_d follow the small-signal values (the tail's own differ by well under 1 %); A, φ, c stay the tail's
+        double fd = smallSignalHz * Math.sqrt(1 - smallSignalZeta * smallSignalZeta);
+        return new RingDownResult(smallSignalHz, fd, smallSignalZeta, smallSignalZeta * 2 * Math.PI * smallSignalHz,
+                amplitude, offset, DampedOscillation.qualityFactor(smallSignalZeta), rSquared, rmsResidual,
+                startTimeS, fittedDurationS, periodsFitted, phaseRad, smallSignalErrorHz, zetaError, largeSwingHz,
+                wholeHz, wholeR2, cycles);
     }
 
     /** The fitted curve x(t) at time t (s, on the capture's clock); NaN before the fitted stretch starts. */

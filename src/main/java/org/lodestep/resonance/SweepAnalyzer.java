@@ -21,6 +21,10 @@ import org.lodestep.signal.Welch;
  */
 public final class SweepAnalyzer {
     private static final double[] ORDERS = {0.25, 1, 2, 4};
+    /** Harmonics of the electrical frequency tracked in a phase current: the fundamental, then 4k ± 1. */
+    static final int[] CURRENT_HARMONICS = {1, 3, 5, 7, 9};
+    /** Lowest electrical frequency, in spectral bins, whose harmonics are tracked in a current. */
+    static final double MIN_ELECTRICAL_BINS = 4;
     /** Pulse thresholds are set from the first second of the pulse channel. */
     private static final double PULSE_PROBE_S = 1.0;
 
@@ -28,6 +32,10 @@ public final class SweepAnalyzer {
     private final double sampleRateHz;
     private final SweepLaw law;
     private final int microsteps;
+    private final ResponseChannel kind;
+    private final SynchronismDetector sync;
+    private PulsePhase pulsePhase;
+    private double[] stepsBuffer = new double[0];
     private final SegmentSpectra framer;
     private final Welch welch;
     private final Spectrogram spectrogram;
@@ -39,8 +47,11 @@ public final class SweepAnalyzer {
     private long fed;
     private long outside;
 
-    private SweepAnalyzer(SweepSettings settings, double sampleRateHz, SweepLaw law, int microsteps) {
+    private SweepAnalyzer(SweepSettings settings, double sampleRateHz, SweepLaw law, int microsteps,
+                          ResponseChannel kind) {
         this.settings = settings;
+        this.kind = java.util.Objects.requireNonNull(kind, "response channel");
+        this.sync = new SynchronismDetector(sampleRateHz, kind.synchronousPeriodFullSteps());
         this.sampleRateHz = sampleRateHz;
         this.law = law;
         this.microsteps = microsteps;
@@ -53,8 +64,14 @@ public final class SweepAnalyzer {
 
     /** An analyzer for a sweep whose rate followed a programmed law. */
     public static SweepAnalyzer programmed(SweepSettings settings, double sampleRateHz, SweepLaw law) {
+        return programmed(settings, sampleRateHz, law, ResponseChannel.VIBRATION);
+    }
+
+    /** An analyzer for a sweep whose rate followed a programmed law, on a channel of the given kind. */
+    public static SweepAnalyzer programmed(SweepSettings settings, double sampleRateHz, SweepLaw law,
+                                           ResponseChannel kind) {
         Require.positive(sampleRateHz, "sample rate", "Hz");
-        return new SweepAnalyzer(settings, sampleRateHz, java.util.Objects.requireNonNull(law, "law"), 1);
+        return new SweepAnalyzer(settings, sampleRateHz, java.util.Objects.requireNonNull(law, "law"), 1, kind);
     }
 
     /**
@@ -63,11 +80,17 @@ public final class SweepAnalyzer {
      * @param microsteps step pulses per full step at the driver
      */
     public static SweepAnalyzer fromPulses(SweepSettings settings, double sampleRateHz, int microsteps) {
+        return fromPulses(settings, sampleRateHz, microsteps, ResponseChannel.VIBRATION);
+    }
+
+    /** As {@link #fromPulses(SweepSettings, double, int)}, on a channel of the given kind. */
+    public static SweepAnalyzer fromPulses(SweepSettings settings, double sampleRateHz, int microsteps,
+                                           ResponseChannel kind) {
         Require.positive(sampleRateHz, "sample rate", "Hz");
         if (microsteps < 1) {
             throw new IllegalArgumentException("microsteps must be at least 1 pulse per full step, got " + microsteps);
         }
-        SweepAnalyzer a = new SweepAnalyzer(settings, sampleRateHz, null, microsteps);
+        SweepAnalyzer a = new SweepAnalyzer(settings, sampleRateHz, null, microsteps, kind);
         a.probe = new double[2][(int) Math.max(settings.spectral().segmentLength(), sampleRateHz * PULSE_PROBE_S)];
         return a;
     }
@@ -94,11 +117,35 @@ public final class SweepAnalyzer {
             off += take;
             len -= take;
         }
-        if (this.pulses != null) {
-            this.pulses.feed(pulses, off, len);
+        analyse(vibration, pulses, off, len);
+    }
+
+    /** Rate from the pulses, spectra, and the commanded step count for the synchronism check. */
+    private void analyse(double[] x, double[] pulseLevels, int off, int len) {
+        if (stepsBuffer.length < len) {
+            stepsBuffer = new double[len];
+        }
+        if (law != null) {
+            for (int i = 0; i < len; i++) {
+                stepsBuffer[i] = law.fullStepsAt((fed + i) / sampleRateHz);
+            }
+        } else {
+            pulses.feed(pulseLevels, off, len);
+            pulsePhase.feed(pulseLevels, off, len, stepsBuffer, 0);
         }
         fed += len;
-        framer.feed(vibration, off, len);
+        framer.feed(x, off, len);
+        sync.feed(x, shifted(off, len), off, len);
+    }
+
+    /** The step counts laid out at the same offset as the samples they belong to. */
+    private double[] shifted(int off, int len) {
+        if (off == 0) {
+            return stepsBuffer;
+        }
+        double[] a = new double[off + len];
+        System.arraycopy(stepsBuffer, 0, a, off, len);
+        return a;
     }
 
     /** Sets the pulse thresholds at 40 % and 60 % of the probe's range, then replays the probe. */
@@ -121,9 +168,8 @@ public final class SweepAnalyzer {
         int n = probeFilled;
         probe = null;
         pulses = new StepPulseRate(sampleRateHz, microsteps, min + 0.4 * (max - min), min + 0.6 * (max - min));
-        pulses.feed(p[1], 0, n);
-        fed += n;
-        framer.feed(p[0], 0, n);
+        pulsePhase = new PulsePhase(microsteps, min + 0.4 * (max - min), min + 0.6 * (max - min));
+        analyse(p[0], p[1], 0, n);
     }
 
     private void segment(long firstSample, double[] mag2, double meanSquare) {
@@ -150,6 +196,18 @@ public final class SweepAnalyzer {
         }
         for (int k = 0; k < mag2.length; k++) {
             bin.sumMag2[k] += (float) mag2[k];
+        }
+        // harmonics of an electrical frequency within a few bins of zero are not resolved: left out
+        if (kind.isCurrent() && rate / 4 >= MIN_ELECTRICAL_BINS * framer.binHz()) {
+            for (int h = 0; h < CURRENT_HARMONICS.length; h++) {
+                double a = OrderTracking.amplitudeAt(mag2, framer, CURRENT_HARMONICS[h] * rate / 4);
+                if (Double.isNaN(a)) {
+                    bin.harmonicMissing[h] = true;
+                } else {
+                    bin.sumHarmonicSquare[h] += a * a;
+                }
+            }
+            bin.harmonicCount++;
         }
     }
 
@@ -188,13 +246,10 @@ public final class SweepAnalyzer {
             rates[i] = points.get(i).rateFullStepsPerS();
             levels[i] = points.get(i).levelDb();
         }
-        List<ResonanceBand> raw = new ArrayList<>();
-        for (BandDetector.Span sp : BandDetector.detect(rates, levels, bandSettings)) {
-            ResponsePoint peak = points.get(sp.peak());
-            raw.add(new ResonanceBand(rates[sp.first()], rates[sp.last()], peak.rateFullStepsPerS(), peak.rms(),
-                    peak.levelDb(), sp.excessDb(), mechanicalHz(binList, sp.first(), sp.last()),
-                    BandClass.UNCLASSIFIED, 0));
-        }
+        List<ResonanceBand> raw = kind == ResponseChannel.VIBRATION
+                ? vibrationBands(points, binList, rates, levels, bandSettings)
+                : kind == ResponseChannel.CURRENT_CONSTANT_VOLTAGE ? CurrentBands.find(rates, harmonics(binList),
+                bandSettings) : List.of();
         String source = "given";
         double fn = naturalHz;
         if (Double.isNaN(fn)) {
@@ -205,9 +260,45 @@ public final class SweepAnalyzer {
         for (ResonanceBand b : raw) {
             bands.add(BandClassifier.classify(b, fn));
         }
+        List<WatchPoint> watch = kind == ResponseChannel.VIBRATION && Double.isNaN(bandSettings.absoluteLevel())
+                ? WatchList.find(rates, levels, BandDetector.baseline(rates, levels, bandSettings.baselineHalfWidth(),
+                bandSettings.baselineQuantile()), bands, fn, bandSettings.thresholdDb())
+                : List.of();
+        // A phase current is dominated by the drive's own switching pattern, periodic in the step count whatever
+        // the rotor does: on a simulated constant-voltage sweep that slipped poles its synchronous share stayed at
+        // 0.99, so it cannot say the rotor kept step.
+        Stall stall = kind == ResponseChannel.CURRENT_CHOPPER
+                ? Stall.notJudged("not judged: a current-regulating chopper holds the phase current to its setting,"
+                + " so a slipping rotor barely shows in it; record vibration or sound to see lost steps")
+                : kind.isCurrent() ? Stall.notJudged("not judged: a phase current follows the drive's switching"
+                + " pattern even while the rotor slips, so it cannot show lost steps; record vibration or sound")
+                : SynchronismJudge.judge(sync.finish(), "the vibration");
         return new SweepResult(points, bands, fn, source, law != null ? "law" : "pulses",
                 welch.spectrum(SpectrumScaling.DENSITY), spectrogram, framer.segmentCount(), outside,
-                fed / sampleRateHz);
+                fed / sampleRateHz, kind, stall, watch, CurrentBands.note(kind));
+    }
+
+    private List<ResonanceBand> vibrationBands(List<ResponsePoint> points, List<RateBin> binList, double[] rates,
+                                               double[] levels, BandSettings bandSettings) {
+        List<ResonanceBand> raw = new ArrayList<>();
+        for (BandDetector.Span sp : BandDetector.detect(rates, levels, bandSettings)) {
+            ResponsePoint peak = points.get(sp.peak());
+            raw.add(new ResonanceBand(rates[sp.first()], rates[sp.last()], peak.rateFullStepsPerS(), peak.rms(),
+                    peak.levelDb(), sp.excessDb(), mechanicalHz(binList, sp.first(), sp.last()),
+                    BandClass.UNCLASSIFIED, 0));
+        }
+        return raw;
+    }
+
+    /** Amplitudes of the tracked current harmonics, [harmonic][point]. */
+    private static double[][] harmonics(List<RateBin> binList) {
+        double[][] h = new double[CURRENT_HARMONICS.length][binList.size()];
+        for (int i = 0; i < binList.size(); i++) {
+            for (int k = 0; k < CURRENT_HARMONICS.length; k++) {
+                h[k][i] = binList.get(i).harmonic(k);
+            }
+        }
+        return h;
     }
 
     /** Strongest frequency of the summed spectra of a band's bins, above the lowest few bins, refined by a parabola. */
@@ -246,6 +337,9 @@ public final class SweepAnalyzer {
         final double[] sumOrderSquare = new double[ORDERS.length];
         final boolean[] orderMissing = new boolean[ORDERS.length];
         final float[] sumMag2;
+        final double[] sumHarmonicSquare = new double[CURRENT_HARMONICS.length];
+        final boolean[] harmonicMissing = new boolean[CURRENT_HARMONICS.length];
+        int harmonicCount;
 
         RateBin(int bins) {
             sumMag2 = new float[bins];
@@ -253,6 +347,11 @@ public final class SweepAnalyzer {
 
         double order(int o) {
             return orderMissing[o] ? Double.NaN : Math.sqrt(sumOrderSquare[o] / count);
+        }
+
+        double harmonic(int h) {
+            return harmonicMissing[h] || harmonicCount == 0 ? Double.NaN
+                    : Math.sqrt(sumHarmonicSquare[h] / harmonicCount);
         }
     }
 

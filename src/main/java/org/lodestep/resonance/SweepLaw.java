@@ -42,6 +42,22 @@ public record SweepLaw(SweepShape shape, double startFullStepsPerS, double endFu
                 : startFullStepsPerS * Math.pow(endFullStepsPerS / startFullStepsPerS, u);
     }
 
+    /**
+     * Full steps commanded from t = 0 to t (the integral of the rate), real-valued; NaN outside the sweep.
+     * Linear: r0·t + (r1 − r0)·t²/(2T); log: r0·T/ln(r1/r0)·((r1/r0)^(t/T) − 1).
+     */
+    public double fullStepsAt(double timeS) {
+        if (!(timeS >= 0 && timeS <= durationS)) {
+            return Double.NaN;
+        }
+        if (shape == SweepShape.LINEAR) {
+            return startFullStepsPerS * timeS
+                    + (endFullStepsPerS - startFullStepsPerS) * timeS * timeS / (2 * durationS);
+        }
+        double q = Math.log(endFullStepsPerS / startFullStepsPerS);
+        return startFullStepsPerS * durationS / q * Math.expm1(q * timeS / durationS);
+    }
+
     /** Rate of change of the commanded rate at time t, in full steps/s² (the sweep's acceleration). */
     public double accelerationFullStepsPerS2At(double timeS) {
         double r = rateFullStepsPerSAt(timeS);

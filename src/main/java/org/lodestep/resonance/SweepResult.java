@@ -20,11 +20,20 @@ import org.lodestep.signal.Spectrum;
  * @param segments              spectral segments analysed
  * @param segmentsOutsideSweep  segments without a defined step rate (before/after the sweep, no pulses)
  * @param durationS             length of the capture analysed, s
+ * @param responseChannel       what the analysed channel measures (vibration, or a phase current and its drive)
+ * @param stall                 whether and where the rotor lost synchronism with the step command
+ * @param watch                 near-threshold bumps at f_n/k, below the band threshold
+ * @param evidenceNote          for a current capture, how far its evidence goes; empty for vibration
  */
 public record SweepResult(List<ResponsePoint> response, List<ResonanceBand> bands, double naturalFrequencyHz,
                           String naturalFrequencySource, String rateSource, Spectrum psd, Spectrogram spectrogram,
-                          long segments, long segmentsOutsideSweep, double durationS) {
+                          long segments, long segmentsOutsideSweep, double durationS,
+                          ResponseChannel responseChannel, Stall stall, List<WatchPoint> watch, String evidenceNote) {
     public SweepResult {
+        Objects.requireNonNull(responseChannel, "responseChannel");
+        Objects.requireNonNull(stall, "stall");
+        watch = List.copyOf(watch);
+        Objects.requireNonNull(evidenceNote, "evidenceNote");
         response = List.copyOf(response);
         bands = List.copyOf(bands);
         Objects.requireNonNull(naturalFrequencySource, "naturalFrequencySource");

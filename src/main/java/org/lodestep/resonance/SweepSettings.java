@@ -35,4 +35,16 @@ public record SweepSettings(SpectralSettings spectral, double rateResolution, in
         }
         return new SweepSettings(SpectralSettings.hann(n), 0.01, 400);
     }
+
+    /**
+     * Defaults for a phase-current capture: as {@link #forSampleRate}, but segments of about 0.4 s, so that the
+     * harmonics of a low electrical frequency (a quarter of the full-step rate) fall in separate bins.
+     */
+    public static SweepSettings forCurrent(double sampleRateHz) {
+        int n = 1024;
+        while (n * 2 <= sampleRateHz * 0.4) {
+            n *= 2;
+        }
+        return new SweepSettings(SpectralSettings.hann(n), 0.01, 400);
+    }
 }

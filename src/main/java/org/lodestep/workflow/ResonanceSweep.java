@@ -12,6 +12,7 @@ import org.lodestep.resonance.AvoidList;
 import org.lodestep.resonance.BandSettings;
 import org.lodestep.resonance.RateUnits;
 import org.lodestep.resonance.Recommendations;
+import org.lodestep.resonance.ResponseChannel;
 import org.lodestep.resonance.SweepAnalyzer;
 import org.lodestep.resonance.SweepLaw;
 import org.lodestep.resonance.SweepResult;
@@ -27,7 +28,7 @@ import org.lodestep.signal.SpectralSettings;
 import org.lodestep.signal.Window;
 
 /**
- * Analyses a vibration or sound capture taken during a step-rate sweep, from a file or from a rig capture: picks
+ * Analyses a vibration, sound or phase-current capture taken during a step-rate sweep, from a file or from a rig capture: picks
  * the channels, resolves where the step rate comes from (a recorded step-pulse channel, else the settings' sweep
  * law, else the capture's {@code # sweep=} metadata), streams the samples through {@link SweepAnalyzer}, and turns
  * the bands into an avoid-list in the user's units.
@@ -62,14 +63,31 @@ public final class ResonanceSweep {
      * @param window             spectral window
      * @param crossingPeriods    oscillation periods allowed to cross a band, for the least crossing acceleration
      * @param margin             fraction each avoided band is widened by on both sides
+     * @param currentDrive       for a phase-current channel (unit A), the drive it was recorded under:
+     *                           {@link ResponseChannel#CURRENT_CONSTANT_VOLTAGE} or
+     *                           {@link ResponseChannel#CURRENT_CHOPPER}; null assumes constant voltage
      */
     public record Settings(String channel, String pulseChannel, SweepShape shape, Double startFullStepsPerS,
                            Double endFullStepsPerS, Double durationS, Integer microsteps, int rotorTeeth,
                            double travelMmPerRev, double naturalHz, double dampingRatio, BandSettings bands,
-                           Integer segmentSamples, Window window, double crossingPeriods, double margin) {
+                           Integer segmentSamples, Window window, double crossingPeriods, double margin,
+                           ResponseChannel currentDrive) {
         public Settings {
             Objects.requireNonNull(bands, "bands");
             Objects.requireNonNull(window, "window");
+            if (currentDrive == ResponseChannel.VIBRATION) {
+                throw new IllegalArgumentException("the current drive must be constant voltage or chopper");
+            }
+        }
+
+        /** Settings for a vibration channel, or a current channel under an assumed constant-voltage drive. */
+        public Settings(String channel, String pulseChannel, SweepShape shape, Double startFullStepsPerS,
+                        Double endFullStepsPerS, Double durationS, Integer microsteps, int rotorTeeth,
+                        double travelMmPerRev, double naturalHz, double dampingRatio, BandSettings bands,
+                        Integer segmentSamples, Window window, double crossingPeriods, double margin) {
+            this(channel, pulseChannel, shape, startFullStepsPerS, endFullStepsPerS, durationS, microsteps,
+                    rotorTeeth, travelMmPerRev, naturalHz, dampingRatio, bands, segmentSamples, window,
+                    crossingPeriods, margin, null);
         }
 
         /** Everything from the capture and the defaults: 1.8° motor, Hann window, 5 periods to cross, 5 % margin. */
@@ -83,7 +101,7 @@ public final class ResonanceSweep {
                                 Double durationS) {
             return new Settings(channel, pulseChannel, shape, startFullStepsPerS, endFullStepsPerS, durationS,
                     microsteps, rotorTeeth, travelMmPerRev, naturalHz, dampingRatio, bands, segmentSamples, window,
-                    crossingPeriods, margin);
+                    crossingPeriods, margin, currentDrive);
         }
     }
 
@@ -143,9 +161,10 @@ public final class ResonanceSweep {
         try (SampleStream s = source.open()) {
             plan = plan(s, set);
         }
-        SweepSettings sweepSettings = sweepSettings(plan.sampleRateHz, set);
-        SweepAnalyzer analyzer = plan.law != null ? SweepAnalyzer.programmed(sweepSettings, plan.sampleRateHz, plan.law)
-                : SweepAnalyzer.fromPulses(sweepSettings, plan.sampleRateHz, plan.units.microsteps());
+        SweepSettings sweepSettings = sweepSettings(plan.sampleRateHz, set, plan.kind);
+        SweepAnalyzer analyzer = plan.law != null
+                ? SweepAnalyzer.programmed(sweepSettings, plan.sampleRateHz, plan.law, plan.kind)
+                : SweepAnalyzer.fromPulses(sweepSettings, plan.sampleRateHz, plan.units.microsteps(), plan.kind);
         SweepResult result;
         try (SampleStream s = readAhead ? Captures.readAhead(source.open(), BLOCK_FRAMES) : source.open()) {
             long total = s.knownFrameCount();
@@ -176,7 +195,15 @@ public final class ResonanceSweep {
 
     /** What the first pass settles: channels, rate source, units. */
     private record Plan(String source, int vib, int pulse, String vibName, String unit, double sampleRateHz,
-                        RateUnits units, SweepLaw law, String lawText) {
+                        RateUnits units, SweepLaw law, String lawText, ResponseChannel kind) {
+    }
+
+    /** A channel in amperes is a phase current; anything else is taken as vibration or sound. */
+    private static ResponseChannel kind(Channel c, Settings set) {
+        if (!c.unit().equalsIgnoreCase("a")) {
+            return ResponseChannel.VIBRATION;
+        }
+        return set.currentDrive() != null ? set.currentDrive() : ResponseChannel.CURRENT_CONSTANT_VOLTAGE;
     }
 
     private static Plan plan(SampleStream s, Settings set) throws IOException, InputFormatException {
@@ -193,7 +220,7 @@ public final class ResonanceSweep {
         if (pulse >= 0) {
             return new Plan(source, vib, pulse, chans.get(vib).name(), chans.get(vib).unit(), fs, units, null,
                     "from the rising edges of channel " + chans.get(pulse).name() + " at " + micro
-                            + (micro == 1 ? " pulse" : " pulses") + " per full step");
+                            + (micro == 1 ? " pulse" : " pulses") + " per full step", kind(chans.get(vib), set));
         }
         SweepShape shape = set.shape() != null ? set.shape() : profile == null ? null : profile.shape();
         Double start = set.startFullStepsPerS() != null ? set.startFullStepsPerS()
@@ -213,11 +240,13 @@ public final class ResonanceSweep {
         SweepLaw law = new SweepLaw(shape, start, end, dur);
         String text = String.format(Locale.ROOT, "%s sweep %s to %s full steps/s over %s s", shape.word(),
                 fmt(start), fmt(end), fmt(dur));
-        return new Plan(source, vib, -1, chans.get(vib).name(), chans.get(vib).unit(), fs, units, law, text);
+        return new Plan(source, vib, -1, chans.get(vib).name(), chans.get(vib).unit(), fs, units, law, text,
+                kind(chans.get(vib), set));
     }
 
-    private static SweepSettings sweepSettings(double sampleRateHz, Settings set) {
-        SweepSettings d = SweepSettings.forSampleRate(sampleRateHz);
+    private static SweepSettings sweepSettings(double sampleRateHz, Settings set, ResponseChannel kind) {
+        SweepSettings d = kind.isCurrent() ? SweepSettings.forCurrent(sampleRateHz)
+                : SweepSettings.forSampleRate(sampleRateHz);
         int n = set.segmentSamples() != null ? set.segmentSamples() : d.spectral().segmentLength();
         return new SweepSettings(new SpectralSettings(n, n / 2, set.window(), Detrend.MEAN), d.rateResolution(),
                 d.spectrogramColumns());

@@ -7,6 +7,7 @@ import java.util.Objects;
 import org.lodestep.rig.RigCapture;
 import org.lodestep.rig.RigClient;
 import org.lodestep.rig.RigException;
+import org.lodestep.rig.DriveMode;
 import org.lodestep.rig.SweepPlan;
 
 /**
@@ -24,12 +25,24 @@ public final class RigSweepCapture {
      * @param plan        the sweep to drive
      * @param csv         capture file to write (must not exist; the sidecar goes beside it as .json)
      * @param toolVersion this program's version, for the sidecar
+     * @param drive       the rig's own drive, recording both phase currents (constant voltage or chopper), or null
+     *                    for the user's driver on the step output (accelerometer, one current, step marker)
+     * @param supplyV     the rig drive's supply, V, or 0 for its default
      */
-    public record Settings(String address, SweepPlan plan, Path csv, String toolVersion) {
+    public record Settings(String address, SweepPlan plan, Path csv, String toolVersion, DriveMode drive,
+                           double supplyV) {
         public Settings {
             Objects.requireNonNull(address, "address");
             Objects.requireNonNull(plan, "plan");
             Objects.requireNonNull(csv, "csv");
+            if (!(supplyV >= 0) || !Double.isFinite(supplyV)) {
+                throw new IllegalArgumentException("supply must be zero (default) or positive, got " + supplyV + " V");
+            }
+        }
+
+        /** A sweep of the user's driver on the step output. */
+        public Settings(String address, SweepPlan plan, Path csv, String toolVersion) {
+            this(address, plan, csv, toolVersion, null, 0);
         }
     }
 
@@ -47,7 +60,8 @@ public final class RigSweepCapture {
         progress.step("sweeping " + s.plan().fromFullStepsPerS() + " to " + s.plan().toFullStepsPerS()
                 + " full steps/s on " + s.address());
         try (RigClient c = RigClient.open(s.address())) {
-            cap = c.sweep(s.plan(), progress::advanced);
+            cap = s.drive() == null ? c.sweep(s.plan(), progress::advanced)
+                    : c.sweep(s.plan(), s.drive(), s.supplyV(), progress::advanced);
         }
         progress.step("saving " + s.csv());
         return new Result(cap, RigCaptureFile.save(cap, s.csv(), s.plan(), s.toolVersion()));

@@ -71,6 +71,7 @@ public final class XyChart {
         private final String yLabel;
         private final List<Series> series = new ArrayList<>();
         private final List<Band> bands = new ArrayList<>();
+        private final List<Band> yBands = new ArrayList<>();
         private final List<Line> lines = new ArrayList<>();
         private boolean logY;
         private boolean yFromZero;
@@ -126,6 +127,18 @@ public final class XyChart {
                 throw new IllegalArgumentException("band needs finite from <= to, got " + fromX + " .. " + toX);
             }
             bands.add(new Band(fromX, toX, Html.clean(label), Objects.requireNonNull(status, "status")));
+            return this;
+        }
+
+        /**
+         * A shaded band from {@code fromY} to {@code toY} on the y axis (a step-rate band across a rate-against-time
+         * chart), drawn and labelled like {@link #band}.
+         */
+        public Builder bandY(double fromY, double toY, String label, Status status) {
+            if (!Double.isFinite(fromY) || !Double.isFinite(toY) || toY < fromY) {
+                throw new IllegalArgumentException("band needs finite from <= to, got " + fromY + " .. " + toY);
+            }
+            yBands.add(new Band(fromY, toY, Html.clean(label), Objects.requireNonNull(status, "status")));
             return this;
         }
 
@@ -238,6 +251,9 @@ public final class XyChart {
             for (int i = 0; i < bands.size(); i++) {
                 plot.addDomainMarker(bandMarker(bands.get(i), i), Layer.BACKGROUND);
             }
+            for (int i = 0; i < yBands.size(); i++) {
+                plot.addRangeMarker(bandMarker(yBands.get(i), i), Layer.BACKGROUND);
+            }
             for (Line l : lines) {
                 ValueMarker m = new ValueMarker(l.at());
                 m.setPaint(ChartStyle.statusColor(l.status()));
@@ -289,6 +305,9 @@ public final class XyChart {
             StringBuilder sb = new StringBuilder(title.isEmpty() ? "Chart" : title).append(": ").append(yLabel)
                     .append(" against ").append(xLabel);
             for (Band b : bands) {
+                sb.append("; ").append(b.status().word()).append(" band ").append(b.label());
+            }
+            for (Band b : yBands) {
                 sb.append("; ").append(b.status().word()).append(" band ").append(b.label());
             }
             return sb.append('.').toString();

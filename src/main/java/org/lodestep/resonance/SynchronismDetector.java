@@ -1,0 +1,133 @@
+package org.lodestep.resonance;
+
+import java.util.ArrayList;
+import java.util.List;
+
+/**
+ * Whether a response still follows the step command, window by window through a sweep, by time-synchronous
+ * averaging: each sample is filed by the commanded step phase (the commanded full-step count modulo a period of
+ * {@code periodFullSteps}), and the power of the synchronous average is compared with the window's whole power. A
+ * rotor that follows the command responds with a waveform periodic in the step count, whatever the rate does within
+ * the window, so nearly all its power is synchronous; a rotor that slips poles responds at frequencies unrelated to
+ * the rate and the synchronous share collapses.
+ *
+ * <p>Source: time-domain synchronous averaging of rotating machinery signals, S. Braun, "The extraction of periodic
+ * waveforms by time domain averaging", Acustica 32 (1975) 69–77, and P. D. McFadden, "A revised model for the
+ * extraction of periodic waveforms by time domain averaging", Mech. Syst. Signal Process. 1 (1987) 83–95 (from
+ * memory). A period of 2 full steps keeps the half-order response of a parametric resonance synchronous; a current
+ * is periodic in 4 full steps (one electrical cycle). The unbiased share (s − B/n)/(1 − B/n), B bins and n samples,
+ * removes what noise alone leaves in the bin means. Window length (at least {@link #MIN_PERIODS} periods and 0.1 s)
+ * is common practice (no published source).
+ */
+final class SynchronismDetector {
+    static final int MIN_PERIODS = 8;
+    static final double MIN_WINDOW_S = 0.1;
+
+    /** One analysed window: its mean commanded rate, synchronous share of power (0 ... 1) and RMS. */
+    record Window(double startS, double rateFullStepsPerS, double synchronousShare, double rms) {
+    }
+
+    private final double sampleRateHz;
+    private final double periodFullSteps;
+    private final List<Window> windows = new ArrayList<>();
+    private double[] binSum = new double[0];
+    private int[] binCount = new int[0];
+    private int bins;
+    private long index;
+    private long windowStart = -1;
+    private double startSteps;
+    private double previousSteps = Double.NaN;
+    private double lastSteps;
+    private double sum;
+    private double sumSquares;
+    private int n;
+
+    SynchronismDetector(double sampleRateHz, double periodFullSteps) {
+        Require.positive(sampleRateHz, "sample rate", "Hz");
+        Require.positive(periodFullSteps, "synchronous period", "full steps");
+        this.sampleRateHz = sampleRateHz;
+        this.periodFullSteps = periodFullSteps;
+    }
+
+    /**
+     * Feeds samples with the commanded full-step count at each (NaN where the command is unknown: such samples
+     * close the open window).
+     */
+    void feed(double[] x, double[] fullSteps, int off, int len) {
+        for (int i = off; i < off + len; i++, index++) {
+            double steps = fullSteps[i];
+            if (!Double.isFinite(steps) || !Double.isFinite(x[i])) {
+                close();
+                previousSteps = Double.NaN;
+                continue;
+            }
+            double increment = steps - previousSteps;
+            previousSteps = steps;
+            if (!(increment > 0)) {
+                continue; // the first sample, or a command at rest: no rate to fold by
+            }
+            if (windowStart < 0) {
+                open(steps, increment);
+            } else if (steps - startSteps >= MIN_PERIODS * periodFullSteps
+                    && index - windowStart >= MIN_WINDOW_S * sampleRateHz) {
+                close();
+                open(steps, increment);
+            }
+            double phase = steps / periodFullSteps;
+            int b = (int) Math.floor((phase - Math.floor(phase)) * bins);
+            b = Math.min(bins - 1, Math.max(0, b));
+            binSum[b] += x[i];
+            binCount[b]++;
+            sum += x[i];
+            sumSquares += x[i] * x[i];
+            n++;
+            lastSteps = steps;
+        }
+    }
+
+    /** Opens a window with one sample per bin over one period at the present rate (8 ... 1024 bins). */
+    private void open(double steps, double incrementFullSteps) {
+        windowStart = index;
+        startSteps = steps;
+        lastSteps = steps;
+        sum = 0;
+        sumSquares = 0;
+        n = 0;
+        bins = (int) Math.max(8, Math.min(1024, Math.round(periodFullSteps / incrementFullSteps)));
+        binSum = new double[bins];
+        binCount = new int[bins];
+    }
+
+    private void close() {
+        if (windowStart < 0) {
+            return;
+        }
+        double spanSteps = lastSteps - startSteps;
+        if (n >= 4 && spanSteps > 0) {
+            double mean = sum / n;
+            double total = sumSquares / n - mean * mean;
+            double sync = 0;
+            int used = 0;
+            for (int b = 0; b < bins; b++) {
+                if (binCount[b] > 0) {
+                    double a = binSum[b] / binCount[b] - mean;
+                    sync += binCount[b] * a * a;
+                    used++;
+                }
+            }
+            sync /= n;
+            double share = total > 0 ? sync / total : 1;
+            double bias = (double) used / n;
+            share = bias < 1 ? (share - bias) / (1 - bias) : Double.NaN;
+            double rate = spanSteps / ((n - 1) / sampleRateHz);
+            windows.add(new Window(windowStart / sampleRateHz, rate, Math.max(0, Math.min(1, share)),
+                    Math.sqrt(Math.max(0, total))));
+        }
+        windowStart = -1;
+    }
+
+    List<Window> finish() {
+        close();
+        return List.copyOf(windows);
+    }
+}
