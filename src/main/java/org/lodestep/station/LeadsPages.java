@@ -126,7 +126,8 @@ final class LeadsPages {
     private String page(LeadsProbeRun p) {
         return "<div data-page=\"leads-probe\" data-probe=\"" + Layout.esc(p.id) + "\"><h1 class=\"sr-only\">Probe "
                 + "session</h1><p class=\"context\">Leads " + Layout.esc(String.join(", ", p.settings.leads())) + " \u00b7 up to "
-                + p.settings.allPairs() + " pairs</p><div id=\"probe-panel\">" + panel(p) + "</div></div>";
+                + p.settings.allPairs() + " pairs</p><p id=\"announce\" class=\"sr-only\" role=\"status\" "
+                + "aria-live=\"assertive\"></p><div id=\"probe-panel\">" + panel(p) + "</div></div>";
     }
 
     /** The next pair (or the result), the answer field, the readings so far. */

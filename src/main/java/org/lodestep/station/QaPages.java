@@ -204,6 +204,8 @@ final class QaPages {
                         + "serial number, then Enter</label><input id=\"serial\" name=\"serial\" autofocus "
                         + "spellcheck=\"false\" maxlength=\"80\" required><button type=\"submit\">Check</button></form>")
                 .append(Layout.progressArea("scan-progress"))
+                // one live region that stays in the page, so a screen reader speaks each new verdict
+                .append("<p id=\"announce\" class=\"sr-only\" role=\"status\" aria-live=\"assertive\"></p>")
                 .append("<div id=\"panel\">").append(panel(run)).append("</div></div>");
         return sb.toString();
     }

@@ -51,6 +51,12 @@
     };
   }
 
+  // Speaks the new content through the page's persistent live region (inserted regions are often not announced).
+  function announce(el) {
+    var region = document.getElementById('announce');
+    if (region && el) { region.textContent = (el.innerText || el.textContent).replace(/\s+/g, ' ').trim(); }
+  }
+
   function qaRun(root) {
     var run = root.dataset.run;
     var form = document.getElementById('scan-form');
@@ -64,7 +70,11 @@
     function refresh() {
       return fetch('/qa/runs/' + encodeURIComponent(run) + '/panel', { credentials: 'same-origin' })
         .then(function (r) { return r.text(); })
-        .then(function (html) { panel.innerHTML = html; root.dataset.scans = String((+root.dataset.scans || 0) + 1); });
+        .then(function (html) {
+          panel.innerHTML = html;
+          announce(panel.querySelector('#verdict'));
+          root.dataset.scans = String((+root.dataset.scans || 0) + 1);
+        });
     }
 
     function disarmed(text) {
@@ -158,6 +168,7 @@
       post('/api/leads/probes/' + encodeURIComponent(probe) + '/answer', data).then(function (j) {
         status.hidden = true;
         panel.innerHTML = j.html;
+        announce(panel.querySelector('#next'));
         root.dataset.answers = String((+root.dataset.answers || 0) + 1);
         if (j.done) { root.dataset.done = 'true'; }
         var input = document.getElementById('ohms');

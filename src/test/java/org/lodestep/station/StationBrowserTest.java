@@ -215,6 +215,8 @@ class StationBrowserTest {
         }
         String verdict = driver.findElement(By.id("verdict")).getText();
         assertTrue(verdict.contains("FAIL") && verdict.contains("KV24-00124"), verdict);
+        // the persistent live region speaks the verdict to a screen reader
+        assertTrue(driver.findElement(By.id("announce")).getAttribute("textContent").contains("FAIL KV24-00124"));
         String tally = driver.findElement(By.id("tally")).getText();
         assertTrue(tally.contains("5 tested, 4 PASS, 1 FAIL"), tally);
         shots("qa-run", "#verdict");
