@@ -95,7 +95,15 @@ public final class Station implements AutoCloseable {
 
     /** The address to open in a browser; with a token it carries it once (the page then keeps it in a cookie). */
     public String address() {
-        String host = settings.host().contains(":") ? "[" + settings.host() + "]" : settings.host();
+        String host = settings.host();
+        if (host.equals("0.0.0.0") || host.equals("::") || host.equals("[::]")) {
+            try {
+                host = InetAddress.getLocalHost().getHostName(); // "any address": name the machine others reach
+            } catch (UnknownHostException e) {
+                // keep the wildcard: the user knows the machine's name
+            }
+        }
+        host = host.contains(":") ? "[" + host + "]" : host;
         return "http://" + host + ":" + port() + "/" + (settings.token() == null ? "" : "?token=" + settings.token());
     }
 
