@@ -9,6 +9,7 @@ import java.nio.file.AccessDeniedException;
 import java.nio.file.NoSuchFileException;
 
 import org.lodestep.sample.InputFormatException;
+import org.lodestep.qa.DatabaseUrls;
 import org.lodestep.qa.StoreException;
 import org.lodestep.rig.RigException;
 
@@ -68,8 +69,13 @@ public final class Main implements Runnable {
     public static int run(PrintWriter out, PrintWriter err, String... args) {
         CommandLine cl = commandLine();
         cl.setOut(out);
-        cl.setErr(err);
-        return cl.execute(args);
+        PrintWriter redacted = new PrintWriter(new RedactingWriter(err), true);
+        cl.setErr(redacted);
+        try {
+            return cl.execute(args);
+        } finally {
+            redacted.flush();
+        }
     }
 
     /** The configured command tree, for tests and for {@link #run}. */
@@ -90,6 +96,12 @@ public final class Main implements Runnable {
             p = p.hasSubcommand() ? p.subcommand() : null;
         }
         return false;
+    }
+
+    private static String stackTrace(Throwable t) {
+        java.io.StringWriter w = new java.io.StringWriter();
+        t.printStackTrace(new PrintWriter(w));
+        return w.toString();
     }
 
     /** The one table from failure kinds to exit codes. */
@@ -123,9 +135,10 @@ public final class Main implements Runnable {
             code = ExitCode.INTERNAL;
             message = "internal error: " + t + (verbose ? "" : " (rerun with --verbose for details)");
         }
-        err.println(cmd.getCommandSpec().qualifiedName() + ": " + message);
+        // no error line ever shows a database password, whichever layer wrote the message
+        err.println(cmd.getCommandSpec().qualifiedName() + ": " + DatabaseUrls.redact(message));
         if (verbose) {
-            t.printStackTrace(err);
+            err.println(DatabaseUrls.redact(stackTrace(t)));
         }
         err.flush();
         return code;

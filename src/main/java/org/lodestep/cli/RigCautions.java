@@ -24,6 +24,14 @@ final class RigCautions {
               and restart. Motor and driver get hot: let them cool before handling. Follow your machine's
               safety rules, local codes and licensed practice.""";
 
+    static final String CONFORMANCE = """
+            CAUTION - conformance run: the checks apply the rig's lowest insulation test voltage (typically
+              100 V DC) between lead 1 and the motor frame several times, a few seconds each, and run a slow
+              sweep (10 to 20 full steps/s) that turns the shaft. Disconnect the motor from its driver, or better
+              test with a dummy load of resistors on the rig's clips; nobody touches the leads, the frame or the
+              clips while the checks run; clear the shaft's travel. Follow local electrical codes and your site's
+              licensed practice; this tool does not replace them.""";
+
     static final String HAND_TURN = """
             Note - hand turn: spinning the shaft generates voltage at the leads; keep the leads apart and
               disconnected from any driver while you turn it.""";

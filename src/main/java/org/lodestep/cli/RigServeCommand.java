@@ -5,13 +5,13 @@ import java.io.PrintWriter;
 import java.net.InetAddress;
 import java.net.InetSocketAddress;
 import java.net.ServerSocket;
-import java.net.Socket;
 import java.nio.file.Files;
 import java.nio.file.Path;
 import java.util.concurrent.Callable;
 import java.util.concurrent.TimeUnit;
 
 import org.lodestep.rig.RigException;
+import org.lodestep.rig.RigServer;
 import org.lodestep.rig.Scenario;
 import org.lodestep.rig.Scenarios;
 import org.lodestep.rig.Transport;
@@ -28,7 +28,9 @@ import picocli.CommandLine.Model.CommandSpec;
 @Command(name = "serve", mixinStandardHelpOptions = true,
         description = {"Run the virtual rig as a separate process speaking the rig protocol (firmware-protocol.md), "
                 + "on a TCP port (loopback unless you name another address), on a serial device, or on a "
-                + "pseudo-terminal pair made with socat. Serves one session at a time until stopped (Ctrl-C)."},
+                + "pseudo-terminal pair made with socat. Serves one session at a time until stopped (Ctrl-C): on TCP "
+                + "another host is answered BUSY at once, and a host silent for 2 s before HELLO or 30 s after it is "
+                + "disconnected."},
         footer = {"%nExamples:",
                 "  lodestep rig serve --scenario gantry-axis --tcp 127.0.0.1:7070",
                 "      then: lodestep rig info tcp:127.0.0.1:7070",
@@ -115,13 +117,12 @@ final class RigServeCommand implements Callable<Integer> {
             out.println("virtual rig '" + scenarioName + "' listening on tcp:" + host + ":" + server.getLocalPort()
                     + " (Ctrl-C to stop)");
             out.flush();
-            do {
-                Socket socket = server.accept();
-                Transport t = Transports.acceptedTcp("tcp:" + socket.getRemoteSocketAddress(), socket);
-                new VirtualRig(scenarioName, s, t, realTime).run();
-                out.println("session from " + socket.getRemoteSocketAddress() + " ended");
-                out.flush();
-            } while (!once);
+            RigServer.serve(server, scenarioName, s, realTime, once, line -> {
+                synchronized (out) {
+                    out.println(line);
+                    out.flush();
+                }
+            });
         }
     }
 

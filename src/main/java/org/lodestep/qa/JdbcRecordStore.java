@@ -280,6 +280,6 @@ final class JdbcRecordStore implements RecordStore {
 
     private static String oneLine(SQLException e) {
         String msg = e.getMessage() == null ? e.toString() : e.getMessage();
-        return msg.replaceAll("\\s+", " ").trim();
+        return DatabaseUrls.redact(msg.replaceAll("\\s+", " ").trim());
     }
 }

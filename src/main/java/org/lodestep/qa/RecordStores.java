@@ -3,7 +3,6 @@ package org.lodestep.qa;
 import java.io.IOException;
 import java.nio.file.Files;
 import java.nio.file.Path;
-import java.util.Locale;
 import java.util.Map;
 import java.util.Properties;
 import java.util.regex.Matcher;
@@ -46,11 +45,14 @@ public final class RecordStores {
      */
     public static RecordStore open(String location, Map<String, String> env) throws StoreException {
         String loc = location == null || location.isBlank() ? DEFAULT_FILE : location.trim();
+        if (loc.startsWith("jdbc:") || loc.contains("://")) {
+            DatabaseUrls.refusePassword(loc);
+        }
         if (loc.startsWith("jdbc:postgresql:")) {
             return openPostgres(loc, env);
         }
         if (loc.startsWith("jdbc:") && !loc.startsWith("jdbc:sqlite:")) {
-            throw new IllegalArgumentException("unsupported database URL " + loc
+            throw new IllegalArgumentException("unsupported database URL " + DatabaseUrls.redact(loc)
                     + ": expected a file path, jdbc:sqlite:PATH or jdbc:postgresql://HOST/DB");
         }
         String path = loc.startsWith("jdbc:sqlite:") ? loc.substring("jdbc:sqlite:".length()) : loc;
@@ -84,10 +86,6 @@ public final class RecordStores {
     }
 
     private static RecordStore openPostgres(String url, Map<String, String> env) throws StoreException {
-        if (url.toLowerCase(Locale.ROOT).matches(".*[?&]password=.*")) {
-            throw new IllegalArgumentException("the database URL carries a password; put it in LODESTEP_DB_PASSWORD"
-                    + " (or PGPASSWORD, or ~/.pgpass) instead, so it never shows on a command line");
-        }
         String user = first(env, "LODESTEP_DB_USER", "PGUSER");
         String password = first(env, "LODESTEP_DB_PASSWORD", "PGPASSWORD");
         Properties props = new Properties();
@@ -124,7 +122,7 @@ public final class RecordStores {
             }
             config.load().migrate();
         } catch (FlywayException e) {
-            throw new StoreException("cannot open or migrate " + shown + ": " + rootMessage(e), e);
+            throw new StoreException(DatabaseUrls.redact("cannot open or migrate " + shown + ": " + rootMessage(e)), e);
         }
     }
 

@@ -98,6 +98,13 @@ final class BlockCollector {
         requests[seq]++;
     }
 
+    /** Takes back a request the rig could not serve yet (the block was not sent), so it does not count. */
+    void forgetRequest(int seq) {
+        if (seq >= 0 && seq < requests.length && requests[seq] > 0) {
+            requests[seq]--;
+        }
+    }
+
     /** The samples in the channels' units, [channel][frame]; only when {@link #complete()}. */
     double[][] samples() {
         if (!complete()) {

@@ -27,6 +27,14 @@ final class FrameCodec {
     /** Bytes a frame adds around its payload. */
     static final int OVERHEAD_BYTES = HEADER_BYTES + CRC_BYTES;
     static final int MAX_PAYLOAD_BYTES = 4096;
+    /**
+     * A receiver abandons a partial frame when no byte of it has arrived for this long, ms (firmware-protocol.md,
+     * section 2): a sender writes a frame's bytes back to back, so a gap means the rest is lost or the length is
+     * damaged, and waiting for bytes that never come would stall the line.
+     */
+    static final int INTER_BYTE_TIMEOUT_MS = 100;
+    /** A receiver abandons a partial frame this long after its first byte, ms, whatever arrives meanwhile. */
+    static final int FRAME_TIMEOUT_MS = 500;
 
     private FrameCodec() {
     }

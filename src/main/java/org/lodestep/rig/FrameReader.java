@@ -2,29 +2,47 @@ package org.lodestep.rig;
 
 import java.io.EOFException;
 import java.io.IOException;
+import java.util.function.LongSupplier;
 
 /**
  * Decodes frames from a {@link Transport}, resynchronising on the sync bytes after any damage: a frame whose length
- * field is impossible or whose CRC does not match is counted and skipped, never returned.
+ * field is impossible or whose CRC does not match is counted and skipped, never returned. A partial frame is
+ * abandoned the same way when its bytes stop coming ({@link FrameCodec#INTER_BYTE_TIMEOUT_MS}) or when it is not
+ * whole within {@link FrameCodec#FRAME_TIMEOUT_MS}, so a damaged length byte never makes the reader wait for bytes
+ * that will not come.
  */
 final class FrameReader {
-    /** What {@link #next} found. */
-    enum Kind { FRAME, TIMEOUT }
-
     private final Transport transport;
+    private final LongSupplier clockNanos;
     private byte[] buf = new byte[16384];
     private int start;
     private int end;
     private long damagedFrames;
+    private long abandonedFrames;
     private long bytesRead;
+    /** Whether the bytes at {@code start} are the beginning of a frame not yet whole. */
+    private boolean pending;
+    private long pendingSinceNanos;
+    private long lastByteNanos;
 
     FrameReader(Transport transport) {
-        this.transport = transport;
+        this(transport, System::nanoTime);
     }
 
-    /** Frames dropped so far because their CRC or length was wrong. */
+    /** With a clock of its own, so tests can step time instead of waiting for it. */
+    FrameReader(Transport transport, LongSupplier clockNanos) {
+        this.transport = transport;
+        this.clockNanos = clockNanos;
+    }
+
+    /** Frames dropped so far because their CRC or length was wrong, or because they stayed incomplete. */
     long damagedFrames() {
         return damagedFrames;
+    }
+
+    /** Of {@link #damagedFrames()}, those dropped because their bytes stopped coming. */
+    long abandonedFrames() {
+        return abandonedFrames;
     }
 
     /** Bytes received so far. */
@@ -38,19 +56,27 @@ final class FrameReader {
      * @throws EOFException when the far end closed the line
      */
     Frame next(int timeoutMs) throws IOException {
-        long deadline = System.nanoTime() + timeoutMs * 1_000_000L;
+        long deadline = clockNanos.getAsLong() + timeoutMs * 1_000_000L;
         boolean looked = false;
         while (true) {
             Frame f = tryDecode();
             if (f != null) {
                 return f;
             }
-            long leftMs = (deadline - System.nanoTime()) / 1_000_000L;
+            long now = clockNanos.getAsLong();
+            long leftMs = (deadline - now) / 1_000_000L;
             if (leftMs <= 0 && looked) {
                 return null;
             }
-            fill((int) Math.max(0, leftMs));
+            int wait = (int) Math.max(0, leftMs);
+            if (pending) {
+                wait = (int) Math.max(1, Math.min(wait, msUntilAbandon(now)));
+            }
+            int n = fill(wait);
             looked = true;
+            if (n == 0) {
+                abandonIfStale();
+            }
         }
     }
 
@@ -60,11 +86,29 @@ final class FrameReader {
         if (f != null) {
             return f;
         }
-        fill(0);
+        if (fill(0) == 0) {
+            abandonIfStale();
+        }
         return tryDecode();
     }
 
-    private void fill(int timeoutMs) throws IOException {
+    private long msUntilAbandon(long now) {
+        long byGap = lastByteNanos + FrameCodec.INTER_BYTE_TIMEOUT_MS * 1_000_000L - now;
+        long byFrame = pendingSinceNanos + FrameCodec.FRAME_TIMEOUT_MS * 1_000_000L - now;
+        return Math.max(0, Math.min(byGap, byFrame) / 1_000_000L + 1);
+    }
+
+    /** Drops the partial frame at the front once its time is up; judged only when the line has nothing more. */
+    private void abandonIfStale() {
+        long now = clockNanos.getAsLong();
+        if (pending && (now - lastByteNanos >= FrameCodec.INTER_BYTE_TIMEOUT_MS * 1_000_000L
+                || now - pendingSinceNanos >= FrameCodec.FRAME_TIMEOUT_MS * 1_000_000L)) {
+            abandonedFrames++;
+            damaged();
+        }
+    }
+
+    private int fill(int timeoutMs) throws IOException {
         if (end == buf.length) {
             if (start > 0) {
                 System.arraycopy(buf, start, buf, 0, end - start);
@@ -80,8 +124,12 @@ final class FrameReader {
         if (n < 0) {
             throw new EOFException(transport.address() + ": the line was closed");
         }
+        if (n > 0) {
+            lastByteNanos = clockNanos.getAsLong();
+        }
         end += n;
         bytesRead += n;
+        return n;
     }
 
     private Frame tryDecode() {
@@ -93,15 +141,24 @@ final class FrameReader {
             }
             if (s + 1 >= end) {
                 // keep a trailing SYNC0 that may start a frame
-                start = (s < end && (buf[s] & 0xFF) == FrameCodec.SYNC0) ? s : end;
+                int keep = (s < end && (buf[s] & 0xFF) == FrameCodec.SYNC0) ? s : end;
+                if (keep != start) {
+                    pending = false;
+                }
+                markPending(keep < end);
+                start = keep;
                 if (start == end) {
                     start = 0;
                     end = 0;
                 }
                 return null;
             }
+            if (s != start) {
+                pending = false;
+            }
             start = s;
             if (end - start < FrameCodec.HEADER_BYTES) {
+                markPending(true);
                 return null;
             }
             byte type = buf[start + 2];
@@ -113,6 +170,7 @@ final class FrameReader {
             }
             int total = FrameCodec.OVERHEAD_BYTES + n;
             if (end - start < total) {
+                markPending(true);
                 return null;
             }
             int c = start + FrameCodec.HEADER_BYTES + n;
@@ -126,12 +184,24 @@ final class FrameReader {
             byte[] payload = new byte[n];
             System.arraycopy(buf, start + FrameCodec.HEADER_BYTES, payload, 0, n);
             start += total;
+            pending = false;
             return new Frame(type, tag, payload);
+        }
+    }
+
+    /** Notes that the bytes at {@code start} begin a frame not yet whole (its clock starts once). */
+    private void markPending(boolean partial) {
+        if (!partial) {
+            pending = false;
+        } else if (!pending) {
+            pending = true;
+            pendingSinceNanos = lastByteNanos; // the fill that brought its first bytes
         }
     }
 
     private void damaged() {
         damagedFrames++;
+        pending = false;
         start += 1; // resynchronise on the next sync pair after this one
     }
 

@@ -4,11 +4,10 @@ import java.io.Closeable;
 import java.io.EOFException;
 import java.io.IOException;
 import java.time.Instant;
-import java.util.HashSet;
+import java.util.HashMap;
 import java.util.LinkedHashMap;
 import java.util.List;
 import java.util.Map;
-import java.util.Set;
 
 /**
  * The host side of {@code firmware-protocol.md}: handshake, measurements and streams, with timeouts, retries,
@@ -54,6 +53,9 @@ public final class RigClient implements Closeable {
     private long lastSendNanos;
     private long resendRequests;
     private long commandRetries;
+    private int protocolMinor;
+    /** Samples at full scale per channel, from the last stream's end frame ({@code clipped=name:count,...}). */
+    private String lastClipped = "";
 
     private RigClient(Transport transport, Settings settings) throws RigException {
         this.transport = transport;
@@ -85,12 +87,33 @@ public final class RigClient implements Closeable {
         return info;
     }
 
+    /** The protocol revision both sides speak: 1 for 1.1, 0 for a 1.0 rig. */
+    public int protocolMinor() {
+        return protocolMinor;
+    }
+
     public Stats stats() {
         return new Stats(reader.damagedFrames(), resendRequests, commandRetries, reader.bytesRead());
     }
 
     private RigInfo handshake() throws RigException {
-        Fields hello = Fields.parse(command("HELLO " + VirtualRig.PROTOCOL_VERSION, settings.replyTimeoutMs()).text());
+        // minor= tells a 1.1 rig what this host speaks; a 1.0 rig ignores it and answers without minor=
+        Fields hello;
+        try {
+            hello = Fields.parse(command("HELLO " + VirtualRig.PROTOCOL_VERSION + " minor="
+                    + VirtualRig.PROTOCOL_MINOR, settings.replyTimeoutMs()).text());
+        } catch (RigRefusedException e) {
+            if (e.error() != RigError.BAD_ARGUMENT) {
+                throw e;
+            }
+            // a strict 1.0 rig that refuses the unknown key: speak plain 1.0 to it
+            hello = Fields.parse(command("HELLO " + VirtualRig.PROTOCOL_VERSION, settings.replyTimeoutMs()).text());
+        }
+        try {
+            protocolMinor = Math.min(VirtualRig.PROTOCOL_MINOR, Integer.parseInt(hello.get("minor", "0")));
+        } catch (NumberFormatException e) {
+            protocolMinor = 0;
+        }
         Fields caps = Fields.parse(command("CAPS", settings.replyTimeoutMs()).text());
         String labels = caps.get("labels", "");
         return new RigInfo(transport.address(), hello.integer("proto"), hello.get("rig", "?"), hello.get("fw", "?"),
@@ -295,6 +318,7 @@ public final class RigClient implements Closeable {
         Frame header = command(text, (int) Math.min(Integer.MAX_VALUE / 2, seconds * 1000 * 2
                 + settings.replyTimeoutMs()));
         StreamSpec spec = StreamSpec.decode(header.text());
+        lastClipped = "";
         BlockCollector blocks = new BlockCollector(spec);
         try {
             receive(kind, text, header.tag(), blocks, progress);
@@ -317,9 +341,11 @@ public final class RigClient implements Closeable {
     /** Receives blocks until every one is present, asking again for damaged or lost ones. */
     private void receive(String kind, String text, int tag, BlockCollector blocks, Progress progress)
             throws IOException, RigException {
-        Set<Integer> resendTags = new HashSet<>();
+        Map<Integer, Integer> resendTags = new HashMap<>();
         int waitMs = Math.min(settings.replyTimeoutMs(), settings.keepaliveMs());
         int idleMs = 0;
+        int highest = -1;
+        boolean ended = false;
         progress.frames(0, blocks.totalFrames());
         while (!blocks.complete()) {
             Frame f = reader.next(waitMs);
@@ -328,20 +354,31 @@ public final class RigClient implements Closeable {
                 idleMs += waitMs;
                 if (idleMs >= settings.replyTimeoutMs()) {
                     idleMs = 0;
-                    // silence: ask again for what is missing, oldest first
+                    // silence: ask again for what is missing, oldest first; before the end, only up to the next
+                    // block due, since a rig streaming in real time may simply not have sampled the rest yet
                     for (int s : blocks.missing(32)) {
-                        request(s, blocks, kind, resendTags);
+                        if (ended || s <= highest + 1) {
+                            request(s, blocks, kind, resendTags);
+                        }
                     }
                 }
                 continue;
             }
-            if (f.type() == Frame.ERROR && (f.tag() == 0 || f.tag() == tag || resendTags.contains(f.tag()))) {
+            if (f.type() == Frame.ERROR && resendTags.containsKey(f.tag()) && f.text().startsWith(
+                    RigError.BLOCK_GONE.code() + " ") && !ended && resendTags.get(f.tag()) > highest) {
+                // not sent yet (section 6): not a lost block; it will come, or be asked for again
+                blocks.forgetRequest(resendTags.remove(f.tag()));
+                continue;
+            }
+            if (f.type() == Frame.ERROR && (f.tag() == 0 || f.tag() == tag || resendTags.containsKey(f.tag()))) {
                 throw refused(text, f);
             }
             if (f.tag() != tag) {
                 continue; // ping replies; a re-sent block carries the stream's tag, not the request's
             }
             if (f.type() == Frame.END) {
+                ended = true;
+                lastClipped = Fields.parse(f.text()).get("clipped", "");
                 if (!Fields.parse(f.text()).get("status", "").equals("complete")) {
                     throw new RigException("the rig ended the " + kind + " stream early (" + f.text() + ") after "
                             + blocks.have() + " of " + blocks.blocks() + " blocks");
@@ -352,6 +389,7 @@ public final class RigClient implements Closeable {
             } else if (f.type() == Frame.BLOCK) {
                 SampleBlock b = SampleBlock.decode(f.payload());
                 idleMs = 0;
+                highest = Math.max(highest, b.seq());
                 if (blocks.accept(b)) {
                     progress.frames(blocks.framesReceived(), blocks.totalFrames());
                 }
@@ -380,12 +418,16 @@ public final class RigClient implements Closeable {
         if (!serial.isEmpty()) {
             meta.put("motor_serial", serial);
         }
+        if (!lastClipped.isEmpty()) {
+            // samples at full scale: the true value is beyond the range, so peaks there are lower bounds
+            meta.put("clipped_samples", lastClipped);
+        }
         meta.put("started_utc", started);
         meta.put("finished_utc", Instant.now().toString());
         return meta;
     }
 
-    private void request(int seq, BlockCollector blocks, String kind, Set<Integer> resendTags)
+    private void request(int seq, BlockCollector blocks, String kind, Map<Integer, Integer> resendTags)
             throws IOException {
         if (blocks.requests(seq) >= settings.attempts()) {
             throw new IOException("block " + seq + " of the " + kind + " stream still damaged or missing after "
@@ -395,7 +437,7 @@ public final class RigClient implements Closeable {
         blocks.noteRequest(seq);
         resendRequests++;
         int t = tag();
-        resendTags.add(t);
+        resendTags.put(t, seq);
         send(Frame.text(Frame.COMMAND, t, "RESEND seq=" + seq));
     }
 }

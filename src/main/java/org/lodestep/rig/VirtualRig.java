@@ -19,6 +19,14 @@ import org.lodestep.sample.Channel;
 public final class VirtualRig implements Runnable {
     /** Protocol version spoken. */
     static final int PROTOCOL_VERSION = 1;
+    /** Minor revision of the protocol implemented (1.1), stated in the HELLO answer. */
+    static final int PROTOCOL_MINOR = 1;
+    /** A connection that has not completed HELLO this long after it opened is closed, ms (section 3). */
+    static final int HELLO_TIMEOUT_MS = 2000;
+    /** A session with no intact frame from the host this long is closed, ms (section 3). */
+    static final int IDLE_MS = 30_000;
+    /** Longest error text after the code and name, characters: an error frame always fits. */
+    static final int ERROR_TEXT_CHARS = 200;
     static final String FIRMWARE = "0.1.0";
     /** Silence after which every output is switched off, ms. */
     static final int WATCHDOG_MS = 2000;
@@ -39,7 +47,10 @@ public final class VirtualRig implements Runnable {
 
     private volatile long lastHostFrameNanos = System.nanoTime();
     private volatile boolean energised;
+    /** STOP, SAFE, an error or the watchdog cut the running stream or insulation dwell short. */
     private volatile boolean abortStream;
+    /** How it was cut short: the END status ({@code stopped}, {@code watchdog}, {@code error}). */
+    private volatile String abortStatus = "";
     private volatile String lastSafeReason = "";
     private volatile int safeEvents;
     private volatile String armedToken;
@@ -52,8 +63,15 @@ public final class VirtualRig implements Runnable {
     private Frame lastReply;
     private int streamTag = -1;
     private List<Frame> streamBlocks = List.of();
+    private int sentBlocks;
     private Frame streamEnd;
+    /** Tag of the stream or insulation test running now, or -1. */
+    private int busyTag = -1;
+    private String busyWhat = "";
     private volatile boolean running = true;
+    private boolean helloDone;
+    private boolean closeIdleSessions;
+    private final long openedNanos = System.nanoTime();
 
     public VirtualRig(String scenarioName, Scenario scenario, Transport transport, boolean realTime) {
         this.scenarioName = scenarioName;
@@ -62,6 +80,16 @@ public final class VirtualRig implements Runnable {
         this.reader = new FrameReader(transport);
         this.realTime = realTime;
         this.tokens = new Random(scenario.seed() ^ 0x5DEECE66DL);
+    }
+
+    /**
+     * Closes the session when the host has not completed HELLO within {@value #HELLO_TIMEOUT_MS} ms, or has sent no
+     * intact frame for {@value #IDLE_MS} ms, so a silent or half-framed client cannot hold a served rig. For
+     * {@code rig serve}; an in-process rig keeps its one session for as long as its host wants.
+     */
+    public VirtualRig closingIdleSessions() {
+        closeIdleSessions = true;
+        return this;
     }
 
     /** Whether any output (coil drive, step output, insulation supply, relays) is on right now. */
@@ -93,6 +121,9 @@ public final class VirtualRig implements Runnable {
                     if (f.type() == Frame.COMMAND) {
                         handle(f);
                     }
+                } else if (closeIdleSessions && idle()) {
+                    deEnergise("session idle", true);
+                    break;
                 }
             }
         } catch (EOFException e) {
@@ -111,6 +142,12 @@ public final class VirtualRig implements Runnable {
         }
     }
 
+    private boolean idle() {
+        long now = System.nanoTime();
+        return helloDone ? now - lastHostFrameNanos > IDLE_MS * 1_000_000L
+                : now - openedNanos > HELLO_TIMEOUT_MS * 1_000_000L;
+    }
+
     private void watchdogLoop() {
         while (running) {
             try {
@@ -120,15 +157,25 @@ public final class VirtualRig implements Runnable {
             }
             boolean live = energised || armedToken != null;
             if (live && System.nanoTime() - lastHostFrameNanos > WATCHDOG_MS * 1_000_000L) {
-                abortStream = true;
-                deEnergise("watchdog", true);
-                try {
-                    send(Frame.text(Frame.ERROR, 0, RigError.WATCHDOG.payload("host silent for "
-                            + WATCHDOG_MS + " ms; all outputs off")));
-                } catch (IOException ignored) {
-                    // the line is gone as well; outputs are off, which is what matters
+                // under the write lock, so the error goes out before the end frame of the stream it cuts short
+                synchronized (writeLock) {
+                    abort("watchdog");
+                    deEnergise("watchdog", true);
+                    try {
+                        send(Frame.text(Frame.ERROR, 0, RigError.WATCHDOG.payload("host silent for "
+                                + WATCHDOG_MS + " ms; all outputs off")));
+                    } catch (IOException ignored) {
+                        // the line is gone as well; outputs are off, which is what matters
+                    }
                 }
             }
+        }
+    }
+
+    private void abort(String status) {
+        if (busyTag >= 0 && !abortStream) {
+            abortStatus = status;
+            abortStream = true;
         }
     }
 
@@ -158,14 +205,23 @@ public final class VirtualRig implements Runnable {
     }
 
     private void error(int tag, RigError code, String text) throws IOException {
-        deEnergise("error", true);
-        Frame f = Frame.text(Frame.ERROR, tag, code.payload(text));
+        if (code != RigError.BUSY && code != RigError.BLOCK_GONE) {
+            abort("error");
+            deEnergise("error", true);
+        }
+        Frame f = errorFrame(tag, code, text);
         remember(tag, f);
         send(f);
     }
 
+    /** An error frame whose text is cut to {@value #ERROR_TEXT_CHARS} characters, so it always fits a frame. */
+    static Frame errorFrame(int tag, RigError code, String text) {
+        String t = text.length() <= ERROR_TEXT_CHARS ? text : text.substring(0, ERROR_TEXT_CHARS - 3) + "...";
+        return Frame.text(Frame.ERROR, tag, code.payload(t.replaceAll("[^\\x20-\\x7E]", "?")));
+    }
+
     private void remember(int tag, Frame f) {
-        if (tag != 0) {
+        if (tag != 0 && tag == lastTag) {
             lastReply = f;
         }
     }
@@ -177,8 +233,17 @@ public final class VirtualRig implements Runnable {
             send(lastReply); // a retry of a command already done: answer again, do not act again
             return;
         }
-        Fields c = Fields.parse(text);
-        String verb = c.word(0);
+        CommandText c;
+        try {
+            c = CommandText.parse(f.payload());
+        } catch (CommandException e) {
+            lastTag = tag;
+            lastCommand = text;
+            lastReply = null;
+            error(tag, e.error(), e.getMessage());
+            return;
+        }
+        String verb = c.verb();
         if (!verb.equals("PING") && !verb.equals("RESEND")) {
             lastTag = tag;
             lastCommand = text;
@@ -188,10 +253,19 @@ public final class VirtualRig implements Runnable {
             deEnergise("disarmed by another command", false);
         }
         try {
+            if (!helloDone && !SESSIONLESS.contains(verb)) {
+                throw new CommandException(RigError.VERSION, "no session: send HELLO " + PROTOCOL_VERSION + " first");
+            }
             switch (verb) {
                 case "HELLO" -> hello(tag, c);
-                case "CAPS" -> caps(tag);
-                case "PING" -> send(Frame.text(Frame.REPLY, tag, "OK"));
+                case "CAPS" -> {
+                    c.expect("CAPS", 1);
+                    caps(tag);
+                }
+                case "PING" -> {
+                    c.expect("PING", 1);
+                    send(Frame.text(Frame.REPLY, tag, "OK"));
+                }
                 case "RES" -> resistance(tag, c);
                 case "INS" -> insulation(tag, c);
                 case "STEP" -> stepResponse(tag, c);
@@ -199,36 +273,41 @@ public final class VirtualRig implements Runnable {
                 case "SWEEP" -> sweep(tag, c);
                 case "RESEND" -> resend(tag, c);
                 case "STOP", "SAFE" -> {
-                    deEnergise("host", false);
+                    deEnergise("host", false); // off first, whatever else the command says
+                    c.expect(verb, 1);
                     reply(tag, "OK safe");
                 }
                 case "BYE" -> {
                     deEnergise("host", false);
+                    c.expect("BYE", 1);
                     reply(tag, "OK bye");
                     running = false;
                 }
-                default -> error(tag, RigError.UNKNOWN_COMMAND, "'" + verb + "' is not a command");
+                default -> error(tag, RigError.UNKNOWN_COMMAND, "'" + CommandText.echo(verb) + "' is not a command");
             }
-        } catch (BadArgument e) {
-            error(tag, RigError.BAD_ARGUMENT, e.getMessage());
+        } catch (CommandException e) {
+            error(tag, e.error(), e.getMessage());
         }
     }
 
-    private static final class BadArgument extends Exception {
-        private static final long serialVersionUID = 1L;
+    /** Commands answered before HELLO: the handshake itself, the keep-alive, and every way to switch off. */
+    private static final List<String> SESSIONLESS = List.of("HELLO", "PING", "STOP", "SAFE", "BYE");
 
-        BadArgument(String m) {
-            super(m);
-        }
-    }
-
-    private void hello(int tag, Fields c) throws IOException {
+    private void hello(int tag, CommandText c) throws IOException, CommandException {
+        c.expect("HELLO", 2, "?minor");
         if (!c.word(1).equals(Integer.toString(PROTOCOL_VERSION))) {
-            error(tag, RigError.VERSION, "host speaks version " + c.word(1) + ", rig speaks " + PROTOCOL_VERSION);
+            helloDone = false;
+            error(tag, RigError.VERSION, "host speaks version " + CommandText.echo(c.word(1)) + ", rig speaks "
+                    + PROTOCOL_VERSION);
             return;
         }
-        reply(tag, "OK proto=" + PROTOCOL_VERSION + " rig=lodestep-virtual-rig fw=" + FIRMWARE + " id=VR-"
-                + motor.scenario().serial());
+        if (c.has("minor")) {
+            c.integer("minor", 0, 255);
+        }
+        deEnergise("new session", false);
+        helloDone = true;
+        reply(tag, "OK proto=" + PROTOCOL_VERSION + " minor=" + PROTOCOL_MINOR + " rig=lodestep-virtual-rig fw="
+                + FIRMWARE + " id=VR-" + motor.scenario().serial());
     }
 
     private void caps(int tag) throws IOException {
@@ -240,62 +319,53 @@ public final class VirtualRig implements Runnable {
                 + motor.scenario().serial());
     }
 
-    private int lead(String word) throws BadArgument {
-        try {
+    private int lead(String word) throws CommandException {
+        if (word != null && CommandText.INTEGER.matcher(word).matches() && word.length() <= 3) {
             int p = Integer.parseInt(word);
             if (p >= 1 && p <= motor.leadCount()) {
                 return p;
             }
-        } catch (NumberFormatException e) {
-            // fall through
         }
-        throw new BadArgument("lead '" + word + "' is not 1.." + motor.leadCount());
+        throw CommandException.badArgument("lead '" + CommandText.echo(String.valueOf(word)) + "' is not 1.."
+                + motor.leadCount());
     }
 
-    private static double number(Fields c, String key, double min, double max) throws BadArgument {
-        String v = c.get(key, null);
-        if (v == null) {
-            throw new BadArgument(key + "= is missing");
-        }
-        try {
-            double d = Double.parseDouble(v);
-            if (d >= min && d <= max) {
-                return d;
-            }
-        } catch (NumberFormatException e) {
-            // fall through
-        }
-        throw new BadArgument(key + "=" + v + " is not a number in " + StreamSpec.fmt(min) + ".." + StreamSpec.fmt(max));
+    private static double number(CommandText c, String key, double min, double max) throws CommandException {
+        return c.number(key, min, max);
     }
 
-    private void resistance(int tag, Fields c) throws IOException, BadArgument {
+    private void resistance(int tag, CommandText c) throws IOException, CommandException {
+        c.expect("RES", 3);
         int a = lead(c.word(1));
         int b = lead(c.word(2));
         if (a == b) {
-            throw new BadArgument("leads must differ");
+            throw CommandException.badArgument("leads must differ");
         }
         double r = motor.readResistanceOhm(a, b);
         reply(tag, "OK ohm=" + (Double.isInfinite(r) ? "over" : String.format(java.util.Locale.ROOT, "%.5g", r)));
     }
 
-    private void insulation(int tag, Fields c) throws IOException, BadArgument {
+    private void insulation(int tag, CommandText c) throws IOException, CommandException {
         switch (c.word(1)) {
             case "ARM" -> {
-                int lead = lead(c.get("lead", ""));
-                int volts = (int) number(c, "volts", 0, 1000);
+                c.expect("INS ARM", 2, "lead", "volts");
+                int lead = lead(c.get("lead"));
+                long volts = c.integer("volts", 0, 100_000);
                 if (volts != 100 && volts != 250 && volts != 500) {
-                    throw new BadArgument("volts=" + volts + " is not 100, 250 or 500");
+                    throw CommandException.badArgument("volts=" + volts + " is not 100, 250 or 500");
                 }
                 byte[] t = new byte[2];
                 tokens.nextBytes(t);
                 armedToken = HexFormat.of().withUpperCase().formatHex(t);
                 armedLead = lead;
-                armedVolts = volts;
+                armedVolts = (int) volts;
                 armedAtNanos = System.nanoTime();
                 reply(tag, "OK armed token=" + armedToken + " lead=" + lead + " volts=" + volts + " expires_ms="
                         + ARM_VALID_MS);
             }
             case "FIRE" -> {
+                // a missing token is a wrong token: NOT_ARMED, and like every error it cancels the arm
+                c.expect("INS FIRE", 2, "?token", "?seconds");
                 String token = armedToken;
                 if (token == null) {
                     error(tag, RigError.NOT_ARMED, "send INS ARM first");
@@ -305,27 +375,66 @@ public final class VirtualRig implements Runnable {
                     error(tag, RigError.ARM_EXPIRED, "arm older than " + ARM_VALID_MS + " ms; arm again");
                     return;
                 }
-                if (!token.equals(c.get("token", ""))) {
-                    error(tag, RigError.NOT_ARMED, "token does not match the arm");
+                if (!token.equals(c.get("token"))) {
+                    error(tag, RigError.NOT_ARMED, "token does not match the arm; arm again");
                     return;
                 }
                 double seconds = c.has("seconds") ? number(c, "seconds", 1, 600) : 60;
                 armedToken = null;
-                energised = true; // insulation supply on
-                double r = motor.readInsulationOhm(armedLead);
-                energised = false; // supply off and winding discharged before answering
-                reply(tag, "OK ohm=" + (Double.isInfinite(r) ? "over" : String.format(java.util.Locale.ROOT, "%.4g", r))
-                        + " lead=" + armedLead + " volts=" + armedVolts + " seconds=" + StreamSpec.fmt(seconds));
+                int lead = armedLead;
+                int volts = armedVolts;
+                busyTag = tag;
+                busyWhat = "an insulation test is running";
+                abortStream = false;
+                boolean cut;
+                try {
+                    energised = true; // insulation supply on
+                    double r = motor.readInsulationOhm(lead);
+                    dwell(seconds);
+                    energised = false; // supply off and winding discharged before answering
+                    cut = abortStream;
+                    if (!cut) {
+                        reply(tag, "OK ohm=" + (Double.isInfinite(r) ? "over"
+                                : String.format(java.util.Locale.ROOT, "%.4g", r)) + " lead=" + lead + " volts="
+                                + volts + " seconds=" + StreamSpec.fmt(seconds));
+                    }
+                } finally {
+                    energised = false;
+                    busyTag = -1;
+                }
+                if (cut) {
+                    Frame e = errorFrame(tag, RigError.STOPPED, "insulation test cut short (" + abortStatus
+                            + "); supply off, winding discharged; no reading");
+                    remember(tag, e);
+                    send(e);
+                }
             }
-            default -> throw new BadArgument("INS needs ARM or FIRE");
+            default -> throw CommandException.badArgument("INS needs ARM or FIRE");
         }
     }
 
-    private void stepResponse(int tag, Fields c) throws IOException, BadArgument {
+    /** The insulation dwell: the supply stays on for {@code seconds} (real time only), while the rig stays busy. */
+    private void dwell(double seconds) throws IOException {
+        if (!realTime) {
+            serviceWhileBusy(0);
+            return;
+        }
+        long due = System.nanoTime() + (long) (seconds * 1e9);
+        while (!abortStream) {
+            long leftMs = (due - System.nanoTime()) / 1_000_000L;
+            if (leftMs <= 0) {
+                break;
+            }
+            serviceWhileBusy((int) Math.min(10, leftMs));
+        }
+    }
+
+    private void stepResponse(int tag, CommandText c) throws IOException, CommandException {
+        c.expect("STEP", 3, "volts", "ms", "rate_hz");
         int a = lead(c.word(1));
         int b = lead(c.word(2));
         if (a == b) {
-            throw new BadArgument("leads must differ");
+            throw CommandException.badArgument("leads must differ");
         }
         double volts = number(c, "volts", 0.1, 24);
         double ms = number(c, "ms", 0.1, 1000);
@@ -344,22 +453,27 @@ public final class VirtualRig implements Runnable {
         stream(tag, spec, data, true);
     }
 
-    private void backEmf(int tag, Fields c) throws IOException, BadArgument {
-        String pairsText = c.get("pairs", "");
+    private void backEmf(int tag, CommandText c) throws IOException, CommandException {
+        c.expect("EMF", 1, "pairs", "seconds", "rate_hz");
+        String pairsText = c.get("pairs");
         List<int[]> pairs = new ArrayList<>();
         List<Channel> channels = new ArrayList<>();
         for (String p : pairsText.split(",")) {
             String[] ab = p.split("-");
             if (ab.length != 2) {
-                throw new BadArgument("pairs=" + pairsText + " is not a list like 1-2,3-4");
+                throw CommandException.badArgument("pairs=" + CommandText.echo(pairsText)
+                        + " is not a list like 1-2,3-4");
             }
             int a = lead(ab[0]);
             int b = lead(ab[1]);
+            if (a == b) {
+                throw CommandException.badArgument("pair " + a + "-" + b + " joins a lead to itself");
+            }
             pairs.add(new int[] {a, b});
             channels.add(new Channel("emf_" + a + "_" + b, "v"));
         }
         if (pairs.size() > 8) {
-            throw new BadArgument("at most 8 pairs");
+            throw CommandException.badArgument("at most 8 pairs");
         }
         double seconds = number(c, "seconds", 0.1, 60);
         double rate = number(c, "rate_hz", 100, MAX_RATE_HZ);
@@ -370,17 +484,22 @@ public final class VirtualRig implements Runnable {
         stream(tag, new StreamSpec(channels, lsb, rate, frames, blockFrames(pairs.size(), frames)), data, false);
     }
 
-    private void sweep(int tag, Fields c) throws IOException, BadArgument {
+    private void sweep(int tag, CommandText c) throws IOException, CommandException {
+        c.expect("SWEEP", 1, "from", "to", "seconds", "microsteps", "rate_hz", "?dir", "?drive", "?supply_v");
         double from = number(c, "from", 1, 20000);
         double to = number(c, "to", 1, 20000);
         double seconds = number(c, "seconds", 0.1, 600);
-        int micro = (int) number(c, "microsteps", 1, 256);
+        int micro = (int) c.integer("microsteps", 1, 256);
+        if (c.has("dir") && !c.get("dir").equals("fwd") && !c.get("dir").equals("rev")) {
+            // the simulated motor and load are symmetric, so the direction changes nothing measured
+            throw CommandException.badArgument("dir=" + CommandText.echo(c.get("dir")) + " is not fwd or rev");
+        }
         if (Integer.bitCount(micro) != 1) {
-            throw new BadArgument("microsteps=" + micro + " is not a power of two");
+            throw CommandException.badArgument("microsteps=" + micro + " is not a power of two");
         }
         double rate = number(c, "rate_hz", 100, MAX_RATE_HZ);
         int frames = frames(seconds, rate);
-        String drive = c.get("drive", "ideal");
+        String drive = c.has("drive") ? c.get("drive") : "ideal";
         double supply = c.has("supply_v") ? number(c, "supply_v", 1, 400) : 0;
         if (drive.equals("ideal")) {
             double[][] data = motor.sweep(from, to, seconds, micro, rate);
@@ -393,10 +512,11 @@ public final class VirtualRig implements Runnable {
         DriveMode mode = switch (drive) {
             case "voltage" -> DriveMode.CONSTANT_VOLTAGE;
             case "chopper" -> DriveMode.CHOPPER;
-            default -> throw new BadArgument("drive=" + drive + " is not ideal, voltage or chopper");
+            default -> throw CommandException.badArgument("drive=" + CommandText.echo(drive)
+                    + " is not ideal, voltage or chopper");
         };
         if (mode == DriveMode.CONSTANT_VOLTAGE && micro > 2) {
-            throw new BadArgument("drive=voltage switches full or half steps only: microsteps=" + micro
+            throw CommandException.badArgument("drive=voltage switches full or half steps only: microsteps=" + micro
                     + " is not 1 or 2");
         }
         double[][] data = motor.sweepDriven(from, to, seconds, micro, rate, motor.driveSettings(mode, supply));
@@ -406,10 +526,10 @@ public final class VirtualRig implements Runnable {
         stream(tag, spec, data, true);
     }
 
-    private static int frames(double seconds, double rate) throws BadArgument {
+    private static int frames(double seconds, double rate) throws CommandException {
         double f = Math.rint(seconds * rate);
         if (f < 1 || f > MAX_FRAMES) {
-            throw new BadArgument("record of " + (long) f + " frames is not 1.." + MAX_FRAMES);
+            throw CommandException.badArgument("record of " + (long) f + " frames is not 1.." + MAX_FRAMES);
         }
         return (int) f;
     }
@@ -420,6 +540,7 @@ public final class VirtualRig implements Runnable {
 
     private void stream(int tag, StreamSpec spec, double[][] data, boolean drives) throws IOException {
         int nc = spec.channels().size();
+        long[] clipped = new long[nc];
         List<Frame> blocks = new ArrayList<>(spec.blocks());
         for (int seq = 0; seq < spec.blocks(); seq++) {
             int n = spec.framesIn(seq);
@@ -427,6 +548,9 @@ public final class VirtualRig implements Runnable {
             for (int i = 0; i < n; i++) {
                 for (int ch = 0; ch < nc; ch++) {
                     long q = Math.round(data[ch][seq * spec.blockFrames() + i] / spec.lsb()[ch]);
+                    if (q >= 32767 || q <= -32767) {
+                        clipped[ch]++; // at or beyond full scale: the true value is unknown
+                    }
                     s[i * nc + ch] = (short) Math.max(-32767, Math.min(32767, q));
                 }
             }
@@ -435,74 +559,117 @@ public final class VirtualRig implements Runnable {
         streamTag = tag;
         streamBlocks = blocks;
         streamEnd = null;
+        sentBlocks = 0;
+        busyTag = tag;
+        busyWhat = "a stream is running";
         abortStream = false;
-        lastHostFrameNanos = System.nanoTime();
-        energised = drives;
-        reply(tag, spec.encode());
-        long t0 = System.nanoTime();
-        String status = "complete";
-        for (int seq = 0; seq < blocks.size(); seq++) {
-            if (realTime) {
-                long due = t0 + (long) ((double) seq * spec.blockFrames() / spec.rateHz() * 1e9);
-                while (System.nanoTime() < due && !abortStream) {
-                    serviceDuringStream(10);
+        try {
+            // frames that came while the record was computed count for the watchdog, which times the host's last
+            // frame, not the start of the stream
+            serviceWhileBusy(0);
+            energised = drives && !abortStream;
+            reply(tag, spec.encode());
+            long t0 = System.nanoTime();
+            for (int seq = 0; seq < blocks.size(); seq++) {
+                if (realTime) {
+                    long due = t0 + (long) ((double) seq * spec.blockFrames() / spec.rateHz() * 1e9);
+                    while (System.nanoTime() < due && !abortStream) {
+                        serviceWhileBusy(10);
+                    }
+                }
+                serviceWhileBusy(0);
+                synchronized (writeLock) {
+                    if (abortStream) {
+                        break;
+                    }
+                    send(blocks.get(seq));
+                    sentBlocks = seq + 1;
                 }
             }
-            serviceDuringStream(0);
-            if (abortStream) {
-                status = lastSafeReason.equals("watchdog") ? "watchdog" : "stopped";
-                break;
-            }
-            send(blocks.get(seq));
+        } finally {
+            energised = false;
+            busyTag = -1;
         }
-        energised = false;
-        streamEnd = Frame.text(Frame.END, tag, "END status=" + status + " blocks=" + blocks.size() + " frames="
-                + spec.frames());
+        String status = abortStream ? abortStatus : "complete";
+        StringBuilder end = new StringBuilder("END status=").append(status).append(" blocks=").append(blocks.size())
+                .append(" frames=").append(spec.frames()).append(" sent=").append(sentBlocks);
+        String sep = " clipped=";
+        for (int ch = 0; ch < nc; ch++) {
+            if (clipped[ch] > 0) {
+                end.append(sep).append(spec.channels().get(ch).name()).append(':').append(clipped[ch]);
+                sep = ",";
+            }
+        }
+        streamEnd = Frame.text(Frame.END, tag, end.toString());
         send(streamEnd);
     }
 
-    /** Answers what may arrive while a stream runs: PING, RESEND, STOP; anything else is refused as busy. */
-    private void serviceDuringStream(int waitMs) throws IOException {
+    /**
+     * Answers what may arrive while a stream or an insulation dwell runs: PING ({@code OK busy}), RESEND, STOP and
+     * SAFE (which cut it short), a retry of the running command; anything else is refused as busy.
+     */
+    private void serviceWhileBusy(int waitMs) throws IOException {
         Frame f = waitMs > 0 ? reader.next(waitMs) : reader.poll();
         while (f != null) {
             lastHostFrameNanos = System.nanoTime();
             if (f.type() == Frame.COMMAND) {
-                Fields c = Fields.parse(f.text());
-                switch (c.word(0)) {
-                    case "PING" -> send(Frame.text(Frame.REPLY, f.tag(), "OK busy"));
-                    case "RESEND" -> resend(f.tag(), c);
-                    case "STOP", "SAFE" -> {
-                        abortStream = true;
-                        deEnergise("host", false);
-                        send(Frame.text(Frame.REPLY, f.tag(), "OK safe"));
-                    }
-                    default -> {
-                        if (f.tag() == streamTag && f.text().equals(lastCommand) && lastReply != null) {
-                            send(lastReply);
-                        } else {
-                            send(Frame.text(Frame.ERROR, f.tag(), RigError.BUSY.payload("a stream is running")));
-                        }
-                    }
-                }
+                busyCommand(f);
             }
             f = reader.poll();
         }
     }
 
-    private void resend(int tag, Fields c) throws IOException {
-        int seq;
-        try {
-            seq = Integer.parseInt(c.get("seq", "-1"));
-        } catch (NumberFormatException e) {
-            seq = -1;
+    private void busyCommand(Frame f) throws IOException {
+        int tag = f.tag();
+        if (tag == busyTag && f.text().equals(lastCommand)) {
+            if (lastReply != null) {
+                send(lastReply); // the stream header again; the stream itself is not started again
+            }
+            return; // a retried FIRE during its dwell: its answer comes when the dwell ends
         }
-        if (seq >= 0 && seq < streamBlocks.size()) {
-            send(streamBlocks.get(seq));
+        String verb = "";
+        try {
+            CommandText c = CommandText.parse(f.payload());
+            verb = c.verb();
+            switch (verb) {
+                case "PING" -> {
+                    c.expect("PING", 1);
+                    send(Frame.text(Frame.REPLY, tag, "OK busy"));
+                }
+                case "RESEND" -> resend(tag, c);
+                case "STOP", "SAFE" -> {
+                    synchronized (writeLock) {
+                        abort("stopped");
+                        deEnergise("host", false);
+                        send(Frame.text(Frame.REPLY, tag, "OK safe"));
+                    }
+                }
+                default -> send(errorFrame(tag, RigError.BUSY, busyWhat + "; only PING, RESEND, STOP and SAFE"));
+            }
+        } catch (CommandException e) {
+            if (verb.equals("RESEND") || verb.equals("STOP") || verb.equals("SAFE")) {
+                error(tag, e.error(), e.getMessage()); // a malformed RESEND is a host fault: it ends the stream
+            } else {
+                send(errorFrame(tag, RigError.BUSY, busyWhat + "; only PING, RESEND, STOP and SAFE"));
+            }
+        }
+    }
+
+    private void resend(int tag, CommandText c) throws IOException, CommandException {
+        c.expect("RESEND", 1, "seq");
+        long seq = c.integer("seq", 0, 0xFFFF_FFFFL);
+        if (streamTag < 0) {
+            error(tag, RigError.BLOCK_GONE, "no stream has run in this session");
+        } else if (seq > streamBlocks.size()) {
+            throw CommandException.badArgument("seq=" + seq + " is beyond the last stream's " + streamBlocks.size()
+                    + " blocks");
+        } else if (seq < sentBlocks) {
+            send(streamBlocks.get((int) seq));
         } else if (seq == streamBlocks.size() && streamEnd != null) {
             send(streamEnd);
         } else {
-            // not an error that should switch anything off: nothing is on between streams
-            send(Frame.text(Frame.ERROR, tag, RigError.BLOCK_GONE.payload("no block " + seq + " in the last stream")));
+            error(tag, RigError.BLOCK_GONE, (seq == streamBlocks.size() ? "the end frame" : "block " + seq)
+                    + " has not been sent");
         }
     }
 }

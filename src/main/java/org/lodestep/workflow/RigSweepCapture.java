@@ -63,6 +63,11 @@ public final class RigSweepCapture {
             cap = s.drive() == null ? c.sweep(s.plan(), progress::advanced)
                     : c.sweep(s.plan(), s.drive(), s.supplyV(), progress::advanced);
         }
+        String clipped = cap.metadata().getOrDefault("clipped_samples", "");
+        if (!clipped.isEmpty()) {
+            // at full scale the true value is unknown: peaks there are lower bounds
+            progress.note("samples at the rig's full scale (clipped): " + clipped);
+        }
         progress.step("saving " + s.csv());
         return new Result(cap, RigCaptureFile.save(cap, s.csv(), s.plan(), s.toolVersion()));
     }
