@@ -7,7 +7,7 @@ import java.nio.file.Path;
 import java.util.ArrayList;
 import java.util.List;
 
-import org.lodestep.report.OutputFile;
+import org.lodestep.report.html.OutputFile;
 
 /**
  * Demo section: the salvaged HX-5718-08 motor (its card from the sample captures of the motor section) is to drive

@@ -9,7 +9,7 @@ import org.lodestep.drive.ProfileShape;
 import org.lodestep.report.DriveHtml;
 import org.lodestep.report.DriveJson;
 import org.lodestep.report.DriveText;
-import org.lodestep.report.OutputFile;
+import org.lodestep.report.html.OutputFile;
 import org.lodestep.workflow.DrivePlan;
 import org.lodestep.workflow.Progress;
 

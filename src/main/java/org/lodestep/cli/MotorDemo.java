@@ -11,7 +11,7 @@ import org.lodestep.motor.MotorCard;
 import org.lodestep.report.MotorCardText;
 import org.lodestep.report.MotorHtml;
 import org.lodestep.report.MotorJson;
-import org.lodestep.report.OutputFile;
+import org.lodestep.report.html.OutputFile;
 import org.lodestep.rig.RigClient;
 import org.lodestep.workflow.MotorCardSettings;
 import org.lodestep.workflow.MotorFromFiles;

@@ -15,7 +15,7 @@ import org.lodestep.qa.RecordStore;
 import org.lodestep.qa.RecordStores;
 import org.lodestep.qa.Tally;
 import org.lodestep.qa.Verdict;
-import org.lodestep.report.OutputFile;
+import org.lodestep.report.html.OutputFile;
 import org.lodestep.report.QaCsv;
 import org.lodestep.report.QaHtml;
 import org.lodestep.report.QaText;

@@ -8,7 +8,7 @@ import java.util.concurrent.Callable;
 
 import org.lodestep.qa.RecordStore;
 import org.lodestep.report.Json;
-import org.lodestep.report.OutputFile;
+import org.lodestep.report.html.OutputFile;
 import org.lodestep.report.QaCsv;
 import org.lodestep.workflow.Progress;
 import org.lodestep.workflow.QaExport;

@@ -6,7 +6,7 @@ import java.util.concurrent.Callable;
 
 import org.lodestep.report.Json;
 import org.lodestep.report.RigText;
-import org.lodestep.rig.DriveMode;
+import org.lodestep.drive.DriveMode;
 import org.lodestep.rig.SweepPlan;
 import org.lodestep.workflow.RigCaptureFile;
 import org.lodestep.workflow.RigSweepCapture;

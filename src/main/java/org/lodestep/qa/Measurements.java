@@ -1,6 +1,6 @@
 package org.lodestep.qa;
 
-import org.lodestep.rig.InsulationReading;
+import org.lodestep.wiring.InsulationReading;
 import java.util.List;
 import java.util.Objects;
 

@@ -7,7 +7,7 @@ import java.util.Locale;
 import org.lodestep.qa.CaptureRef;
 import org.lodestep.qa.CheckResult;
 import org.lodestep.qa.Histogram;
-import org.lodestep.rig.InsulationReading;
+import org.lodestep.wiring.InsulationReading;
 import org.lodestep.qa.LotStatistics;
 import org.lodestep.qa.StoredRecord;
 import org.lodestep.qa.Tally;

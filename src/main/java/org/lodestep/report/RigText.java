@@ -5,7 +5,7 @@ import java.util.Locale;
 import java.util.Map;
 
 import org.lodestep.sample.Channel;
-import org.lodestep.rig.InsulationReading;
+import org.lodestep.wiring.InsulationReading;
 import org.lodestep.rig.ResistanceReading;
 import org.lodestep.rig.RigCapture;
 import org.lodestep.rig.RigInfo;

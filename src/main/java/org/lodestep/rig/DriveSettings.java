@@ -1,5 +1,7 @@
 package org.lodestep.rig;
 
+import org.lodestep.drive.DriveMode;
+
 /**
  * One phase circuit of a two-phase motor and the drive that feeds it; both phases are taken alike.
  *

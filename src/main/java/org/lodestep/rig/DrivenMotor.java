@@ -1,5 +1,7 @@
 package org.lodestep.rig;
 
+import org.lodestep.drive.DriveMode;
+
 /**
  * A two-phase hybrid stepper with its phase circuits and drive, coupled to the rotor, advanced one integration step
  * per call. State: rotor angle θ, speed ω and the phase currents i_A, i_B.

@@ -1,5 +1,7 @@
 package org.lodestep.rig;
 
+import org.lodestep.drive.DriveMode;
+
 import java.util.ArrayList;
 import java.util.List;
 

@@ -1,5 +1,7 @@
 package org.lodestep.rig;
 
+import org.lodestep.drive.DriveMode;
+
 /**
  * Plays a step-rate table on the virtual rig's driven motor and counts the full steps the rotor lost.
  *

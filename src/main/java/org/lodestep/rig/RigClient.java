@@ -1,5 +1,9 @@
 package org.lodestep.rig;
 
+import org.lodestep.drive.DriveMode;
+
+import org.lodestep.wiring.InsulationReading;
+
 import java.io.Closeable;
 import java.io.EOFException;
 import java.io.IOException;

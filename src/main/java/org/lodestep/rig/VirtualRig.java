@@ -1,5 +1,7 @@
 package org.lodestep.rig;
 
+import org.lodestep.drive.DriveMode;
+
 import java.io.EOFException;
 import java.io.IOException;
 import java.util.ArrayList;

@@ -12,7 +12,7 @@ import org.lodestep.qa.CaptureRef;
 import org.lodestep.qa.Hashes;
 import org.lodestep.qa.Measurements;
 import org.lodestep.qa.MeterLog;
-import org.lodestep.rig.InsulationReading;
+import org.lodestep.wiring.InsulationReading;
 import org.lodestep.rig.RigClient;
 import org.lodestep.rig.RigException;
 import org.lodestep.sample.InputFormatException;

@@ -8,8 +8,8 @@ import java.util.OptionalDouble;
 
 import org.lodestep.qa.CaptureRef;
 import org.lodestep.qa.Hashes;
-import org.lodestep.rig.InsulationReading;
-import org.lodestep.rig.InsulationReading;
+import org.lodestep.wiring.InsulationReading;
+import org.lodestep.wiring.InsulationReading;
 import org.lodestep.rig.ResistanceReading;
 import org.lodestep.rig.RigClient;
 import org.lodestep.rig.RigException;

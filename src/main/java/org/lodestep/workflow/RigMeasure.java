@@ -6,7 +6,7 @@ import java.util.ArrayList;
 import java.util.List;
 import java.util.Objects;
 
-import org.lodestep.rig.InsulationReading;
+import org.lodestep.wiring.InsulationReading;
 import org.lodestep.rig.ResistanceReading;
 import org.lodestep.rig.RigCapture;
 import org.lodestep.rig.RigClient;

@@ -7,7 +7,7 @@ import java.util.Objects;
 import org.lodestep.rig.RigCapture;
 import org.lodestep.rig.RigClient;
 import org.lodestep.rig.RigException;
-import org.lodestep.rig.DriveMode;
+import org.lodestep.drive.DriveMode;
 import org.lodestep.rig.SweepPlan;
 
 /**

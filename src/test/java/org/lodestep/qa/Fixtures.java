@@ -1,6 +1,6 @@
 package org.lodestep.qa;
 
-import org.lodestep.rig.InsulationReading;
+import org.lodestep.wiring.InsulationReading;
 import java.nio.charset.StandardCharsets;
 import java.util.List;
 

@@ -1,6 +1,6 @@
 package org.lodestep.qa;
 
-import org.lodestep.rig.InsulationReading;
+import org.lodestep.wiring.InsulationReading;
 import static org.junit.jupiter.api.Assertions.assertEquals;
 import static org.junit.jupiter.api.Assertions.assertTrue;
 

@@ -6,7 +6,7 @@ import static org.junit.jupiter.api.Assertions.assertTrue;
 import java.util.List;
 
 import org.junit.jupiter.api.Test;
-import org.lodestep.rig.InsulationReading;
+import org.lodestep.wiring.InsulationReading;
 import org.lodestep.rig.ResistanceReading;
 
 class RigTextTest {

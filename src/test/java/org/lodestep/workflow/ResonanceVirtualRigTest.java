@@ -14,7 +14,7 @@ import org.lodestep.resonance.SweepResult;
 import org.lodestep.resonance.ResponseChannel;
 import org.lodestep.resonance.Stall;
 import org.lodestep.resonance.StepperSweepSimulator;
-import org.lodestep.rig.DriveMode;
+import org.lodestep.drive.DriveMode;
 import org.lodestep.rig.Scenario;
 import org.lodestep.rig.Scenarios;
 import org.lodestep.rig.SweepPlan;

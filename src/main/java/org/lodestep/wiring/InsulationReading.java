@@ -1,11 +1,11 @@
-package org.lodestep.rig;
+package org.lodestep.wiring;
 
 import java.util.Objects;
 
 /**
  * One insulation-resistance reading: the 1-minute (or other dwell) value of a DC insulation tester, whether the
- * rig's own tester took it or an inspector read it from a hand-held one. The one type for this reading: {@code qa}
- * judges it, {@code report} renders it.
+ * rig's own tester took it or an inspector read it from a hand-held one. The one type for this reading: {@code rig}
+ * and the meter-log reader produce it, {@code qa} judges it, {@code report} renders it.
  *
  * @param label         between what it was measured: {@code A-frame}, {@code B-frame}, {@code A-B}, {@code 3-frame}
  * @param resistanceOhm reading, Ω, 0 or more (0 is a dead short to the frame); {@code +Infinity} above the tester's
