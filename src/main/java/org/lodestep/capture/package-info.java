@@ -1,6 +1,6 @@
 /**
  * Turns files (CSV, WAV, rig capture files) into domain types: resistance readings and sampled signals.
- * Reads and writes; analyses nothing. Depends on {@code sample} only.
+ * Reads and writes; analyses nothing. Depends on {@code sample} and the domain types it reads into.
  *
  * <p>Time series: {@link org.lodestep.capture.Captures#open} opens a time-series CSV
  * ({@link org.lodestep.capture.TimeSeriesCsvReader}), a WAV ({@link org.lodestep.capture.WavReader}) or a rig capture

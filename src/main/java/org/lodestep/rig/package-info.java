@@ -10,6 +10,7 @@
  * Where the oracle states a closed form the engine also has (the rotor's small-oscillation natural frequency in
  * {@code RotorDynamics} against {@code motor.NaturalFrequency}), a test checks the two against each other and against
  * the integrated motion; so is the RL current step of {@code BenchMotor} against {@code motor.RlStep}
- * ({@code BenchMotorTest}). Depends on {@code sample} only.
+ * ({@code BenchMotorTest}). Depends on {@code sample} and the domain types it produces
+ * ({@code wiring.InsulationReading}, {@code drive.DriveMode}); never on {@code qa}, which judges what it measures.
  */
 package org.lodestep.rig;
