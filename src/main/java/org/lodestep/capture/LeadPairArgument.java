@@ -55,7 +55,13 @@ public final class LeadPairArgument {
             throw new InputFormatException(source, InputFormatException.NO_LINE, null, text,
                     "has no valid resistance: expected " + FORM);
         }
-        return new LeadPairReading(a, b, v.getAsDouble() * factor, 0);
+        double ohms = v.getAsDouble() * factor;
+        String impossible = Double.isFinite(ohms) ? ResistanceValues.impossible(ohms)
+                : "is out of range: expected a finite resistance";
+        if (impossible != null) {
+            throw new InputFormatException(source, InputFormatException.NO_LINE, null, text, impossible);
+        }
+        return new LeadPairReading(a, b, ohms, 0);
     }
 
     /** A reading as typed at the probe prompt: a number (ohms, optional m/k/M suffix) or OL; empty when invalid. */
@@ -76,6 +82,11 @@ public final class LeadPairArgument {
             }
         }
         OptionalDouble v = ResistanceValues.number(t, true);
-        return v.isPresent() ? OptionalDouble.of(v.getAsDouble() * factor) : OptionalDouble.empty();
+        if (v.isEmpty()) {
+            return OptionalDouble.empty();
+        }
+        double ohms = v.getAsDouble() * factor;
+        return Double.isFinite(ohms) && ResistanceValues.impossible(ohms) == null ? OptionalDouble.of(ohms)
+                : OptionalDouble.empty();
     }
 }

@@ -153,6 +153,10 @@ public final class ResistanceCsvReader {
                 throw new InputFormatException(source, line, column, cell, "is out of range: expected a finite"
                         + " resistance");
             }
+            String impossible = ResistanceValues.impossible(ohms);
+            if (impossible != null) {
+                throw new InputFormatException(source, line, column, cell, impossible);
+            }
             return ohms;
         }
     }

@@ -14,6 +14,24 @@ final class ResistanceValues {
     }
 
     /** Whether the cell is one of the ways to write open circuit: empty, OL, open, inf, ∞. */
+    /** Smallest non-zero reading an ohmmeter resolves, ohms (1 mΩ: a four-wire bench meter's last digit). */
+    static final double RESOLUTION_OHM = 1e-3;
+    /** Largest reading any ohmmeter or insulation tester gives, ohms (1 TΩ); anything beyond is written OL. */
+    static final double MAX_OHM = 1e12;
+
+    /**
+     * Why a reading in ohms cannot be a meter reading, or null when it can: 0 (a short) and 1 mΩ to 1 TΩ can.
+     */
+    static String impossible(double ohms) {
+        if (ohms > MAX_OHM) {
+            return "is above 1 TΩ, more than any meter reads: expected a reading up to 1 TΩ, or OL for open";
+        }
+        if (ohms > 0 && ohms < RESOLUTION_OHM) {
+            return "is below a meter's resolution (1 mΩ): expected 0 for a dead short or a reading of at least 1 mΩ";
+        }
+        return null;
+    }
+
     static boolean isOpen(String cell) {
         String c = cell.strip().toLowerCase(Locale.ROOT);
         return c.isEmpty() || c.equals("ol") || c.equals("o.l") || c.equals("o.l.") || c.equals("open")

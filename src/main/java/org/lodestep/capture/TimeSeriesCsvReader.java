@@ -186,6 +186,19 @@ public final class TimeSeriesCsvReader implements SampleStream {
         throw new InputFormatException(source, line, key, text, "expected " + expected);
     }
 
+    /**
+     * A {@code # key=value} line below the header would be silently ignored, and the analysis would run without the
+     * value the user meant to give (a turn count, a lead pair): refuse it. Plain comment lines stay notes.
+     */
+    private void refuseLateMetadata(String text) throws InputFormatException {
+        String t = text.strip();
+        int eq = t.indexOf('=');
+        if (eq > 1 && t.substring(1, eq).strip().matches("[A-Za-z][A-Za-z0-9_]*")) {
+            throw new InputFormatException(source, lines.lineNumber(), null, t, "is metadata below the header line:"
+                    + " expected every '# key=value' line above the header (move it up)");
+        }
+    }
+
     /** Parses the current line into {@code dest[*][at]} and {@link #rowTimeS}; false for a blank or comment line. */
     private boolean parseRow(double[][] dest, int at) throws InputFormatException {
         byte[] b = lines.buffer();
@@ -194,7 +207,11 @@ public final class TimeSeriesCsvReader implements SampleStream {
         while (p < end && b[p] == ' ') {
             p++;
         }
-        if (p == end || b[p] == '#') {
+        if (p == end) {
+            return false;
+        }
+        if (b[p] == '#') {
+            refuseLateMetadata(lines.text());
             return false;
         }
         p = lines.start();

@@ -18,8 +18,9 @@ import org.lodestep.wiring.Finding;
  *       on the direction, so it groups channels into phases and gives each coil's polarity;</li>
  *   <li>phase B is oriented to lag phase A while the shaft turned the way it turned most of the time, so a driver whose
  *       B current lags its A current turns the shaft that same way;</li>
- *   <li>with both phases present the electrical angle is {@code atan2(eA, -eB)}, defined at any speed, so cycles are
- *       counted through slow parts and direction changes; with one phase the analytic phase is used;</li>
+ *   <li>with both phases present the electrical angle is {@code atan2(eA, -eB)}; {@link ToothCounter} reads it only
+ *       where the EMF stands well above the idle noise, bridges slow stretches and reversals, and gives the tooth
+ *       count only when one whole number fits the count and its bound; with one phase the analytic phase is used;</li>
  *   <li>Ke (peak volts per electrical rad/s) is the least-squares slope through the origin of each channel's
  *       envelope against the electrical angular speed, block by block (20 ms blocks).</li>
  * </ol>
@@ -27,9 +28,6 @@ import org.lodestep.wiring.Finding;
 public final class BackEmfAnalyzer {
     /** A channel with less than this fraction of the strongest channel's RMS is taken as dead. */
     static final double DEAD_FRACTION = 0.05;
-    /** Upper bound of the amplitude, as a fraction of the high (95th percentile) one, below which the shaft is
-     *  treated as not turning. */
-    static final double MOVING_FRACTION = 0.10;
     /** Length of the blocks for frequency and Ke, s. */
     static final double BLOCK_S = 0.020;
 
@@ -67,7 +65,7 @@ public final class BackEmfAnalyzer {
         Angle angle = electricalAngle(ph, span);
         Speed speed = speedAndKe(z, angle, span, findings);
         Revolutions revs = revolutions(indexChannel, revolutions, pulsesPerRevolution, angle, findings);
-        Teeth teeth = teeth(revs, findings);
+        Teeth teeth = teeth(revs, angle.track(), findings);
 
         List<EmfCoil> coils = new ArrayList<>();
         for (int j = 0; j < m; j++) {
@@ -80,7 +78,7 @@ public final class BackEmfAnalyzer {
         }
         return new BackEmfResult(coils, angle.cycles(), speed.movingS(), speed.meanF(), speed.minF(), speed.maxF(),
                 revs.revolutions(), revs.source(), teeth.perRevolution(), teeth.teeth(), ph.lagDeg(), ph.reversals(),
-                findings);
+                teeth.count(), findings);
     }
 
     /** The samples analysed, {@code from} (inclusive) to {@code to} (exclusive) of {@code n}. */
@@ -99,8 +97,8 @@ public final class BackEmfAnalyzer {
     private record Phasing(double[][] za, double[][] zb, Double lagDeg, int reversals) {
     }
 
-    /** The unwrapped electrical angle, where the shaft moved, and the cycles between the first and last movement. */
-    private record Angle(double[] angle, boolean[] moving, int firstValid, int lastValid, double cycles) {
+    /** The unwrapped electrical angle, where it was read directly, the track behind it, and the net cycles. */
+    private record Angle(double[] angle, boolean[] moving, ToothCounter.Track track, double cycles) {
     }
 
     /** Block-wise electrical frequency and the Ke regression sums (per channel numerator, common denominator). */
@@ -111,8 +109,8 @@ public final class BackEmfAnalyzer {
     private record Revolutions(Double revolutions, RevolutionSource source, double countedCycles) {
     }
 
-    /** Cycles per revolution and the rotor tooth count; null when unknown. */
-    private record Teeth(Double perRevolution, Integer teeth) {
+    /** Cycles per revolution, the rotor tooth count and how it was read; null when unknown. */
+    private record Teeth(Double perRevolution, Integer teeth, ToothCount count) {
     }
 
     /** The common channel length, after checking every argument. */
@@ -305,65 +303,31 @@ public final class BackEmfAnalyzer {
         return new Phasing(za, zb, -Math.toDegrees(Math.atan2(sim, sre)), reversals);
     }
 
-    /** Electrical angle, held still where the shaft is not turning. */
-    private static Angle electricalAngle(Phasing ph, Span span) {
+    /** Electrical angle, read only where the EMF stands well above the idle noise ({@link ToothCounter}). */
+    private Angle electricalAngle(Phasing ph, Span span) {
         double[][] za = ph.za();
         double[][] zb = ph.zb();
         int n = span.n();
-        int from = span.from();
-        int to = span.to();
-        double[] amp = new double[n];
-        double[] rawAngle = new double[n];
+        double[] px = new double[n];
+        double[] py = new double[n];
         for (int i = 0; i < n; i++) {
             if (zb != null) {
-                double a = za[0][i];
-                double b = zb[0][i];
-                amp[i] = Math.hypot(a, b);
-                rawAngle[i] = Math.atan2(a, -b);
+                px[i] = -zb[0][i];
+                py[i] = za[0][i];
             } else {
-                amp[i] = Math.hypot(za[0][i], za[1][i]);
-                rawAngle[i] = Math.atan2(za[1][i], za[0][i]);
+                px[i] = za[0][i];
+                py[i] = za[1][i];
             }
         }
-        int angleFrom = zb != null ? 0 : from;
-        int angleTo = zb != null ? n : to;
-        double[] sortedAmp = Arrays.copyOfRange(amp, angleFrom, angleTo);
-        Arrays.sort(sortedAmp);
-        double high = sortedAmp[(int) (0.95 * (sortedAmp.length - 1))];
-        double floor = sortedAmp[(int) (0.01 * (sortedAmp.length - 1))];
-        // Track the angle down to a few times the noise floor (the quietest 1 %, taken while the shaft rests), but
-        // never below 0.3 % of the high amplitude nor above MOVING_FRACTION of it.
-        double threshold = Math.min(MOVING_FRACTION * high, Math.max(5 * floor, 0.003 * high));
-        double[] angle = new double[n];
-        boolean[] moving = new boolean[n];
-        int lastValid = -1;
-        int firstValid = -1;
-        for (int i = angleFrom; i < angleTo; i++) {
-            moving[i] = amp[i] > threshold;
-            if (moving[i]) {
-                if (lastValid < 0) {
-                    angle[i] = rawAngle[i];
-                    firstValid = i;
-                } else {
-                    angle[i] = angle[lastValid] + wrap(rawAngle[i] - rawAngle[lastValid]);
-                }
-                lastValid = i;
-            } else {
-                angle[i] = lastValid < 0 ? rawAngle[i] : angle[lastValid];
-            }
+        ToothCounter.Track track = ToothCounter.track(px, py, sampleRateHz);
+        boolean anyTrusted = false;
+        for (boolean t : track.trusted()) {
+            anyTrusted |= t;
         }
-        for (int i = 0; i < angleFrom; i++) {
-            angle[i] = angle[angleFrom];
-        }
-        for (int i = angleTo; i < n; i++) {
-            angle[i] = angle[angleTo - 1];
-        }
-        if (firstValid < 0) {
+        if (!anyTrusted) {
             throw new IllegalArgumentException("the shaft never turned fast enough to measure");
         }
-        double cycles = Math.abs(angle[lastValid] - angle[firstValid]) / (2 * Math.PI);
-
-        return new Angle(angle, moving, firstValid, lastValid, cycles);
+        return new Angle(track.angleRad(), track.trusted(), track, Math.abs(track.cycles()));
     }
 
     /** Block-wise frequency and the Ke regression of each channel's envelope on the electrical angular speed. */
@@ -379,8 +343,8 @@ public final class BackEmfAnalyzer {
         double[] num = new double[m];
         double den = 0;
         int movingSamples = 0;
-        for (int i = from; i < to; i++) {
-            if (moving[i]) {
+        for (boolean mv : a.track().moving()) {
+            if (mv) {
                 movingSamples++;
             }
         }
@@ -423,14 +387,18 @@ public final class BackEmfAnalyzer {
         double countedCycles = cycles;
         Double revs = null;
         if (indexChannel != null) {
-            int[] edges = risingEdges(indexChannel);
+            int[] all = risingEdges(indexChannel);
+            // Only pulses where the angle was read directly count: one in a slow start or stop has no exact angle.
+            boolean[] trusted = a.moving();
+            int[] edges = Arrays.stream(all).filter(i -> trusted[i]).toArray();
             if (edges.length >= 2) {
                 revs = (edges.length - 1) / (double) pulsesPerRevolution;
                 countedCycles = Math.abs(angle[edges[edges.length - 1]] - angle[edges[0]]) / (2 * Math.PI);
                 source = RevolutionSource.INDEX_CHANNEL;
-                if (revolutions != null && Math.abs(revolutions - revs) > 0.5) {
-                    findings.add(Finding.warning(MotorFindingCode.REVOLUTIONS_DISAGREE, String.format("%.3g revolutions stated, "
-                            + "%.3g counted on the index channel; the count is used", revolutions, revs)));
+                double allRevs = (all.length - 1) / (double) pulsesPerRevolution;
+                if (revolutions != null && Math.abs(revolutions - allRevs) > 0.5) {
+                    findings.add(Finding.warning(MotorFindingCode.REVOLUTIONS_DISAGREE, String.format("%.3g revolutions "
+                            + "stated, %.3g counted on the index channel; the count is used", revolutions, allRevs)));
                 }
             } else {
                 findings.add(Finding.warning(MotorFindingCode.INDEX_CHANNEL, "the index channel has fewer than two pulses"));
@@ -443,36 +411,24 @@ public final class BackEmfAnalyzer {
         return new Revolutions(revs, source, countedCycles);
     }
 
-    /** The rotor tooth count from the cycles per revolution, with findings where it is doubtful or unknown. */
-    private static Teeth teeth(Revolutions r, List<Finding> findings) {
+    /**
+     * The rotor tooth count from the cycles per revolution ({@link ToothCounter}): a whole number only when exactly
+     * one fits the count and its bound, with findings where it is refused, preferred or unusual.
+     */
+    private static Teeth teeth(Revolutions r, ToothCounter.Track track, List<Finding> findings) {
         Double revs = r.revolutions();
-        double countedCycles = r.countedCycles();
-        Double perRev = null;
-        Integer teeth = null;
-        if (revs != null) {
-            perRev = StepGeometry.cyclesPerRevolution(countedCycles, revs);
-            teeth = (int) Math.round(perRev);
-            if (teeth < 1) {
-                findings.add(Finding.error(MotorFindingCode.NO_TEETH, String.format("%.3g electrical cycles per revolution: the "
-                        + "revolution count or the capture is wrong", perRev)));
-                teeth = null;
-            } else {
-                double offCycles = Math.abs(countedCycles - teeth * revs);
-                if (offCycles > 0.25 * Math.max(1, revs)) {
-                    findings.add(Finding.warning(MotorFindingCode.TEETH_NOT_INTEGER, String.format("%.2f electrical cycles per "
-                            + "revolution is not close to a whole number; check the revolution count", perRev)));
-                }
-                if (teeth != 50 && teeth != 100) {
-                    findings.add(Finding.warning(MotorFindingCode.UNUSUAL_TEETH, teeth + " rotor teeth is unusual for a hybrid "
-                            + "motor (50 for 1.8°, 100 for 0.9°); check the revolution count"));
-                }
-            }
-        } else {
+        if (revs == null) {
             findings.add(Finding.info(MotorFindingCode.TEETH_UNKNOWN, "revolutions not given: the rotor tooth count, "
                     + "step angle and mechanical Ke stay unknown"));
+            return new Teeth(null, null, null);
         }
-
-        return new Teeth(perRev, teeth);
+        boolean indexed = r.source() == RevolutionSource.INDEX_CHANNEL;
+        ToothCount count = ToothCounter.count(r.countedCycles(),
+                indexed ? track.interiorUncertaintyCycles() + ToothCounter.ENDPOINT_ERROR_CYCLES
+                        : track.uncertaintyCycles(), revs, indexed ? 0 : ToothCounter.MARK_TOLERANCE_REV,
+                track.trustedFraction());
+        findings.addAll(ToothFindings.of(count));
+        return new Teeth(count.cyclesPerRevolution() > 0 ? count.cyclesPerRevolution() : null, count.teeth(), count);
     }
 
     private int blockLength() {

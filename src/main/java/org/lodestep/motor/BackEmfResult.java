@@ -19,13 +19,14 @@ import org.lodestep.wiring.Finding;
  * @param rotorTeeth                 rotor teeth; null when unknown
  * @param quadratureLagDeg           how far phase B lags phase A, electrical degrees (about 90); null with one phase
  * @param directionReversals         times the turning direction changed during the capture
+ * @param toothCount                 how the tooth count was read and how far it is trusted; null without revolutions
  * @param findings                   warnings and errors about the capture
  */
 public record BackEmfResult(List<EmfCoil> coils, double electricalCycles, double movingDurationS,
                             double meanElectricalFrequencyHz, double minElectricalFrequencyHz,
                             double maxElectricalFrequencyHz, Double revolutions, RevolutionSource revolutionSource,
                             Double cyclesPerRevolution, Integer rotorTeeth, Double quadratureLagDeg,
-                            int directionReversals, List<Finding> findings) {
+                            int directionReversals, ToothCount toothCount, List<Finding> findings) {
     public BackEmfResult {
         coils = List.copyOf(coils);
         Checks.nonNegative(electricalCycles, "electrical cycles", "cycles");

@@ -18,6 +18,8 @@ public enum MotorFindingCode implements Finding.Code {
     DIRECTION_REVERSED("direction_reversed"),
     /** The step response rises in a way that suggests eddy currents. */
     EDDY_CURRENT("eddy_current"),
+    /** Which limit, inductance or back-EMF, sets the full-current step rate. */
+    FULL_CURRENT_LIMIT("full_current_limit"),
     /** The index channel has too few pulses. */
     INDEX_CHANNEL("index_channel"),
     /** A back-EMF channel shows no voltage: an open coil or two leads that are not one coil. */
@@ -48,6 +50,10 @@ public enum MotorFindingCode implements Finding.Code {
     STEP_UNMATCHED("step_unmatched"),
     /** The supply voltage cannot drive the phase current. */
     SUPPLY_TOO_LOW("supply_too_low"),
+    /** Several tooth counts fit the back-EMF count; the one common count among them was taken. */
+    TEETH_COMMON_COUNT("teeth_common_count"),
+    /** Several tooth counts fit the back-EMF count and none is preferred: no step angle is given. */
+    TEETH_AMBIGUOUS("teeth_ambiguous"),
     /** The electrical cycles per revolution are not close to a whole number. */
     TEETH_NOT_INTEGER("teeth_not_integer"),
     /** Without the revolutions turned the tooth count stays unknown. */

@@ -269,7 +269,7 @@ public final class MotorIdentifier {
         if (keHalf == null) {
             unknowns.add(Unknown.of(Unknown.What.KE));
         }
-        Drive d = drive(request, cards, kt, notes);
+        Drive d = drive(request, cards, kt, steps, notes);
         Double fn = null;
         if (request.inertiaKgM2() != null) {
             if (teeth != null && d.torque() != null) {
@@ -293,7 +293,8 @@ public final class MotorIdentifier {
     }
 
     /** The drive figures from the phases in the chosen connection, each noted as unknown where inputs are missing. */
-    private static Drive drive(IdentifyRequest request, List<PhaseCard> cards, Double kt, Notes notes) {
+    private static Drive drive(IdentifyRequest request, List<PhaseCard> cards, Double kt, Integer steps,
+                               Notes notes) {
         List<Unknown> unknowns = notes.unknowns();
         List<Finding> findings = notes.findings();
         Double phaseR = mean(cards.stream().map(PhaseCard::resistanceOhm).toList());
@@ -333,11 +334,27 @@ public final class MotorIdentifier {
             if (rate == 0.0) {
                 findings.add(Finding.error(MotorFindingCode.SUPPLY_TOO_LOW, String.format("%.3g V cannot drive "
                         + "%.3g A through %.3g ohm", supply, current, phaseR)));
+            } else if (kt != null && steps != null) {
+                rate = withBackEmf(rate, supply, phaseR, phaseL, current, kt, steps, findings);
             }
         } else if (phaseL == null) {
             unknowns.add(Unknown.of(Unknown.What.INDUCTANCE));
         }
         return new Drive(current, currentBasis, torque, iMin, iMax, assumption, supply, supplyBasis, suggested, rate);
+    }
+
+    /** The full-current rate lowered by the back-EMF ({@link BackEmfCurrentLimit}), with which limit binds. */
+    private static double withBackEmf(double inductanceRate, double supply, double phaseR, double phaseL,
+                                      double current, double ke, int steps, List<Finding> findings) {
+        double rate = BackEmfCurrentLimit.rateFullStepsPerS(supply, phaseR, phaseL, current, ke, steps);
+        double emfV = ke * 2 * Math.PI * rate / steps;
+        boolean emfBinds = rate < (1 - BackEmfCurrentLimit.BINDING_FRACTION) * inductanceRate;
+        findings.add(Finding.info(MotorFindingCode.FULL_CURRENT_LIMIT, String.format(java.util.Locale.ROOT,
+                "full current up to %.4g full steps/s, limited by %s: the inductance alone would allow %.4g; there "
+                + "the back-EMF is %.3g V peak against a %.3g V supply (worst-case EMF during each reversal; dead "
+                + "time and saturation ignored)", rate, emfBinds ? "back-EMF" : "inductance", inductanceRate, emfV,
+                supply)));
+        return rate;
     }
 
     /** What the phase order means for the direction of rotation. */

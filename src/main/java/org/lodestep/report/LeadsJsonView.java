@@ -50,7 +50,8 @@ public final class LeadsJsonView {
         for (int i = 0; i < id.windings().size(); i++) {
             Winding w = id.windings().get(i);
             Double atRef = id.windingsAtReferenceOhm().isEmpty() ? null : id.windingsAtReferenceOhm().get(i);
-            windings.add(new WindingJson(w.ends(), w.tap(), w.resistanceOhm(), w.halfResistancesOhm(), w.halfWinding(),
+            windings.add(new WindingJson(w.ends(), w.tap(), meter(w.resistanceOhm()),
+                    w.halfResistancesOhm().stream().map(LeadsJsonView::meter).toList(), w.halfWinding(),
                     w.resistanceMeasured(), atRef));
         }
         List<FindingJson> findings = new ArrayList<>();
@@ -59,7 +60,7 @@ public final class LeadsJsonView {
         }
         List<ReadingJson> readings = new ArrayList<>();
         for (ReadingUse u : id.readings()) {
-            readings.add(new ReadingJson(pair(u.pair()), u.resistanceOhm(), u.kind()));
+            readings.add(new ReadingJson(pair(u.pair()), meter(u.resistanceOhm()), u.kind()));
         }
         return new MotorJson(source, motor, id.topology().label(), id.determined(), id.leads(), windings, findings,
                 id.connections(), id.missingPairs().stream().map(LeadsJsonView::pair).toList(), id.temperature(),
@@ -69,6 +70,14 @@ public final class LeadsJsonView {
     /** JSON text: one object, or an array when there are several motors. */
     public static String write(List<MotorJson> motors) {
         return Json.write(motors.size() == 1 ? motors.get(0) : motors);
+    }
+
+    /**
+     * Ohms to the meter's resolution (1 mΩ): a sum of two readings must not print binary noise such as
+     * 2.0199999999999996. Open (infinite) stays as it is.
+     */
+    static double meter(double ohms) {
+        return Double.isFinite(ohms) && Math.abs(ohms) < 1e12 ? Math.round(ohms * 1000.0) / 1000.0 : ohms;
     }
 
     private static List<String> pair(LeadPair p) {

@@ -58,8 +58,13 @@ public final class WiringDiagrams {
         for (List<String> j : connection.jumpers()) {
             b.tie(j.toArray(String[]::new));
         }
+        Set<String> onCoils = new LinkedHashSet<>();
+        id.windings().forEach(w -> onCoils.addAll(w.leads()));
         for (String lead : connection.insulate()) {
-            b.insulate(lead);
+            // a lead of an open coil is on no coil that still conducts: the findings name it, the drawing omits it
+            if (onCoils.contains(lead)) {
+                b.insulate(lead);
+            }
         }
         return b.build();
     }

@@ -19,6 +19,12 @@ final class ContinuityGroups {
      */
     static final double MAX_WINDING_OHM = 2_000.0;
 
+    /**
+     * A winding reading below this is a dead short, not a winding, ohms: the smallest two-phase hybrid windings read
+     * a few tenths of an ohm (common practice, no published source).
+     */
+    static final double SHORT_OHM = 0.02;
+
     final double continuityLimitOhm;
     final List<List<String>> groups;
     final List<ReadingUse> uses;
@@ -28,7 +34,8 @@ final class ContinuityGroups {
     ContinuityGroups(ResistanceMatrix m, IdentifySettings s) {
         double min = Double.POSITIVE_INFINITY;
         for (double v : m.readings().values()) {
-            if (Double.isFinite(v)) {
+            // a dead short says nothing about the level of the windings; it is a finding of its own
+            if (Double.isFinite(v) && v >= SHORT_OHM) {
                 min = Math.min(min, v);
             }
         }

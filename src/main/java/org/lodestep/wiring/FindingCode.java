@@ -12,6 +12,8 @@ public enum FindingCode implements Finding.Code {
     PHASE_LEAKAGE("phase-leakage"),
     /** Readings that contradict the series relations of the windings. */
     INCONSISTENT_MATRIX("inconsistent-matrix"),
+    /** A winding that reads a dead short (below 20 mΩ) between its ends. */
+    SHORTED_WINDING("shorted-winding"),
     /** One reading well above what its sibling readings imply: a poor probe contact. */
     CONTACT_RESISTANCE("contact-resistance");
 

@@ -21,6 +21,12 @@ public final class LeadIdentifier {
 
     /** Identifies the motor from the readings with the given settings. */
     public static Identification identify(ResistanceMatrix m, IdentifySettings s) {
+        Identification asRead = identifyAsRead(m, s);
+        return SingleSlip.find(m, s, asRead, LeadIdentifier::identifyAsRead).orElse(asRead);
+    }
+
+    /** Identifies the readings as they are, trusting each one. */
+    static Identification identifyAsRead(ResistanceMatrix m, IdentifySettings s) {
         ContinuityGroups cg = new ContinuityGroups(m, s);
         List<LeadPair> missing = new ArrayList<>(cg.undecided);
         List<Finding> findings = new ArrayList<>();
@@ -65,15 +71,31 @@ public final class LeadIdentifier {
             windings = windings.stream().map(w -> new Winding(w.ends(), null, w.resistanceOhm(), List.of(), true, true))
                     .toList();
         }
+        for (Winding w : windings) {
+            WindingChecks.shorted(w).ifPresent(findings::add);
+        }
         for (ReadingUse u : cg.uses) {
             if (u.kind().equals("leakage")) {
                 findings.add(WindingChecks.leakage(u, cg.continuityLimitOhm));
             }
         }
+        List<DriverWiring> salvage = null;
         if (groupsDecided && !singletons.isEmpty()) {
-            findings.add(WindingChecks.openWinding(singletons, windings, m.leads().size()));
+            var faulty = topology == Topology.UNKNOWN && allStructured
+                    ? FaultyLayout.infer(m.leads().size(), cg.groups, windings) : java.util.Optional.<FaultyLayout.Inference>empty();
+            if (faulty.isPresent()) {
+                topology = faulty.get().topology();
+                windings = faulty.get().windings();
+                salvage = faulty.get().salvage();
+                findings.add(new Finding(FindingCode.OPEN_WINDING, Severity.ERROR, faulty.get().message(),
+                        faulty.get().openLeads()));
+            } else {
+                findings.add(WindingChecks.openWinding(singletons, windings, m.leads().size()));
+            }
         }
-        WindingChecks.imbalance(topology, windings, s).ifPresent(findings::add);
+        if (salvage == null) {
+            WindingChecks.imbalance(topology, windings, s).ifPresent(findings::add);
+        }
         findings.sort(Comparator.comparing(Finding::severity).reversed());
 
         List<Double> atReference = new ArrayList<>();
@@ -87,7 +109,7 @@ public final class LeadIdentifier {
         }
         List<LeadPair> distinctMissing = missing.stream().distinct().toList();
         return new Identification(m.leads(), topology, windings, atReference, temperature, findings,
-                ConnectionGuide.connections(topology, windings), distinctMissing, distinctMissing.isEmpty(), cg.uses,
+                salvage != null ? salvage : ConnectionGuide.connections(topology, windings), distinctMissing, distinctMissing.isEmpty(), cg.uses,
                 m.readings().size(), m.allPairs().size());
     }
 

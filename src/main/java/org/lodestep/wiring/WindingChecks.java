@@ -233,9 +233,23 @@ final class WindingChecks {
                 + " replacing.", singletons);
     }
 
+    /** A dead short where a winding should read: a shorted coil, leads touching, or the probes on each other. */
+    static Optional<Finding> shorted(Winding w) {
+        if (!w.resistanceMeasured() || w.resistanceOhm() >= ContinuityGroups.SHORT_OHM) {
+            return Optional.empty();
+        }
+        String pair = w.ends().get(0) + "-" + w.ends().get(1);
+        return Optional.of(new Finding(FindingCode.SHORTED_WINDING, Severity.ERROR, String.format(Locale.ROOT,
+                "%s reads %s end to end, a dead short, not a winding (stepper windings read a few tenths of an ohm"
+                + " or more): the coil is shorted, the leads touch, or the probes touched each other. Measure %s"
+                + " again with the probes on the two leads only.", pair, ohm(w.resistanceOhm()), pair), w.ends()));
+    }
+
     static Optional<Finding> imbalance(Topology t, List<Winding> all, IdentifySettings s) {
         // Values derived from other readings carry several contact resistances: compare readings only.
-        List<Winding> windings = all.stream().filter(Winding::resistanceMeasured).toList();
+        // A dead short is its own finding; balance is judged among the windings that read as windings.
+        List<Winding> windings = all.stream().filter(Winding::resistanceMeasured)
+                .filter(w -> w.resistanceOhm() >= ContinuityGroups.SHORT_OHM).toList();
         if (t == Topology.UNKNOWN || windings.size() < 2) {
             return Optional.empty();
         }

@@ -24,7 +24,8 @@ public final class MotorCaptureInputs {
     }
 
     /**
-     * Reads and fits one step response. Metadata: {@code # leads=1,2} (required), {@code # joined=2,5},
+     * Reads and fits one step response. Metadata: {@code # leads=1,2} (without it the file is one coil, named after
+     * its current column or {@code coil 1}), {@code # joined=2,5},
      * {@code # supply_v=}, {@code # series_ohm=}; the flags are used where the file has none, and a recorded
      * {@code voltage_v} channel where neither gives the step voltage.
      */
@@ -94,11 +95,14 @@ public final class MotorCaptureInputs {
                     s.channelNames()), "has no current column: expected a column such as current_a (amperes)");
         }
         String leadsText = s.metadata().get("leads");
+        List<String> leads;
         if (leadsText == null) {
-            throw new InputFormatException(src, InputFormatException.NO_LINE, null, null,
-                    "has no '# leads=' line: expected the two leads the step was applied across, e.g. '# leads=1,2'");
+            // One file of one coil is the commonest thing a technician has: it still gives L, R and tau, named
+            // after its column (current_<lead>_<lead>_a) or as coil 1.
+            leads = coilFromColumn(s.channels().get(current).name());
+        } else {
+            leads = labels(src, "leads", leadsText);
         }
-        List<String> leads = labels(src, "leads", leadsText);
         if (leads.size() != 2) {
             throw new InputFormatException(src, InputFormatException.NO_LINE, "leads", leadsText,
                     "expected two lead labels, e.g. '# leads=1,2'");
@@ -130,6 +134,16 @@ public final class MotorCaptureInputs {
         } catch (IllegalArgumentException e) {
             throw new InputFormatException(src, InputFormatException.NO_LINE, null, null, e.getMessage());
         }
+    }
+
+    /** The two leads a current column names ({@code current_1_2}), else {@code coil 1} and {@code coil 1'}. */
+    static List<String> coilFromColumn(String name) {
+        String[] parts = name.split("_");
+        if (parts.length == 3 && parts[0].equals("current") && !parts[1].isEmpty() && !parts[2].isEmpty()
+                && !parts[1].equals(parts[2])) {
+            return List.of(parts[1], parts[2]);
+        }
+        return List.of("coil 1", "coil 1'");
     }
 
     /** Fits channel {@code current} of {@code s} as a step across {@code pair}. */

@@ -64,9 +64,18 @@ public final class RigCaptureFile {
      * @return the CSV path
      */
     public static Path save(RigCapture capture, Path csv, SweepPlan plan, String toolVersion) throws IOException {
+        return save(capture, csv, plan, toolVersion, Map.of());
+    }
+
+    /**
+     * As {@link #save(RigCapture, Path, SweepPlan, String)}, with the metadata the capture's analysis needs
+     * ({@code leads}, {@code supply_v}, {@code series_ohm} of a step response), so the file analyses as it comes.
+     */
+    public static Path save(RigCapture capture, Path csv, SweepPlan plan, String toolVersion,
+                            Map<String, String> analysis) throws IOException {
         Map<String, String> m = capture.metadata();
         SampledSignal s = capture.signal();
-        Map<String, String> extra = new LinkedHashMap<>();
+        Map<String, String> extra = new LinkedHashMap<>(analysis);
         extra.put("capture_kind", capture.kind());
         extra.put("rig_address", m.getOrDefault("address", "?"));
         extra.put("rig_command", m.getOrDefault("command", "?"));

@@ -157,7 +157,8 @@ public final class RigMeasure {
             Path saved = null;
             if (cap != null && s.saveTo() != null) {
                 progress.step("saving " + s.saveTo());
-                saved = RigCaptureFile.save(cap, s.saveTo(), null, s.toolVersion());
+                saved = RigCaptureFile.save(cap, s.saveTo(), null, s.toolVersion(),
+                        analysisMetadata(s, labels, c.info().capabilities()));
             }
             return new Result(s.kind(), labels, rs, ins, cap, saved);
         }
@@ -171,5 +172,25 @@ public final class RigMeasure {
             }
         }
         return out;
+    }
+
+    /**
+     * What {@code motor identify} and {@code qa check} need to analyse a saved step response: the leads (the rig's
+     * labels), the drive voltage and the rig's own series resistance (its {@code drive_series_ohm} capability).
+     */
+    static java.util.Map<String, String> analysisMetadata(Settings s, List<String> labels,
+                                                          java.util.Map<String, String> capabilities) {
+        java.util.Map<String, String> m = new java.util.LinkedHashMap<>();
+        if (s.kind() == Kind.STEP_RESPONSE) {
+            LeadPair p = s.pairs().get(0);
+            m.put("leads", label(labels, p.leadA()) + "," + label(labels, p.leadB()));
+            m.put("supply_v", Double.toString(s.stepVolts()));
+            m.put("series_ohm", capabilities.getOrDefault("drive_series_ohm", "0"));
+        }
+        return m;
+    }
+
+    private static String label(List<String> labels, int position) {
+        return position >= 1 && position <= labels.size() ? labels.get(position - 1) : String.valueOf(position);
     }
 }

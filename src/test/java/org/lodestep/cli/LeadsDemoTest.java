@@ -21,7 +21,7 @@ class LeadsDemoTest {
         assertEquals(ExitCode.OK, code, e.toString());
         String text = o.toString();
         for (String motor : new String[] {"KL-01: 4-lead", "KL-02: 5-lead", "KL-03: 6-lead", "KL-04: 8-lead",
-            "KL-05: unknown", "KL-06: 4-lead"}) {
+            "KL-05: 6-lead", "KL-06: 4-lead"}) {
             assertTrue(text.contains(motor), motor + " in\n" + text);
         }
         assertTrue(text.contains("6 motors sorted, 1 rejected"), text);

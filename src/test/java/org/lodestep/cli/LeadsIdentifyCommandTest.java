@@ -54,7 +54,7 @@ class LeadsIdentifyCommandTest {
             {"kl-02-syringe-pump-5lead.csv", "5-lead", "0"},
             {"kl-03-microscope-stage-6lead.tsv", "6-lead", "0"},
             {"kl-04-autosampler-8lead.csv", "8-lead", "0"},
-            {"kl-05-centrifuge-6lead-fault.csv", "unknown", "3"},
+            {"kl-05-centrifuge-6lead-fault.csv", "6-lead", "3"},
             {"kl-06-fan-4lead-partial.csv", "4-lead", "0"},
         };
         for (String[] e : expected) {

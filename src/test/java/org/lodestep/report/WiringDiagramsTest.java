@@ -8,6 +8,7 @@ import java.nio.file.Files;
 import java.nio.file.Path;
 import java.util.ArrayList;
 import java.util.HashSet;
+import java.util.Set;
 import java.util.List;
 import java.util.Map;
 import java.util.OptionalDouble;
@@ -53,13 +54,18 @@ class WiringDiagramsTest {
                 WiringDiagram d = WiringDiagrams.of(id, c);
                 drawn++;
                 // Every lead the identification knows is on the drawing, each once.
-                assertEquals(new HashSet<>(id.leads()), new HashSet<>(d.leads()), csv + " " + c.name());
+                // every lead on a coil that conducts is drawn (the leads of an open coil are named in the findings)
+                Set<String> onCoils = new HashSet<>();
+                id.windings().forEach(w -> onCoils.addAll(w.leads()));
+                assertEquals(onCoils, new HashSet<>(d.leads()), csv + " " + c.name());
+                Set<String> insulated = new HashSet<>(c.insulate());
+                insulated.retainAll(onCoils);
                 for (Map.Entry<String, List<String>> e : c.terminals().entrySet()) {
                     assertEquals(e.getValue(), d.leadsAt(DriverTerminal.parse(e.getKey())).stream()
                             .sorted((x, y) -> e.getValue().indexOf(x) - e.getValue().indexOf(y)).toList(),
                             csv + " " + c.name() + " " + e.getKey());
                 }
-                assertEquals(new HashSet<>(c.insulate()), new HashSet<>(d.insulated()));
+                assertEquals(insulated, new HashSet<>(d.insulated()));
                 assertEquals(c.jumpers().size(), d.ties().size());
                 assertTrue(d.toSvg().markup().startsWith("<svg"));
             }

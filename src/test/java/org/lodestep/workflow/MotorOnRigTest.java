@@ -53,6 +53,10 @@ class MotorOnRigTest {
         for (StepInput fit : card.stepResponses()) {
             assertEquals(1.25, fit.fit().windingResistanceOhm(), 1.25 * 0.02, fit.toString());
         }
-        assertEquals(0, card.findings().size(), card.findings().toString());
+        // The only finding says which limit sets the full-current rate: at the suggested supply the back-EMF of the
+        // series phase (2 × 0.13 V·s/rad) binds well below the inductance-only rate.
+        assertEquals(1, card.findings().size(), card.findings().toString());
+        assertEquals(org.lodestep.motor.MotorFindingCode.FULL_CURRENT_LIMIT, card.findings().get(0).code());
+        assertTrue(card.findings().get(0).message().contains("limited by back-EMF"), card.findings().toString());
     }
 }
