@@ -67,6 +67,8 @@ final class DemoCommand implements Callable<Integer> {
             out.println("HTML reports (open in any browser):");
             reports.forEach(p -> out.println("  " + p));
         }
+        out.println("Bench station in a browser (leads probe, motor card, QA desk, records, sweeps):");
+        out.println("  ./lodestep station --specs " + captures.resolve("qa") + " --captures " + captures.resolve("qa"));
         out.flush();
         return worst;
     }

@@ -30,6 +30,7 @@ import picocli.CommandLine.Option;
             QaCommand.class,
             RigCommand.class,
             DriveCommand.class,
+            StationCommand.class,
             CommandLine.HelpCommand.class
         },
         footerHeading = "%nExit codes:%n",

@@ -6,13 +6,14 @@ package org.lodestep.report.html;
  * <p>Besides the five markup characters, characters that XML 1.0 forbids (C0 controls other than tab, line feed and
  * carriage return; unpaired surrogates; U+FFFE, U+FFFF) become U+FFFD, so a hostile serial number cannot make a
  * report unreadable to an XML parser.
+ * Public so the bench station's pages escape exactly as the reports do.
  */
-final class Html {
+public final class Html {
     private Html() {
     }
 
     /** Escaped text, safe in element content and in single- or double-quoted attributes. */
-    static String escape(String text) {
+    public static String escape(String text) {
         if (text == null) {
             return "";
         }
