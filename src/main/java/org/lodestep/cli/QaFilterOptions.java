@@ -32,23 +32,7 @@ final class QaFilterOptions {
 
     /** A title naming the selection. */
     String title() {
-        StringBuilder b = new StringBuilder("QA report");
-        if (lot != null) {
-            b.append(", lot ").append(lot);
-        }
-        if (part != null) {
-            b.append(", part ").append(part);
-        }
-        if (from != null) {
-            b.append(", from ").append(from);
-        }
-        if (to != null) {
-            b.append(", to ").append(to);
-        }
-        if (lot == null && part == null && from == null && to == null) {
-            b.append(", all records");
-        }
-        return b.toString();
+        return org.lodestep.report.QaText.selectionTitle(lot, part, from, to);
     }
 
     private static String instant(String option, String text, boolean endOfDay) {

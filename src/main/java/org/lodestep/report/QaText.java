@@ -227,4 +227,25 @@ public final class QaText {
         }
         return b.toString();
     }
+
+    /** The title of a lot report naming its selection (lot, part, date range), "all records" when there is none. */
+    public static String selectionTitle(String lot, String part, String from, String to) {
+        StringBuilder b = new StringBuilder("QA report");
+        if (lot != null) {
+            b.append(", lot ").append(lot);
+        }
+        if (part != null) {
+            b.append(", part ").append(part);
+        }
+        if (from != null) {
+            b.append(", from ").append(from);
+        }
+        if (to != null) {
+            b.append(", to ").append(to);
+        }
+        if (lot == null && part == null && from == null && to == null) {
+            b.append(", all records");
+        }
+        return b.toString();
+    }
 }

@@ -62,20 +62,7 @@ final class RecordsPages {
         }
 
         String title() {
-            StringBuilder b = new StringBuilder("QA report");
-            if (lot != null) {
-                b.append(", lot ").append(lot);
-            }
-            if (part != null) {
-                b.append(", part ").append(part);
-            }
-            if (from != null) {
-                b.append(", from ").append(from);
-            }
-            if (to != null) {
-                b.append(", to ").append(to);
-            }
-            return lot == null && part == null && from == null && to == null ? b + ", all records" : b.toString();
+            return org.lodestep.report.QaText.selectionTitle(lot, part, from, to);
         }
     }
 
