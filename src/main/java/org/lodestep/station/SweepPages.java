@@ -126,7 +126,8 @@ final class SweepPages {
         Files.write(file, Uploads.bytes(up));
         Tasks.Task task = desk.tasks.submit(progress -> {
             ResonanceSweep.Result r = ResonanceSweep.analyse(file, ResonanceSweep.Settings.defaults(), progress);
-            return result(r, "Uploaded capture " + Uploads.safeName(up.filename()));
+            return result(r, "Uploaded capture " + Uploads.safeName(up.filename()),
+                    desk.provenance().withInput("sweep", file));
         });
         Desk.json(ctx, Map.of("task", task.id));
     }
@@ -135,18 +136,20 @@ final class SweepPages {
         RigSweepCapture.Result cap = RigSweepCapture.run(settings, progress);
         // the saved capture carries its sweep law, as `resonance sweep FILE` reads it after `rig capture`
         ResonanceSweep.Result r = ResonanceSweep.analyse(cap.saved(), ResonanceSweep.Settings.defaults(), progress);
-        return result(r, "Capture saved to " + cap.saved());
+        return result(r, "Capture saved to " + cap.saved(), desk.provenance().withInput("sweep", cap.saved())
+                .withRig(desk.settings.rig()));
     }
 
-    private Map<String, Object> result(ResonanceSweep.Result r, String origin) {
+    private Map<String, Object> result(ResonanceSweep.Result r, String origin,
+                                       org.lodestep.workflow.Provenance provenance) {
         ResonanceText.SweepHeader header = new ResonanceText.SweepHeader(r.source(), r.channel(), r.unit(),
                 r.sampleRateHz(), r.rateLaw());
         String id = Access.random();
         if (reports.size() >= KEEP) {
             reports.clear(); // a bench keeps only the recent sweeps in memory; each capture is saved on disk
         }
-        reports.put(id, ResonanceHtml.sweep(header, r.sweep(), r.units(), r.avoid(),
-                r.spectrogramColumnRatesFullStepsPerS()).html());
+        reports.put(id, org.lodestep.report.ProvenanceBlock.html(ResonanceHtml.sweep(header, r.sweep(), r.units(),
+                r.avoid(), r.spectrogramColumnRatesFullStepsPerS()), provenance).html());
         StringWriter text = new StringWriter();
         try (PrintWriter out = new PrintWriter(text)) {
             ResonanceText.sweep(out, header, r.sweep(), r.units(), r.avoid());
