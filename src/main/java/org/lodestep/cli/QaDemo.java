@@ -64,7 +64,7 @@ final class QaDemo implements DemoCommand.Section {
             worst = expect(worst, lot(spec, qa, dir, store, out), ExitCode.FINDING);
 
             out.println();
-            out.println("KV24-00124 read 62 Mohm phase B to frame. After a night in the drying cabinet it is re-tested:");
+            out.println("KV24-00124 read 62 M\u03A9 phase B to frame. After a night in the drying cabinet it is re-tested:");
             QaReadingSources retest = new QaReadingSources(qa.resolve("KV24-00124.csv"), null, null,
                     List.of(2.79, 2.81), List.of(new TypedInsulation("a-frame", 1320, Double.NaN),
                     new TypedInsulation("b-frame", 1150, Double.NaN), new TypedInsulation("a-b", 1710, Double.NaN)),

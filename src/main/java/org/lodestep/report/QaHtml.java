@@ -54,8 +54,17 @@ public final class QaHtml {
             Submission s = records.get(0).submission();
             b.verdict(status(s.verdict()), s.verdict().name() + ": serial " + s.serial(), failing(s));
         } else {
+            List<String> notPassed = new ArrayList<>();
+            for (StoredRecord r : records) {
+                if (r.submission().verdict() != Verdict.PASS) {
+                    notPassed.add(r.submission().serial() + " (" + r.submission().verdict().name()
+                            .toLowerCase(Locale.ROOT) + ")");
+                }
+            }
+            notPassed.addAll(notRecorded.keySet().stream().map(k -> k + " (not recorded)").toList());
             b.verdict(overall, String.format(Locale.ROOT, "%d tested: %d pass, %d fail, %d incomplete", tested,
-                    tally.passed(), tally.failed(), tally.incomplete()), null);
+                    tally.passed(), tally.failed(), tally.incomplete()), notPassed.isEmpty() ? "Every motor passed."
+                    : "Not passed: " + String.join("; ", notPassed) + ".", null);
         }
         if (!Double.isNaN(testVoltageV)) {
             b.safety(SafetyNote.INSULATION_TEST);
@@ -83,7 +92,8 @@ public final class QaHtml {
             List<HtmlReport.Finding> notes = new ArrayList<>();
             for (CheckResult c : s.checks()) {
                 if (!c.note().isEmpty()) {
-                    notes.add(new HtmlReport.Finding(status(c.verdict()), name(c) + ": " + c.note()));
+                    // a note explains a value (correction, rule); the verdict is in the table, so it is information
+                    notes.add(new HtmlReport.Finding(Status.INFO, name(c) + ": " + c.note()));
                 }
             }
             if (!notes.isEmpty()) {
@@ -110,8 +120,16 @@ public final class QaHtml {
                 .meta("First-pass yield", QaFormat.pct(c.firstPassYieldPct()))
                 .meta("Final yield", QaFormat.pct(c.finalYieldPct()));
         Status st = c.notIntact() > 0 || c.failed() > 0 ? Status.FAIL : c.incomplete() > 0 ? Status.WARN : Status.PASS;
-        b.verdict(st, String.format(Locale.ROOT, "%d pass, %d fail, %d incomplete", c.passed(), c.failed(),
-                c.incomplete()), c.notIntact() > 0 ? c.notIntact() + " record(s) no longer match their SHA-256: the"
+        List<String> notPassed = new ArrayList<>();
+        for (LotStatistics.NotPassed n : sum.notPassed()) {
+            notPassed.add(n.serial() + " (" + n.verdict().name().toLowerCase(Locale.ROOT)
+                    + (n.checks().isEmpty() ? "" : ": " + String.join(", ", n.checks()).replace('_', ' ')) + ")");
+        }
+        b.verdict(st, String.format(Locale.ROOT, "Final yield %s, first-pass yield %s: %d pass, %d fail,"
+                        + " %d incomplete", QaFormat.pct(c.finalYieldPct()), QaFormat.pct(c.firstPassYieldPct()),
+                c.passed(), c.failed(), c.incomplete()),
+                notPassed.isEmpty() ? "Every motor passed." : "Not passed: " + String.join("; ", notPassed) + ".",
+                c.notIntact() > 0 ? c.notIntact() + " record(s) no longer match their SHA-256: the"
                 + " database was changed outside Lodestep." : null);
         for (LotStatistics.ParameterStatistics p : sum.parameters()) {
             String name = p.parameter();
