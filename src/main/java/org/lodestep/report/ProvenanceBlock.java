@@ -34,13 +34,14 @@ public final class ProvenanceBlock {
         StringBuilder sb = new StringBuilder();
         sb.append("Provenance: report ").append(p.reportId()).append(", ").append(p.tool()).append(", run ")
                 .append(p.runAtUtc()).append(" (UTC)").append(System.lineSeparator());
-        sb.append("  command  ").append(p.commandText()).append(System.lineSeparator());
+        // arguments and paths come from outside: control characters must not reach the terminal
+        sb.append("  command  ").append(QaFormat.visible(p.commandText())).append(System.lineSeparator());
         if (p.rig() != null) {
-            sb.append("  rig      ").append(p.rig()).append(System.lineSeparator());
+            sb.append("  rig      ").append(QaFormat.visible(p.rig())).append(System.lineSeparator());
         }
         for (Provenance.InputFile f : p.inputs()) {
             sb.append("  ").append(f.sha256() == null ? "(" + f.note() + ")" : "sha256 " + f.sha256()).append("  ")
-                    .append(f.role()).append("  ").append(f.path()).append(System.lineSeparator());
+                    .append(f.role()).append("  ").append(QaFormat.visible(f.path())).append(System.lineSeparator());
         }
         return sb.toString();
     }

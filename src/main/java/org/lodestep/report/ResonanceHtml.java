@@ -264,22 +264,22 @@ public final class ResonanceHtml {
         Map<String, String> facts = new LinkedHashMap<>();
         boolean bb = !r.backbone().isEmpty();
         facts.put(bb ? "Natural frequency (small-signal)" : "Natural frequency", bb
-                ? String.format(Locale.ROOT, "%.2f Hz (\u00B1 %.2f)", r.naturalFrequencyHz(), r.naturalFrequencyErrorHz())
-                : String.format(Locale.ROOT, "%.2f Hz", r.naturalFrequencyHz()));
-        facts.put("Damped frequency", String.format(Locale.ROOT, "%.2f Hz", r.dampedFrequencyHz()));
+                ? String.format(Locale.ROOT, "%.1f Hz (\u00B1 %.1f)", r.naturalFrequencyHz(), r.naturalFrequencyErrorHz())
+                : String.format(Locale.ROOT, "%.1f Hz", r.naturalFrequencyHz()));
+        facts.put("Damped frequency", String.format(Locale.ROOT, "%.1f Hz", r.dampedFrequencyHz()));
         facts.put(bb ? "Damping ratio \u03B6 (small-signal)" : "Damping ratio \u03B6", bb
                 ? String.format(Locale.ROOT, "%.4f \u00B1 %.4f", r.dampingRatio(), r.dampingRatioError())
                 : String.format(Locale.ROOT, "%.4f", r.dampingRatio()));
         if (bb) {
-            facts.put("Large-swing frequency (first cycle)", String.format(Locale.ROOT, "%.2f Hz",
+            facts.put("Large-swing frequency (first cycle)", String.format(Locale.ROOT, "%.1f Hz",
                     r.largeSwingFrequencyHz()));
-            facts.put("One sinusoid over the whole ring", String.format(Locale.ROOT, "%.2f Hz, R\u00B2 %.3f",
+            facts.put("One sinusoid over the whole ring", String.format(Locale.ROOT, "%.1f Hz, R\u00B2 %.3f",
                     r.wholeRingFrequencyHz(), r.wholeRingRSquared()));
             facts.put("Cycles measured", Integer.toString(r.backbone().size()));
         }
         facts.put("Quality factor Q", String.format(Locale.ROOT, "%.1f", r.qualityFactor()));
-        facts.put("Decay rate \u03C3", String.format(Locale.ROOT, "%.2f 1/s", r.decayRatePerS()));
-        facts.put("Fit quality R\u00B2", String.format(Locale.ROOT, "%.4f", r.rSquared()));
+        facts.put("Decay rate \u03C3", String.format(Locale.ROOT, "%.1f 1/s", r.decayRatePerS()));
+        facts.put("Fit quality R\u00B2", String.format(Locale.ROOT, "%.3f", r.rSquared()));
         facts.put("RMS residual", sig(r.rmsResidual()) + " " + u);
         b.facts(facts);
         return b.build();

@@ -84,13 +84,26 @@ final class HtmlStyle {
             footer{margin-top:2rem;padding-top:.5rem;border-top:1px solid var(--rule);color:var(--muted);font-size:.8rem}
             @media (max-width:40rem){body{font-size:15px}.report{padding:.75rem .6rem}h1{font-size:1.3rem}
             th,td{padding:.3rem .4rem}}
+            @media screen and (max-width:40rem){
+            table.stack thead{display:none}
+            table.stack,table.stack tbody,table.stack tr,table.stack td{display:block;width:100%}
+            table.stack tr{border-bottom:2px solid var(--rule);padding:.2rem 0}
+            table.stack td{border:0;display:flex;justify-content:space-between;gap:1rem;text-align:right;
+            white-space:normal;padding:.15rem .4rem}
+            table.stack td::before{content:attr(data-label);color:var(--muted);font-size:.8rem;text-align:left;
+            font-weight:400;flex:0 1 45%}
+            table.stack tr[class^="row-st-"] td:first-child{border-left-width:.35rem}
+            table:not(.stack) th:first-child,table:not(.stack) td:first-child{position:sticky;left:0;
+            background:var(--paper)}
+            table:not(.stack) tr.row-st-fail td:first-child{background:var(--fail-bg)}}
             @page{size:A4;margin:14mm 12mm}
             @media print{body{background:#fff;font-size:10pt}.report{max-width:none;padding:0}
             *{-webkit-print-color-adjust:exact;print-color-adjust:exact}
             figure,table,aside,.verdict,dl.facts div{break-inside:avoid}h2,h3{break-after:avoid}
             .table-wrap{overflow:visible}header.head{break-after:avoid}.verdict{break-after:avoid}
             aside.safety{padding:.3rem .6rem;margin:.5rem 0}aside.safety p{font-size:8.5pt}
-            figure svg.wiring{max-height:150mm;width:auto;max-width:100%}
+            h2{margin:.9rem 0 .3rem}figure{margin:.5rem 0;padding:.3rem}h1{font-size:16pt}dl.meta dd{font-size:9pt}.verdict{padding:.5rem .8rem;margin:.6rem 0}
+            figure svg.wiring{max-height:95mm;width:auto;max-width:100%}
             .provenance-line a{display:none}}
             """;
 }
