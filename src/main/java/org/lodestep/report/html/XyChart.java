@@ -224,7 +224,9 @@ public final class XyChart {
                 r.setSeriesStroke(i, dense ? new BasicStroke(1f) : ChartStyle.seriesStroke(look));
                 r.setSeriesShape(i, s.x().length > 60 ? ChartStyle.smallShape(look) : ChartStyle.seriesShape(look));
                 r.setSeriesShapesFilled(i, look % 2 == 0);
-                r.setSeriesVisibleInLegend(i, s.styleOf() < 0);
+                // no legend entry for a series that draws nothing (no point, or a lone point of a line without markers)
+                boolean draws = xs.getItemCount() >= (s.shapes() && !dense ? 1 : 2);
+                r.setSeriesVisibleInLegend(i, s.styleOf() < 0 && draws);
             }
             r.setDrawSeriesLineAsPath(true);
             NumberAxis x = new NumberAxis(xLabel);
