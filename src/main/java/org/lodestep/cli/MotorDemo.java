@@ -58,6 +58,7 @@ final class MotorDemo implements DemoCommand.Section {
         ProvenanceBlock.html(MotorHtml.report(resistance.toString(), card, traces, MotorOptionHints.INSTANCE),
                 provenance).write(html);
         printCard(out, card);
+        out.print(ProvenanceBlock.text(provenance));
         out.println("report: " + html);
         Path json = outDir.resolve("motor-card.json");
         OutputFile.write(json, ProvenanceBlock.json(MotorJson.write(card, MotorOptionHints.INSTANCE), provenance)

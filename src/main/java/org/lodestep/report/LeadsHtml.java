@@ -113,7 +113,8 @@ public final class LeadsHtml {
         if (id.hasError()) {
             Finding f = id.findings().get(0);
             b.verdict(Status.FAIL, "Fault found: do not use this motor as it is",
-                    answer == null ? null : "Salvage wiring, " + answer, f.message());
+                    answer == null ? null : answer.startsWith("salvage") ? Character.toUpperCase(answer.charAt(0))
+                            + answer.substring(1) : "Salvage wiring, " + answer, f.message());
         } else if (!id.determined()) {
             b.verdict(Status.WARN, "Not yet certain", null, id.missingPairs().isEmpty() ? "The readings allow more"
                     + " than one layout." : "Measure " + id.missingPairs().size() + " more pair(s) to settle the layout: "

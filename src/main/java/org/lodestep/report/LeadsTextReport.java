@@ -57,7 +57,7 @@ public final class LeadsTextReport {
             return null;
         }
         DriverWiring c = id.connections().get(0);
-        String state = id.hasError() ? "SALVAGE" : !id.determined() ? "NOT YET CERTAIN"
+        String state = id.hasError() ? "FAULT" : !id.determined() ? "NOT YET CERTAIN"
                 : c.verified() ? "WIRING" : "PROVISIONAL";
         return state + ": " + wiringLine(c);
     }

@@ -90,6 +90,7 @@ final class HtmlStyle {
             table.stack tr{border-bottom:2px solid var(--rule);padding:.2rem 0}
             table.stack td{border:0;display:flex;justify-content:space-between;gap:1rem;text-align:right;
             white-space:normal;padding:.15rem .4rem}
+            table.stack td:not(.num){text-align:left}
             table.stack td::before{content:attr(data-label);color:var(--muted);font-size:.8rem;text-align:left;
             font-weight:400;flex:0 1 45%}
             table.stack tr[class^="row-st-"] td:first-child{border-left-width:.35rem}
