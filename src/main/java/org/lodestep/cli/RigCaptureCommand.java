@@ -109,12 +109,13 @@ final class RigCaptureCommand implements Callable<Integer> {
             r = WorkflowCall.run(() -> RigSweepCapture.run(settings, bar));
         }
         if (json) {
-            o.println(ProvenanceBlock.json(Json.write(r.capture().metadata()), RunProvenance.of(spec)));
+            o.println(ProvenanceBlock.json(Json.write(r.capture().metadata()),
+                    RunProvenance.withCaptureRig(RunProvenance.of(spec), r.capture().metadata())));
             spec.commandLine().getErr().println("saved " + r.saved());
         } else {
             o.print(RigText.capture(r.capture()));
             o.println("saved " + r.saved());
-            o.print(ProvenanceBlock.text(RunProvenance.of(spec)));
+            o.print(ProvenanceBlock.text(RunProvenance.withCaptureRig(RunProvenance.of(spec), r.capture().metadata())));
         }
         o.flush();
         return ExitCode.OK;

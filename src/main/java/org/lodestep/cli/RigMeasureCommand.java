@@ -138,10 +138,12 @@ final class RigMeasureCommand implements Callable<Integer> {
                     : RigText.insulation(r.insulation(), r.labels()) + ProvenanceBlock.text(RunProvenance.of(spec)));
             default -> {
                 if (json) {
-                    o.println(ProvenanceBlock.json(Json.write(r.capture().metadata()), RunProvenance.of(spec)));
+                    o.println(ProvenanceBlock.json(Json.write(r.capture().metadata()),
+                            RunProvenance.withCaptureRig(RunProvenance.of(spec), r.capture().metadata())));
                 } else {
                     o.print(RigText.capture(r.capture()));
-                    o.print(ProvenanceBlock.text(RunProvenance.of(spec)));
+                    o.print(ProvenanceBlock.text(RunProvenance.withCaptureRig(RunProvenance.of(spec),
+                            r.capture().metadata())));
                 }
                 if (r.saved() != null) {
                     (json ? spec.commandLine().getErr() : o).println("saved " + r.saved());

@@ -34,6 +34,16 @@ final class RunProvenance {
         return Provenance.of(VersionProvider.version(), cmd, Instant.now());
     }
 
+    /** {@code p} with the rig a capture's metadata names (rig, id, firmware, address), when it names one. */
+    static Provenance withCaptureRig(Provenance p, java.util.Map<String, String> meta) {
+        if (!meta.containsKey("rig")) {
+            return p;
+        }
+        return p.withRig(meta.get("rig") + ", id " + meta.getOrDefault("rig_id", "?") + ", firmware "
+                + meta.getOrDefault("firmware", "?") + (meta.containsKey("address") ? ", at " + meta.get("address")
+                : ""));
+    }
+
     /** The rig line of a provenance: name, id, firmware, protocol, address. */
     static String rig(org.lodestep.rig.RigInfo info) {
         return info.rig() + ", id " + info.id() + ", firmware " + info.firmware() + ", protocol "
