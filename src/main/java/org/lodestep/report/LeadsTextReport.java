@@ -64,19 +64,24 @@ public final class LeadsTextReport {
 
     /** One connection in one line: "bipolar series: A+ = 1, A− = 7, B+ = 3, B− = 6; join 5 + 2, 8 + 4". */
     static String wiringLine(DriverWiring c) {
-        StringBuilder b = new StringBuilder(c.name().replace('-', ' ')).append(": ");
-        boolean first = true;
-        for (Map.Entry<String, List<String>> e : c.terminals().entrySet()) {
-            b.append(first ? "" : ", ").append(e.getKey().replace("-", "\u2212")).append(" = ")
+        return c.name().replace('-', ' ') + ": " + wiringLine(c.terminals(), c.jumpers(), c.insulate());
+    }
+
+    /**
+     * Terminals, joins and insulated leads in one line, the one way every report writes a wiring:
+     * "A+ = 1, A− = 7, B+ = 3, B− = 6; join 5 + 2, 8 + 4; insulate 9".
+     */
+    static String wiringLine(Map<String, List<String>> terminals, List<List<String>> joins, List<String> insulate) {
+        StringBuilder b = new StringBuilder();
+        for (Map.Entry<String, List<String>> e : terminals.entrySet()) {
+            b.append(b.length() == 0 ? "" : ", ").append(e.getKey().replace("-", "\u2212")).append(" = ")
                     .append(String.join(" + ", e.getValue()));
-            first = false;
         }
-        if (!c.jumpers().isEmpty()) {
-            b.append("; join ").append(String.join(", ", c.jumpers().stream().map(j -> String.join(" + ", j))
-                    .toList()));
+        if (!joins.isEmpty()) {
+            b.append("; join ").append(String.join(", ", joins.stream().map(j -> String.join(" + ", j)).toList()));
         }
-        if (!c.insulate().isEmpty()) {
-            b.append("; insulate ").append(String.join(", ", c.insulate()));
+        if (!insulate.isEmpty()) {
+            b.append("; insulate ").append(String.join(", ", insulate));
         }
         return b.toString();
     }

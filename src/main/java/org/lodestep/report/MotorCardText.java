@@ -208,19 +208,11 @@ public final class MotorCardText {
 
     /** The wiring in one line: "A+ = 1, A− = 4, B+ = 5, B− = 8; join 7 + 6, 2 + 3". */
     static String wiringLine(Wiring w) {
-        StringBuilder b = new StringBuilder();
+        java.util.Map<String, List<String>> terminals = new java.util.LinkedHashMap<>();
         for (Terminal t : w.terminals()) {
-            b.append(b.length() == 0 ? "" : ", ").append(t.terminal().replace("-", "\u2212")).append(" = ")
-                    .append(String.join(" + ", t.leads()));
+            terminals.put(t.terminal(), t.leads());
         }
-        if (!w.joinTogether().isEmpty()) {
-            b.append("; join ").append(String.join(", ", w.joinTogether().stream().map(j -> String.join(" + ", j))
-                    .toList()));
-        }
-        if (!w.insulate().isEmpty()) {
-            b.append("; insulate ").append(String.join(", ", w.insulate()));
-        }
-        return b.toString();
+        return LeadsTextReport.wiringLine(terminals, w.joinTogether(), w.insulate());
     }
 
     /** The figures a person sets a driver by: phase R and L as wired, Ke, the rated-current range; known ones only. */

@@ -35,7 +35,7 @@ class ProvenanceBlockTest {
         assertTrue(t.startsWith("Provenance: report " + p.reportId() + ", lodestep 0.1.0, run 2026-12-02T10:15:30Z"), t);
         assertTrue(t.contains("command  lodestep leads identify " + dir.resolve("readings.csv")), t);
         assertTrue(t.contains("rig      virtual rig, firmware 0.1.0"), t);
-        // FIPS 180-2, Appendix B.1: SHA-256("abc")
+        // references §24: NIST FIPS 180-2, Appendix B.1, SHA-256("abc")
         assertTrue(t.contains("sha256 ba7816bf8f01cfea414140de5dae2223b00361a396177a9cb410ff61f20015ad  readings  "
                 + dir.resolve("readings.csv")), t);
     }

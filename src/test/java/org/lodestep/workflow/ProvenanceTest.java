@@ -23,7 +23,7 @@ class ProvenanceTest {
         Files.writeString(f, "abc", StandardCharsets.US_ASCII);
         Provenance p = Provenance.of("0.1.0", List.of("lodestep", "leads", "identify", f.toString()), AT)
                 .withInput("readings", f);
-        // FIPS 180-2, Appendix B.1: SHA-256("abc")
+        // references §24: NIST FIPS 180-2, Appendix B.1, SHA-256("abc")
         assertEquals("ba7816bf8f01cfea414140de5dae2223b00361a396177a9cb410ff61f20015ad", p.inputs().get(0).sha256());
         assertEquals(3, p.inputs().get(0).bytes());
         assertEquals("readings", p.inputs().get(0).role());
@@ -60,7 +60,7 @@ class ProvenanceTest {
     void uploadsAreHashedFromTheirBytes() {
         Provenance p = Provenance.of("0.1.0", List.of("station"), AT).withInput("sweep", "up.csv",
                 "abc".getBytes(StandardCharsets.US_ASCII));
-        // FIPS 180-2, Appendix B.1
+        // references §24: NIST FIPS 180-2, Appendix B.1
         assertEquals("ba7816bf8f01cfea414140de5dae2223b00361a396177a9cb410ff61f20015ad", p.inputs().get(0).sha256());
     }
 

@@ -57,7 +57,8 @@ public final class HtmlReport {
     /**
      * This report stamped with what produced it: a line under the title (report ID, run time, tool), a closing
      * "Provenance" section (labelled facts, then the input files with their SHA-256), the report ID in the footer,
-     * and in print the report ID and "page N of M" in the bottom margin of every page.
+     * and in print the report ID and "page N of M" in the bottom margin of every page (CSS Paged Media page-margin
+     * boxes and the page counters, references §24).
      *
      * @param reportId    the run's report ID
      * @param summaryLine the line under the title
