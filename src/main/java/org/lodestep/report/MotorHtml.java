@@ -76,6 +76,16 @@ public final class MotorHtml {
         }
         b.safety(SafetyNote.ENERGISED_COILS, SafetyNote.HOT_MOTOR);
 
+        if (card.wiring() != null && !card.phases().isEmpty()) {
+            b.section("How to wire it");
+            WiringDiagram d = diagram(card);
+            if (d != null) {
+                b.figure(d.toSvg(), "Driver connection (" + card.connection() + "). Direction: "
+                        + card.rotationConvention() + (d.startsKnown() ? "." : "; coil starts not measured (hollow ?"
+                        + " rings): a back-EMF capture fixes them."));
+            }
+        }
+
         b.section("The card");
         Map<String, String> f = new LinkedHashMap<>();
         put(f, "Step angle", card.stepAngleDeg(), "%s\u00B0");
@@ -106,15 +116,6 @@ public final class MotorHtml {
                 basis.add(new HtmlReport.Finding(Status.INFO, "Supply: " + card.supplyBasis()));
             }
             b.findings(basis);
-        }
-
-        if (card.wiring() != null && !card.phases().isEmpty()) {
-            b.section("How to wire it");
-            WiringDiagram d = diagram(card);
-            if (d != null) {
-                b.figure(d.toSvg(), "Driver connection (" + card.connection() + "). Direction: "
-                        + card.rotationConvention());
-            }
         }
 
         if (!card.phases().isEmpty()) {
@@ -186,6 +187,10 @@ public final class MotorHtml {
     static WiringDiagram diagram(MotorCard card) {
         Wiring w = card.wiring();
         WiringDiagram.Builder d = WiringDiagram.builder(connectionTitle(card.connection()) + ", " + card.topology());
+        if (card.phases().stream().anyMatch(p -> !p.polarityKnown())) {
+            // no back-EMF fixed which end of each coil starts it: draw the starts as the guess they are
+            d.startsUnknown();
+        }
         for (PhaseCard p : card.phases()) {
             List<HalfWinding> h = p.halfWindings();
             if (h.size() == 2 && h.get(0).endLead().equals(h.get(1).startLead())) {

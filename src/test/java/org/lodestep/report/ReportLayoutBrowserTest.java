@@ -130,10 +130,12 @@ class ReportLayoutBrowserTest {
 
     @Test
     void inPrintTheFirstWiringDiagramSharesPageOneWithTheVerdict() {
+        // the leads reports and the motor card: what a person wires by is on the first sheet
         viewport(PRINT_WIDTH, PRINT_HEIGHT, false, "print");
         int checked = 0;
         for (Path r : reports) {
-            if (!r.getFileName().toString().startsWith("leads-")) {
+            String n = r.getFileName().toString();
+            if (!n.startsWith("leads-") && !n.startsWith("motor-card")) {
                 continue;
             }
             driver.get(r.toUri().toString());
@@ -147,6 +149,6 @@ class ReportLayoutBrowserTest {
             assertTrue(m.get(0).doubleValue() <= PRINT_HEIGHT, r.getFileName() + ": the first diagram ends at "
                     + m.get(0) + " px of a " + PRINT_HEIGHT + " px page");
         }
-        assertTrue(checked >= 5, "leads reports with a diagram: " + checked);
+        assertTrue(checked >= 6, "leads reports and the motor card with a diagram: " + checked);
     }
 }

@@ -226,10 +226,13 @@ public final class HtmlReport {
 
         /** Safety notes, each in a bordered box with a warning sign. */
         public Builder safety(SafetyNote... notes) {
+            // one group, so that print can set the notes side by side and leave page 1 to the answer
+            body.append("<div class=\"safety-notes\">");
             for (SafetyNote n : notes) {
                 body.append("<aside class=\"safety\"><h3>").append(Html.escape(n.title())).append("</h3><p>")
                         .append(Html.escape(n.text())).append("</p></aside>\n");
             }
+            body.append("</div>\n");
             return this;
         }
 

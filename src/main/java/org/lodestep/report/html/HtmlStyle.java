@@ -103,7 +103,9 @@ final class HtmlStyle {
             figure,table,aside,.verdict,dl.facts div{break-inside:avoid}h2,h3{break-after:avoid}
             .table-wrap{overflow:visible}header.head{break-after:avoid}.verdict{break-after:avoid}
             aside.safety{padding:.3rem .6rem;margin:.5rem 0}aside.safety p{font-size:8.5pt}
+            .safety-notes{display:flex;gap:.5rem}.safety-notes aside.safety{flex:1 1 0;margin:.4rem 0}
             h2{margin:.9rem 0 .3rem}figure{margin:.5rem 0;padding:.3rem}h1{font-size:16pt}dl.meta dd{font-size:9pt}.verdict{padding:.5rem .8rem;margin:.6rem 0}
+            figcaption{font-size:8.5pt}.verdict p{font-size:9.5pt}header.head{padding-bottom:.4rem;margin-bottom:.5rem}
             figure svg.wiring{max-height:95mm;width:auto;max-width:100%}
             .provenance-line a{display:none}}
             """;
