@@ -42,6 +42,11 @@ public final class Chart {
         ChartStyle.apply(chart);
     }
 
+    /** The chart itself, for tests in this package that check axes and series after layout. */
+    JFreeChart jfree() {
+        return chart;
+    }
+
     /** Design width in CSS pixels. */
     public int widthPx() {
         return widthPx;
