@@ -28,7 +28,7 @@ final class MotorFigures {
             c.verticalLine(t.bRisingMs(), "B \u2191", Status.INFO);
         }
         c.topAxis("electrical angle (\u00B0 el., at " + MotorHtml.num(t.periodMs()) + " ms per cycle)",
-                t::electricalDeg);
+                t::electricalDeg, 90);
         return c.size(760, 360).describe("Back-EMF of every coil over " + BackEmfTrace.CYCLES + " electrical cycles"
                 + (Double.isFinite(t.lagDeg()) ? ", " + lagText(t) : "") + ".").build();
     }

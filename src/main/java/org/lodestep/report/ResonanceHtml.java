@@ -147,7 +147,7 @@ public final class ResonanceHtml {
         return b.build();
     }
 
-    private static org.lodestep.report.html.Chart responseChart(SweepResult r, RateUnits u, String unit) {
+    static org.lodestep.report.html.Chart responseChart(SweepResult r, RateUnits u, String unit) {
         double[] x = new double[r.response().size()];
         double[] y = new double[x.length];
         for (int i = 0; i < x.length; i++) {

@@ -7,7 +7,7 @@ package org.lodestep.resonance;
  * <p>Source: S. S. Rao, <i>Mechanical Vibrations</i>, 5th ed., Prentice Hall 2011, ch. 2 (free vibration with viscous
  * damping; references §16): δ = (1/n)·ln(x_0/x_n); ζ = δ/√(4π² + δ²), so δ = 2πζ/√(1 - ζ²); ω_d = ω_n·√(1 - ζ²);
  * envelope e^(-ζ·ω_n·t), which falls to a level x after ln(A/x)/σ; Q = 1/(2ζ). The same relations in W. T. Thomson
- * and M. D. Dahleh, <i>Theory of Vibration with Applications</i>, 5th ed., Prentice Hall 1998, section 2.6
+ * and M. D. Dahleh, <i>Theory of Vibration with Applications</i>, 5th ed., Prentice Hall 1998, ch. 2
  * (references §27).
  */
 final class DampedOscillation {

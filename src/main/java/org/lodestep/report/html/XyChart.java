@@ -102,6 +102,7 @@ public final class XyChart {
         private final List<Panel> lower = new ArrayList<>();
         private String topLabel;
         private DoubleUnaryOperator topMap;
+        private double topTick = Double.NaN;
         private final List<Band> bands = new ArrayList<>();
         private final List<Band> yBands = new ArrayList<>();
         private final List<Line> lines = new ArrayList<>();
@@ -138,8 +139,17 @@ public final class XyChart {
          * top axis's unit and must be linear and increasing (full steps/s to rpm or pulses/s).
          */
         public Builder topAxis(String label, DoubleUnaryOperator map) {
+            return topAxis(label, map, Double.NaN);
+        }
+
+        /** As {@link #topAxis(String, DoubleUnaryOperator)}, with a tick every {@code tickUnit} (90° electrical). */
+        public Builder topAxis(String label, DoubleUnaryOperator map, double tickUnit) {
             this.topLabel = Html.clean(label);
             this.topMap = Objects.requireNonNull(map, "map");
+            if (!Double.isNaN(tickUnit) && !(tickUnit > 0 && Double.isFinite(tickUnit))) {
+                throw new IllegalArgumentException("tick unit must be positive, got " + tickUnit);
+            }
+            this.topTick = tickUnit;
             return this;
         }
 
@@ -290,6 +300,10 @@ public final class XyChart {
             }
             if (topMap != null) {
                 LinkedAxis top = new LinkedAxis(topLabel, x, topMap);
+                if (!Double.isNaN(topTick)) {
+                    top.setTickUnit(new org.jfree.chart.axis.NumberTickUnit(topTick,
+                            new java.text.DecimalFormat("0")), false, true);
+                }
                 plot.setDomainAxis(1, top);
                 plot.setDomainAxisLocation(1, AxisLocation.TOP_OR_LEFT);
             }
@@ -377,12 +391,14 @@ public final class XyChart {
                     plot.addRangeMarker(bandMarker(yBands.get(i), i), Layer.BACKGROUND);
                 }
             }
+            int vertical = 0;
             for (Line l : lines) {
                 if (l.vertical()) {
                     ValueMarker m = lineMarker(l);
                     m.setLabelAnchor(RectangleAnchor.BOTTOM_RIGHT);
                     m.setLabelTextAnchor(TextAnchor.BOTTOM_LEFT);
-                    m.setLabelOffset(new RectangleInsets(4, 4, 18, 4));
+                    // stagger the labels of neighbouring lines so they do not print over each other
+                    m.setLabelOffset(new RectangleInsets(4, 4, 18 + 17 * (vertical++ % 3), 4));
                     if (below) {
                         m.setLabel(null);
                     }
