@@ -189,7 +189,7 @@ public final class DriveHtml {
         for (Band band : bands) {
             if (band.fromFullStepsPerS() < x[x.length - 1]) {
                 b.band(band.fromFullStepsPerS(), Math.min(band.toFullStepsPerS(), x[x.length - 1]),
-                        String.format(Locale.ROOT, "%.0f–%.0f", band.fromFullStepsPerS(), band.toFullStepsPerS()),
+                        String.format(Locale.ROOT, "%.0f–%.0f full steps/s", band.fromFullStepsPerS(), band.toFullStepsPerS()),
                         Status.WARN);
             }
         }
