@@ -160,8 +160,10 @@ final class MotorIdentifyCommand implements Callable<Integer> {
             }
             PrintWriter log = json ? spec.commandLine().getErr() : out;
             try (RigClient c = RigCli.connect(rig)) {
-                card = WorkflowCall.run(() -> MotorOnRig.run(c, new MotorOnRig.Settings(revolutions, cardSettings),
-                        new RigLog(log))).card();
+                MotorOnRig.Result r = WorkflowCall.run(() -> MotorOnRig.run(c, new MotorOnRig.Settings(revolutions,
+                        cardSettings), new RigLog(log)));
+                card = r.card();
+                emfTrace = r.emf();
             }
         } else {
             MotorFromFiles.Result r = WorkflowCall.run(() -> MotorFromFiles.run(new MotorFromFiles.Settings(
