@@ -55,8 +55,8 @@ final class MotorDemo implements DemoCommand.Section {
                 .map(t -> new MotorHtml.Trace(t.source(), t.timeS(), t.currentA())).toList();
         org.lodestep.workflow.Provenance provenance = RunProvenance.ofDemo(args.toArray(String[]::new))
                 .withInput("resistance", resistance).withInputs("step response", steps).withInput("back-EMF", backEmf);
-        ProvenanceBlock.html(MotorHtml.report(resistance.toString(), card, traces, MotorOptionHints.INSTANCE),
-                provenance).write(html);
+        ProvenanceBlock.html(MotorHtml.report(resistance.toString(), card, traces, r.emf(),
+                MotorOptionHints.INSTANCE), provenance).write(html);
         printCard(out, card);
         out.print(ProvenanceBlock.text(provenance));
         out.println("report: " + html);

@@ -7,6 +7,7 @@ import java.util.List;
 import java.util.concurrent.Callable;
 
 import org.lodestep.wiring.Connection;
+import org.lodestep.motor.BackEmfTrace;
 import org.lodestep.motor.MotorCard;
 import org.lodestep.motor.OrientedLeads;
 import org.lodestep.motor.WindingInput;
@@ -161,6 +162,7 @@ final class MotorIdentifyCommand implements Callable<Integer> {
         if (backEmf != null) {
             provenance = provenance.withInput("back-EMF", backEmf);
         }
+        BackEmfTrace emfTrace = null;
         if (rig != null) {
             if (!json) {
                 SAFETY.forEach(out::println);
@@ -169,8 +171,10 @@ final class MotorIdentifyCommand implements Callable<Integer> {
             PrintWriter log = json ? spec.commandLine().getErr() : out;
             RigLog rigLog = new RigLog(log, new RigInfo[1]);
             try (RigClient c = RigCli.connect(rig)) {
-                card = WorkflowCall.run(() -> MotorOnRig.run(c, new MotorOnRig.Settings(revolutions, cardSettings),
-                        rigLog)).card();
+                MotorOnRig.Result r = WorkflowCall.run(() -> MotorOnRig.run(c, new MotorOnRig.Settings(revolutions,
+                        cardSettings), rigLog));
+                card = r.card();
+                emfTrace = r.emf();
             }
             if (rigLog.info()[0] != null) {
                 provenance = provenance.withRig(RunProvenance.rig(rigLog.info()[0]));
@@ -182,10 +186,11 @@ final class MotorIdentifyCommand implements Callable<Integer> {
             card = r.card();
             // Recorded step responses are drawn under their fits; the rig's are measured in memory and listed only.
             r.traces().forEach(t -> traces.add(new MotorHtml.Trace(t.source(), t.timeS(), t.currentA())));
+            emfTrace = r.emf();
         }
         if (report != null) {
-            ProvenanceBlock.html(MotorHtml.report(title(), card, traces, MotorOptionHints.INSTANCE), provenance)
-                    .write(report);
+            ProvenanceBlock.html(MotorHtml.report(title(), card, traces, emfTrace, MotorOptionHints.INSTANCE),
+                    provenance).write(report);
         }
         if (json) {
             out.println(ProvenanceBlock.json(MotorJson.write(card, MotorOptionHints.INSTANCE), provenance));

@@ -60,8 +60,7 @@ final class ResonanceRingdownCommand implements Callable<Integer> {
                 new ResonanceRingdown.Settings(channel, fromS, toS), Progress.NONE));
         Provenance provenance = RunProvenance.of(spec).withInput("ring-down", file);
         if (report != null) {
-            ProvenanceBlock.html(ResonanceHtml.ringDown(r.source(), r.channel(), r.unit(), r.timeS(), r.values(),
-                    r.fit()), provenance).write(report);
+            ProvenanceBlock.html(ResonanceHtml.ringDown(r), provenance).write(report);
         }
         if (json) {
             out.println(ProvenanceBlock.json(ResonanceJson.ringDown(r.source(), r.channel(), r.fit()), provenance));
