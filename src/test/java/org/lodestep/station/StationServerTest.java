@@ -201,6 +201,12 @@ class StationServerTest {
         Matcher report = Pattern.compile("\"report\"\\s*:\\s*\"(/sweep/reports/[0-9a-f]+)\"").matcher(ev);
         assertTrue(report.find(), ev);
         assertTrue(get(base(station) + report.group(1)).body().contains("<svg"));
+        // the response curve streams while the sweep runs: curve events with points, all before the end
+        int firstCurve = ev.indexOf("\"type\":\"curve\"");
+        assertTrue(firstCurve > 0 && firstCurve < ev.indexOf("\"type\":\"done\""), ev);
+        assertTrue(Pattern.compile("\"type\":\"curve\",\"points\":\\[\\[[0-9.]+,-?[0-9.]+\\]").matcher(ev).find(), ev);
+        // then the bands over the final curve
+        assertTrue(Pattern.compile("\"band_spans\":\\[\\[[0-9.]+,[0-9.]+,[0-9.]+\\]").matcher(ev).find(), ev);
         assertEquals(400, post(base(station) + "/api/sweep", "ack=yes&rig=tcp:10.0.0.9:7000",
                 Access.FORM_KEY_HEADER, key).statusCode());
     }
@@ -366,5 +372,47 @@ class StationServerTest {
         HttpResponse<String> none = multipart(base(station) + "/api/motor", key, List.<String[]>of(), List.<byte[]>of());
         assertEquals(400, none.statusCode());
         assertTrue(none.body().contains("nothing to identify"), none.body());
+    }
+
+    /** A finished sweep of the gantry axis: the task's events. */
+    static String gantrySweep(String key) throws Exception {
+        HttpResponse<String> r = post(base(station) + "/api/sweep",
+                "ack=yes&rig=sim:gantry-axis&from=40&to=200&seconds=8&microsteps=1", Access.FORM_KEY_HEADER, key);
+        assertEquals(200, r.statusCode(), r.body());
+        return events(station, field(r.body(), "task"));
+    }
+
+    @Test
+    void aProfileIsPlannedAcrossTheBandsOfASweep() throws Exception {
+        String key = formKey(station);
+        String ev = gantrySweep(key);
+        String sweep = field(ev.substring(ev.indexOf("\"type\":\"done\"")), "sweep");
+        String url = base(station) + "/api/sweep/" + sweep + "/plan";
+        // the gantry-axis scenario's motor (scenarios.toml): two 0.6 ohm, 0.7 mH halves in series per phase
+        // (coupling 0.97: L = 2 x 0.7 mH x 1.97), Ke 0.3 V s/rad, rotor 8.2e-6 kg m2, load 5.5e-5 kg m2
+        String motor = "phase_resistance_ohm=1.2&phase_inductance_h=0.00276&kt_nm_per_a=0.3&rotor_inertia_kgm2=8.2e-6"
+                + "&rotor_teeth=50&drive=chopper&supply_v=48&current_a=2.5&plan_microsteps=1&load_inertia_kgm2=5.5e-5"
+                + "&friction_torque_nm=0&margin=0.3&shape=trapezoidal&cruise_s=0.2";
+        HttpResponse<String> noTarget = post(url, motor, Access.FORM_KEY_HEADER, key);
+        assertEquals(400, noTarget.statusCode());
+        assertTrue(noTarget.body().contains("target"), noTarget.body());
+        assertEquals(400, post(url, motor + "&target_full_steps_per_s=fast", Access.FORM_KEY_HEADER, key).statusCode());
+        assertEquals(400, post(url, motor.replace("drive=chopper", "drive=steam") + "&target_full_steps_per_s=300",
+                Access.FORM_KEY_HEADER, key).statusCode());
+        assertEquals(403, post(url, motor + "&target_full_steps_per_s=300").statusCode());
+        assertEquals(403, post(url, motor + "&target_full_steps_per_s=300", Access.FORM_KEY_HEADER, key,
+                "Sec-Fetch-Site", "cross-site").statusCode());
+        assertEquals(404, post(base(station) + "/api/sweep/nope/plan", motor + "&target_full_steps_per_s=300",
+                Access.FORM_KEY_HEADER, key).statusCode());
+        HttpResponse<String> r = post(url, motor + "&target_full_steps_per_s=300", Access.FORM_KEY_HEADER, key);
+        assertEquals(200, r.statusCode(), r.body());
+        String planned = events(station, field(r.body(), "task"));
+        assertTrue(planned.contains("\"type\":\"done\""), planned);
+        assertTrue(planned.contains("band ") && planned.contains("crossed at"), planned);
+        Matcher plan = Pattern.compile("\"plan\"\\s*:\\s*\"(/sweep/plans/[0-9a-f]+)\"").matcher(planned);
+        assertTrue(plan.find(), planned);
+        String csv = get(base(station) + plan.group(1) + "/table.csv").body();
+        assertTrue(csv.lines().count() > 10, csv);
+        assertTrue(get(base(station) + plan.group(1)).body().contains("<svg"));
     }
 }
