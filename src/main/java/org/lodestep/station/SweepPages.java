@@ -115,10 +115,11 @@ final class SweepPages {
                 + field("seconds", "Duration, s", "8", "decimal")
                 + field("microsteps", "Microsteps (driver setting)", "1", "numeric") + "</fieldset>"
                 + "<button type=\"submit\" class=\"primary\" id=\"sweep-start\">Start the sweep</button></form>"
-                + "<form id=\"upload-form\" class=\"stack\" enctype=\"multipart/form-data\"><fieldset><legend>Or "
-                + "analyse a recorded sweep</legend><label for=\"capture\">Capture file (CSV, WAV or rig capture, with its "
+                + "<details class=\"upload\"><summary>Or analyse a recorded sweep</summary>"
+                + "<form id=\"upload-form\" class=\"stack\" enctype=\"multipart/form-data\">"
+                + "<label for=\"capture\">Capture file (CSV, WAV or rig capture, with its "
                 + "sweep law in the file)</label><input type=\"file\" id=\"capture\" name=\"capture\" "
-                + "accept=\".csv,.wav\"><button type=\"submit\" id=\"upload-start\">Analyse</button></fieldset></form>"
+                + "accept=\".csv,.wav\"><button type=\"submit\" id=\"upload-start\">Analyse</button></form></details>"
                 + Layout.progressArea("sweep-progress")
                 // drawn by the page's script from the curve events; the text beside it says the same in words
                 + "<figure id=\"live-curve\" class=\"curve\" hidden><figcaption>Vibration level per step rate "

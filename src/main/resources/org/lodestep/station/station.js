@@ -136,7 +136,8 @@
   }
   // data: {points: [[rate, dB]...], from, to, bands: [[from, to, peak]...], avoid: [[from, to]...]}
   function drawCurve(box, data) {
-    var W = 640, H = 280, L = 52, R = 12, T = 12, B = 40;
+    // drawn at the box's own width, so the lettering keeps its size on a phone
+    var W = Math.max(300, Math.round(box.clientWidth || 640)), H = W < 500 ? 240 : 280, L = 52, R = 12, T = 12, B = 40;
     var pts = data.points || [];
     var lo = Infinity, hi = -Infinity;
     pts.forEach(function (p) { lo = Math.min(lo, p[1]); hi = Math.max(hi, p[1]); });
@@ -156,7 +157,7 @@
       svg.appendChild(el('rect', { x: x(b[0]), y: T, width: Math.max(2, x(b[1]) - x(b[0])), height: H - T - B, class: 'band' }));
       svg.appendChild(el('text', { x: x(b[2]), y: T + 12, 'text-anchor': 'middle', class: 'band-label' }, '\u25B2 ' + Math.round(b[2])));
     });
-    ticks(x0, x1, 6).forEach(function (v) {
+    ticks(x0, x1, W < 500 ? 4 : 6).forEach(function (v) {
       svg.appendChild(el('line', { x1: x(v), x2: x(v), y1: T, y2: H - B, class: 'grid' }));
       svg.appendChild(el('text', { x: x(v), y: H - B + 16, 'text-anchor': 'middle' }, String(v)));
     });
@@ -210,7 +211,10 @@
           sync();
         }, function (e) {
           if (e.type !== 'curve' || !range) { return; }
-          figure.hidden = false;
+          if (figure.hidden) {
+            figure.hidden = false;
+            area.scrollIntoView({ block: 'start' }); // the engineer watches the curve, not the form
+          }
           drawCurve(plotBox, { points: e.points, from: range.from, to: range.to });
           figure.dataset.updates = String(+figure.dataset.updates + 1);
           figure.dataset.points = String(e.points.length);

@@ -99,9 +99,15 @@ class StationBrowserTest {
 
     /** Screenshots the page at desktop and phone width; checks neither scrolls sideways. */
     static void shots(String name, String mustBeInView) throws Exception {
+        shots(name, mustBeInView, null);
+    }
+
+    /** As {@link #shots(String, String)}, the picture taken with {@code showSelector} scrolled to the top. */
+    static void shots(String name, String mustBeInView, String showSelector) throws Exception {
         for (int width : new int[] {DESKTOP, PHONE}) {
             driver.manage().window().setSize(new Dimension(width, 900));
-            js("window.scrollTo(0,0)");
+            js(showSelector == null ? "window.scrollTo(0,0)"
+                    : "document.querySelector('" + showSelector + "').scrollIntoView({block:'start'})");
             long scroll = ((Number) js("return document.documentElement.scrollWidth")).longValue();
             long inner = ((Number) js("return window.innerWidth")).longValue();
             File png = driver.getScreenshotAs(OutputType.FILE);
@@ -242,12 +248,44 @@ class StationBrowserTest {
         assertTrue(!startButton.isEnabled(), "the sweep cannot start before the caution is acknowledged");
         driver.findElement(By.id("ack")).sendKeys(Keys.SPACE);
         assertTrue(startButton.isEnabled());
+        // the virtual rig in real time: samples leave no faster than they were sampled, as from a real rig
+        WebElement rig = driver.findElement(By.id("rig"));
+        rig.clear();
+        rig.sendKeys("sim:gantry-axis?realtime=1");
         startButton.sendKeys(Keys.ENTER);
-        waiting().until(d -> d.findElement(By.id("sweep-result")).getAttribute("data-bands") != null);
+        // the response curve is drawn while the sweep still runs: points before the end, no bands yet
+        WebElement figure = driver.findElement(By.id("live-curve"));
+        waiting().until(d -> figure.getAttribute("data-updates") != null
+                && Integer.parseInt(figure.getAttribute("data-updates")) >= 3);
+        assertEquals(null, driver.findElement(By.id("sweep-result")).getAttribute("data-bands"),
+                "the curve must be live, not drawn at the end");
+        assertTrue(Integer.parseInt(figure.getAttribute("data-points")) > 0);
+        assertTrue(figure.findElements(By.cssSelector("svg polyline")).size() == 1);
+        assertTrue(driver.findElement(By.id("curve-state")).getText().contains("live"));
+        shots("sweep-live", null, "#sweep-progress");
+        new WebDriverWait(driver, Duration.ofSeconds(60))
+                .until(d -> d.findElement(By.id("sweep-result")).getAttribute("data-bands") != null);
         int bands = Integer.parseInt(driver.findElement(By.id("sweep-result")).getAttribute("data-bands"));
         assertTrue(bands > 0, "the gantry axis has resonance bands");
+        // then the bands over the final curve, and the avoid-list beside it
+        assertEquals(bands, figure.findElements(By.cssSelector("svg rect.band")).size());
+        assertTrue(driver.findElement(By.id("avoid-table")).getText().contains("full steps/s"));
         assertTrue(driver.findElement(By.cssSelector("#sweep-progress .progress-text")).getText().contains("done"));
-        shots("sweep", null);
+        shots("sweep", null, "#sweep-progress");
+        shots("sweep-bands", null, "#sweep-result");
+        // a profile across those bands: the gantry-axis scenario's motor (scenarios.toml), typed as from its card
+        String[][] typed = {{"phase_resistance_ohm", "1.2"}, {"phase_inductance_h", "0.00276"}, {"kt_nm_per_a", "0.3"},
+            {"rotor_inertia_kgm2", "8.2e-6"}, {"supply_v", "48"}, {"current_a", "2.5"},
+            {"load_inertia_kgm2", "5.5e-5"}, {"target_full_steps_per_s", "300"}};
+        for (String[] f : typed) {
+            WebElement in = driver.findElement(By.id(f[0]));
+            in.clear();
+            in.sendKeys(f[1]);
+        }
+        driver.findElement(By.id("target_full_steps_per_s")).sendKeys(Keys.ENTER);
+        waiting().until(d -> d.findElement(By.id("plan-result")).getAttribute("data-rows") != null);
+        assertTrue(driver.findElement(By.id("plan-result")).getText().contains("crossed at"));
+        shots("sweep-profile", null, "#plan-result");
         driver.get(base + "/");
         shots("home", null);
     }
