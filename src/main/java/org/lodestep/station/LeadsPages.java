@@ -166,6 +166,11 @@ final class LeadsPages {
             sb.append("<p class=\"notice\" role=\"status\">").append(Layout.esc(p.notice())).append("</p>");
         }
         List<LeadsProbeRun.Entry> entries = p.entries();
+        Identification soFar = p.soFar();
+        boolean live = q != null && soFar != null && !entries.isEmpty();
+        if (live) {
+            sb.append("<div class=\"live-leads\">").append(LeadsHtml.soFar(soFar));
+        }
         if (!entries.isEmpty()) {
             sb.append("<table class=\"rows\"><caption>Readings so far, newest first</caption><thead><tr><th scope=\"col\">"
                     + "#</th><th scope=\"col\">Pair</th><th scope=\"col\">Reading</th></tr></thead><tbody>");
@@ -177,6 +182,9 @@ final class LeadsPages {
                                 : "OL (open)").append("</td></tr>");
             }
             sb.append("</tbody></table>");
+        }
+        if (live) {
+            sb.append("</div>");
         }
         return sb.toString();
     }

@@ -148,6 +148,7 @@ class StationBrowserTest {
         waiting().until(d -> d.findElements(By.cssSelector("[data-page=leads-probe]")).size() == 1);
         WebElement root = driver.findElement(By.cssSelector("[data-page=leads-probe]"));
         boolean undone = false;
+        boolean schematic = false;
         for (int i = 0; i < 40 && root.getAttribute("data-done") == null; i++) {
             String pair = driver.findElement(By.cssSelector("#next .pair")).getText();
             String[] ab = pair.split("\\s*\u2013\\s*");
@@ -165,7 +166,16 @@ class StationBrowserTest {
             }
             ohms.sendKeys(meter(ab[0], ab[1]), Keys.ENTER);
             waitAnswers(root, answers + 1);
+            if (root.getAttribute("data-done") == null) {
+                // still probing: the readings so far, the windings found and their schematic are on the page
+                assertTrue(driver.findElement(By.id("probe-panel")).getText().contains("So far"));
+                if (!schematic && !driver.findElements(By.cssSelector("#probe-panel .so-far svg")).isEmpty()) {
+                    schematic = true;
+                    shots("leads-live", "#next");
+                }
+            }
         }
+        assertTrue(schematic, "the schematic fills in while the readings are typed");
         assertEquals("true", root.getAttribute("data-done"));
         String result = driver.findElement(By.id("next")).getText();
         assertTrue(result.contains("6-lead"), result);

@@ -415,4 +415,49 @@ class StationServerTest {
         assertTrue(csv.lines().count() > 10, csv);
         assertTrue(get(base(station) + plan.group(1)).body().contains("<svg"));
     }
+
+    @Test
+    void aProbeSessionShowsTheSchematicAndFindingsAfterEachReading() throws Exception {
+        String key = formKey(station);
+        HttpResponse<String> start = post(base(station) + "/leads/probes", "labels=6&" + Access.FORM_KEY_FIELD + "="
+                + key);
+        String path = start.headers().firstValue("Location").orElseThrow();
+        String id = path.substring(path.lastIndexOf('/') + 1);
+        String panel = get(base(station) + path + "/panel").body();
+        assertFalse(panel.contains("So far"), "nothing to show before the first reading");
+        Pattern next = Pattern.compile("class=\"big pair\">(\\d+) \u2013 (\\d+)<");
+        boolean schematicBeforeTheEnd = false;
+        boolean windingBeforeTheEnd = false;
+        for (int i = 0; i < 15; i++) {
+            Matcher m = next.matcher(panel);
+            if (!m.find()) {
+                break;
+            }
+            String reply = post(base(station) + "/api/leads/probes/" + id + "/answer", "value="
+                    + sixLead(m.group(1), m.group(2)), Access.FORM_KEY_HEADER, key).body();
+            panel = get(base(station) + path + "/panel").body();
+            if (panel.contains("class=\"big pair\"")) {
+                // still probing: the identification so far is on the page after every reading
+                assertTrue(panel.contains("So far"), panel);
+                schematicBeforeTheEnd |= panel.contains("<svg");
+                windingBeforeTheEnd |= panel.contains("winding 1 \u2013 3, centre tap 2");
+            }
+            assertTrue(reply.contains("\"html\""), reply);
+        }
+        assertTrue(windingBeforeTheEnd, "the first winding shows as soon as its three readings are in");
+        assertTrue(schematicBeforeTheEnd, "the schematic fills in before the session ends");
+        assertTrue(panel.contains("6-lead"), panel);
+    }
+
+    /** A six-lead motor: two centre-tapped windings 1-2-3 and 4-5-6, 1.2 ohm per half (invented). */
+    static String sixLead(String a, String b) {
+        List<String> one = List.of("1", "2", "3");
+        List<String> two = List.of("4", "5", "6");
+        for (List<String> w : List.of(one, two)) {
+            if (w.contains(a) && w.contains(b)) {
+                return Math.abs(w.indexOf(a) - w.indexOf(b)) == 2 ? "2.4" : "1.2";
+            }
+        }
+        return "OL";
+    }
 }
