@@ -99,11 +99,11 @@
       ev.preventDefault();
       var serial = input.value.trim();
       if (!serial) { return; }
-      var data = new URLSearchParams();
+      var data = new URLSearchParams(new FormData(form)); // the serial, and the typed readings when there are
       data.set('serial', serial);
       if (armKey) { data.set('arm', armKey); }
       if (armButton) { disarmed('Not armed: the arming was used by ' + serial + '.'); }
-      input.value = '';
+      form.reset();
       input.focus();
       post('/api/qa/runs/' + encodeURIComponent(run) + '/scan', data).then(function (j) {
         follow(j.task, area, function () { refresh(); });
@@ -112,6 +112,21 @@
         area.querySelector('.progress-text').textContent = '\u2716 ' + err.message;
       });
     });
+
+    if (form.dataset.typed === 'true') {
+      // keyboard-first: Enter moves on to the next reading (a scanner's Enter after the serial too); the Enter
+      // in the last field records the motor
+      form.addEventListener('keydown', function (ev) {
+        if (ev.key !== 'Enter' || ev.target.tagName !== 'INPUT') { return; }
+        var inputs = Array.prototype.slice.call(form.querySelectorAll('input'));
+        var i = inputs.indexOf(ev.target);
+        if (i >= 0 && i < inputs.length - 1) {
+          ev.preventDefault();
+          inputs[i + 1].focus();
+          inputs[i + 1].select();
+        }
+      });
+    }
 
     panel.addEventListener('click', function (ev) {
       var b = ev.target.closest('button.retest');

@@ -460,4 +460,32 @@ class StationServerTest {
         }
         return "OL";
     }
+
+    @Test
+    void typedMeterReadingsAreJudgedAndAFailSaysWhichCheckByHowMuch() throws Exception {
+        String key = formKey(station);
+        HttpResponse<String> start = post(base(station) + "/qa/runs", "spec=kv-4218-m.toml&lot=L-TYPED&source=typed&"
+                + Access.FORM_KEY_FIELD + "=" + key);
+        assertEquals(303, start.statusCode(), start.body());
+        String runPath = start.headers().firstValue("Location").orElseThrow();
+        String id = runPath.substring(runPath.lastIndexOf('/') + 1);
+        assertTrue(get(base(station) + runPath).body().contains("id=\"phase_a_ohm\""));
+        String scan = base(station) + "/api/qa/runs/" + id + "/scan";
+        HttpResponse<String> bad = post(scan, "serial=KV24-T1&phase_a_ohm=two", Access.FORM_KEY_HEADER, key);
+        assertEquals(400, bad.statusCode());
+        assertTrue(bad.body().contains("phase resistance A 'two' is not a number"), bad.body());
+        assertEquals(400, post(scan, "serial=KV24-T1&phase_b_ohm=1.9", Access.FORM_KEY_HEADER, key).statusCode());
+        assertEquals(403, post(scan, "serial=KV24-T1&phase_a_ohm=1.9").statusCode());
+        // the sample spec kv-4218-m.toml: 1.90 ohm +- 10 % -> upper limit 2.09 ohm; 2.31 ohm is 0.22 ohm beyond it
+        String good = "&inductance_a_mh=2.8&inductance_b_mh=2.8&insulation_a_frame_mohm=OL&insulation_b_frame_mohm=900"
+                + "&step_angle_deg=1.8";
+        events(station, field(post(scan, "serial=KV24-T1&phase_a_ohm=1.90&phase_b_ohm=1.91" + good,
+                Access.FORM_KEY_HEADER, key).body(), "task"));
+        events(station, field(post(scan, "serial=KV24-T2&phase_a_ohm=2.31&phase_b_ohm=2.30" + good,
+                Access.FORM_KEY_HEADER, key).body(), "task"));
+        String panel = get(base(station) + runPath + "/panel").body();
+        assertTrue(panel.contains("1 PASS, 1 FAIL"), panel);
+        assertTrue(panel.contains("phase resistance A: 2.31 ohm, above the upper limit 2.09 ohm by 0.22 ohm (10.5 %)"),
+                panel);
+    }
 }
