@@ -85,8 +85,10 @@ public final class QaText {
         String side = upper ? "upper" : "lower";
         String value = QaFormat.value(p, c.judged()) + " " + unit;
         String lim = QaFormat.value(p, limit) + " " + unit;
+        // a share of a limit that is itself a percentage reads as nonsense ("5 % by 13 % (269 %)"): left out there
         String by = QaFormat.value(p, Math.abs(margin)) + " " + unit + (Double.isNaN(c.limit().marginFraction(
-                c.judged())) ? "" : " (" + QaFormat.pct(100 * Math.abs(c.limit().marginFraction(c.judged()))) + ")");
+                c.judged())) || unit.equals("%") ? ""
+                : " (" + QaFormat.pct(100 * Math.abs(c.limit().marginFraction(c.judged()))) + ")");
         String line = margin < 0
                 ? what + ": " + value + ", " + (upper ? "above" : "below") + " the " + side + " limit " + lim + " by " + by
                 : what + ": " + value + ", within the " + side + " limit " + lim + " by " + by;

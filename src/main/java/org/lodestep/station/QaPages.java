@@ -191,7 +191,7 @@ final class QaPages {
     private String runPage(QaRun run) {
         PartSpec spec = run.settings.spec();
         StringBuilder sb = new StringBuilder("<div data-page=\"qa-run\" data-run=\"").append(Layout.esc(run.id))
-                .append("\"><h1 class=\"sr-only\">QA run</h1><p class=\"context\">Part <strong>")
+                .append(run.typed ? "\" data-typed=\"true" : "").append("\"><h1 class=\"sr-only\">QA run</h1><p class=\"context\">Part <strong>")
                 .append(Layout.esc(spec.partNumber())).append("</strong> rev ").append(Layout.esc(spec.revision()))
                 .append(" \u00b7 spec ").append(Layout.esc(run.specName)).append(" v").append(spec.specVersion())
                 .append(run.settings.lot().isEmpty() ? "" : " \u00b7 lot <strong>" + Layout.esc(run.settings.lot())
@@ -207,7 +207,7 @@ final class QaPages {
         }
         sb.append("<form id=\"scan-form\" class=\"scan\" autocomplete=\"off\"").append(run.typed ? " data-typed=\"true\""
                         : "").append("><label for=\"serial\">Scan or type the serial number, then Enter")
-                .append(run.typed ? "; then each reading, Enter after each (the last Enter records the motor)" : "")
+                .append(run.typed ? ", each reading, Enter (the last Enter records)" : "")
                 .append("</label><input id=\"serial\" name=\"serial\" autofocus spellcheck=\"false\" maxlength=\"80\" "
                         + "required>")
                 .append(run.typed ? typedFields(spec) : "")
@@ -230,8 +230,8 @@ final class QaPages {
     private static String typedFields(PartSpec spec) {
         StringBuilder sb = new StringBuilder("<fieldset class=\"grid typed\"><legend>Meter readings");
         if (!Double.isNaN(spec.insulationTestVoltageV())) {
-            sb.append(" (insulation at ").append(Math.round(spec.insulationTestVoltageV())).append(" V DC; OL above "
-                    + "the tester's range)");
+            sb.append(" (insulation at ").append(Math.round(spec.insulationTestVoltageV())).append(" V DC, OL = over "
+                    + "range)");
         }
         sb.append("</legend>");
         for (String[] f : TYPED) {

@@ -239,6 +239,32 @@ class StationBrowserTest {
     }
 
     @Test
+    @Order(5)
+    void aMotorTypedAtTheMeterThatFailsShowsTheValueAgainstTheLimit() throws Exception {
+        driver.get(base + "/qa");
+        new Select(driver.findElement(By.id("spec"))).selectByVisibleText("kv-4218-m.toml");
+        driver.findElement(By.id("lot")).sendKeys("L-2608");
+        driver.findElement(By.cssSelector("input[name=source][value=typed]")).click();
+        driver.findElement(By.id("lot")).sendKeys(Keys.ENTER);
+        waiting().until(d -> d.findElements(By.id("phase_a_ohm")).size() == 1);
+        // the scanner types the serial and Enter; then the inspector types each reading and Enter, keyboard only
+        driver.findElement(By.id("serial")).sendKeys("KV24-00131", Keys.ENTER);
+        // the sample spec kv-4218-m.toml: 1.90 ohm +- 10 %: phase A at 2.31 ohm is above the upper limit 2.09 ohm
+        for (String v : List.of("2.31", "1.92", "2.8", "2.81", "OL", "950", "1.8")) {
+            WebElement field = driver.switchTo().activeElement();
+            assertEquals("input", field.getTagName());
+            field.sendKeys(v, Keys.ENTER);
+        }
+        waiting().until(d -> "1".equals(d.findElement(By.cssSelector("[data-page=qa-run]")).getAttribute("data-scans")));
+        String verdict = driver.findElement(By.id("verdict")).getText();
+        assertTrue(verdict.contains("FAIL") && verdict.contains("KV24-00131"), verdict);
+        assertTrue(verdict.contains("phase resistance A: 2.31 ohm, above the upper limit 2.09 ohm by 0.22 ohm"), verdict);
+        assertEquals(driver.findElement(By.id("serial")), driver.switchTo().activeElement(), "ready for the next motor");
+        assertEquals("", driver.findElement(By.id("phase_a_ohm")).getAttribute("value"), "the fields are cleared");
+        shots("qa-typed", "#verdict");
+    }
+
+    @Test
     @Order(2)
     void theLotsRecordsShowYieldAndTheReportCharts() throws Exception {
         driver.get(base + "/records?lot=L-2607");
