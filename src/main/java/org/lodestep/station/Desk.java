@@ -21,6 +21,7 @@ final class Desk {
     final Station.Settings settings;
     final Access access;
     final Tasks tasks;
+    final RigArming arming = new RigArming();
 
     Desk(Station.Settings settings, Access access, Tasks tasks) {
         this.settings = settings;
@@ -41,6 +42,15 @@ final class Desk {
         r.get("/", ctx -> ctx.html(page("Home", "", home())));
         r.get("/assets/station.css", ctx -> asset(ctx, "station.css", "text/css"));
         r.get("/assets/station.js", ctx -> asset(ctx, "station.js", "text/javascript"));
+        r.post("/api/rig/arm", ctx -> {
+            RigArming.Action action = switch (String.valueOf(ctx.formParam("action"))) {
+                case "leads" -> RigArming.Action.LEADS;
+                case "motor" -> RigArming.Action.MOTOR;
+                default -> throw new org.lodestep.workflow.SettingsException("action: expected leads or motor");
+            };
+            json(ctx, Map.of("arm", arming.arm(action, ctx.formParam("tab"), System.currentTimeMillis()),
+                    "valid_s", RigArming.VALID_MS / 1000));
+        });
         r.sse("/api/tasks/{id}/events", client -> {
             client.keepAlive();
             Tasks.Task t = tasks.find(client.ctx().pathParam("id")).orElse(null);

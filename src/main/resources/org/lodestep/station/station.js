@@ -331,7 +331,66 @@
     });
   }
 
+  // This page's own key: an arming is bound to the page that armed it, so another tab cannot fire it.
+  var tabKey = Array.prototype.map.call(window.crypto.getRandomValues(new Uint8Array(16)), function (b) {
+    return (b < 16 ? '0' : '') + b.toString(16);
+  }).join('');
+
+  // An energising rig action: caution shown, armed by an explicit click, fired once; each stage listed as it comes.
+  function rigAction(section) {
+    var armButton = section.querySelector('.arm-button');
+    var armState = section.querySelector('.arm-state');
+    var fire = section.querySelector('.fire');
+    var area = section.querySelector('.progress');
+    var list = section.querySelector('.rig-readings');
+    var result = section.querySelector('.rig-result');
+    var fields = section.querySelector('form.rig-fields');
+    var armKey = null;
+    function disarm(text) {
+      armKey = null; fire.disabled = true;
+      armState.textContent = text; armState.classList.remove('armed');
+    }
+    if (fields) { fields.addEventListener('submit', function (ev) { ev.preventDefault(); }); }
+    armButton.addEventListener('click', function () {
+      var data = new URLSearchParams();
+      data.set('action', section.dataset.rigAction);
+      data.set('tab', tabKey);
+      post('/api/rig/arm', data).then(function (j) {
+        armKey = j.arm; fire.disabled = false;
+        armState.textContent = '\u25B2 ARMED for one run (valid ' + j.valid_s + ' s): hands off the leads while it runs.';
+        armState.classList.add('armed');
+        fire.focus();
+      }).catch(function (err) { armState.textContent = '\u2716 ' + err.message; });
+    });
+    fire.addEventListener('click', function () {
+      var data = fields ? new URLSearchParams(new FormData(fields)) : new URLSearchParams();
+      data.set('arm', armKey || '');
+      data.set('tab', tabKey);
+      disarm('Not armed: the arming was used by this run.');
+      list.replaceChildren();
+      result.innerHTML = '';
+      delete section.dataset.done;
+      post(section.dataset.url, data).then(function (j) {
+        follow(j.task, area, function (e) {
+          if (e.type === 'done') { result.innerHTML = e.html; section.dataset.done = 'true'; }
+          else { section.dataset.done = 'failed'; }
+        }, function (e) {
+          if (e.type !== 'reading' && e.type !== 'attention') { return; }
+          var li = document.createElement('li');
+          li.textContent = (e.type === 'attention' ? '\u25B2 ' : '') + e.text;
+          if (e.type === 'attention') { li.className = 'attention'; }
+          list.appendChild(li);
+          section.dataset.readings = String(list.children.length);
+        });
+      }).catch(function (err) {
+        area.hidden = false; area.classList.add('failed');
+        area.querySelector('.progress-text').textContent = '\u2716 ' + err.message;
+      });
+    });
+  }
+
   document.addEventListener('DOMContentLoaded', function () {
+    Array.prototype.forEach.call(document.querySelectorAll('[data-rig-action]'), rigAction);
     if (document.getElementById('motor-form')) { motor(); }
     var probeRoot = document.querySelector('[data-page="leads-probe"]');
     if (probeRoot) { leadsProbe(probeRoot); }

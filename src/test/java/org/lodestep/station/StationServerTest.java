@@ -488,4 +488,74 @@ class StationServerTest {
         assertTrue(panel.contains("phase resistance A: 2.31 ohm, above the upper limit 2.09 ohm by 0.22 ohm (10.5 %)"),
                 panel);
     }
+
+    static final String TAB_A = "0123456789abcdef0123456789abcdef";
+    static final String TAB_B = "fedcba9876543210fedcba9876543210";
+
+    static String arm(Station s, String key, String action, String tab) throws Exception {
+        HttpResponse<String> r = post(base(s) + "/api/rig/arm", "action=" + action + "&tab=" + tab,
+                Access.FORM_KEY_HEADER, key);
+        assertEquals(200, r.statusCode(), r.body());
+        return field(r.body(), "arm");
+    }
+
+    @Test
+    void energisingFromTheBrowserNeedsThisPagesOwnArmingOnce() throws Exception {
+        String key = formKey(station);
+        String url = base(station) + "/api/leads/rig";
+        assertEquals(403, post(base(station) + "/api/rig/arm", "action=leads&tab=" + TAB_A).statusCode());
+        assertEquals(400, post(base(station) + "/api/rig/arm", "action=weld&tab=" + TAB_A, Access.FORM_KEY_HEADER,
+                key).statusCode());
+        HttpResponse<String> unarmed = post(url, "tab=" + TAB_A, Access.FORM_KEY_HEADER, key);
+        assertEquals(400, unarmed.statusCode());
+        assertTrue(unarmed.body().contains("not armed") && unarmed.body().contains("nothing was energised"),
+                unarmed.body());
+        String armA = arm(station, key, "leads", TAB_A);
+        // another tab holding the key (it never should) still cannot fire what this one armed
+        HttpResponse<String> otherTab = post(url, "arm=" + armA + "&tab=" + TAB_B, Access.FORM_KEY_HEADER, key);
+        assertEquals(400, otherTab.statusCode());
+        assertTrue(otherTab.body().contains("another page"), otherTab.body());
+        // nor another action
+        assertEquals(400, post(base(station) + "/api/motor/rig", "arm=" + armA + "&tab=" + TAB_A,
+                Access.FORM_KEY_HEADER, key).statusCode());
+        armA = arm(station, key, "leads", TAB_A);
+        assertEquals(403, post(url, "arm=" + armA + "&tab=" + TAB_A, Access.FORM_KEY_HEADER, key, "Sec-Fetch-Site",
+                "cross-site").statusCode());
+        HttpResponse<String> fired = post(url, "arm=" + armA + "&tab=" + TAB_A, Access.FORM_KEY_HEADER, key);
+        assertEquals(200, fired.statusCode(), fired.body());
+        String ev = events(station, field(fired.body(), "task"));
+        // the bench-4 scenario is a four-lead motor (scenarios.toml): each reading arrives as it is measured
+        assertTrue(ev.indexOf("\"type\":\"reading\"") > 0 && ev.indexOf("\"type\":\"reading\"")
+                < ev.indexOf("\"type\":\"done\""), ev);
+        assertTrue(ev.contains("4-lead"), ev);
+        // used once
+        HttpResponse<String> again = post(url, "arm=" + armA + "&tab=" + TAB_A, Access.FORM_KEY_HEADER, key);
+        assertEquals(400, again.statusCode());
+    }
+
+    @Test
+    void theMotorIsMeasuredOnTheRigStageByStageWithOutputsOffAtTheEnd() throws Exception {
+        String key = formKey(station);
+        String armKey = arm(station, key, "motor", TAB_A);
+        HttpResponse<String> bad = post(base(station) + "/api/motor/rig", "arm=" + armKey + "&tab=" + TAB_A
+                + "&rig_supply_v=lots", Access.FORM_KEY_HEADER, key);
+        assertEquals(400, bad.statusCode());
+        assertTrue(bad.body().contains("supply voltage 'lots'"), bad.body());
+        HttpResponse<String> r = post(base(station) + "/api/motor/rig", "arm=" + armKey + "&tab=" + TAB_A
+                + "&rig_supply_v=24&rig_phase_current_a=1.5", Access.FORM_KEY_HEADER, key);
+        assertEquals(200, r.statusCode(), r.body());
+        String ev = events(station, field(r.body(), "task"));
+        assertTrue(ev.contains("[1/3]") && ev.contains("[2/3]") && ev.contains("\"type\":\"attention\""), ev);
+        assertTrue(ev.contains("outputs switched off") && ev.contains("\"type\":\"done\""), ev);
+    }
+
+    @Test
+    void aRigLineThatDropsDuringLeadsSaysNothingWasRecorded() throws Exception {
+        String key = formKey(dead);
+        String armKey = arm(dead, key, "leads", TAB_A);
+        HttpResponse<String> r = post(base(dead) + "/api/leads/rig", "arm=" + armKey + "&tab=" + TAB_A,
+                Access.FORM_KEY_HEADER, key);
+        String ev = events(dead, field(r.body(), "task"));
+        assertTrue(ev.contains("\"kind\":\"rig\"") && ev.contains("nothing was recorded"), ev);
+    }
 }
