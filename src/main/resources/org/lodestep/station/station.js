@@ -374,6 +374,7 @@
         follow(j.task, area, function (e) {
           if (e.type === 'done') { result.innerHTML = e.html; section.dataset.done = 'true'; }
           else { section.dataset.done = 'failed'; }
+          area.scrollIntoView({ block: 'start' });
         }, function (e) {
           if (e.type !== 'reading' && e.type !== 'attention') { return; }
           var li = document.createElement('li');

@@ -265,6 +265,28 @@ class StationBrowserTest {
     }
 
     @Test
+    @Order(6)
+    void theRigMeasuresLeadsAndTheMotorOnlyOnceArmedOnThePage() throws Exception {
+        for (String page : List.of("leads", "motor")) {
+            driver.get(base + "/" + page);
+            WebElement section = driver.findElement(By.cssSelector("[data-rig-action=" + page + "]"));
+            WebElement fire = section.findElement(By.cssSelector("button.fire"));
+            assertTrue(!fire.isEnabled(), "nothing can be energised before the arming");
+            section.findElement(By.cssSelector("button.arm-button")).sendKeys(Keys.ENTER);
+            waiting().until(d -> fire.isEnabled());
+            assertTrue(section.findElement(By.cssSelector(".arm-state")).getText().contains("ARMED"));
+            assertEquals(fire, driver.switchTo().activeElement(), "the armed action has the focus");
+            fire.sendKeys(Keys.ENTER);
+            new WebDriverWait(driver, Duration.ofSeconds(60)).until(d -> section.getAttribute("data-done") != null);
+            assertEquals("true", section.getAttribute("data-done"),
+                    section.findElement(By.cssSelector(".progress")).getText());
+            assertTrue(Integer.parseInt(section.getAttribute("data-readings")) > 2, "each reading or stage listed");
+            assertTrue(!fire.isEnabled(), "the arming was used once");
+            shots(page + "-rig", null, "[data-rig-action=" + page + "]");
+        }
+    }
+
+    @Test
     @Order(2)
     void theLotsRecordsShowYieldAndTheReportCharts() throws Exception {
         driver.get(base + "/records?lot=L-2607");
