@@ -78,8 +78,9 @@ final class MotorPages {
         return "<section class=\"rig-action\" data-rig-action=\"motor\" data-url=\"/api/motor/rig\"><h2>Or measure on "
                 + "the rig</h2>" + Layout.caution(SafetyNote.ENERGISED_COILS.title(), List.of("The rig ("
                 + desk.settings.rig() + ") measures the lead-pair resistances, then drives a voltage step through each "
-                + "coil, then asks you to turn the shaft by hand while it records the back-EMF.",
-                SafetyNote.ENERGISED_COILS.text(), SafetyNote.HOT_MOTOR.text()))
+                + "coil (the caution above applies), then asks you to turn the shaft by hand while it records the "
+                + "back-EMF.", "Turning the shaft generates voltage at the leads, more the faster it turns: keep them "
+                + "apart and off any driver while you turn it."))
                 + "<form class=\"stack rig-fields\"><fieldset class=\"grid\"><legend>Where the rig does not say</legend>"
                 + field("rig_revolutions", "Revolutions you will turn") + field("rig_phase_current_a",
                 "Rated phase current, A") + field("rig_supply_v", "Drive supply, V") + "</fieldset></form>"
