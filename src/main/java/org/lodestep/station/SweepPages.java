@@ -122,8 +122,9 @@ final class SweepPages {
                 + "accept=\".csv,.wav\"><button type=\"submit\" id=\"upload-start\">Analyse</button></form></details>"
                 + Layout.progressArea("sweep-progress")
                 // drawn by the page's script from the curve events; the text beside it says the same in words
+                // not a live region: a few updates a second would drown a screen reader; the progress speaks
                 + "<figure id=\"live-curve\" class=\"curve\" hidden><figcaption>Vibration level per step rate "
-                + "<span id=\"curve-state\" role=\"status\"></span></figcaption><div id=\"curve-plot\"></div></figure>"
+                + "<span id=\"curve-state\"></span></figcaption><div id=\"curve-plot\"></div></figure>"
                 + "<div id=\"sweep-result\" aria-live=\"polite\"></div>";
     }
 
