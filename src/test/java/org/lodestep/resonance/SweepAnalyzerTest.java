@@ -60,8 +60,15 @@ class SweepAnalyzerTest {
         assertTrue(last > 200 && last <= law.rateFullStepsPerSAt(half / FS), "curve so far ends at " + last);
         a.feed(sig[0], null, half, sig[0].length - half);
         java.util.List<ResponsePoint> all = a.responseSoFar();
-        // the finished curve is the curve so far once every sample is in, point for point
-        assertEquals(all, a.finish(BandSettings.defaults(), Double.NaN).response());
+        // the finished curve is the curve so far once every sample is in, point for point (finish adds the
+        // detection baseline and threshold to each point)
+        java.util.List<ResponsePoint> finished = a.finish(BandSettings.defaults(), Double.NaN).response();
+        assertEquals(all.size(), finished.size());
+        for (int i = 0; i < all.size(); i++) {
+            assertEquals(all.get(i).rateFullStepsPerS(), finished.get(i).rateFullStepsPerS(), 0.0);
+            assertEquals(all.get(i).levelDb(), finished.get(i).levelDb(), 0.0);
+            assertEquals(all.get(i).segments(), finished.get(i).segments());
+        }
         // bins behind the sweep take no more segments: the early curve, less its filling last bin, is unchanged
         assertEquals(early.subList(0, early.size() - 1), all.subList(0, early.size() - 1));
     }
