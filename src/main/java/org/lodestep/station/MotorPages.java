@@ -110,7 +110,7 @@ final class MotorPages {
             if (reports.size() >= KEEP) {
                 reports.clear();
             }
-            reports.put(id, MotorHtml.report("Motor card (rig)", r.card(), List.of()).html());
+            reports.put(id, MotorHtml.report("Motor card (rig)", r.card(), List.of(), r.emf(), MotorPhrasing.PLAIN).html());
             String html = "<h3>Motor card</h3><p class=\"actions\"><a href=\"/motor/reports/" + id + "\">Motor report "
                     + "(print view)</a></p><pre class=\"text\">" + Layout.esc(MotorCardText.render(r.card()))
                     + "</pre>";
