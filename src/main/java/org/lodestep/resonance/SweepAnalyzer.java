@@ -233,13 +233,8 @@ public final class SweepAnalyzer {
                     + (law != null ? "the sweep law (" + law.durationS() + " s) does not overlap the capture"
                     : "the step-pulse channel has fewer than two rising edges per segment"));
         }
-        List<ResponsePoint> points = new ArrayList<>();
         List<RateBin> binList = new ArrayList<>(bins.values());
-        for (RateBin b : binList) {
-            double rms = Math.sqrt(b.sumMeanSquare / b.count);
-            points.add(new ResponsePoint(b.sumRate / b.count, rms, 20 * Math.log10(Math.max(rms, Double.MIN_NORMAL)),
-                    b.order(0), b.order(1), b.order(2), b.order(3), b.count, Double.NaN, Double.NaN));
-        }
+        List<ResponsePoint> points = points(binList);
         double[] rates = new double[points.size()];
         double[] levels = new double[points.size()];
         for (int i = 0; i < rates.length; i++) {
@@ -284,6 +279,24 @@ public final class SweepAnalyzer {
         return new SweepResult(points, bands, fn, source, law != null ? "law" : "pulses",
                 welch.spectrum(SpectrumScaling.DENSITY), spectrogram, framer.segmentCount(), outside,
                 fed / sampleRateHz, kind, stall, watch, CurrentBands.note(kind));
+    }
+
+    /**
+     * The response curve of the segments fed so far, by rising step rate: what a front end draws while a sweep is
+     * still streaming. The points of the rate bins still filling may change with the next segments.
+     */
+    public List<ResponsePoint> responseSoFar() {
+        return points(new ArrayList<>(bins.values()));
+    }
+
+    private static List<ResponsePoint> points(List<RateBin> binList) {
+        List<ResponsePoint> points = new ArrayList<>(binList.size());
+        for (RateBin b : binList) {
+            double rms = Math.sqrt(b.sumMeanSquare / b.count);
+            points.add(new ResponsePoint(b.sumRate / b.count, rms, 20 * Math.log10(Math.max(rms, Double.MIN_NORMAL)),
+                    b.order(0), b.order(1), b.order(2), b.order(3), b.count, Double.NaN, Double.NaN));
+        }
+        return points;
     }
 
     private List<ResonanceBand> vibrationBands(List<ResponsePoint> points, List<RateBin> binList, double[] rates,
