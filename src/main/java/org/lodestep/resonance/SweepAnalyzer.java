@@ -126,9 +126,7 @@ public final class SweepAnalyzer {
             stepsBuffer = new double[len];
         }
         if (law != null) {
-            for (int i = 0; i < len; i++) {
-                stepsBuffer[i] = law.fullStepsAt((fed + i) / sampleRateHz);
-            }
+            law.fullStepsAt(fed, sampleRateHz, stepsBuffer, len);
         } else {
             pulses.feed(pulseLevels, off, len);
             pulsePhase.feed(pulseLevels, off, len, stepsBuffer, 0);
