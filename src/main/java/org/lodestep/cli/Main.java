@@ -89,6 +89,14 @@ public final class Main implements Runnable {
 
     /** Runs one command line in-process, writing to the given streams; returns the exit code. */
     public static int run(PrintWriter out, PrintWriter err, String... args) {
+        if (args.length == 1 && (args[0].equals("--version") || args[0].equals("-V"))) {
+            // The one command that needs no command model: what picocli would print (tested), without building it.
+            for (String line : new VersionProvider().getVersion()) {
+                out.println(line);
+            }
+            out.flush();
+            return ExitCode.OK;
+        }
         CommandLine cl = configure(TREE.buildFor(new Main(), args));
         cl.setOut(out);
         PrintWriter redacted = new PrintWriter(new RedactingWriter(err), true);

@@ -80,6 +80,7 @@ class CommandTreeTest {
     void errorsVersionAndInheritedOptionsMatchTheWholeTree() {
         same();
         same("--version");
+        same("-V");
         same("--verbose", "leads", "identify", "--help");
         same("leads", "identify", "--verbose", "--help");
         same("nosuch");
