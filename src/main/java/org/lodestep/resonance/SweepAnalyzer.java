@@ -250,18 +250,22 @@ public final class SweepAnalyzer {
                     + (law != null ? "the sweep law (" + law.durationS() + " s) does not overlap the capture"
                     : "the step-pulse channel has fewer than two rising edges per segment"));
         }
-        List<ResponsePoint> points = new ArrayList<>();
         List<RateBin> binList = new ArrayList<>(bins.values());
-        for (RateBin b : binList) {
-            double rms = Math.sqrt(b.sumMeanSquare / b.count);
-            points.add(new ResponsePoint(b.sumRate / b.count, rms, 20 * Math.log10(Math.max(rms, Double.MIN_NORMAL)),
-                    b.order(0), b.order(1), b.order(2), b.order(3), b.count));
-        }
+        List<ResponsePoint> points = points(binList);
         double[] rates = new double[points.size()];
         double[] levels = new double[points.size()];
         for (int i = 0; i < rates.length; i++) {
             rates[i] = points.get(i).rateFullStepsPerS();
             levels[i] = points.get(i).levelDb();
+        }
+        double[] base = kind == ResponseChannel.VIBRATION ? BandDetector.baseline(rates, levels,
+                bandSettings.baselineHalfWidth(), bandSettings.baselineQuantile()) : null;
+        if (base != null) {
+            // the levels bands were measured against, kept with the curve so a report can draw them
+            double[] enter = BandDetector.entryLevels(rates, levels, base, bandSettings);
+            for (int i = 0; i < rates.length; i++) {
+                points.set(i, points.get(i).withDetection(base[i], enter[i]));
+            }
         }
         List<ResonanceBand> raw = kind == ResponseChannel.VIBRATION
                 ? vibrationBands(points, binList, rates, levels, bandSettings)
@@ -278,8 +282,7 @@ public final class SweepAnalyzer {
             bands.add(BandClassifier.classify(b, fn));
         }
         List<WatchPoint> watch = kind == ResponseChannel.VIBRATION && Double.isNaN(bandSettings.absoluteLevel())
-                ? WatchList.find(rates, levels, BandDetector.baseline(rates, levels, bandSettings.baselineHalfWidth(),
-                bandSettings.baselineQuantile()), bands, fn, bandSettings.thresholdDb())
+                ? WatchList.find(rates, levels, base, bands, fn, bandSettings.thresholdDb())
                 : List.of();
         // A phase current is dominated by the drive's own switching pattern, periodic in the step count whatever
         // the rotor does: on a simulated constant-voltage sweep that slipped poles its synchronous share stayed at
@@ -293,6 +296,24 @@ public final class SweepAnalyzer {
         return new SweepResult(points, bands, fn, source, law != null ? "law" : "pulses",
                 welch.spectrum(SpectrumScaling.DENSITY), spectrogram, framer.segmentCount(), outside,
                 fed / sampleRateHz, kind, stall, watch, CurrentBands.note(kind));
+    }
+
+    /**
+     * The response curve of the segments fed so far, by rising step rate: what a front end draws while a sweep is
+     * still streaming. The points of the rate bins still filling may change with the next segments.
+     */
+    public List<ResponsePoint> responseSoFar() {
+        return points(new ArrayList<>(bins.values()));
+    }
+
+    private static List<ResponsePoint> points(List<RateBin> binList) {
+        List<ResponsePoint> points = new ArrayList<>(binList.size());
+        for (RateBin b : binList) {
+            double rms = Math.sqrt(b.sumMeanSquare / b.count);
+            points.add(new ResponsePoint(b.sumRate / b.count, rms, 20 * Math.log10(Math.max(rms, Double.MIN_NORMAL)),
+                    b.order(0), b.order(1), b.order(2), b.order(3), b.count, Double.NaN, Double.NaN));
+        }
+        return points;
     }
 
     private List<ResonanceBand> vibrationBands(List<ResponsePoint> points, List<RateBin> binList, double[] rates,

@@ -47,6 +47,33 @@ class SweepAnalyzerTest {
     }
 
     @Test
+    void theCurveSoFarGrowsAlongTheSweepAndEndsAsTheFinishedCurve() {
+        SweepLaw law = new SweepLaw(SweepShape.LINEAR, 30, 400, 20);
+        double[][] sig = rotor(1).run(law::rateFullStepsPerSAt, FS, (int) (FS * 20));
+        SweepAnalyzer a = SweepAnalyzer.programmed(SweepSettings.forSampleRate(FS), FS, law);
+        assertTrue(a.responseSoFar().isEmpty());
+        int half = sig[0].length / 2;
+        a.feed(sig[0], null, 0, half);
+        java.util.List<ResponsePoint> early = a.responseSoFar();
+        // halfway through a linear 30 ... 400 sweep the rate is 215 full steps/s: the curve reaches no further
+        double last = early.get(early.size() - 1).rateFullStepsPerS();
+        assertTrue(last > 200 && last <= law.rateFullStepsPerSAt(half / FS), "curve so far ends at " + last);
+        a.feed(sig[0], null, half, sig[0].length - half);
+        java.util.List<ResponsePoint> all = a.responseSoFar();
+        // the finished curve is the curve so far once every sample is in, point for point (finish adds the
+        // detection baseline and threshold to each point)
+        java.util.List<ResponsePoint> finished = a.finish(BandSettings.defaults(), Double.NaN).response();
+        assertEquals(all.size(), finished.size());
+        for (int i = 0; i < all.size(); i++) {
+            assertEquals(all.get(i).rateFullStepsPerS(), finished.get(i).rateFullStepsPerS(), 0.0);
+            assertEquals(all.get(i).levelDb(), finished.get(i).levelDb(), 0.0);
+            assertEquals(all.get(i).segments(), finished.get(i).segments());
+        }
+        // bins behind the sweep take no more segments: the early curve, less its filling last bin, is unchanged
+        assertEquals(early.subList(0, early.size() - 1), all.subList(0, early.size() - 1));
+    }
+
+    @Test
     void pulseChannelGivesTheSameBandAsTheProgrammedLaw() {
         SweepLaw law = new SweepLaw(SweepShape.LOG, 40, 400, 16);
         RotorSimulator sim = rotor(1);
