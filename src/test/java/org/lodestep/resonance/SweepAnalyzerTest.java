@@ -159,4 +159,32 @@ class SweepAnalyzerTest {
         IllegalArgumentException e = assertThrows(IllegalArgumentException.class, () -> a.feed(z, z, 0, 8000));
         assertTrue(e.getMessage().contains("flat"), e.getMessage());
     }
+
+    @Test
+    void synchronismCheckBesideTheSpectraGivesTheSameResultsAsInline() {
+        // Blocks of 1000 frames run the step counts and the synchronism check on the feeding thread, blocks of 8191
+        // hand them to a second thread beside the transforms: every result must be the same, for a programmed law
+        // and for a pulse channel.
+        SweepLaw law = new SweepLaw(SweepShape.LOG, 40, 400, 16);
+        double[][] sig = rotor(1).run(law::rateFullStepsPerSAt, FS, (int) (FS * 16) - 333);
+        for (boolean withPulses : new boolean[] {false, true}) {
+            SweepResult[] r = new SweepResult[2];
+            int[] blocks = {1000, 8191};
+            for (int t = 0; t < 2; t++) {
+                SweepAnalyzer a = withPulses ? SweepAnalyzer.fromPulses(SweepSettings.forSampleRate(FS), FS, 1)
+                        : SweepAnalyzer.programmed(SweepSettings.forSampleRate(FS), FS, law);
+                for (int i = 0; i < sig[0].length; i += blocks[t]) {
+                    a.feed(sig[0], withPulses ? sig[1] : null, i, Math.min(blocks[t], sig[0].length - i));
+                }
+                r[t] = a.finish(BandSettings.defaults(), Double.NaN);
+            }
+            String what = withPulses ? "pulses" : "law";
+            assertEquals(r[0].stall(), r[1].stall(), what);
+            assertEquals(r[0].response(), r[1].response(), what);
+            assertEquals(r[0].bands(), r[1].bands(), what);
+            assertEquals(r[0].watch(), r[1].watch(), what);
+            assertEquals(r[0].evidenceNote(), r[1].evidenceNote(), what);
+            assertTrue(r[0].stall().lowestSynchronousShare() > 0, "the check ran: " + r[0].stall());
+        }
+    }
 }
