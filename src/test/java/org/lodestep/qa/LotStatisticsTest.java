@@ -36,9 +36,9 @@ class LotStatisticsTest {
         assertEquals(1.97, p.min(), 0);
         assertEquals(2.06, p.max(), 0);
         assertEquals(1.7354, p.cp(), 1.7354 * 1e-3);
-        assertEquals(1.6052, p.cpk(), 1.6052 * 1e-3);
+        assertEquals(1.6052, p.cpk().value(), 1.6052 * 1e-3);
         assertEquals(2.2019, p.pp(), 2.2019 * 1e-4);
-        assertEquals(2.0368, p.ppk(), 2.0368 * 1e-4);
+        assertEquals(2.0368, p.ppk().value(), 2.0368 * 1e-4);
         assertEquals(0, p.outOfSpec());
         assertEquals(10, p.histogram().stream().mapToInt(Histogram.Bin::count).sum());
         assertFalse(p.limitsVaried());
