@@ -45,12 +45,12 @@ public final class IndividualsChart {
      * @param outsideMr    indexes i of moving ranges |x_i − x_(i−1)| above the MR limit
      * @param scale        the scale the limits were computed on; on LOG, centre and X limits are in the values' unit
      *                     (the centre is the geometric mean) and MR̄, σ and the MR limit are on ln x
-     * @param lowerXComputed the X chart's lower limit as computed, before clipping (in the values' unit)
-     * @param lowerXClipped true when the computed lower limit was below zero and {@code lowerX} is its clip at zero
+     * @param computedLowerX the X chart's lower limit as computed, before clipping (in the values' unit)
+     * @param clippedAtZero true when the computed lower limit was below zero and {@code lowerX} is its clip at zero
      */
     public record Limits(double centre, double movingRangeMean, double sigmaWithin, double upperX, double lowerX,
                          double upperMr, List<Integer> outsideX, List<Integer> outsideMr, ValueScale scale,
-                         double lowerXComputed, boolean lowerXClipped) {
+                         double computedLowerX, boolean clippedAtZero) {
         public Limits {
             outsideX = List.copyOf(outsideX);
             outsideMr = List.copyOf(outsideMr);

@@ -261,7 +261,7 @@ public final class QaHtml {
                         + QaFormat.value(name, p.chart().centre()))
                 .upperLimit(p.chart().upperX() * k, "UCL " + QaFormat.value(name, p.chart().upperX()))
                 // A clipped limit lies on the axis floor, where a label would cover points: the caption names it.
-                .lowerLimit(p.chart().lowerX() * k, p.chart().lowerXClipped() ? ""
+                .lowerLimit(p.chart().lowerX() * k, p.chart().clippedAtZero() ? ""
                         : "LCL " + QaFormat.value(name, p.chart().lowerX()))
                 .flagged(outX).failed(failed, notes);
         if (!Double.isNaN(p.lsl())) {
@@ -276,14 +276,16 @@ public final class QaHtml {
         String caption = "Individuals chart of " + sentence(what) + ", one point per motor in the order of its latest test."
                 + " Solid lines: spec limits; dashed: control limits x\u0304 \u00B1 3\u00B7MR\u0304/d\u2082. A cross"
                 + " marks a motor that failed the spec, a hollow diamond a point outside the control limits.";
-        if (p.chart().lowerXClipped()) {
+        if (p.chart().clippedAtZero()) {
             caption += " The lower control limit is clipped at zero, the chart's floor (computed "
-                    + QaFormat.value(name, p.chart().lowerXComputed()) + " " + unit + "): the quantity cannot be"
+                    + QaFormat.value(name, p.chart().computedLowerX()) + " " + unit + "): the quantity cannot be"
                     + " negative.";
         }
         if (p.chart().scale() == ValueScale.LOG) {
             caption += " Log scale: " + QaLotPhrases.scaleNote(p) + ".";
         }
+        cc.describe("Individuals chart of " + what + ": " + x.length + " values (" + unit + ") in run order, "
+                + p.chart().outsideX().size() + " outside the control limits, " + p.outOfSpec() + " outside the spec.");
         b.figure(cc.build().toSvg(), caption);
     }
 
@@ -304,7 +306,10 @@ public final class QaHtml {
                         .centre(p.chart().movingRangeMean() * mk, "MR\u0304 "
                                 + QaLotPhrases.movingRange(p, p.chart().movingRangeMean()))
                         .upperLimit(p.chart().upperMr() * mk, "UCL " + QaLotPhrases.movingRange(p, p.chart().upperMr()))
-                        .flagged(outMr).size(760, 230).build().toSvg(),
+                        .flagged(outMr).size(760, 230)
+                        .describe("Moving-range chart of " + what + ": " + mr.length + " moving ranges ("
+                                + mrUnit + ") in run order, " + p.chart().outsideMr().size() + " above the limit.")
+                        .build().toSvg(),
                 "Moving-range chart of " + sentence(what) + " (|x\u1D62 \u2212 x\u1D62\u208B\u2081|" + (log ? " of ln R" : "")
                         + ", each at the later motor of its pair); its lower limit is zero.");
     }

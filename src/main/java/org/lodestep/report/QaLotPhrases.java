@@ -78,7 +78,7 @@ final class QaLotPhrases {
     /** The lower control limit, with the clip stated: "0 (computed −9.43, clipped at zero)". */
     static String lowerControlLimit(LotStatistics.ParameterStatistics p) {
         String v = QaFormat.value(p.parameter(), p.chart().lowerX());
-        return p.chart().lowerXClipped() ? v + " (computed " + QaFormat.value(p.parameter(), p.chart().lowerXComputed())
+        return p.chart().clippedAtZero() ? v + " (computed " + QaFormat.value(p.parameter(), p.chart().computedLowerX())
                 + ", clipped at zero: the quantity cannot be negative)" : v;
     }
 

@@ -183,9 +183,9 @@ class LotStatisticsTest {
         }
         double sigma = mr / 1.128;
         assertTrue(mean - 3 * sigma < 0);
-        assertTrue(p.chart().lowerXClipped());
+        assertTrue(p.chart().clippedAtZero());
         assertEquals(0.0, p.chart().lowerX());
-        assertEquals(mean - 3 * sigma, p.chart().lowerXComputed(), Math.abs(mean - 3 * sigma) * 1e-3);
+        assertEquals(mean - 3 * sigma, p.chart().computedLowerX(), Math.abs(mean - 3 * sigma) * 1e-3);
         assertEquals(mean + 3 * sigma, p.chart().upperX(), (mean + 3 * sigma) * 1e-3);
         assertEquals("Cpu", p.cpk().index());
         assertEquals((5 - mean) / (3 * sigma), p.cpk().value(), 1e-3);
@@ -219,7 +219,7 @@ class LotStatisticsTest {
         assertEquals(Math.exp(mean), p.chart().centre(), Math.exp(mean) * 1e-9);
         assertEquals(Math.exp(mean + 3 * sigma), p.chart().upperX(), Math.exp(mean + 3 * sigma) * 1e-3);
         assertEquals(Math.exp(mean - 3 * sigma), p.chart().lowerX(), Math.exp(mean - 3 * sigma) * 1e-3);
-        assertFalse(p.chart().lowerXClipped());
+        assertFalse(p.chart().clippedAtZero());
         assertEquals(mr, p.chart().movingRangeMean(), 1e-12);
         assertEquals("Cpl", p.cpk().index());
         assertEquals((mean - Math.log(100e6)) / (3 * sigma), p.cpk().value(), p.cpk().value() * 1e-3);
