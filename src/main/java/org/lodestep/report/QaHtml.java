@@ -153,17 +153,17 @@ public final class QaHtml {
         return b.build();
     }
 
+    /** Narrow enough for a phone: the unit rides with each number, the record with the serial. */
     private static HtmlTable failedTable(List<LotStatistics.FailedCheck> failed) {
-        HtmlTable.Builder t = HtmlTable.builder(null, "Serial", "Check", "Value", "Limit", "Margin", "Unit",
-                "Record", "Re-test");
+        HtmlTable.Builder t = HtmlTable.builder(null, "Serial (record)", "Check", "Value", "Limit", "Margin",
+                "Re-test");
         for (LotStatistics.FailedCheck f : failed) {
             Status retest = f.retestVerdict() == null ? Status.WARN : status(f.retestVerdict());
-            t.row(status(f.verdict()), Cell.text(f.serial()),
-                    Cell.status(status(f.verdict()), QaLotPhrases.title(f.parameter(), f.label()) + " "
-                            + f.verdict().name().toLowerCase(Locale.ROOT)),
-                    Cell.number(QaFormat.value(f.parameter(), f.value())), Cell.number(QaLotPhrases.limit(f)),
-                    Cell.number(QaLotPhrases.signed(f.parameter(), f.margin())),
-                    Cell.text(QaFormat.unit(f.parameter(), f.unit())), Cell.text("#" + f.recordId()),
+            String unit = " " + QaFormat.unit(f.parameter(), f.unit());
+            t.row(status(f.verdict()), Cell.text(f.serial() + " (#" + f.recordId() + ")"),
+                    Cell.status(status(f.verdict()), QaLotPhrases.title(f.parameter(), f.label())),
+                    Cell.number(QaFormat.value(f.parameter(), f.value()) + unit), Cell.number(QaLotPhrases.limit(f)),
+                    Cell.number(QaLotPhrases.signed(f.parameter(), f.margin()) + unit),
                     Cell.status(retest, QaLotPhrases.retest(f)));
         }
         return t.build();
@@ -342,18 +342,22 @@ public final class QaHtml {
         return QaFormat.value(name, lsl) + " \u2013 " + QaFormat.value(name, usl);
     }
 
-    /** The checks of one motor: the judged value, its limit and the signed margin inside it. */
+    /**
+     * The checks of one motor: the verdict next to the check's name (so a phone shows both before the table scrolls),
+     * the judged value with its unit, the limits and the signed margin inside the deciding limit.
+     */
     private static HtmlTable checkTable(List<CheckResult> checks) {
-        HtmlTable.Builder t = HtmlTable.builder(null, "Check", "Value", "Limits", "Margin", "Unit", "Result");
+        HtmlTable.Builder t = HtmlTable.builder(null, "Check", "Result", "Value", "Limits", "Margin");
         for (CheckResult c : checks) {
             String p = c.parameter();
+            String unit = " " + QaFormat.unit(p, c.limit().unit());
             String limits = spec(p, c.limit().lower(), c.limit().upper());
             String margin = c.decidingLimit().isEmpty() ? "\u2014"
-                    : QaLotPhrases.signed(p, c.margin()) + " to " + c.decidingLimit();
+                    : QaLotPhrases.signed(p, c.margin()) + " (" + c.decidingLimit() + ")";
             t.row(c.verdict() == Verdict.PASS ? null : status(c.verdict()), Cell.text(name(c)),
-                    Cell.number(QaFormat.value(p, c.judged())), Cell.number(limits.trim()), Cell.number(margin),
-                    Cell.text(QaFormat.unit(p, c.limit().unit())),
-                    Cell.status(status(c.verdict()), c.verdict().name().toLowerCase(Locale.ROOT)));
+                    Cell.status(status(c.verdict()), c.verdict().name().toLowerCase(Locale.ROOT)),
+                    Cell.number(Double.isNaN(c.judged()) ? "\u2014" : QaFormat.value(p, c.judged()) + unit),
+                    Cell.number(limits.trim() + unit), Cell.number(margin));
         }
         return t.build();
     }

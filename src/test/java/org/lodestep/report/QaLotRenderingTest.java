@@ -145,8 +145,8 @@ class QaLotRenderingTest {
         assertEquals(13, f.at("/2/retest_record_id").asLong());
         assertEquals("PASS", f.at("/2/retest_verdict").asText());
         String cells = String.join("|", ReportCli.texts(html, ReportCli.XHTML, "td"));
-        assertTrue(cells.contains("S05|\u2716 Phase resistance B fail|2.3|USL 2.09|\u22120.21|ohm|#5|"), cells);
-        assertTrue(cells.contains("S07|\u2716 Insulation resistance b-frame fail|62|LSL 100|\u221238|Mohm|#7|"
+        assertTrue(cells.contains("S05 (#5)|\u2716 Phase resistance B|2.3 ohm|USL 2.09|\u22120.21 ohm|"), cells);
+        assertTrue(cells.contains("S07 (#7)|\u2716 Insulation resistance b-frame|62 Mohm|LSL 100|\u221238 Mohm|"
                 + "\u2714 #13: PASS"), cells);
         assertTrue(text.lines().anyMatch(l -> l.matches("\\s+S05\\s+#5\\s+Phase resistance B\\s+FAIL\\s+2\\.3\\s+USL 2\\.09"
                 + "\\s+\u22120\\.21\\s+ohm\\s+not re-tested")), text);
