@@ -22,6 +22,10 @@ import com.fasterxml.jackson.databind.JsonNode;
  * summary: every number the text and HTML show is checked against the JSON of the same summary.
  */
 class QaLotRenderingTest {
+    /** The display units, as the reports write them (one spelling everywhere). */
+    private static final String OHM = QaFormat.unit("phase_resistance", "ohm");
+    private static final String MOHM = QaFormat.unit("insulation_resistance", "ohm");
+    private static final String DEG = QaFormat.unit("step_angle", "deg");
     private static LotStatistics.Summary sum;
     private static String text;
     private static Document html;
@@ -63,9 +67,9 @@ class QaLotRenderingTest {
     void constantSeriesSaysNoVariationInsteadOfAChart() {
         assertTrue(series("step_angle", "").get("constant").asBoolean());
         assertFalse(series("phase_resistance", "A").get("constant").asBoolean());
-        assertTrue(text.contains("Step angle [deg]  n=12: no variation (all 12 values = 1.8 deg)"), text);
+        assertTrue(text.contains("Step angle [" + DEG + "]  n=12: no variation (all 12 values = 1.8 " + DEG + ")"), text);
         assertTrue(ReportCli.texts(html, ReportCli.XHTML, "p").stream()
-                .anyMatch(p -> p.startsWith("No variation (all 12 values = 1.8 deg)")));
+                .anyMatch(p -> p.startsWith("No variation (all 12 values = 1.8 " + DEG + ")")));
         assertTrue(figureLabels().stream().noneMatch(f -> f.contains("Step angle")), figureLabels().toString());
         // no axis in engineering notation anywhere (the old constant chart's "1.8E0", "2.5E-9")
         assertTrue(svgText.stream().noneMatch(t -> t.matches(".*\\dE-?\\d.*")), svgText.toString());
@@ -86,7 +90,7 @@ class QaLotRenderingTest {
 
     @Test
     void individualsChartsCarryTheSpecLimitsAndMarkTheFailedMotor() {
-        assertTrue(svgText.contains("USL 2.09 ohm") && svgText.contains("LSL 1.71 ohm"), svgText.toString());
+        assertTrue(svgText.contains("USL 2.09 " + OHM) && svgText.contains("LSL 1.71 " + OHM), svgText.toString());
         // S05's phase B, 2.30 ohm against USL 2.09: a cross and its own label
         assertTrue(svgText.contains("S05 2.3 > USL"), svgText.toString());
         assertTrue(svgText.contains("failed the spec"), svgText.toString());
@@ -145,11 +149,12 @@ class QaLotRenderingTest {
         assertEquals(13, f.at("/2/retest_record_id").asLong());
         assertEquals("PASS", f.at("/2/retest_verdict").asText());
         String cells = String.join("|", ReportCli.texts(html, ReportCli.XHTML, "td"));
-        assertTrue(cells.contains("S05 (#5)|\u2716 Phase resistance B|2.3 ohm|USL 2.09|\u22120.21 ohm|"), cells);
-        assertTrue(cells.contains("S07 (#7)|\u2716 Insulation resistance b-frame|62 Mohm|LSL 100|\u221238 Mohm|"
-                + "\u2714 #13: PASS"), cells);
+        assertTrue(cells.contains("S05 (#5)|\u2716 Phase resistance B|2.3 " + OHM + "|USL 2.09|\u22120.21 " + OHM + "|"),
+                cells);
+        assertTrue(cells.contains("S07 (#7)|\u2716 Insulation resistance b-frame|62 " + MOHM + "|LSL 100|\u221238 "
+                + MOHM + "|\u2714 #13: PASS"), cells);
         assertTrue(text.lines().anyMatch(l -> l.matches("\\s+S05\\s+#5\\s+Phase resistance B\\s+FAIL\\s+2\\.3\\s+USL 2\\.09"
-                + "\\s+\u22120\\.21\\s+ohm\\s+not re-tested")), text);
+                + "\\s+\u22120\\.21\\s+" + OHM + "\\s+not re-tested")), text);
         assertTrue(text.lines().anyMatch(l -> l.contains("S07") && l.contains("\u221238") && l.contains("#13: PASS")),
                 text);
         // the answer comes first: yield, the failed serial and the re-tested one with its outcome
