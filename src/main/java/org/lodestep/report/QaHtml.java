@@ -144,6 +144,11 @@ public final class QaHtml {
             b.section("Failed and re-tested motors");
             b.table(failedTable(sum.failedChecks()));
         }
+        if (!sum.parameters().isEmpty()) {
+            b.section("Every series at a glance");
+            b.table(overview(sum.parameters()));
+            b.paragraph(capitalised(QaLotPhrases.CI_SOURCE) + ".");
+        }
         for (LotStatistics.ParameterStatistics p : sum.parameters()) {
             series(b, p);
         }
@@ -165,6 +170,27 @@ public final class QaHtml {
                     Cell.number(QaFormat.value(f.parameter(), f.value()) + unit), Cell.number(QaLotPhrases.limit(f)),
                     Cell.number(QaLotPhrases.signed(f.parameter(), f.margin()) + unit),
                     Cell.status(retest, QaLotPhrases.retest(f)));
+        }
+        return t.build();
+    }
+
+    /** One row per series: where it sits against its spec, its capability and how many points left the limits. */
+    private static HtmlTable overview(List<LotStatistics.ParameterStatistics> all) {
+        HtmlTable.Builder t = HtmlTable.builder(null, "Series", "n", "Mean", "Spec", "Outside spec",
+                "Capability (95 % CI)", "Out of control");
+        for (LotStatistics.ParameterStatistics p : all) {
+            String name = p.parameter();
+            String unit = " " + QaLotPhrases.unit(p);
+            t.row(p.outOfSpec() > 0 ? Status.FAIL : null, Cell.text(QaLotPhrases.title(p)),
+                    Cell.number(Integer.toString(p.n())),
+                    Cell.number(p.constant() ? "all " + QaFormat.value(name, p.mean()) + unit
+                            : QaFormat.value(name, p.mean()) + unit),
+                    Cell.number(spec(name, p.lsl(), p.usl()) + unit),
+                    p.outOfSpec() > 0 ? Cell.status(Status.FAIL, Integer.toString(p.outOfSpec()))
+                            : Cell.number("0"),
+                    Cell.text(p.constant() ? "no variation" : p.cpk().index() + " "
+                            + QaLotPhrases.capabilityFigure(p.cpk(), false)),
+                    Cell.number(p.constant() ? "\u2014" : Integer.toString(p.outOfControl().size())));
         }
         return t.build();
     }
