@@ -42,13 +42,15 @@ public final class QaText {
     /** One line per check: parameter, phase, measured, judged, limits, verdict and note. */
     static String checkTable(List<CheckResult> checks) {
         List<String[]> rows = new ArrayList<>();
-        rows.add(new String[] {"check", "", "measured", "judged", "limits", "unit", "result"});
+        rows.add(new String[] {"check", "", "measured", "judged", "limits", "margin", "unit", "result"});
         for (CheckResult c : checks) {
             String p = c.parameter();
             String limits = (c.limit().hasLower() ? QaFormat.value(p, c.limit().lower()) : "")
                     + " .. " + (c.limit().hasUpper() ? QaFormat.value(p, c.limit().upper()) : "");
+            String margin = c.decidingLimit().isEmpty() ? "-"
+                    : QaLotPhrases.signed(p, c.margin()) + " " + c.decidingLimit();
             rows.add(new String[] {p.replace('_', ' '), QaFormat.visible(c.label()), QaFormat.value(p, c.measured()),
-                    QaFormat.value(p, c.judged()), limits.trim(), QaFormat.unit(p, c.limit().unit()),
+                    QaFormat.value(p, c.judged()), limits.trim(), margin, QaFormat.unit(p, c.limit().unit()),
                     c.verdict().name()});
         }
         StringBuilder b = new StringBuilder(table(rows));
