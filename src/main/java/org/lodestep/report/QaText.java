@@ -98,7 +98,8 @@ public final class QaText {
             b.append("\nfailed and re-tested:\n").append(failedTable(sum.failedChecks()));
         }
         if (!sum.parameters().isEmpty()) {
-            b.append('\n').append(QaLotPhrases.CI_SOURCE).append('\n');
+            b.append("\nevery series at a glance:\n").append(overview(sum.parameters()));
+            b.append(QaLotPhrases.CI_SOURCE).append('\n');
         }
         for (LotStatistics.ParameterStatistics p : sum.parameters()) {
             b.append('\n').append(parameter(p));
@@ -119,6 +120,23 @@ public final class QaText {
                     QaFormat.value(f.parameter(), f.value()), QaLotPhrases.limit(f),
                     QaLotPhrases.signed(f.parameter(), f.margin()), QaFormat.unit(f.parameter(), f.unit()),
                     QaLotPhrases.retest(f)});
+        }
+        return table(rows);
+    }
+
+    /** One line per series: n, mean, spec, values outside it, capability and points out of control. */
+    private static String overview(List<LotStatistics.ParameterStatistics> all) {
+        List<String[]> rows = new ArrayList<>();
+        rows.add(new String[] {"series", "n", "mean", "spec", "unit", "outside spec", "capability (95 % CI)",
+                "out of control"});
+        for (LotStatistics.ParameterStatistics p : all) {
+            String name = p.parameter();
+            rows.add(new String[] {QaLotPhrases.title(p), Integer.toString(p.n()),
+                    (p.constant() ? "all " : "") + QaFormat.value(name, p.mean()),
+                    QaLotPhrases.spec(name, p.lsl(), p.usl()), QaLotPhrases.unit(p), Integer.toString(p.outOfSpec()),
+                    p.constant() ? "no variation" : p.cpk().index() + " "
+                            + QaLotPhrases.capabilityFigure(p.cpk(), false),
+                    p.constant() ? "-" : Integer.toString(p.outOfControl().size())});
         }
         return table(rows);
     }
