@@ -264,7 +264,7 @@ public final class LotStatistics {
         double s = x.length < 2 ? Double.NaN : d.getStandardDeviation();
         ValueScale scale = ValueScale.of(name, x);
         IndividualsChart.Limits chart = IndividualsChart.of(x, scale);
-        boolean constant = IndividualsChart.noVariation(x);
+        boolean constant = x.length >= 2 && IndividualsChart.noVariation(x); // one value is not a "no variation"
         // Capability on the chart's scale: for a log scale, of ln x against ln LSL (Montgomery ch. 8 on
         // transformed data; references §25).
         double[] y = scale.transform(x);
