@@ -66,7 +66,7 @@ public final class LotStatistics {
      * @param usl         upper specification limit, or NaN
      * @param limitsVaried true when the records were judged with different limits (several spec versions);
      *                    lsl/usl are then those of the latest record
-     * @param constant    true when the values do not vary (all equal, or a spread below the resolution of
+     * @param constant    true when two or more values do not vary (all equal, or a spread below the resolution of
      *                    {@link IndividualsChart#RESOLUTION}): no chart, no limits, no capability
      * @param cp          Cp with σ within (MR̄/d2), NaN for a one-sided spec or below {@link ProcessCapability#MIN_N}
      * @param cpk         Cpk (or the one-sided Cpu or Cpl) with σ within, and its interval
