@@ -236,6 +236,27 @@ public final class HtmlReport {
             return this;
         }
 
+        /**
+         * Opens a collapsed block (HTML {@code details}) whose one-line {@code summary} is always shown; the blocks
+         * that follow, up to {@link #endCollapsed}, open on a click (and in print stay as the browser prints them).
+         */
+        public Builder collapsed(String summary) {
+            return collapsed(summary, false);
+        }
+
+        /** A block like {@link #collapsed(String)} that starts open when {@code open}. */
+        public Builder collapsed(String summary, boolean open) {
+            body.append(open ? "<details open=\"open\"><summary>" : "<details><summary>").append(Html.escape(summary))
+                    .append("</summary>\n");
+            return this;
+        }
+
+        /** Closes the block {@link #collapsed} opened. */
+        public Builder endCollapsed() {
+            body.append("</details>\n");
+            return this;
+        }
+
         /** The footer line (tool version, generation time); replaces the default. */
         public Builder footer(String text) {
             this.footer = Objects.requireNonNull(text, "text");
