@@ -119,6 +119,9 @@ public final class Main implements Runnable {
         } else if (t instanceof AccessDeniedException) {
             code = ExitCode.USAGE;
             message = t.getMessage() + ": permission denied";
+        } else if (t instanceof org.lodestep.report.html.OutputFile.NotWritten) {
+            code = ExitCode.USAGE;
+            message = t.getMessage();
         } else if (t instanceof UsageException || t instanceof org.lodestep.workflow.SettingsException) {
             code = ExitCode.USAGE;
             message = t.getMessage();
