@@ -40,7 +40,8 @@ import picocli.CommandLine.Option;
             "  2  usage error or unreadable input",
             "  3  the analysis found an error-severity fault, or a QA check failed",
             "  4  rig or I/O failure",
-            "  5  database failure"
+            "  5  database failure",
+            "  6  not yet determined: a probe ended early, or the readings leave the answer open"
         })
 public final class Main implements Runnable {
 
@@ -84,7 +85,23 @@ public final class Main implements Runnable {
         cl.setCaseInsensitiveEnumValuesAllowed(true);
         cl.setUsageHelpAutoWidth(true);
         cl.setExecutionExceptionHandler((ex, cmd, parseResult) -> handle(ex, cmd, isVerbose(parseResult)));
+        cl.setParameterExceptionHandler(Main::badParameter);
         return cl;
+    }
+
+    /**
+     * A bad option or value: one line naming it and where help is, instead of the whole usage (which buries the
+     * reason under 60 lines); exit 2.
+     */
+    static int badParameter(CommandLine.ParameterException ex, String[] args) {
+        CommandLine cmd = ex.getCommandLine();
+        String name = cmd.getCommandSpec().qualifiedName();
+        String reason = String.valueOf(ex.getMessage()).strip().lines().findFirst().orElse("bad option")
+                .replaceAll("\\p{Cntrl}", "?");
+        PrintWriter err = cmd.getErr();
+        err.println(name + ": " + DatabaseUrls.redact(reason) + " (see '" + name + " --help')");
+        err.flush();
+        return ExitCode.USAGE;
     }
 
     private static boolean isVerbose(CommandLine.ParseResult parseResult) {

@@ -130,14 +130,15 @@ final class QaCheckCommand implements Callable<Integer> {
         // Every input the whole lot shares is read before the first motor, so a bad one stops the run at once.
         List<String> listedSerials = serial == null && serialsFile != null && !serialsFile.equals("-")
                 ? serialsFromFile(Path.of(serialsFile)) : null;
-        if (!json && partSpec.limit(Parameters.INSULATION_RESISTANCE).isPresent() && insulationTested()) {
-            out.println(QaText.insulationCaution(partSpec.insulationTestVoltageV()));
-        }
         QaCheck.Settings settings = new QaCheck.Settings(partSpec, lot, readings.sources(),
                 ambientC == null ? Double.NaN : ambientC, operator(), station(), VersionProvider.version(),
                 readings.confirmation());
         try (RecordStore records = store.open()) {
             QaCheck check = new QaCheck(settings, records);
+            // the caution once every shared input has been read, and only where an insulation test is part of the work
+            if (!json && partSpec.limit(Parameters.INSULATION_RESISTANCE).isPresent() && insulationTested()) {
+                out.println(QaText.insulationCaution(partSpec.insulationTestVoltageV()));
+            }
             if (serial != null) {
                 RecordStore.Appended a = check.check(serial, progress());
                 if (report != null) {

@@ -115,6 +115,10 @@ public final class MeterLog {
             throw new InputFormatException(source, lastLine + 1, null, null, "is not a readable CSV row: expected"
                     + " cells separated by commas, a quoted cell closed by a quote");
         }
+        if (rows.isEmpty()) {
+            throw new InputFormatException(source, headerLine, null, null, "has no rows: expected one row of readings"
+                    + " per motor under the header");
+        }
         return new MeterLog(source, rows);
     }
 
@@ -142,12 +146,12 @@ public final class MeterLog {
 
     private static Row row(String source, List<String> header, CSVRecord rec, int line, String raw)
             throws InputFormatException {
-        if (rec.size() > header.size()) {
-            throw new InputFormatException(source, line, null, null, "has " + rec.size() + " cells: expected at"
-                    + " most " + header.size() + ", one per column of the header");
+        if (rec.size() != header.size()) {
+            throw new InputFormatException(source, line, null, null, "has " + rec.size() + " cells: expected "
+                    + header.size() + ", one per column of the header (an empty cell for a value not measured)");
         }
         int serialAt = header.indexOf("serial");
-        String serial = serialAt < rec.size() ? rec.get(serialAt) : "";
+        String serial = rec.get(serialAt);
         if (serial.isEmpty()) {
             throw new InputFormatException(source, line, "serial", "", "expected a serial number");
         }
@@ -156,7 +160,7 @@ public final class MeterLog {
                     + " characters long: expected a serial number of at most " + InputLimits.MAX_SERIAL_CHARS);
         }
         Map<String, Double> values = new HashMap<>();
-        for (int i = 0; i < header.size() && i < rec.size(); i++) {
+        for (int i = 0; i < header.size(); i++) {
             String column = header.get(i);
             String cell = rec.get(i);
             if (column.equals("serial") || cell.isEmpty()) {

@@ -112,7 +112,8 @@ public record QaReadingSources(Path resistanceFile, String resistancePattern, Li
      */
     private static void phaseCount(List<Double> values, String what, String example) {
         if (!values.isEmpty() && values.size() != 2) {
-            throw new SettingsException(values.size() + " " + what + " given: expected two, phase A then phase B"
+            throw new SettingsException(values.size() + " " + (values.size() == 1 ? what.replaceAll("s$", "") : what)
+                    + " given: expected two, phase A then phase B"
                     + " (e.g. " + example + ")");
         }
     }
