@@ -91,7 +91,7 @@ public final class StepResponseFitter {
         double stepS = p[2];
         double tauS = Math.abs(p[3]);
         if (!(finalA > 0) || !(tauS > 0)) {
-            throw new IllegalArgumentException("the current does not rise after the step (fitted rise "
+            throw new IllegalArgumentException("no RL step response found: the current does not rise after the step (fitted rise "
                     + finalA + " A); is the current channel inverted or the winding open?");
         }
         double rms = optimum.getRMS();

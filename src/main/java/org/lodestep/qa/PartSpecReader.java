@@ -236,7 +236,7 @@ public final class PartSpecReader {
                 Set<String> keys = KEYS.get(e.getKey());
                 if (keys == null || !e.getValue().isObject()) {
                     String near = nearest(e.getKey(), KEYS.keySet());
-                    throw new InputFormatException(source, lineOf(null, e.getKey()), null, e.getKey(),
+                    throw new InputFormatException(source, lineOf(null, e.getKey()), e.getKey(), e.getKey(),
                             "is not a known section" + (near == null ? "" : ": did you mean [" + near + "]?")
                                     + " Expected one of [" + String.join("], [", KEYS.keySet()) + "]");
                 }
@@ -245,7 +245,7 @@ public final class PartSpecReader {
                     if (!keys.contains(name)) {
                         List<String> sorted = keys.stream().sorted().toList();
                         String near = nearest(name, sorted);
-                        throw new InputFormatException(source, lineOf(e.getKey(), name), null, name,
+                        throw new InputFormatException(source, lineOf(e.getKey(), name), e.getKey() + "." + name, name,
                                 "is not a key of [" + e.getKey() + "]" + (near == null ? "" : ": did you mean "
                                         + near + "?") + " Known keys: " + String.join(", ", sorted));
                     }
