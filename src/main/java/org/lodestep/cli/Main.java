@@ -9,6 +9,7 @@ import java.nio.file.AccessDeniedException;
 import java.nio.file.NoSuchFileException;
 
 import org.lodestep.sample.InputFormatException;
+import org.lodestep.sample.InputLimits;
 import org.lodestep.qa.DatabaseUrls;
 import org.lodestep.qa.StoreException;
 import org.lodestep.rig.RigException;
@@ -86,7 +87,28 @@ public final class Main implements Runnable {
         cl.setUsageHelpAutoWidth(true);
         cl.setExecutionExceptionHandler((ex, cmd, parseResult) -> handle(ex, cmd, isVerbose(parseResult)));
         cl.setParameterExceptionHandler(Main::badParameter);
+        cl.registerConverter(Double.class, Main::plausibleNumber);
+        cl.registerConverter(Double.TYPE, Main::plausibleNumber);
         return cl;
+    }
+
+    /**
+     * Every number typed on the command line: finite and no larger in magnitude than any bench quantity can be
+     * ({@link InputLimits#MAX_SAMPLE_MAGNITUDE}), so {@code 1e308} or {@code NaN} never reaches a formula; a bad value
+     * is the one-line parameter error of {@link #badParameter}.
+     */
+    static Double plausibleNumber(String text) {
+        double v;
+        try {
+            v = Double.parseDouble(text.strip());
+        } catch (NumberFormatException e) {
+            throw new CommandLine.TypeConversionException("'" + text + "' is not a number");
+        }
+        if (!InputLimits.plausibleMagnitude(v)) {
+            throw new CommandLine.TypeConversionException("'" + text + "' is not a plausible value: expected a finite"
+                    + " number of magnitude at most " + InputLimits.MAX_SAMPLE_MAGNITUDE);
+        }
+        return v;
     }
 
     /**

@@ -104,7 +104,7 @@ public final class PartSpecReader {
 
     /**
      * The known name closest to a misspelt one (fewest single-character edits, V. I. Levenshtein, "Binary codes
-     * capable of correcting deletions, insertions and reversals", Soviet Physics Doklady 10(8), 1966), or null when
+     * capable of correcting deletions, insertions and reversals", Soviet Physics Doklady 10(8), 1966; references §28), or null when
      * none is within a third of the name's length.
      */
     static String nearest(String name, Iterable<String> known) {

@@ -33,8 +33,8 @@ public final class RingDownFit {
     /**
      * Least ratio of the first swing to the RMS noise of the record's last fifth for a signal to count as a ring-down.
      * The largest of a million samples of Gaussian noise lies near 5 σ (the normal distribution's tail), so pure
-     * noise stays below 8; a measured ring starts tens to hundreds of times above its noise floor. Our own screen
-     * (common practice).
+     * noise stays below 8 (references §28); a measured ring starts tens to hundreds of times above its noise floor.
+     * Our own screen (common practice).
      */
     static final double MIN_PEAK_TO_NOISE = 8;
 

@@ -13,7 +13,8 @@ import java.nio.file.Path;
  * Reads a text input strictly: UTF-8 only (a byte-order mark is dropped), no NUL character, no more than a stated
  * size; anything else is an {@link InputFormatException} naming the line of the first bad byte.
  *
- * <p>Lenient decoding would put U+FFFD into a serial number or a label and store it as if typed; a NUL is the sign
+ * <p>RFC 3629 (references §28) requires a decoder to refuse ill-formed sequences. Lenient decoding would put
+ * U+FFFD into a serial number or a label and store it as if typed; a NUL is the sign
  * of a binary file or a damaged copy. The size bound keeps a wrong file (a disk image) from being read whole.
  */
 public final class Utf8Text {

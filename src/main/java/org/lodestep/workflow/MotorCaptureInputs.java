@@ -118,6 +118,10 @@ public final class MotorCaptureInputs {
         Double supply = number(s, "supply_v", "volts", false, MAX_STEP_SUPPLY_V);
         if (supply == null) {
             supply = supplyFlagV;
+            if (supply != null && !(supply > 0 && supply <= MAX_STEP_SUPPLY_V)) {
+                throw new SettingsException("step supply " + supply + " V is not plausible: expected above 0 and at"
+                        + " most " + MAX_STEP_SUPPLY_V + " V");
+            }
         }
         int voltage = s.indexOf("voltage");
         if (supply == null && voltage >= 0 && s.channels().get(voltage).unit().equals("v")) {
