@@ -80,7 +80,11 @@ public final class WiringDiagram {
     }
 
     /** Where one lead goes. */
-    sealed interface Destination permits ToTerminal, ToTie, Insulated {
+    sealed interface Destination permits ToTerminal, ToTie, Insulated, Pending {
+    }
+
+    /** A lead whose wiring is not known yet: a drawing of the windings a probe session has found so far. */
+    record Pending() implements Destination {
     }
 
     record ToTerminal(DriverTerminal terminal) implements Destination {
@@ -162,6 +166,15 @@ public final class WiringDiagram {
         if (!ins.isEmpty()) {
             lines.add("Insulate, do not connect: " + String.join(", ", ins));
         }
+        List<String> pending = new ArrayList<>();
+        for (String lead : leads()) {
+            if (destinations.get(lead) instanceof Pending) {
+                pending.add(lead);
+            }
+        }
+        if (!pending.isEmpty()) {
+            lines.add("Not wired yet: " + String.join(", ", pending));
+        }
         return lines;
     }
 
@@ -208,6 +221,11 @@ public final class WiringDiagram {
             }
             ties.add(List.of(leads));
             return this;
+        }
+
+        /** Leaves a lead's wiring open: it is drawn on its coil, going nowhere yet. */
+        public Builder pending(String lead) {
+            return assign(lead, new Pending());
         }
 
         /** Insulates a lead and leaves it unconnected. */
