@@ -106,6 +106,7 @@ final class LeadsIdentifyCommand implements Callable<Integer> {
             out.println(LeadsTextReport.CAUTION);
         }
         out.flush();
-        return result.hasError() ? ExitCode.FINDING : ExitCode.OK;
+        return ExitCode.ofIdentification(result.hasError(),
+                result.motors().stream().allMatch(m -> m.identification().determined()));
     }
 }

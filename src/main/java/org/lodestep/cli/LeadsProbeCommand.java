@@ -84,7 +84,7 @@ final class LeadsProbeCommand implements Callable<Integer> {
                 LeadsTextReport.write(out, "Probed motor", id);
             }
             out.flush();
-            return id.hasError() ? ExitCode.FINDING : ExitCode.OK;
+            return ExitCode.ofIdentification(id.hasError(), id.determined());
         }
     }
 

@@ -51,6 +51,6 @@ final class RigLeadsIdentify {
             out.println(LeadsTextReport.CAUTION);
         }
         out.flush();
-        return r.identification().hasError() ? ExitCode.FINDING : ExitCode.OK;
+        return ExitCode.ofIdentification(r.identification().hasError(), r.identification().determined());
     }
 }
