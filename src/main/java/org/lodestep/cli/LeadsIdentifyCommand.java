@@ -110,6 +110,7 @@ final class LeadsIdentifyCommand implements Callable<Integer> {
             out.print(ProvenanceBlock.text(provenance));
         }
         out.flush();
-        return result.hasError() ? ExitCode.FINDING : ExitCode.OK;
+        return ExitCode.ofIdentification(result.hasError(),
+                result.motors().stream().allMatch(m -> m.identification().determined()));
     }
 }

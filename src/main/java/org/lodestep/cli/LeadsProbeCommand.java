@@ -91,7 +91,7 @@ final class LeadsProbeCommand implements Callable<Integer> {
                 out.print(ProvenanceBlock.text(provenance));
             }
             out.flush();
-            return id.hasError() ? ExitCode.FINDING : ExitCode.OK;
+            return ExitCode.ofIdentification(id.hasError(), id.determined());
         }
     }
 

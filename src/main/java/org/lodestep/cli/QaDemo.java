@@ -14,6 +14,7 @@ import org.lodestep.qa.PartSpecReader;
 import org.lodestep.qa.RecordQuery;
 import org.lodestep.qa.RecordStore;
 import org.lodestep.qa.RecordStores;
+import org.lodestep.qa.LotTally;
 import org.lodestep.qa.Tally;
 import org.lodestep.qa.Verdict;
 import org.lodestep.report.html.OutputFile;
@@ -113,6 +114,7 @@ final class QaDemo implements DemoCommand.Section {
         out.println();
         out.println("$ lodestep qa check --spec kv-4218-m.toml --lot " + LOT + " ... < lot-L2607-serials.txt");
         List<RecordStore.Appended> results = new ArrayList<>();
+        LotTally lotTally = new LotTally();
         Tally tally = Tally.NONE;
         for (String line : Files.readAllLines(qa.resolve("lot-L2607-serials.txt"))) {
             String sn = line.strip();
@@ -121,7 +123,7 @@ final class QaDemo implements DemoCommand.Section {
             }
             RecordStore.Appended a = check.check(sn, Progress.NONE);
             results.add(a);
-            tally = tally.plus(a.record().submission().verdict());
+            tally = lotTally.add(sn, a.record().submission().verdict());
             if (a.record().submission().verdict() == Verdict.PASS) {
                 // Compact: the framed serial line and the tally; the full verdict only for motors that did not pass.
                 QaText.check(a.record(), a.created(), store.location()).lines().filter(l -> l.startsWith("=   serial"))

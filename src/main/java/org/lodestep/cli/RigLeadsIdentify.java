@@ -57,6 +57,6 @@ final class RigLeadsIdentify {
             out.print(ProvenanceBlock.text(provenance));
         }
         out.flush();
-        return r.identification().hasError() ? ExitCode.FINDING : ExitCode.OK;
+        return ExitCode.ofIdentification(r.identification().hasError(), r.identification().determined());
     }
 }

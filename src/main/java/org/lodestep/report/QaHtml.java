@@ -42,7 +42,9 @@ public final class QaHtml {
                                    Map<String, String> notRecorded) {
         HtmlReport.Builder b = HtmlReport.builder("Incoming QA check", title);
         Tally tally = Tally.of(records);
-        tally = new Tally(tally.passed(), tally.failed(), tally.incomplete() + notRecorded.size());
+        long unrecordedMotors = notRecorded.keySet().stream()
+                .filter(sn -> records.stream().noneMatch(r -> r.submission().serial().equals(sn))).count();
+        tally = new Tally(tally.passed(), tally.failed(), tally.incomplete() + (int) unrecordedMotors);
         if (!records.isEmpty()) {
             Submission s = records.get(0).submission();
             b.meta("Part", s.partNumber() + " rev " + s.partRevision() + ", spec v" + s.specVersion())
