@@ -13,6 +13,8 @@ import java.util.List;
 import java.util.Map;
 import java.util.concurrent.Callable;
 
+import org.lodestep.report.ProvenanceBlock;
+import org.lodestep.workflow.Provenance;
 import org.lodestep.sample.InputFormatException;
 import org.lodestep.sample.InputLimits;
 import org.lodestep.sample.Utf8Text;
@@ -102,6 +104,7 @@ final class QaCheckCommand implements Callable<Integer> {
     picocli.CommandLine.Model.CommandSpec spec;
 
     private PartSpec partSpec;
+    private Provenance provenance;
 
     @Override
     public Integer call() throws Exception {
@@ -127,6 +130,10 @@ final class QaCheckCommand implements Callable<Integer> {
             throw new UsageException("--series-ohm must be 0 or more, got " + readings.seriesOhm);
         }
         partSpec = PartSpecReader.read(specFile);
+        provenance = readings.provenance(RunProvenance.of(spec).withInput("spec", specFile));
+        if (serialsFile != null && !serialsFile.equals("-")) {
+            provenance = provenance.withInput("serials", Path.of(serialsFile));
+        }
         // Every input the whole lot shares is read before the first motor, so a bad one stops the run at once.
         List<String> listedSerials = serial == null && serialsFile != null && !serialsFile.equals("-")
                 ? serialsFromFile(Path.of(serialsFile)) : null;
@@ -142,13 +149,14 @@ final class QaCheckCommand implements Callable<Integer> {
             if (serial != null) {
                 RecordStore.Appended a = check.check(serial, progress());
                 if (report != null) {
-                    QaHtml.check(serial, List.of(a.record()), partSpec.insulationTestVoltageV(), Map.of())
-                            .write(report);
+                    ProvenanceBlock.html(QaHtml.check(serial, List.of(a.record()), partSpec.insulationTestVoltageV(),
+                            Map.of()), provenance).write(report);
                 }
                 if (json) {
-                    out.println(Json.write(a));
+                    out.println(ProvenanceBlock.json(Json.write(a), provenance));
                 } else {
                     out.print(QaText.check(a.record(), a.created(), records.location()));
+                    out.print(ProvenanceBlock.text(provenance));
                 }
                 out.flush();
                 return a.record().submission().verdict() == Verdict.PASS ? ExitCode.OK : ExitCode.FINDING;
@@ -234,8 +242,8 @@ final class QaCheckCommand implements Callable<Integer> {
             for (Map<String, String> e : errors) {
                 notRecorded.put(e.get("serial"), e.get("message"));
             }
-            QaHtml.check("lot " + lot, results.stream().map(RecordStore.Appended::record).toList(),
-                    partSpec.insulationTestVoltageV(), notRecorded).write(report);
+            ProvenanceBlock.html(QaHtml.check("lot " + lot, results.stream().map(RecordStore.Appended::record)
+                    .toList(), partSpec.insulationTestVoltageV(), notRecorded), provenance).write(report);
         }
         if (json) {
             Map<String, Object> doc = new LinkedHashMap<>();
@@ -246,9 +254,10 @@ final class QaCheckCommand implements Callable<Integer> {
             doc.put("incomplete", tally.incomplete());
             doc.put("results", results);
             doc.put("errors", errors);
-            out.println(Json.write(doc));
+            out.println(ProvenanceBlock.json(Json.write(doc), provenance));
         } else {
             out.println("lot " + lot + " done: " + QaText.tally(tally));
+            out.print(ProvenanceBlock.text(provenance));
         }
         out.flush();
         return tally.allPassed() ? ExitCode.OK : ExitCode.FINDING;

@@ -8,6 +8,7 @@ import java.util.ArrayList;
 import java.util.List;
 import java.util.Map;
 
+import org.lodestep.report.ProvenanceBlock;
 import org.lodestep.qa.PartSpec;
 import org.lodestep.qa.PartSpecReader;
 import org.lodestep.qa.RecordQuery;
@@ -64,7 +65,7 @@ final class QaDemo implements DemoCommand.Section {
             worst = expect(worst, lot(spec, qa, dir, store, out), ExitCode.FINDING);
 
             out.println();
-            out.println("KV24-00124 read 62 Mohm phase B to frame. After a night in the drying cabinet it is re-tested:");
+            out.println("KV24-00124 read 62 M\u03A9 phase B to frame. After a night in the drying cabinet it is re-tested:");
             QaReadingSources retest = new QaReadingSources(qa.resolve("KV24-00124.csv"), null, null,
                     List.of(2.79, 2.81), List.of(new TypedInsulation("a-frame", 1320, Double.NaN),
                     new TypedInsulation("b-frame", 1150, Double.NaN), new TypedInsulation("a-b", 1710, Double.NaN)),
@@ -79,7 +80,9 @@ final class QaDemo implements DemoCommand.Section {
             RecordQuery lot = new RecordQuery(null, LOT, null, null, null);
             QaLotReport.Result report = QaLotReport.run(lot, store, Progress.NONE);
             String title = "QA report, lot " + LOT;
-            QaHtml.lot(title, report.summary()).write(dir.resolve("qa-report-" + LOT + ".html"));
+            ProvenanceBlock.html(QaHtml.lot(title, report.summary()), RunProvenance.ofDemo("qa", "report", "--lot",
+                    LOT, "--db", db.toString()).withInput("record store", db))
+                    .write(dir.resolve("qa-report-" + LOT + ".html"));
             out.print(QaText.lotReport(title, report.summary()));
             out.println("reports: " + dir.resolve("qa-check-" + LOT + ".html") + ", " + dir.resolve("qa-report-" + LOT
                     + ".html"));
@@ -132,8 +135,15 @@ final class QaDemo implements DemoCommand.Section {
                 out.println();
             }
         }
-        QaHtml.check("lot " + LOT, results.stream().map(RecordStore.Appended::record).toList(),
-                spec.insulationTestVoltageV(), Map.of()).write(dir.resolve("qa-check-" + LOT + ".html"));
+        ProvenanceBlock.html(QaHtml.check("lot " + LOT, results.stream().map(RecordStore.Appended::record).toList(),
+                spec.insulationTestVoltageV(), Map.of()), RunProvenance.ofDemo("qa", "check", "--spec",
+                qa.resolve("kv-4218-m.toml").toString(), "--lot", LOT, "--resistance-pattern",
+                qa.resolve("{serial}.csv").toString(), "--meter-log", qa.resolve("lot-L2607-meter-log.csv").toString(),
+                "--serials", qa.resolve("lot-L2607-serials.txt").toString())
+                .withInput("spec", qa.resolve("kv-4218-m.toml"))
+                .withInput("meter log", qa.resolve("lot-L2607-meter-log.csv"))
+                .withInput("serials", qa.resolve("lot-L2607-serials.txt")))
+                .write(dir.resolve("qa-check-" + LOT + ".html"));
         out.println("lot " + LOT + " done: " + QaText.tally(tally));
         return tally.allPassed() ? ExitCode.OK : ExitCode.FINDING;
     }

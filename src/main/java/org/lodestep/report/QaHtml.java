@@ -56,8 +56,17 @@ public final class QaHtml {
             Submission s = records.get(0).submission();
             b.verdict(status(s.verdict()), s.verdict().name() + ": serial " + s.serial(), failing(s));
         } else {
+            List<String> notPassed = new ArrayList<>();
+            for (StoredRecord r : records) {
+                if (r.submission().verdict() != Verdict.PASS) {
+                    notPassed.add(r.submission().serial() + " (" + r.submission().verdict().name()
+                            .toLowerCase(Locale.ROOT) + ")");
+                }
+            }
+            notPassed.addAll(notRecorded.keySet().stream().map(k -> k + " (not recorded)").toList());
             b.verdict(overall, String.format(Locale.ROOT, "%d tested: %d pass, %d fail, %d incomplete", tested,
-                    tally.passed(), tally.failed(), tally.incomplete()), null);
+                    tally.passed(), tally.failed(), tally.incomplete()), notPassed.isEmpty() ? "Every motor passed."
+                    : "Not passed: " + String.join("; ", notPassed) + ".", null);
         }
         boolean lot = records.size() > 1 || !notRecorded.isEmpty();
         if (lot) {
@@ -139,9 +148,10 @@ public final class QaHtml {
                 .meta("First-pass yield", QaFormat.pct(c.firstPassYieldPct()))
                 .meta("Final yield", QaFormat.pct(c.finalYieldPct()));
         Status st = c.notIntact() > 0 || c.failed() > 0 ? Status.FAIL : c.incomplete() > 0 ? Status.WARN : Status.PASS;
+        // the answer a quality engineer acts on, in its own line: yield, failed and re-tested serials
         b.verdict(st, String.format(Locale.ROOT, "%d pass, %d fail, %d incomplete", c.passed(), c.failed(),
-                c.incomplete()), QaLotPhrases.answer(sum) + (c.notIntact() > 0 ? ". " + c.notIntact()
-                + " record(s) no longer match their SHA-256: the database was changed outside Lodestep." : ""));
+                c.incomplete()), QaLotPhrases.answer(sum), c.notIntact() > 0 ? c.notIntact()
+                + " record(s) no longer match their SHA-256: the database was changed outside Lodestep." : null);
         if (!sum.failedChecks().isEmpty()) {
             b.section("Failed and re-tested motors");
             b.table(failedTable(sum.failedChecks()));

@@ -265,7 +265,7 @@ public final class QaText {
         if (!s.measurements().insulation().isEmpty()) {
             b.append("insulation readings:");
             for (InsulationReading i : s.measurements().insulation()) {
-                b.append(String.format(Locale.ROOT, "  %s %s Mohm at %s V DC;", QaFormat.visible(i.label()),
+                b.append(String.format(Locale.ROOT, "  %s %s M\u03A9 at %s V DC;", QaFormat.visible(i.label()),
                         QaFormat.num(i.resistanceOhm() / 1e6), QaFormat.num(i.testVoltageV())));
             }
             b.append('\n');

@@ -31,9 +31,11 @@ public final class WiringDiagram {
     private final List<Coil> coils;
     private final Map<String, Destination> destinations;
     private final List<List<String>> ties;
+    private final boolean startsKnown;
 
     private WiringDiagram(Builder b) {
         this.connection = b.connection;
+        this.startsKnown = b.startsKnown;
         this.coils = List.copyOf(b.coils);
         this.destinations = Map.copyOf(b.destinations);
         List<List<String>> t = new ArrayList<>();
@@ -99,6 +101,14 @@ public final class WiringDiagram {
     /** The connection's name. */
     public String connection() {
         return connection;
+    }
+
+    /**
+     * False when the coil starts (polarity dots) are a guess the measurement could not settle: they are then drawn
+     * hollow with a question mark, and the legend says so.
+     */
+    public boolean startsKnown() {
+        return startsKnown;
     }
 
     /** The coils in drawing order (phase A first). */
@@ -189,9 +199,16 @@ public final class WiringDiagram {
         private final List<Coil> coils = new ArrayList<>();
         private final Map<String, Destination> destinations = new LinkedHashMap<>();
         private final List<List<String>> ties = new ArrayList<>();
+        private boolean startsKnown = true;
 
         private Builder(String connection) {
             this.connection = Objects.requireNonNull(connection, "connection");
+        }
+
+        /** Marks the coil starts as guessed (resistance alone cannot tell a coil's polarity). */
+        public Builder startsUnknown() {
+            this.startsKnown = false;
+            return this;
         }
 
         /** A coil without a tap. */
