@@ -27,7 +27,10 @@ final class QaFormat {
         };
     }
 
-    /** Five significant digits, or "-" for NaN. */
+    /**
+     * Four significant digits, or "-" for NaN: a bench meter's milliohm on a winding of a few ohms (1.886 Ω), and no
+     * more; a fifth digit (18.977 %, −0.18965 Ω) would claim a precision no QA reading has.
+     */
     static String num(double v) {
         if (Double.isNaN(v)) {
             return "-";
@@ -35,7 +38,7 @@ final class QaFormat {
         if (Double.isInfinite(v)) {
             return v > 0 ? "inf" : "-inf";
         }
-        String s = String.format(Locale.ROOT, "%.5g", v);
+        String s = String.format(Locale.ROOT, "%.4g", v);
         if (s.contains(".") && !s.contains("e")) {
             s = s.replaceAll("0+$", "").replaceAll("\\.$", "");
         }

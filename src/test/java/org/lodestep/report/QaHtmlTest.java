@@ -72,7 +72,7 @@ class QaHtmlTest {
         assertTrue(ReportCli.texts(lotCheck, ReportCli.XHTML, "th").contains("Margin"));
         String cells = String.join("|", ReportCli.texts(lotCheck, ReportCli.XHTML, "td"));
         String ohm = QaFormat.unit("phase_resistance", "ohm");
-        assertTrue(cells.contains("2.2797 " + ohm + "|1.71 \u2013 2.09 " + ohm + "|\u22120.18965 (USL)"), cells);
+        assertTrue(cells.contains("2.28 " + ohm + "|1.71 \u2013 2.09 " + ohm + "|\u22120.1897 (USL)"), cells);
         Chromium.require();
         Chromium.Page page = Chromium.render(tmp.resolve("check.html"), 1280);
         // scrollHeight is at least the window's; the report's white column ends where its content does
