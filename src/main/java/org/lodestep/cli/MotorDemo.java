@@ -52,7 +52,7 @@ final class MotorDemo implements DemoCommand.Section {
         Path html = outDir.resolve("motor-card.html");
         List<MotorHtml.Trace> traces = r.traces().stream()
                 .map(t -> new MotorHtml.Trace(t.source(), t.timeS(), t.currentA())).toList();
-        MotorHtml.report(resistance.toString(), card, traces, MotorOptionHints.INSTANCE).write(html);
+        MotorHtml.report(resistance.toString(), card, traces, r.emf(), MotorOptionHints.INSTANCE).write(html);
         printCard(out, card);
         out.println("report: " + html);
         Path json = outDir.resolve("motor-card.json");

@@ -7,6 +7,7 @@ import java.util.List;
 import java.util.concurrent.Callable;
 
 import org.lodestep.wiring.Connection;
+import org.lodestep.motor.BackEmfTrace;
 import org.lodestep.motor.MotorCard;
 import org.lodestep.motor.OrientedLeads;
 import org.lodestep.motor.WindingInput;
@@ -151,6 +152,7 @@ final class MotorIdentifyCommand implements Callable<Integer> {
         MotorCardSettings cardSettings = new MotorCardSettings(connection, phaseCurrentA, supplyV, inertiaKgM2);
         MotorCard card;
         List<MotorHtml.Trace> traces = new ArrayList<>();
+        BackEmfTrace emfTrace = null;
         if (rig != null) {
             if (!json) {
                 SAFETY.forEach(out::println);
@@ -158,8 +160,10 @@ final class MotorIdentifyCommand implements Callable<Integer> {
             }
             PrintWriter log = json ? spec.commandLine().getErr() : out;
             try (RigClient c = RigCli.connect(rig)) {
-                card = WorkflowCall.run(() -> MotorOnRig.run(c, new MotorOnRig.Settings(revolutions, cardSettings),
-                        new RigLog(log))).card();
+                MotorOnRig.Result r = WorkflowCall.run(() -> MotorOnRig.run(c, new MotorOnRig.Settings(revolutions,
+                        cardSettings), new RigLog(log)));
+                card = r.card();
+                emfTrace = r.emf();
             }
         } else {
             MotorFromFiles.Result r = WorkflowCall.run(() -> MotorFromFiles.run(new MotorFromFiles.Settings(
@@ -168,9 +172,10 @@ final class MotorIdentifyCommand implements Callable<Integer> {
             card = r.card();
             // Recorded step responses are drawn under their fits; the rig's are measured in memory and listed only.
             r.traces().forEach(t -> traces.add(new MotorHtml.Trace(t.source(), t.timeS(), t.currentA())));
+            emfTrace = r.emf();
         }
         if (report != null) {
-            MotorHtml.report(title(), card, traces, MotorOptionHints.INSTANCE).write(report);
+            MotorHtml.report(title(), card, traces, emfTrace, MotorOptionHints.INSTANCE).write(report);
         }
         if (json) {
             out.println(MotorJson.write(card, MotorOptionHints.INSTANCE));

@@ -57,7 +57,7 @@ final class ResonanceRingdownCommand implements Callable<Integer> {
         ResonanceRingdown.Result r = WorkflowCall.run(() -> ResonanceRingdown.fit(file,
                 new ResonanceRingdown.Settings(channel, fromS, toS), Progress.NONE));
         if (report != null) {
-            ResonanceHtml.ringDown(r.source(), r.channel(), r.unit(), r.timeS(), r.values(), r.fit()).write(report);
+            ResonanceHtml.ringDown(r).write(report);
         }
         if (json) {
             out.println(ResonanceJson.ringDown(r.source(), r.channel(), r.fit()));

@@ -122,9 +122,12 @@ public final class DriveHtml {
     }
 
     private static String caption(DriveCurve.Result r) {
-        return "Pull-out torque (solid) and the torque with margin kept in reserve (dashed) against full-step rate;"
-                + " the load line is the torque the load needs at constant speed, the marker the operating point at"
-                + " the target. " + DriveText.MODEL;
+        return "Pull-out torque (solid) and the torque with margin kept in reserve (dashed) against full-step rate"
+                + " (bottom axis) and shaft speed (top axis); the load line is the torque the load needs at constant"
+                + " speed, the marker the operating point at the target and the vertical stroke over it the margin"
+                + " left there. Left of the line marked \u201Ccurrent limit | voltage limit\u201D the drive holds"
+                + " its set current; right of it the supply voltage, against the winding's inductance and back-EMF,"
+                + " is the binding limit. " + DriveText.MODEL;
     }
 
     private static Chart torqueChart(DriveCurve.Result r, List<Band> bands) {
@@ -163,15 +166,30 @@ public final class DriveHtml {
             }
         }
         if (r.answer() != null) {
-            double need = r.answer().requiredAtTargetNm();
+            SpeedAnswer a = r.answer();
+            double need = a.requiredAtTargetNm();
+            double at = a.target().fullStepsPerS();
             b.line("load at constant speed", new double[] {0, x[x.length - 1]}, new double[] {need, need});
-            b.points("operating point", new double[] {r.answer().target().fullStepsPerS()}, new double[] {need});
-            b.verticalLine(r.answer().target().fullStepsPerS(), "target", Status.INFO);
+            b.points("operating point", new double[] {at}, new double[] {need});
+            if (Double.isFinite(a.marginAtTarget()) && a.pullOutAtTargetNm() > need) {
+                // the margin drawn where it is taken: from the load up to the pull-out torque at the target
+                b.line("margin at the target: " + DriveText.pct(a.marginAtTarget()), new double[] {at, at},
+                        new double[] {need, a.pullOutAtTargetNm()});
+            }
+            b.verticalLine(at, "target", Status.INFO);
+            if (a.maxRateWithMarginFullStepsPerS() > 0 && a.maxRateWithMarginFullStepsPerS() < x[x.length - 1]) {
+                b.verticalLine(a.maxRateWithMarginFullStepsPerS(), "highest with margin", Status.WARN);
+            }
         }
+        if (Double.isFinite(c.fullCurrentRateFullStepsPerS()) && c.fullCurrentRateFullStepsPerS() < x[x.length - 1]) {
+            // where the binding limit changes from the drive's set current to the supply voltage
+            b.verticalLine(c.fullCurrentRateFullStepsPerS(), "current limit | voltage limit", Status.INFO);
+        }
+        b.topAxis("shaft speed (rpm)", r.units()::rpm);
         for (Band band : bands) {
             if (band.fromFullStepsPerS() < x[x.length - 1]) {
                 b.band(band.fromFullStepsPerS(), Math.min(band.toFullStepsPerS(), x[x.length - 1]),
-                        String.format(Locale.ROOT, "%.0f–%.0f", band.fromFullStepsPerS(), band.toFullStepsPerS()),
+                        String.format(Locale.ROOT, "%.0f–%.0f full steps/s", band.fromFullStepsPerS(), band.toFullStepsPerS()),
                         Status.WARN);
             }
         }

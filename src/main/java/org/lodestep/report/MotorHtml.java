@@ -7,6 +7,7 @@ import java.util.Locale;
 import java.util.Map;
 
 import org.lodestep.wiring.Finding;
+import org.lodestep.motor.BackEmfTrace;
 import org.lodestep.motor.HalfWinding;
 import org.lodestep.motor.MotorCard;
 import org.lodestep.motor.PhaseCard;
@@ -22,11 +23,10 @@ import org.lodestep.report.html.HtmlTable;
 import org.lodestep.report.html.SafetyNote;
 import org.lodestep.report.html.Status;
 import org.lodestep.report.html.WiringDiagram;
-import org.lodestep.report.html.XyChart;
 
 /**
- * The HTML motor card: wiring diagram, the motor's constants at a glance, each phase, the step-response fits drawn
- * over their data, findings and what is still unknown.
+ * The HTML motor card: wiring diagram, the motor's constants at a glance, each phase, the back-EMF of both phases,
+ * the step responses overlaid in normalised form with their residuals, findings and what is still unknown.
  */
 public final class MotorHtml {
     private MotorHtml() {
@@ -54,6 +54,15 @@ public final class MotorHtml {
 
     /** As {@link #report(String, MotorCard, List)}, unknowns and findings phrased by {@code phrasing}. */
     public static HtmlReport report(String title, MotorCard card, List<Trace> traces, MotorPhrasing phrasing) {
+        return report(title, card, traces, null, phrasing);
+    }
+
+    /**
+     * As {@link #report(String, MotorCard, List, MotorPhrasing)}, with a few cycles of the back-EMF capture the card
+     * used drawn phase against phase ({@code emf} null: not drawn).
+     */
+    public static HtmlReport report(String title, MotorCard card, List<Trace> traces, BackEmfTrace emf,
+                                    MotorPhrasing phrasing) {
         HtmlReport.Builder b = HtmlReport.builder("Motor card", title)
                 .meta("Layout", card.topology() + (card.wiring() == null ? "" : ", " + card.connection()))
                 .meta("Leads", String.join(", ", card.leads()));
@@ -124,35 +133,31 @@ public final class MotorHtml {
             b.table(t.build());
         }
 
+        if (emf != null) {
+            b.section("Back-EMF");
+            b.figure(MotorFigures.backEmf(emf).toSvg(), MotorFigures.backEmfCaption(emf));
+        }
+
         if (!card.stepResponses().isEmpty()) {
             b.section("Current step responses");
-            for (int k = 0; k < card.stepResponses().size(); k++) {
-                StepInput in = card.stepResponses().get(k);
-                StepResponseFit fit = in.fit();
-                String what = "Leads " + in.leads().first() + "\u2013" + in.leads().second()
-                        + (in.joinedLeads().isEmpty() ? "" : " (" + String.join("+", in.joinedLeads()) + " joined)");
-                String fitLabel = String.format(Locale.ROOT, "fit: \u03C4 %s ms%s", num(fit.timeConstantS() * 1e3),
-                        fit.inductanceH() == null ? "" : ", L " + mh(fit.inductanceH()));
-                if (k < traces.size()) {
-                    Trace tr = traces.get(k);
-                    double[] model = new double[tr.timeS().length];
-                    for (int i = 0; i < model.length; i++) {
-                        model[i] = fit.modelCurrentA(tr.timeS()[i]);
-                    }
-                    b.figure(XyChart.fitOverData("", "time (s)", "current (A)", "measured", tr.timeS(), tr.currentA(),
-                            fitLabel, tr.timeS(), model).toSvg(), what + ", " + tr.source() + ": measured current with"
-                            + " the fitted first-order rise drawn over it.");
-                }
-                Map<String, String> ff = new LinkedHashMap<>();
-                ff.put("Time constant \u03C4", num(fit.timeConstantS() * 1e3) + " ms");
-                ff.put("Final current", num(fit.finalCurrentA()) + " A");
-                ff.put("Inductance", mh(fit.inductanceH()));
-                ff.put("Loop resistance", ohm(fit.loopResistanceOhm()));
-                ff.put("Shape", fit.shape().name().toLowerCase(Locale.ROOT).replace('_', ' '));
-                ff.put("RMS residual", num(fit.rmsResidualA()) + " A");
-                b.paragraph(what);
-                b.facts(ff);
+            if (!traces.isEmpty()) {
+                b.figure(MotorFigures.steps(card.stepResponses(), traces).toSvg(), "Every recorded step response in"
+                        + " the form a first-order rise takes: time since the fitted step in fitted time constants,"
+                        + " current rise over the fitted final current. Each fit is then the one curve 1 \u2212"
+                        + " e^(\u2212t/\u03C4), drawn in black; the lower panel is measured minus fitted, as a"
+                        + " fraction of the final current (a first-order rise leaves only noise there).");
             }
+            HtmlTable.Builder t = HtmlTable.builder(null, "Leads", "\u03C4", "Final current", "L", "Loop R",
+                    "Shape", "RMS residual");
+            for (StepInput in : card.stepResponses()) {
+                StepResponseFit fit = in.fit();
+                t.row(Cell.text(stepName(in)), Cell.number(num(fit.timeConstantS() * 1e3) + " ms"),
+                        Cell.number(num(fit.finalCurrentA()) + " A"), Cell.number(mh(fit.inductanceH())),
+                        Cell.number(ohm(fit.loopResistanceOhm())),
+                        Cell.text(fit.shape().name().toLowerCase(Locale.ROOT).replace('_', ' ')),
+                        Cell.number(num(fit.rmsResidualA()) + " A"));
+            }
+            b.table(t.build());
         }
 
         b.section("Findings and unknowns");
@@ -172,6 +177,12 @@ public final class MotorHtml {
         }
         b.findings(fs);
         return b.build();
+    }
+
+    /** Leads of a step response, and the leads joined for it. */
+    static String stepName(StepInput in) {
+        return "Leads " + in.leads().first() + "\u2013" + in.leads().second()
+                + (in.joinedLeads().isEmpty() ? "" : " (" + String.join("+", in.joinedLeads()) + " joined)");
     }
 
     /** The card's phases and wiring as a diagram; a phase's two coils sharing a lead are one tapped coil. */

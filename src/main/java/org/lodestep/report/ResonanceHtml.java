@@ -20,11 +20,13 @@ import org.lodestep.resonance.RateUnits;
 import org.lodestep.resonance.ResonanceBand;
 import org.lodestep.resonance.ResponsePoint;
 import org.lodestep.resonance.RingDownResult;
+import org.lodestep.resonance.RingSpectrum;
 import org.lodestep.resonance.Stall;
 import org.lodestep.resonance.SweepResult;
 import org.lodestep.resonance.WatchPoint;
 import org.lodestep.signal.Spectrogram;
 import org.lodestep.signal.SpectrumScaling;
+import org.lodestep.workflow.ResonanceRingdown;
 
 /**
  * HTML reports of the resonance commands: a sweep (response curve with its bands shaded and labelled in the user's
@@ -83,10 +85,12 @@ public final class ResonanceHtml {
         b.safety(SafetyNote.MOVING_AXIS, SafetyNote.HOT_MOTOR);
 
         b.section("Response against step rate");
-        b.figure(responseChart(r, u, unit).toSvg(), "RMS vibration against full-step rate; each band is shaded and"
+        b.figure(responseChart(r, u, unit).toSvg(), "RMS vibration against full-step rate (bottom axis) and "
+                + (u.microsteps() > 1 ? programUnit(u) : "rpm") + " (top axis); each band is shaded and"
                 + " labelled with its range in the units you program (" + programUnit(u) + ", rpm"
-                + (u.hasTravel() ? ", mm/s" : "") + "). Solid edges: low-speed resonance; dashed: mid-band"
-                + " instability; dotted: unclassified.");
+                + (u.hasTravel() ? ", mm/s" : "") + "). A band opens where the response rises over the detection"
+                + " threshold, drawn above the running baseline it is measured from. Dashed edges: resonance or"
+                + " mid-band instability; dotted: unclassified.");
         if (r.spectrogram() != null && r.spectrogram().columnCount() >= 2) {
             b.figure(spectrogram(r, unit, columnRatesFullStepsPerS).toSvg(), columnRatesFullStepsPerS != null
                     ? "Spectrogram of the sweep against step rate: ridges rising with the rate are the stepping"
@@ -143,7 +147,7 @@ public final class ResonanceHtml {
         return b.build();
     }
 
-    private static org.lodestep.report.html.Chart responseChart(SweepResult r, RateUnits u, String unit) {
+    static org.lodestep.report.html.Chart responseChart(SweepResult r, RateUnits u, String unit) {
         double[] x = new double[r.response().size()];
         double[] y = new double[x.length];
         for (int i = 0; i < x.length; i++) {
@@ -151,8 +155,24 @@ public final class ResonanceHtml {
             x[i] = p.rateFullStepsPerS();
             y[i] = p.rms();
         }
+        double[] base = new double[x.length];
+        double[] thr = new double[x.length];
+        boolean detected = !r.response().isEmpty();
+        for (int i = 0; i < x.length; i++) {
+            base[i] = r.response().get(i).baselineRms();
+            thr[i] = r.response().get(i).thresholdRms();
+            detected &= Double.isFinite(thr[i]);
+        }
         XyChart.Builder c = XyChart.builder("", "step rate (full steps/s)", "vibration (" + unit + " RMS)")
                 .lineWithPoints("response", x, y).yFromZero(true);
+        if (detected) {
+            c.line("baseline (running low quantile)", x, base).line("detection threshold", x, thr);
+        }
+        if (u.microsteps() > 1) {
+            c.topAxis("pulse rate (pulses/s at " + u.microsteps() + "\u00D7)", u::pulsesPerS);
+        } else {
+            c.topAxis("speed (rpm)", u::rpm);
+        }
         int i = 1;
         for (ResonanceBand band : r.bands()) {
             c.band(band.startFullStepsPerS(), band.endFullStepsPerS(), "R" + i++ + " " + bandLabel(u, band),
@@ -162,7 +182,8 @@ public final class ResonanceHtml {
             c.verticalLine(r.naturalFrequencyHz(), String.format(Locale.ROOT, "f\u2099 %.0f Hz", r.naturalFrequencyHz()),
                     Status.INFO);
         }
-        return c.describe("Response against step rate with " + r.bands().size() + " band(s) marked.").build();
+        return c.describe("Response against step rate with " + r.bands().size() + " band(s) marked"
+                + (detected ? ", the baseline and the detection threshold drawn." : ".")).build();
     }
 
     private static org.lodestep.report.html.Chart spectrogram(SweepResult r, String unit, double[] rates) {
@@ -218,14 +239,17 @@ public final class ResonanceHtml {
     }
 
     /**
-     * The report of a ring-down fit: the measured response, the fitted damped oscillation and its decay envelope
-     * around the settled value, as the fit result evaluates them ({@link RingDownResult#fittedAt},
-     * {@link RingDownResult#upperEnvelopeAt}, {@link RingDownResult#lowerEnvelopeAt}).
+     * The report of a ring-down fit: the decay from its largest excursion to where it has fallen into the noise,
+     * with the fitted damped oscillation and its envelope around the settled value as the fit result evaluates them
+     * ({@link RingDownResult#fittedAt}, {@link RingDownResult#upperEnvelopeAt}, {@link RingDownResult#lowerEnvelopeAt});
+     * the backbone (cycle frequency against amplitude) where the fit measured one; and the decay's spectrum with the
+     * fitted natural frequency marked.
      */
-    public static HtmlReport ringDown(String source, String channel, String unit, double[] timeS, double[] x,
-                                      RingDownResult r) {
-        String u = unit == null || unit.isBlank() ? "channel unit" : unit;
-        HtmlReport.Builder b = HtmlReport.builder("Ring-down", source)
+    public static HtmlReport ringDown(ResonanceRingdown.Result w) {
+        RingDownResult r = w.fit();
+        String channel = w.channel();
+        String u = w.unit() == null || w.unit().isBlank() ? "channel unit" : w.unit();
+        HtmlReport.Builder b = HtmlReport.builder("Ring-down", w.source())
                 .meta("Channel", channel + " (" + u + ")")
                 .meta("Fitted from", String.format(Locale.ROOT, "t = %.4f s, %.1f periods", r.startTimeS(),
                         r.periodsFitted()));
@@ -237,24 +261,29 @@ public final class ResonanceHtml {
                         risky.get(0), risky.get(1), risky.get(2))
                         : "The fit is poor (R\u00B2 below 0.9): the response is not a single damped oscillation.");
         b.safety(SafetyNote.ENERGISED_COILS);
-        double[] env = new double[timeS.length];
-        double[] envLow = new double[timeS.length];
-        double[] curve = new double[timeS.length];
-        for (int i = 0; i < timeS.length; i++) {
-            env[i] = r.upperEnvelopeAt(timeS[i]);
-            envLow[i] = r.lowerEnvelopeAt(timeS[i]);
-            curve[i] = r.fittedAt(timeS[i]);
+        b.section("Decay and fit");
+        b.figure(decayChart(w, u).toSvg(), String.format(Locale.ROOT, "The decay from its largest excursion"
+                + " (t = %.4f s) to where the fitted envelope has fallen to %.0f \u00D7 the noise RMS (%s %s): the"
+                + " measured response, the fitted damped oscillation and its envelope, fitted from t = %.4f s on."
+                + " Logarithmic decrement \u03B4 = ln(x\u2099/x\u2099\u208A\u2081) = %.4f, damping ratio"
+                + " \u03B6 = \u03B4/\u221A(4\u03C0\u00B2 + \u03B4\u00B2) = %.4f.", r.ringStartTimeS(),
+                RingDownResult.NOISE_MULTIPLE, sig(r.noiseRms()), u, r.startTimeS(), r.logDecrement(),
+                r.dampingRatio()));
+        if (!r.backbone().isEmpty()) {
+            b.figure(backboneChart(r, u).toSvg(), "Backbone: the frequency of each cycle against its swing amplitude,"
+                    + " largest swing first. A softening backbone (larger swings ring slower) is why the natural"
+                    + " frequency and damping ratio are the small-signal values extrapolated to zero swing.");
         }
-        String fit = String.format(Locale.ROOT, "fitted envelope: f\u2099 %.1f Hz, \u03B6 %.3f", r.naturalFrequencyHz(),
-                r.dampingRatio());
-        b.section("Response and fit");
-        b.figure(XyChart.builder("", "time (s)", channel + " (" + u + ")")
-                .points("measured", timeS, x).line(fit, timeS, env).sameAsPrevious(timeS, envLow)
-                .line("fitted damped oscillation", timeS, curve)
-                .describe("Measured ring-down with the fitted damped oscillation and its exponential envelope drawn"
-                        + " over it.").build().toSvg(),
-                "The measured response (points, or a thin line when dense), the fitted decay envelope and the fitted"
-                        + " damped oscillation, from the fitted stretch on.");
+        RingSpectrum sp = w.spectrum();
+        b.figure(XyChart.builder("", "frequency (Hz)", "level (dB re peak)")
+                .line("spectrum of the decay", sp.frequencyHz(), sp.levelDb())
+                .verticalLine(r.naturalFrequencyHz(), String.format(Locale.ROOT, "f\u2099 %.1f Hz (fit)",
+                        r.naturalFrequencyHz()), Status.INFO)
+                .size(760, 300)
+                .describe("Amplitude spectrum of the decay with the fitted natural frequency marked.").build().toSvg(),
+                String.format(Locale.ROOT, "Amplitude spectrum of the decay (rectangular window, zero-padded), in dB"
+                        + " below its peak at %.1f Hz; the dashed line is the fitted natural frequency, %.1f Hz.",
+                        sp.peakHz(), r.naturalFrequencyHz()));
         Map<String, String> facts = new LinkedHashMap<>();
         boolean bb = !r.backbone().isEmpty();
         facts.put(bb ? "Natural frequency (small-signal)" : "Natural frequency", bb
@@ -264,6 +293,7 @@ public final class ResonanceHtml {
         facts.put(bb ? "Damping ratio \u03B6 (small-signal)" : "Damping ratio \u03B6", bb
                 ? String.format(Locale.ROOT, "%.4f \u00B1 %.4f", r.dampingRatio(), r.dampingRatioError())
                 : String.format(Locale.ROOT, "%.4f", r.dampingRatio()));
+        facts.put("Logarithmic decrement \u03B4", String.format(Locale.ROOT, "%.4f", r.logDecrement()));
         if (bb) {
             facts.put("Large-swing frequency (first cycle)", String.format(Locale.ROOT, "%.2f Hz",
                     r.largeSwingFrequencyHz()));
@@ -277,6 +307,41 @@ public final class ResonanceHtml {
         facts.put("RMS residual", sig(r.rmsResidual()) + " " + u);
         b.facts(facts);
         return b.build();
+    }
+
+    private static org.lodestep.report.html.Chart decayChart(ResonanceRingdown.Result w, String u) {
+        RingDownResult r = w.fit();
+        double[] t = w.decayTimeS();
+        double[] env = new double[t.length];
+        double[] envLow = new double[t.length];
+        double[] curve = new double[t.length];
+        for (int i = 0; i < t.length; i++) {
+            env[i] = r.upperEnvelopeAt(t[i]);
+            envLow[i] = r.lowerEnvelopeAt(t[i]);
+            curve[i] = r.fittedAt(t[i]);
+        }
+        String fit = String.format(Locale.ROOT, "fitted envelope: f\u2099 %.1f Hz, \u03B6 %.3f, \u03B4 %.3f",
+                r.naturalFrequencyHz(), r.dampingRatio(), r.logDecrement());
+        return XyChart.builder("", "time (s)", w.channel() + " (" + u + ")")
+                .points("measured", t, w.decayValues()).line(fit, t, env).sameAsPrevious(t, envLow)
+                .line("fitted damped oscillation", t, curve)
+                .describe("Measured decay with the fitted damped oscillation and its exponential envelope drawn"
+                        + " over it.").build();
+    }
+
+    private static org.lodestep.report.html.Chart backboneChart(RingDownResult r, String u) {
+        double[] a = new double[r.backbone().size()];
+        double[] f = new double[a.length];
+        for (int i = 0; i < a.length; i++) {
+            a[i] = r.backbone().get(i).amplitude();
+            f[i] = r.backbone().get(i).frequencyHz();
+        }
+        return XyChart.builder("", "cycle amplitude (" + u + ")", "cycle frequency (Hz)")
+                .points("cycles", a, f)
+                .horizontalLine(r.dampedFrequencyHz(), String.format(Locale.ROOT, "small-signal damped frequency %.1f Hz",
+                        r.dampedFrequencyHz()), Status.INFO)
+                .size(760, 300)
+                .describe("Backbone: cycle frequency against cycle amplitude.").build();
     }
 
     /** The avoid-list in one line, or "". */

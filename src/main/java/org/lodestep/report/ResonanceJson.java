@@ -96,6 +96,8 @@ public final class ResonanceJson {
                 j.put("order2_amplitude", p.order2Amplitude());
                 j.put("order4_amplitude", p.order4Amplitude());
                 j.put("segments", p.segments());
+                j.put("baseline_rms", p.baselineRms());
+                j.put("threshold_rms", p.thresholdRms());
                 pts.add(j);
             }
             m.put("response", pts);
@@ -186,6 +188,10 @@ public final class ResonanceJson {
         m.put("large_swing_frequency_hz", r.largeSwingFrequencyHz());
         m.put("whole_ring_frequency_hz", r.wholeRingFrequencyHz());
         m.put("whole_ring_r_squared", r.wholeRingRSquared());
+        m.put("log_decrement", r.logDecrement());
+        m.put("ring_start_time_s", r.ringStartTimeS());
+        m.put("noise_rms", r.noiseRms());
+        m.put("decay_end_time_s", r.decayEndTimeS());
         List<Map<String, Object>> bb = new ArrayList<>();
         for (BackbonePoint c : r.backbone()) {
             Map<String, Object> j = new LinkedHashMap<>();

@@ -46,12 +46,19 @@ final class BandDetector {
     }
 
     static List<Span> detect(double[] rates, double[] levelDb, BandSettings s) {
-        int n = rates.length;
-        List<Span> spans = new ArrayList<>();
-        if (n == 0) {
-            return spans;
+        if (rates.length == 0) {
+            return new ArrayList<>();
         }
         double[] base = baseline(rates, levelDb, s.baselineHalfWidth(), s.baselineQuantile());
+        return spans(rates, levelDb, base, entryLevels(rates, levelDb, base, s), s);
+    }
+
+    /**
+     * The level (dB) a band must reach at each point to open: the baseline plus the larger of the threshold and
+     * three times the curve's point-to-point noise, or the absolute level where one is set.
+     */
+    static double[] entryLevels(double[] rates, double[] levelDb, double[] base, BandSettings s) {
+        int n = rates.length;
         double[] enter = new double[n];
         if (Double.isNaN(s.absoluteLevel())) {
             double sigma = 0;
@@ -69,6 +76,12 @@ final class BandDetector {
         } else {
             Arrays.fill(enter, 20 * Math.log10(s.absoluteLevel()));
         }
+        return enter;
+    }
+
+    private static List<Span> spans(double[] rates, double[] levelDb, double[] base, double[] enter, BandSettings s) {
+        int n = rates.length;
+        List<Span> spans = new ArrayList<>();
         int i = 0;
         while (i < n) {
             if (levelDb[i] < enter[i]) {

@@ -5,7 +5,10 @@ package org.lodestep.resonance;
  * damped and undamped natural frequency, quality factor.
  *
  * <p>Source: S. S. Rao, <i>Mechanical Vibrations</i>, 5th ed., Prentice Hall 2011, ch. 2 (free vibration with viscous
- * damping): δ = (1/n)·ln(x_0/x_n); ζ = δ/√(4π² + δ²); ω_d = ω_n·√(1 - ζ²); envelope e^(-ζ·ω_n·t); Q = 1/(2ζ).
+ * damping; references §16): δ = (1/n)·ln(x_0/x_n); ζ = δ/√(4π² + δ²), so δ = 2πζ/√(1 - ζ²); ω_d = ω_n·√(1 - ζ²);
+ * envelope e^(-ζ·ω_n·t), which falls to a level x after ln(A/x)/σ; Q = 1/(2ζ). The same relations in W. T. Thomson
+ * and M. D. Dahleh, <i>Theory of Vibration with Applications</i>, 5th ed., Prentice Hall 1998, ch. 2
+ * (references §27).
  */
 final class DampedOscillation {
     private DampedOscillation() {
@@ -24,6 +27,25 @@ final class DampedOscillation {
     /** Damping ratio from the logarithmic decrement. */
     public static double dampingRatio(double logDecrement) {
         return logDecrement / Math.sqrt(4 * Math.PI * Math.PI + logDecrement * logDecrement);
+    }
+
+    /** Logarithmic decrement of successive peaks from the damping ratio: 2πζ/√(1 - ζ²), the inverse of {@link #dampingRatio(double)}. */
+    public static double logDecrement(double dampingRatio) {
+        if (!(dampingRatio >= 0 && dampingRatio < 1)) {
+            throw new IllegalArgumentException("damping ratio must be 0 ... 1 for an oscillation, got " + dampingRatio);
+        }
+        return 2 * Math.PI * dampingRatio / Math.sqrt(1 - dampingRatio * dampingRatio);
+    }
+
+    /**
+     * Time for the envelope A·e^(-σ·t) to fall to {@code level}, s: ln(A/level)/σ; 0 when it starts at or below the
+     * level, infinite when the level is zero or the oscillation does not decay.
+     */
+    public static double timeToDecay(double amplitude, double decayRatePerS, double level) {
+        if (!(level > 0) || !(decayRatePerS > 0)) {
+            return Double.POSITIVE_INFINITY;
+        }
+        return Math.max(0, Math.log(Math.abs(amplitude) / level) / decayRatePerS);
     }
 
     /** Undamped natural frequency f_n = f_d/√(1 - ζ²), in Hz. */

@@ -116,6 +116,7 @@ public final class RingDownFit {
                 fit = whole; // a tail of fewer than two periods: keep the whole-ring fit's shape
             }
         }
+        fit = fit.withRing(startTimeS + start / sampleRateHz, noise);
         if (bb == null) {
             return fit;
         }
@@ -211,7 +212,7 @@ public final class RingDownFit {
         double duration = m * dt;
         return new RingDownResult(omegaN / (2 * Math.PI), omegaD / (2 * Math.PI), zeta, sigma, amplitude, p[4],
                 DampedOscillation.qualityFactor(zeta), 1 - ssr / sst, opt.getRMS(), startTimeS + start * dt,
-                duration, duration * omegaD / (2 * Math.PI), phase);
+                duration, duration * omegaD / (2 * Math.PI), phase, startTimeS + start * dt, 0);
     }
 
     /** Index of the first sample after {@code from} on the other side of {@code level}, or x.length. */

@@ -25,13 +25,18 @@ package org.lodestep.resonance;
  *                           constant-frequency fit reports, biased low by the large swings
  * @param wholeRingRSquared  R² of that whole-ring fit
  * @param backbone           cycle-by-cycle amplitude, frequency and decrement, largest swing first
+ * @param ringStartTimeS     time of the ring's largest excursion, where the free oscillation begins, s (the tail
+ *                           fit may start later, at {@code startTimeS})
+ * @param noiseRms           RMS about the settled value once the ring has died away (the last fifth of the
+ *                           record), signal units
  */
 public record RingDownResult(double naturalFrequencyHz, double dampedFrequencyHz, double dampingRatio,
                              double decayRatePerS, double amplitude, double offset, double qualityFactor,
                              double rSquared, double rmsResidual, double startTimeS, double fittedDurationS,
                              double periodsFitted, double phaseRad, double naturalFrequencyErrorHz,
                              double dampingRatioError, double largeSwingFrequencyHz, double wholeRingFrequencyHz,
-                             double wholeRingRSquared, java.util.List<BackbonePoint> backbone) {
+                             double wholeRingRSquared, java.util.List<BackbonePoint> backbone,
+                             double ringStartTimeS, double noiseRms) {
     public RingDownResult {
         backbone = java.util.List.copyOf(backbone);
         Require.positive(naturalFrequencyHz, "natural frequency", "Hz");
@@ -42,15 +47,26 @@ public record RingDownResult(double naturalFrequencyHz, double dampedFrequencyHz
         if (Double.isNaN(rSquared)) {
             throw new IllegalArgumentException("fit quality R² is NaN");
         }
+        if (!(ringStartTimeS <= startTimeS)) {
+            throw new IllegalArgumentException("the ring starts (" + ringStartTimeS + " s) after its fitted tail ("
+                    + startTimeS + " s)");
+        }
+        if (!(noiseRms >= 0)) {
+            throw new IllegalArgumentException("noise RMS must be zero or more, got " + noiseRms);
+        }
     }
+
+    /** The envelope has fallen to the noise where it is this many times the noise RMS (common practice). */
+    public static final double NOISE_MULTIPLE = 3;
 
     /** A fit without a backbone (too few cycles above the noise). */
     RingDownResult(double naturalFrequencyHz, double dampedFrequencyHz, double dampingRatio, double decayRatePerS,
                    double amplitude, double offset, double qualityFactor, double rSquared, double rmsResidual,
-                   double startTimeS, double fittedDurationS, double periodsFitted, double phaseRad) {
+                   double startTimeS, double fittedDurationS, double periodsFitted, double phaseRad,
+                   double ringStartTimeS, double noiseRms) {
         this(naturalFrequencyHz, dampedFrequencyHz, dampingRatio, decayRatePerS, amplitude, offset, qualityFactor,
                 rSquared, rmsResidual, startTimeS, fittedDurationS, periodsFitted, phaseRad, Double.NaN, Double.NaN,
-                Double.NaN, naturalFrequencyHz, rSquared, java.util.List.of());
+                Double.NaN, naturalFrequencyHz, rSquared, java.util.List.of(), ringStartTimeS, noiseRms);
     }
 
     /** This tail fit with the small-signal values of a backbone in place of its own f_n and ζ. */
@@ -62,7 +78,32 @@ public record RingDownResult(double naturalFrequencyHz, double dampedFrequencyHz
         return new RingDownResult(smallSignalHz, fd, smallSignalZeta, smallSignalZeta * 2 * Math.PI * smallSignalHz,
                 amplitude, offset, DampedOscillation.qualityFactor(smallSignalZeta), rSquared, rmsResidual,
                 startTimeS, fittedDurationS, periodsFitted, phaseRad, smallSignalErrorHz, zetaError, largeSwingHz,
-                wholeHz, wholeR2, cycles);
+                wholeHz, wholeR2, cycles, ringStartTimeS, noiseRms);
+    }
+
+    /** This result with the ring's start and noise of a longer record (the tail was fitted on its own). */
+    RingDownResult withRing(double ringStart, double noise) {
+        return new RingDownResult(naturalFrequencyHz, dampedFrequencyHz, dampingRatio, decayRatePerS, amplitude,
+                offset, qualityFactor, rSquared, rmsResidual, startTimeS, fittedDurationS, periodsFitted, phaseRad,
+                naturalFrequencyErrorHz, dampingRatioError, largeSwingFrequencyHz, wholeRingFrequencyHz,
+                wholeRingRSquared, backbone, ringStart, noise);
+    }
+
+    /**
+     * The logarithmic decrement δ = ln(x_n/x_(n+1)) of successive peaks that the damping ratio implies,
+     * 2πζ/√(1 − ζ²) ({@link DampedOscillation#logDecrement(double)}).
+     */
+    public double logDecrement() {
+        return DampedOscillation.logDecrement(dampingRatio);
+    }
+
+    /**
+     * Where the fitted envelope A·e^(-σ(t - t0)) has fallen to {@link #NOISE_MULTIPLE} times the noise RMS, s: the
+     * end of the decay worth drawing. At {@code startTimeS} when the envelope starts in the noise; infinite on a
+     * noiseless record.
+     */
+    public double decayEndTimeS() {
+        return startTimeS + DampedOscillation.timeToDecay(amplitude, decayRatePerS, NOISE_MULTIPLE * noiseRms);
     }
 
     /** The fitted curve x(t) at time t (s, on the capture's clock); NaN before the fitted stretch starts. */

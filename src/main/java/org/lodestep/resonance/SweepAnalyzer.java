@@ -238,13 +238,22 @@ public final class SweepAnalyzer {
         for (RateBin b : binList) {
             double rms = Math.sqrt(b.sumMeanSquare / b.count);
             points.add(new ResponsePoint(b.sumRate / b.count, rms, 20 * Math.log10(Math.max(rms, Double.MIN_NORMAL)),
-                    b.order(0), b.order(1), b.order(2), b.order(3), b.count));
+                    b.order(0), b.order(1), b.order(2), b.order(3), b.count, Double.NaN, Double.NaN));
         }
         double[] rates = new double[points.size()];
         double[] levels = new double[points.size()];
         for (int i = 0; i < rates.length; i++) {
             rates[i] = points.get(i).rateFullStepsPerS();
             levels[i] = points.get(i).levelDb();
+        }
+        double[] base = kind == ResponseChannel.VIBRATION ? BandDetector.baseline(rates, levels,
+                bandSettings.baselineHalfWidth(), bandSettings.baselineQuantile()) : null;
+        if (base != null) {
+            // the levels bands were measured against, kept with the curve so a report can draw them
+            double[] enter = BandDetector.entryLevels(rates, levels, base, bandSettings);
+            for (int i = 0; i < rates.length; i++) {
+                points.set(i, points.get(i).withDetection(base[i], enter[i]));
+            }
         }
         List<ResonanceBand> raw = kind == ResponseChannel.VIBRATION
                 ? vibrationBands(points, binList, rates, levels, bandSettings)
@@ -261,8 +270,7 @@ public final class SweepAnalyzer {
             bands.add(BandClassifier.classify(b, fn));
         }
         List<WatchPoint> watch = kind == ResponseChannel.VIBRATION && Double.isNaN(bandSettings.absoluteLevel())
-                ? WatchList.find(rates, levels, BandDetector.baseline(rates, levels, bandSettings.baselineHalfWidth(),
-                bandSettings.baselineQuantile()), bands, fn, bandSettings.thresholdDb())
+                ? WatchList.find(rates, levels, base, bands, fn, bandSettings.thresholdDb())
                 : List.of();
         // A phase current is dominated by the drive's own switching pattern, periodic in the step count whatever
         // the rotor does: on a simulated constant-voltage sweep that slipped poles its synchronous share stayed at

@@ -9,6 +9,7 @@ import java.util.concurrent.ConcurrentHashMap;
 
 import org.lodestep.report.MotorCardText;
 import org.lodestep.report.MotorHtml;
+import org.lodestep.report.MotorPhrasing;
 import org.lodestep.report.html.SafetyNote;
 import org.lodestep.workflow.MotorCardSettings;
 import org.lodestep.workflow.MotorFromFiles;
@@ -118,7 +119,7 @@ final class MotorPages {
         if (reports.size() >= KEEP) {
             reports.clear();
         }
-        reports.put(id, MotorHtml.report("Motor card", r.card(), traces).html());
+        reports.put(id, MotorHtml.report("Motor card", r.card(), traces, r.emf(), MotorPhrasing.PLAIN).html());
         String html = "<h2>Motor card</h2><p class=\"actions\"><a href=\"/motor/reports/" + id + "\">Motor report "
                 + "(print view)</a></p><pre class=\"text\">" + Layout.esc(MotorCardText.render(r.card()))
                 + "</pre><iframe class=\"report\" title=\"Motor report: fits, back-EMF, constants\" src=\"/motor/reports/"

@@ -12,6 +12,7 @@ import org.lodestep.sample.InputFormatException;
 import org.lodestep.sample.SampledSignal;
 import org.lodestep.motor.BackEmfAnalyzer;
 import org.lodestep.motor.BackEmfResult;
+import org.lodestep.motor.BackEmfTrace;
 import org.lodestep.motor.EmfChannel;
 import org.lodestep.motor.OrientedLeads;
 import org.lodestep.motor.StepInput;
@@ -175,8 +176,26 @@ public final class MotorCaptureInputs {
         return backEmf(Captures.readAll(file), revolutionsFlag, pulsesFlag);
     }
 
+    /** A back-EMF analysis and a few cycles of the capture it came from, for drawing. */
+    public record EmfCapture(BackEmfResult result, BackEmfTrace trace) {
+        public EmfCapture {
+            java.util.Objects.requireNonNull(result, "result");
+        }
+    }
+
+    /** As {@link #backEmf(Path, Double, Integer)}, keeping a few electrical cycles ({@link BackEmfTrace}). */
+    public static EmfCapture backEmfCapture(Path file, Double revolutionsFlag, Integer pulsesFlag)
+            throws IOException, InputFormatException {
+        return emf(Captures.readAll(file), revolutionsFlag, pulsesFlag, true);
+    }
+
     /** As {@link #backEmf(Path, Double, Integer)}, for a signal already in memory (a rig capture). */
     public static BackEmfResult backEmf(SampledSignal s, Double revolutionsFlag, Integer pulsesFlag)
+            throws InputFormatException {
+        return emf(s, revolutionsFlag, pulsesFlag, false).result();
+    }
+
+    private static EmfCapture emf(SampledSignal s, Double revolutionsFlag, Integer pulsesFlag, boolean keepTrace)
             throws InputFormatException {
         String src = s.source();
         List<EmfChannel> channels = new ArrayList<>();
@@ -202,8 +221,9 @@ public final class MotorCaptureInputs {
         Double revs = revolutionsFlag != null ? revolutionsFlag : number(s, "revolutions", "revolutions");
         Double pulses = pulsesFlag != null ? Double.valueOf(pulsesFlag) : number(s, "pulses_per_rev", "pulses");
         try {
-            return new BackEmfAnalyzer(s.sampleRateHz()).analyze(channels, revs, index,
+            BackEmfResult r = new BackEmfAnalyzer(s.sampleRateHz()).analyze(channels, revs, index,
                     pulses == null ? 1 : (int) Math.round(pulses));
+            return new EmfCapture(r, keepTrace ? BackEmfTrace.of(channels, s.sampleRateHz(), r) : null);
         } catch (IllegalArgumentException e) {
             throw new InputFormatException(src, InputFormatException.NO_LINE, null, null, e.getMessage());
         }

@@ -7,6 +7,7 @@ import java.util.List;
 import java.util.Objects;
 
 import org.lodestep.motor.BackEmfResult;
+import org.lodestep.motor.BackEmfTrace;
 import org.lodestep.motor.IdentifyRequest;
 import org.lodestep.motor.MotorCard;
 import org.lodestep.motor.MotorIdentifier;
@@ -31,7 +32,8 @@ public final class MotorFromFiles {
      * @param stepSupplyV   step voltage for step files without {@code # supply_v=}, V; or null
      * @param seriesOhm     series resistance for step files without {@code # series_ohm=}, Ω; or null for 0
      * @param card          what the card should assume
-     * @param keepTraces    whether to return the recorded step currents (for drawing under their fits)
+     * @param keepTraces    whether to return the recorded step currents (for drawing under their fits) and a few
+     *                      cycles of the back-EMF capture
      */
     public record Settings(Path resistance, List<Path> stepResponses, Path backEmf, Double revolutions,
                            Integer pulsesPerRev, Double stepSupplyV, Double seriesOhm, MotorCardSettings card,
@@ -49,8 +51,10 @@ public final class MotorFromFiles {
     /**
      * @param card   the motor card
      * @param traces the recorded current of each step response, in the order given (empty unless kept)
+     * @param emf    a few electrical cycles of the back-EMF capture, for drawing; null unless kept, without a
+     *               capture, or when it has no clean stretch
      */
-    public record Result(MotorCard card, List<MotorCaptureInputs.StepTrace> traces) {
+    public record Result(MotorCard card, List<MotorCaptureInputs.StepTrace> traces, BackEmfTrace emf) {
         public Result {
             Objects.requireNonNull(card, "card");
             traces = List.copyOf(traces);
@@ -75,12 +79,16 @@ public final class MotorFromFiles {
             }
         }
         BackEmfResult emf = null;
+        BackEmfTrace emfTrace = null;
         if (s.backEmf() != null) {
             progress.step("phasing " + s.backEmf().getFileName());
-            emf = MotorCaptureInputs.backEmf(s.backEmf(), s.revolutions(), s.pulsesPerRev());
+            MotorCaptureInputs.EmfCapture c = MotorCaptureInputs.backEmfCapture(s.backEmf(), s.revolutions(),
+                    s.pulsesPerRev());
+            emf = c.result();
+            emfTrace = s.keepTraces() ? c.trace() : null;
         }
         progress.step("identifying the motor");
-        return new Result(identify(windings, steps, emf, s.card()), traces);
+        return new Result(identify(windings, steps, emf, s.card()), traces, emfTrace);
     }
 
     /** The card from whatever was measured; shared with {@link MotorOnRig}. */

@@ -7,6 +7,7 @@ import java.util.OptionalDouble;
 
 import org.lodestep.motor.BackEmfAnalyzer;
 import org.lodestep.motor.BackEmfResult;
+import org.lodestep.motor.BackEmfTrace;
 import org.lodestep.motor.CoilResistance;
 import org.lodestep.motor.EmfChannel;
 import org.lodestep.motor.OrientedLeads;
@@ -81,8 +82,12 @@ public final class MotorOnRig {
         }
     }
 
-    /** @param rig what the rig reports about itself; @param card the motor card */
-    public record Result(RigInfo rig, MotorCard card) {
+    /**
+     * @param rig  what the rig reports about itself
+     * @param card the motor card
+     * @param emf  a few electrical cycles of the back-EMF capture, for drawing; null without one
+     */
+    public record Result(RigInfo rig, MotorCard card, BackEmfTrace emf) {
         public Result {
             Objects.requireNonNull(rig, "rig");
             Objects.requireNonNull(card, "card");
@@ -94,7 +99,7 @@ public final class MotorOnRig {
             throws RigException, InputFormatException {
         WindingInput windings;
         List<StepInput> steps;
-        BackEmfResult emf;
+        MotorCaptureInputs.EmfCapture emf;
         try {
             List<String> labels = labels(rig.info());
             listener.connected(rig.info(), labels);
@@ -106,7 +111,8 @@ public final class MotorOnRig {
         }
         listener.outputsOff();
         listener.step("identifying the motor");
-        return new Result(rig.info(), MotorFromFiles.identify(windings, steps, emf, settings.card()));
+        return new Result(rig.info(), MotorFromFiles.identify(windings, steps, emf == null ? null : emf.result(),
+                settings.card()), emf == null ? null : emf.trace());
     }
 
     private static List<String> labels(RigInfo info) {
@@ -170,7 +176,7 @@ public final class MotorOnRig {
     }
 
     /** One back-EMF capture of every coil while the shaft is turned by hand. */
-    private static BackEmfResult backEmf(RigClient rig, List<String> labels, WindingInput windings, Double revolutions,
+    private static MotorCaptureInputs.EmfCapture backEmf(RigClient rig, List<String> labels, WindingInput windings, Double revolutions,
                                          Listener listener) throws RigException, InputFormatException {
         List<int[]> pairs = new ArrayList<>();
         for (CoilResistance c : windings.coils()) {
@@ -188,7 +194,8 @@ public final class MotorOnRig {
             revs = Double.valueOf(cap.metadata().get("revolutions"));
         }
         try {
-            return new BackEmfAnalyzer(s.sampleRateHz()).analyze(channels, revs, null, 1);
+            BackEmfResult r = new BackEmfAnalyzer(s.sampleRateHz()).analyze(channels, revs, null, 1);
+            return new MotorCaptureInputs.EmfCapture(r, BackEmfTrace.of(channels, s.sampleRateHz(), r));
         } catch (IllegalArgumentException e) {
             throw new InputFormatException(s.source(), InputFormatException.NO_LINE, null, null, e.getMessage());
         }

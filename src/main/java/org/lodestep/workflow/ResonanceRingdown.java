@@ -8,6 +8,7 @@ import java.util.Objects;
 import org.lodestep.capture.Captures;
 import org.lodestep.resonance.RingDownFit;
 import org.lodestep.resonance.RingDownResult;
+import org.lodestep.resonance.RingSpectrum;
 import org.lodestep.sample.InputFormatException;
 import org.lodestep.sample.SampledSignal;
 
@@ -19,6 +20,9 @@ import org.lodestep.sample.SampledSignal;
  * capture that holds no ring-down is an {@link InputFormatException} naming the source and channel.
  */
 public final class ResonanceRingdown {
+    /** The ring's spectrum is kept up to this many times its natural frequency. */
+    public static final double SPECTRUM_SPAN = 4;
+
     private ResonanceRingdown() {
     }
 
@@ -38,17 +42,36 @@ public final class ResonanceRingdown {
      * @param timeS   time of each sample of the analysed window, s
      * @param values  the analysed window, in the channel's unit
      * @param fit     the fitted ring-down; its {@link RingDownResult#fittedAt} and envelope methods give the curves
+     * @param decayFrom index of the ring's largest excursion in {@code timeS}, where the decay worth drawing starts
+     * @param decayTo   index after the last sample of the decay: where the envelope has fallen into the noise
+     *                  ({@link RingDownResult#decayEndTimeS}), or the end of the window
+     * @param spectrum  the decay's spectrum ({@link RingSpectrum}), up to {@link #SPECTRUM_SPAN} times f_n
      */
     public record Result(String source, String channel, String unit, double[] timeS, double[] values,
-                         RingDownResult fit) {
+                         RingDownResult fit, int decayFrom, int decayTo, RingSpectrum spectrum) {
         public Result {
             Objects.requireNonNull(fit, "fit");
+            Objects.requireNonNull(spectrum, "spectrum");
             if (timeS.length != values.length) {
                 throw new IllegalArgumentException("time and values differ in length: " + timeS.length + " and "
                         + values.length + " samples");
             }
+            if (!(decayFrom >= 0 && decayFrom < decayTo && decayTo <= timeS.length)) {
+                throw new IllegalArgumentException("decay " + decayFrom + " ... " + decayTo + " lies outside the "
+                        + timeS.length + " samples");
+            }
             timeS = timeS.clone();
             values = values.clone();
+        }
+
+        /** Sample times of the decay, s. */
+        public double[] decayTimeS() {
+            return Arrays.copyOfRange(timeS, decayFrom, decayTo);
+        }
+
+        /** The decay, in the channel's unit. */
+        public double[] decayValues() {
+            return Arrays.copyOfRange(values, decayFrom, decayTo);
         }
 
         @Override
@@ -100,6 +123,15 @@ public final class ResonanceRingdown {
         for (int i = 0; i < t.length; i++) {
             t[i] = t0 + i / fs;
         }
-        return new Result(source, name, sig.channels().get(c).unit(), t, part, r);
+        int decayFrom = (int) Math.max(0, Math.min(part.length - 1, Math.round((r.ringStartTimeS() - t0) * fs)));
+        double end = r.decayEndTimeS();
+        int decayTo = Double.isFinite(end) ? (int) Math.min(part.length, Math.ceil((end - t0) * fs) + 1)
+                : part.length;
+        // at least two fitted periods, so a ring that starts near the noise still shows its shape
+        int twoPeriods = (int) Math.ceil((r.startTimeS() - t0 + 2 / r.dampedFrequencyHz()) * fs);
+        decayTo = Math.max(decayTo, Math.min(part.length, Math.max(decayFrom + 8, twoPeriods)));
+        RingSpectrum spectrum = RingSpectrum.of(Arrays.copyOfRange(part, decayFrom, decayTo), r.offset(), fs,
+                SPECTRUM_SPAN * r.naturalFrequencyHz());
+        return new Result(source, name, sig.channels().get(c).unit(), t, part, r, decayFrom, decayTo, spectrum);
     }
 }

@@ -7,11 +7,16 @@ import java.io.IOException;
 import java.io.UncheckedIOException;
 import java.nio.charset.StandardCharsets;
 import java.nio.file.Path;
+import java.util.ArrayList;
+import java.util.List;
 import java.util.Objects;
 import java.util.concurrent.atomic.AtomicLong;
 
 import org.jfree.chart.ChartUtils;
 import org.jfree.chart.JFreeChart;
+import org.jfree.chart.plot.CombinedDomainXYPlot;
+import org.jfree.chart.plot.XYPlot;
+import org.jfree.data.xy.XYDataset;
 import org.jfree.svg.SVGGraphics2D;
 import org.jfree.svg.ViewBox;
 
@@ -40,6 +45,41 @@ public final class Chart {
         this.heightPx = heightPx;
         this.description = description == null ? "" : description;
         ChartStyle.apply(chart);
+    }
+
+    /** The chart itself, for tests in this package that check axes and series after layout. */
+    JFreeChart jfree() {
+        return chart;
+    }
+
+    /**
+     * The points drawn for the first series called {@code name}, after any thinning, as {x, y}; null when no series
+     * has that name. For checking a chart against the records it was drawn from.
+     */
+    public double[][] series(String name) {
+        List<XYPlot> plots = new ArrayList<>();
+        if (chart.getPlot() instanceof CombinedDomainXYPlot c) {
+            plots.addAll(c.getSubplots());
+        } else if (chart.getPlot() instanceof XYPlot p) {
+            plots.add(p);
+        }
+        for (XYPlot p : plots) {
+            for (int d = 0; d < p.getDatasetCount(); d++) {
+                XYDataset ds = p.getDataset(d);
+                for (int s = 0; ds != null && s < ds.getSeriesCount(); s++) {
+                    if (ds.getSeriesKey(s).toString().equals(name)) {
+                        int n = ds.getItemCount(s);
+                        double[][] xy = new double[2][n];
+                        for (int i = 0; i < n; i++) {
+                            xy[0][i] = ds.getXValue(s, i);
+                            xy[1][i] = ds.getYValue(s, i);
+                        }
+                        return xy;
+                    }
+                }
+            }
+        }
+        return null;
     }
 
     /** Design width in CSS pixels. */

@@ -129,19 +129,28 @@ final class ChartStyle {
             legend.setPosition(RectangleEdge.BOTTOM);
         }
         if (chart.getPlot() instanceof XYPlot p) {
-            p.setBackgroundPaint(Color.WHITE);
-            p.setOutlinePaint(MUTED);
-            p.setDomainGridlinePaint(GRID);
-            p.setRangeGridlinePaint(GRID);
-            p.setDomainGridlineStroke(new BasicStroke(1f));
-            p.setRangeGridlineStroke(new BasicStroke(1f));
-            p.setAxisOffset(RectangleInsets.ZERO_INSETS);
-            for (int i = 0; i < p.getDomainAxisCount(); i++) {
-                axis(p.getDomainAxis(i));
+            plot(p);
+            if (p instanceof org.jfree.chart.plot.CombinedDomainXYPlot c) {
+                for (XYPlot sub : c.getSubplots()) {
+                    plot(sub);
+                }
             }
-            for (int i = 0; i < p.getRangeAxisCount(); i++) {
-                axis(p.getRangeAxis(i));
-            }
+        }
+    }
+
+    private static void plot(XYPlot p) {
+        p.setBackgroundPaint(Color.WHITE);
+        p.setOutlinePaint(MUTED);
+        p.setDomainGridlinePaint(GRID);
+        p.setRangeGridlinePaint(GRID);
+        p.setDomainGridlineStroke(new BasicStroke(1f));
+        p.setRangeGridlineStroke(new BasicStroke(1f));
+        p.setAxisOffset(RectangleInsets.ZERO_INSETS);
+        for (int i = 0; i < p.getDomainAxisCount(); i++) {
+            axis(p.getDomainAxis(i));
+        }
+        for (int i = 0; i < p.getRangeAxisCount(); i++) {
+            axis(p.getRangeAxis(i));
         }
     }
 

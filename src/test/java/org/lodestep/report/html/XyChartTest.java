@@ -77,4 +77,38 @@ class XyChartTest {
         assertEquals(1, texts.stream().filter("envelope"::equals).count(), texts.toString());
         assertThrows(IllegalStateException.class, () -> XyChart.builder("", "x", "y").sameAsPrevious(t, t));
     }
+
+    @Test
+    void topAxisShowsTheBottomAxisRangeInItsOwnUnit() throws Exception {
+        double[] rate = {100, 400, 700, 1000};
+        // 200 full steps per revolution: rpm = full steps/s × 60 / 200 (references §1)
+        Chart c = XyChart.builder("", "step rate (full steps/s)", "vibration (g RMS)")
+                .line("response", rate, new double[] {1, 3, 2, 1}).topAxis("speed (rpm)", v -> v * 60 / 200).build();
+        List<String> texts = XmlCheck.texts(XmlCheck.parse(c.toSvg().markup()), XmlCheck.SVG, "text");
+        assertTrue(texts.contains("speed (rpm)") && texts.contains("step rate (full steps/s)"), texts.toString());
+        org.jfree.chart.plot.XYPlot p = (org.jfree.chart.plot.XYPlot) c.jfree().getPlot();
+        assertEquals(p.getDomainAxis(0).getLowerBound() * 0.3, p.getDomainAxis(1).getLowerBound(), 1e-9);
+        assertEquals(p.getDomainAxis(0).getUpperBound() * 0.3, p.getDomainAxis(1).getUpperBound(), 1e-9);
+    }
+
+    @Test
+    void aFurtherPanelSharesTheXAxisAndTakesTheLooksOfTheFirstPanelsSeriesWithoutLegendEntries() throws Exception {
+        double[] t = {0, 1, 2, 3};
+        Chart c = XyChart.builder("", "t/\u03C4", "i/i\u221E")
+                .referenceLine("model", t, new double[] {0, 0.63, 0.86, 0.95})
+                .points("coil 1", t, new double[] {0, 0.6, 0.87, 0.95})
+                .points("coil 2", t, new double[] {0, 0.65, 0.85, 0.96})
+                .panel("residual").horizontalLine(0, "", Status.INFO)
+                .line("coil 1", t, new double[] {0, -0.03, 0.01, 0})
+                .line("coil 2", t, new double[] {0, 0.02, -0.01, 0.01}).build();
+        List<String> texts = XmlCheck.texts(XmlCheck.parse(c.toSvg().markup()), XmlCheck.SVG, "text");
+        assertEquals(1, texts.stream().filter("coil 1"::equals).count(), "one legend entry per series: " + texts);
+        assertTrue(texts.contains("residual") && texts.contains("model"), texts.toString());
+        org.jfree.chart.plot.CombinedDomainXYPlot p = (org.jfree.chart.plot.CombinedDomainXYPlot) c.jfree().getPlot();
+        assertEquals(2, p.getSubplots().size());
+        // the residual of coil 2 is drawn in coil 2's colour
+        assertEquals(p.getSubplots().get(0).getRenderer().getSeriesPaint(2),
+                p.getSubplots().get(1).getRenderer().getSeriesPaint(1));
+        assertThrows(IllegalStateException.class, () -> XyChart.builder("", "x", "y").panel("r"));
+    }
 }
