@@ -71,10 +71,10 @@ def alternate(cases, runs, env=None):
     return res
 
 
-def launcher_java_command():
-    """The exact java command the launcher runs (its dry run), so the bench classes use the same JVM options."""
+def launcher_java_command(args=("--version",)):
+    """The JVM options the launcher chooses for args (its dry run), so the bench classes use the same ones."""
     env = dict(os.environ, LODESTEP_DRY_RUN="1")
-    out = subprocess.run([LAUNCHER, "--version"], env=env, capture_output=True, text=True, check=True).stdout
+    out = subprocess.run([LAUNCHER, *args], env=env, capture_output=True, text=True, check=True).stdout
     argv = shlex.split(out.strip().splitlines()[-1])
     jar_at = argv.index("-jar")
     return argv[1:jar_at]
@@ -177,6 +177,7 @@ def main():
         env = dict(os.environ, JDK_JAVA_OPTIONS="-Xmx256m")
         hour_argv = lode + [hour_wav, "--sweep", "linear", "--start", "20", "--end", "2000"]
         hour = medians([measure(hour_argv, env, os.path.join(WORK, "hour.out")) for _ in range(max(1, min(RUNS, 3)))])
+        hour["opts"] = " ".join(launcher_java_command(hour_argv[1:]))
 
     load1 = os.getloadavg()
     raw = {"sweep": sweep, "fresh": fresh, "small": small_res, "check": check, "hour": hour, "spectral": sp}
@@ -221,7 +222,7 @@ def main():
               f"{'yes' if value >= goal else 'no'} |")
     if hour:
         print(f"| one hour at 51.2 kS/s (184,320,000 samples, 16-bit WAV), `-Xmx256m` | {hour['wall']:.1f} s wall, "
-              f"{hour['cpu']:.1f} s CPU, peak {hour['rss_mb']:.0f} MB | < 4 s | {'yes' if hour['wall'] < 4 else 'no'} |")
+              f"{hour['cpu']:.1f} s CPU, peak {hour['rss_mb']:.0f} MB (launcher's JVM options here: `{hour['opts']}`) | < 4 s | {'yes' if hour['wall'] < 4 else 'no'} |")
     ingest_mbs = mb_csv / ing["wall"]
     print(f"| CSV ingest, fresh process (`ReadOnce`, JVM start included) | {ingest_mbs:.0f} MB/s ({ing['wall']:.2f} s "
           f"wall, {ing['cpu']:.2f} s CPU) | ≥ 400 MB/s | {'yes' if ingest_mbs >= 400 else 'no'} |")

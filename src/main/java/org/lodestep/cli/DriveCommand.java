@@ -6,11 +6,7 @@ import picocli.CommandLine.Command;
 @Command(name = "drive",
         mixinStandardHelpOptions = true,
         description = "Pull-out torque against speed on a given driver and supply, whether a load reaches its speed"
-                + " with margin, and motion profiles that cross resonance bands fast enough.",
-        subcommands = {
-            DriveCurveCommand.class,
-            DrivePlanCommand.class
-        })
+                + " with margin, and motion profiles that cross resonance bands fast enough.")
 final class DriveCommand implements Runnable {
     @picocli.CommandLine.Spec
     picocli.CommandLine.Model.CommandSpec spec;

@@ -17,22 +17,14 @@ import picocli.CommandLine;
 import picocli.CommandLine.Command;
 import picocli.CommandLine.Option;
 
-/** Entry point: builds the command tree and maps every failure to one documented exit code. */
+/**
+ * Entry point: builds the command tree (only the invoked path in full, {@link CommandTree}) and maps every failure to
+ * one documented exit code.
+ */
 @Command(name = "lodestep",
         mixinStandardHelpOptions = true,
         versionProvider = VersionProvider.class,
         description = "Bench test-data analyzer for two-phase hybrid stepper motors.",
-        subcommands = {
-            DemoCommand.class,
-            LeadsCommand.class,
-            MotorCommand.class,
-            ResonanceCommand.class,
-            QaCommand.class,
-            RigCommand.class,
-            DriveCommand.class,
-            StationCommand.class,
-            CommandLine.HelpCommand.class
-        },
         footerHeading = "%nExit codes:%n",
         footer = {
             "  0  done",
@@ -43,6 +35,36 @@ import picocli.CommandLine.Option;
             "  5  database failure"
         })
 public final class Main implements Runnable {
+
+    /** Every command, in the order help lists them. */
+    static final CommandTree TREE = CommandTree.group(Main.class,
+            CommandTree.leaf(DemoCommand.class),
+            CommandTree.group(LeadsCommand.class,
+                    CommandTree.leaf(LeadsIdentifyCommand.class),
+                    CommandTree.leaf(LeadsProbeCommand.class)),
+            CommandTree.group(MotorCommand.class,
+                    CommandTree.leaf(MotorIdentifyCommand.class)),
+            CommandTree.group(ResonanceCommand.class,
+                    CommandTree.leaf(ResonanceSweepCommand.class),
+                    CommandTree.leaf(ResonanceRingdownCommand.class),
+                    CommandTree.leaf(ResonancePredictCommand.class)),
+            CommandTree.group(QaCommand.class,
+                    CommandTree.leaf(QaCheckCommand.class),
+                    CommandTree.leaf(QaReportCommand.class),
+                    CommandTree.leaf(QaExportCommand.class),
+                    CommandTree.leaf(QaCertificateCommand.class)),
+            CommandTree.group(RigCommand.class,
+                    CommandTree.leaf(RigPortsCommand.class),
+                    CommandTree.leaf(RigInfoCommand.class),
+                    CommandTree.leaf(RigMeasureCommand.class),
+                    CommandTree.leaf(RigCaptureCommand.class),
+                    CommandTree.leaf(RigServeCommand.class),
+                    CommandTree.leaf(RigConformanceCommand.class)),
+            CommandTree.group(DriveCommand.class,
+                    CommandTree.leaf(DriveCurveCommand.class),
+                    CommandTree.leaf(DrivePlanCommand.class)),
+            CommandTree.leaf(StationCommand.class),
+            CommandTree.leaf(CommandLine.HelpCommand.class));
 
     @Option(names = "--verbose", scope = CommandLine.ScopeType.INHERIT,
             description = "Show stack traces and extra detail when something fails.")
@@ -67,7 +89,15 @@ public final class Main implements Runnable {
 
     /** Runs one command line in-process, writing to the given streams; returns the exit code. */
     public static int run(PrintWriter out, PrintWriter err, String... args) {
-        CommandLine cl = commandLine();
+        if (args.length == 1 && (args[0].equals("--version") || args[0].equals("-V"))) {
+            // The one command that needs no command model: what picocli would print (tested), without building it.
+            for (String line : new VersionProvider().getVersion()) {
+                out.println(line);
+            }
+            out.flush();
+            return ExitCode.OK;
+        }
+        CommandLine cl = configure(TREE.buildFor(new Main(), args));
         cl.setOut(out);
         PrintWriter redacted = new PrintWriter(new RedactingWriter(err), true);
         cl.setErr(redacted);
@@ -78,9 +108,13 @@ public final class Main implements Runnable {
         }
     }
 
-    /** The configured command tree, for tests and for {@link #run}. */
+    /** The whole configured command tree, every command with its full model (tests, documentation). */
     static CommandLine commandLine() {
-        CommandLine cl = new CommandLine(new Main());
+        return configure(TREE.buildFull(new Main()));
+    }
+
+    /** Settings for the whole tree; picocli applies them to the subcommands present, so call it once they are. */
+    private static CommandLine configure(CommandLine cl) {
         cl.setCaseInsensitiveEnumValuesAllowed(true);
         cl.setUsageHelpAutoWidth(true);
         cl.setExecutionExceptionHandler((ex, cmd, parseResult) -> handle(ex, cmd, isVerbose(parseResult)));

@@ -5,12 +5,7 @@ import picocli.CommandLine.Command;
 /** {@code lodestep resonance}: find resonant step rates and what to do about them. */
 @Command(name = "resonance",
         mixinStandardHelpOptions = true,
-        description = "Find the step rates where a motor and its load resonate, and the rates to avoid.",
-        subcommands = {
-            ResonanceSweepCommand.class,
-            ResonanceRingdownCommand.class,
-            ResonancePredictCommand.class
-        })
+        description = "Find the step rates where a motor and its load resonate, and the rates to avoid.")
 final class ResonanceCommand implements Runnable {
     @picocli.CommandLine.Spec
     picocli.CommandLine.Model.CommandSpec spec;

@@ -5,15 +5,7 @@ import picocli.CommandLine.Command;
 /** {@code lodestep rig}: talk to a bench rig or run the virtual one. */
 @Command(name = "rig",
         mixinStandardHelpOptions = true,
-        description = "Talk to a bench rig (serial, TCP or the virtual rig): list ports, query, measure, capture, serve, check conformance.",
-        subcommands = {
-            RigPortsCommand.class,
-            RigInfoCommand.class,
-            RigMeasureCommand.class,
-            RigCaptureCommand.class,
-            RigServeCommand.class,
-            RigConformanceCommand.class
-        })
+        description = "Talk to a bench rig (serial, TCP or the virtual rig): list ports, query, measure, capture, serve, check conformance.")
 final class RigCommand implements Runnable {
     @picocli.CommandLine.Spec
     picocli.CommandLine.Model.CommandSpec spec;

@@ -13,7 +13,8 @@ import org.lodestep.resonance.RateUnits;
  * @param requiredAtTargetNm          torque the load needs at constant target speed, N·m
  * @param marginAtTarget              margin left at the target ({@code 1 − required/pull-out}); negative when short
  * @param requiredMargin              margin asked for
- * @param maxRateWithMarginFullStepsPerS highest rate at which the margin still holds, full steps/s (0 when none)
+ * @param maxRateWithMarginFullStepsPerS highest rate at which the margin still holds, full steps/s (0 when none;
+ *                                    +inf when the load needs no torque at constant speed: no rate bounds it)
  * @param maxRateWithMargin           the same in every unit
  * @param accelerationAtTargetFullStepsPerS2 acceleration the torque with margin still gives at the target,
  *                                    full steps/s² (0 when none)

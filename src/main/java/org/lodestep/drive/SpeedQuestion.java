@@ -44,9 +44,15 @@ public final class SpeedQuestion {
                 units.of(maxRate), accel, j, s);
     }
 
-    /** Highest rate, full steps/s, at which {@code (1 − margin)·T_po ≥ need}; 0 when not even at standstill. */
+    /**
+     * Highest rate, full steps/s, at which {@code (1 − margin)·T_po ≥ need}; 0 when not even at standstill; +inf when
+     * the load needs no torque at constant speed (the model's pull-out torque only tends to zero, so no rate bounds it).
+     */
     static double maxRateWithMargin(PhaseModel m, Driver d, double need, double margin) {
         double level = need / (1 - margin);
+        if (!(level > 0)) {
+            return Double.POSITIVE_INFINITY;
+        }
         if (PhasorTorque.pullOutTorqueNm(m, d, 0) <= level) {
             return 0;
         }

@@ -55,7 +55,7 @@ public final class TorqueCurves {
             lo = hi;
             hi *= 2;
             if (hi > 1e8) {
-                return hi;
+                return Double.POSITIVE_INFINITY; // the torque stays above the level at any rate a drive can step
             }
         }
         for (int k = 0; k < 100 && hi - lo > 1e-9 * hi; k++) {

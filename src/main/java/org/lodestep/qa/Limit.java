@@ -45,6 +45,39 @@ public record Limit(String parameter, String unit, double nominal, double lower,
         return !Double.isNaN(upper);
     }
 
+    /**
+     * The limit {@code value} is measured against: the one it crossed, else the nearer of the two; NaN for NaN.
+     */
+    public double nearest(double value) {
+        if (Double.isNaN(value)) {
+            return Double.NaN;
+        }
+        if (!hasLower() || !hasUpper()) {
+            return hasLower() ? lower : upper;
+        }
+        return value - lower <= upper - value ? lower : upper;
+    }
+
+    /**
+     * How far {@code value} lies inside the limits (positive) or beyond the one it crossed (negative), in this
+     * limit's unit: the signed distance to {@link #nearest}. NaN for NaN; +Infinity for a reading above range (an
+     * insulation reading beyond the tester's) against a lower limit only.
+     */
+    public double margin(double value) {
+        if (Double.isNaN(value)) {
+            return Double.NaN;
+        }
+        double aboveLower = hasLower() ? value - lower : Double.POSITIVE_INFINITY;
+        double belowUpper = hasUpper() ? upper - value : Double.POSITIVE_INFINITY;
+        return Math.min(aboveLower, belowUpper);
+    }
+
+    /** {@link #margin} as a fraction of the limit it is measured against (NaN against a limit of zero). */
+    public double marginFraction(double value) {
+        double n = Math.abs(nearest(value));
+        return n > 0 ? margin(value) / n : Double.NaN;
+    }
+
     /** True when {@code value} lies inside the limits (limits themselves included). */
     public boolean contains(double value) {
         return (!hasLower() || value >= lower) && (!hasUpper() || value <= upper);

@@ -230,10 +230,15 @@ public final class DriveHtml {
         HtmlTable.Builder t = HtmlTable.builder(null, "", "Full steps/s", "pulses/s", "rpm", "mm/s");
         t.row(Cell.text("Target"), Cell.number(f1(a.target().fullStepsPerS())), Cell.number(f0(a.target().pulsesPerS())),
                 Cell.number(f0(a.target().rpm())), Cell.number(u.hasTravel() ? f1(a.target().mmPerS()) : "—"));
-        t.row(Cell.text("Highest with margin"), Cell.number(f1(a.maxRateWithMargin().fullStepsPerS())),
-                Cell.number(f0(a.maxRateWithMargin().pulsesPerS())), Cell.number(f0(a.maxRateWithMargin().rpm())),
-                Cell.number(u.hasTravel() ? f1(a.maxRateWithMargin().mmPerS()) : "—"));
+        if (Double.isFinite(a.maxRateWithMarginFullStepsPerS())) {
+            t.row(Cell.text("Highest with margin"), Cell.number(f1(a.maxRateWithMargin().fullStepsPerS())),
+                    Cell.number(f0(a.maxRateWithMargin().pulsesPerS())), Cell.number(f0(a.maxRateWithMargin().rpm())),
+                    Cell.number(u.hasTravel() ? f1(a.maxRateWithMargin().mmPerS()) : "—"));
+        }
         b.table(t.build());
+        if (!Double.isFinite(a.maxRateWithMarginFullStepsPerS())) {
+            b.paragraph("Highest speed with the margin: " + DriveText.maxRateWithMarginText(u, a) + ".");
+        }
         Map<String, String> f = new LinkedHashMap<>();
         f.put("Pull-out torque at the target", String.format(Locale.ROOT, "%.3f N·m", a.pullOutAtTargetNm()));
         f.put("Load at constant speed", String.format(Locale.ROOT, "%.3f N·m", a.requiredAtTargetNm()));

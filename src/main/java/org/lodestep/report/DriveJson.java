@@ -154,7 +154,10 @@ public final class DriveJson {
             j.put("margin_at_target", a.marginAtTarget());
             j.put("required_margin", a.requiredMargin());
             j.put("margin_rule", "common practice: keep 30 to 50 % of the pull-out torque in reserve");
-            j.put("max_rate_with_margin", a.maxRateWithMargin());
+            // null with "unbounded" when no rate bounds it (a load with no torque at constant speed)
+            j.put("max_rate_with_margin", Double.isFinite(a.maxRateWithMarginFullStepsPerS()) ? a.maxRateWithMargin()
+                    : null);
+            j.put("max_rate_with_margin_unbounded", Double.isInfinite(a.maxRateWithMarginFullStepsPerS()));
             j.put("acceleration_at_target_full_steps_per_s2", a.accelerationAtTargetFullStepsPerS2());
             j.put("total_inertia_kg_m2", a.totalInertiaKgM2());
             j.put("suggestions", a.suggestions());

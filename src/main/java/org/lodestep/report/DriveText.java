@@ -171,8 +171,7 @@ public final class DriveText {
         out.printf(Locale.ROOT, "  pull-out torque there %.3f N·m, load %.3f N·m: margin %s (asked %s; common"
                         + " practice 30 to 50 %%)%n", a.pullOutAtTargetNm(), a.requiredAtTargetNm(),
                 Double.isFinite(a.marginAtTarget()) ? pct(a.marginAtTarget()) : "none", pct(a.requiredMargin()));
-        out.println("  highest speed with that margin: " + (a.maxRateWithMarginFullStepsPerS() > 0
-                ? rate(u, a.maxRateWithMarginFullStepsPerS()) : "none (not even at standstill)"));
+        out.println("  highest speed with that margin: " + maxRateWithMarginText(u, a));
         out.printf(Locale.ROOT, "  acceleration left at the target with the margin: %s full steps/s²%n",
                 sig(a.accelerationAtTargetFullStepsPerS2()));
         if (!a.suggestions().isEmpty()) {
@@ -219,5 +218,15 @@ public final class DriveText {
 
     static String sig(double v) {
         return Double.isFinite(v) ? String.format(Locale.ROOT, "%.4g", v) : "—";
+    }
+
+    /** The highest rate with the margin, or why there is none or no bound; shared by the text and HTML reports. */
+    static String maxRateWithMarginText(RateUnits u, SpeedAnswer a) {
+        double r = a.maxRateWithMarginFullStepsPerS();
+        if (Double.isInfinite(r)) {
+            return "no bound in this model (the load needs no torque at constant speed); resonance and mid-band"
+                    + " instability can still stall it";
+        }
+        return r > 0 ? rate(u, r) : "none (not even at standstill)";
     }
 }

@@ -7,6 +7,7 @@ import java.util.Locale;
 import java.util.Map;
 
 import org.lodestep.report.html.Cell;
+import org.lodestep.report.html.Html;
 import org.lodestep.report.html.HtmlReport;
 import org.lodestep.report.html.HtmlTable;
 import org.lodestep.report.html.SafetyNote;
@@ -116,6 +117,45 @@ public final class LeadsHtml {
         }
         b.table(r.build());
         return b.build();
+    }
+
+    /**
+     * What a probe session shows between readings, as a fragment of a page: the schematic of the first driver
+     * connection the readings allow so far (marked provisional until certain), the windings found and the findings.
+     */
+    public static String soFar(Identification id) {
+        StringBuilder sb = new StringBuilder("<section class=\"so-far\" aria-label=\"Identification so far\">");
+        sb.append("<h2>So far: ").append(id.topology() == Topology.UNKNOWN ? "layout not known yet"
+                : Html.escape(id.topology().label()) + (id.determined() ? "" : " (not yet certain)")).append("</h2>");
+        if (!id.connections().isEmpty()) {
+            DriverWiring c = id.connections().get(0);
+            sb.append("<figure class=\"schematic\">").append(WiringDiagrams.of(id, c).toSvg().markup())
+                    .append("<figcaption>").append(Html.escape(caption(c))).append("</figcaption></figure>");
+        } else if (!id.windings().isEmpty()) {
+            sb.append("<figure class=\"schematic\">").append(WiringDiagrams.soFar(id).toSvg().markup())
+                    .append("<figcaption>The windings found so far; how to wire them follows once the layout is "
+                            + "certain.</figcaption></figure>");
+        } else {
+            sb.append("<p class=\"schematic none\">No schematic yet: no winding found.</p>");
+        }
+        sb.append("<ul class=\"windings\">");
+        for (Winding w : id.windings()) {
+            sb.append("<li>").append(w.halfWinding() ? "half-winding " : "winding ")
+                    .append(Html.escape(w.ends().get(0) + " \u2013 " + w.ends().get(1)))
+                    .append(w.tap() == null ? "" : ", centre tap " + Html.escape(w.tap())).append(": ")
+                    .append(Html.escape(LeadsTextReport.ohm(w.resistanceOhm()))).append("</li>");
+        }
+        if (id.windings().isEmpty()) {
+            sb.append("<li>no winding yet</li>");
+        }
+        sb.append("</ul><ul class=\"findings\">");
+        for (Finding f : id.findings()) {
+            Status st = status(f.severity());
+            sb.append("<li class=\"").append(st.name().toLowerCase(Locale.ROOT)).append("\"><span aria-hidden=\"true\">")
+                    .append(st.symbol()).append("</span> ").append(Html.escape(f.code().code() + ": " + f.message()))
+                    .append("</li>");
+        }
+        return sb.append("</ul></section>").toString();
     }
 
     private static void verdict(HtmlReport.Builder b, Identification id) {

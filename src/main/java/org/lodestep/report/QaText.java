@@ -64,6 +64,37 @@ public final class QaText {
         return b.toString();
     }
 
+    /**
+     * Why a check did not pass, in one line: which check, the value judged against the limit it crossed, and by how
+     * much ("phase resistance A: 2.31 ohm, above the upper limit 2.09 ohm by 0.22 ohm (10.5 %)"); for a value not
+     * measured, the check's note.
+     */
+    public static String reason(CheckResult c) {
+        String p = c.parameter();
+        String what = p.replace('_', ' ') + (c.label().isEmpty() ? "" : " " + QaFormat.visible(c.label()));
+        String unit = QaFormat.unit(p, c.limit().unit());
+        if (Double.isNaN(c.judged())) {
+            return what + ": not measured" + (c.note().isEmpty() ? "" : " (" + c.note() + ")");
+        }
+        if (Double.isInfinite(c.judged())) {
+            return what + ": above the tester's range" + (c.note().isEmpty() ? "" : "; " + c.note());
+        }
+        double limit = c.limit().nearest(c.judged());
+        double margin = c.limit().margin(c.judged());
+        boolean upper = c.limit().hasUpper() && limit == c.limit().upper();
+        String side = upper ? "upper" : "lower";
+        String value = QaFormat.value(p, c.judged()) + " " + unit;
+        String lim = QaFormat.value(p, limit) + " " + unit;
+        // a share of a limit that is itself a percentage reads as nonsense ("5 % by 13 % (269 %)"): left out there
+        String by = QaFormat.value(p, Math.abs(margin)) + " " + unit + (Double.isNaN(c.limit().marginFraction(
+                c.judged())) || unit.equals("%") ? ""
+                : " (" + QaFormat.pct(100 * Math.abs(c.limit().marginFraction(c.judged()))) + ")");
+        String line = margin < 0
+                ? what + ": " + value + ", " + (upper ? "above" : "below") + " the " + side + " limit " + lim + " by " + by
+                : what + ": " + value + ", within the " + side + " limit " + lim + " by " + by;
+        return line + (c.note().isEmpty() ? "" : "; " + c.note());
+    }
+
     /** The running tally printed after each motor in lot mode. */
     public static String tally(Tally t) {
         return String.format(Locale.ROOT, "tally: %d tested, %d PASS, %d FAIL, %d INCOMPLETE", t.tested(), t.passed(),

@@ -88,7 +88,7 @@ public final class ResonanceText {
     }
 
     /** The synchronism verdict: the first thing a sweep's text says. */
-    static void stall(PrintWriter out, Stall s, RateUnits u) {
+    public static void stall(PrintWriter out, Stall s, RateUnits u) {
         if (!s.lostSynchronism()) {
             out.println((s.evidence().startsWith("not judged") ? "Synchronism: " : "Synchronism: kept; ")
                     + s.evidence() + ".");
@@ -207,13 +207,18 @@ public final class ResonanceText {
     }
 
     static String className(ResonanceBand b) {
-        if (b.bandClass() == BandClass.LOW_SPEED_RESONANCE) {
-            return b.subharmonic() == 1 ? "low-speed resonance f_n" : "low-speed resonance f_n/" + b.subharmonic();
+        return className(b.bandClass(), b.subharmonic());
+    }
+
+    /** A band's kind in words ("low-speed resonance f_n/2"). */
+    public static String className(BandClass c, int subharmonic) {
+        if (c == BandClass.LOW_SPEED_RESONANCE) {
+            return subharmonic == 1 ? "low-speed resonance f_n" : "low-speed resonance f_n/" + subharmonic;
         }
-        if (b.bandClass() == BandClass.PARAMETRIC_RESONANCE) {
-            return b.subharmonic() == 1 ? "parametric resonance 2f_n" : "parametric resonance 2f_n/" + b.subharmonic();
+        if (c == BandClass.PARAMETRIC_RESONANCE) {
+            return subharmonic == 1 ? "parametric resonance 2f_n" : "parametric resonance 2f_n/" + subharmonic;
         }
-        return b.bandClass() == BandClass.MID_BAND_INSTABILITY ? "mid-band instability" : "unclassified";
+        return c == BandClass.MID_BAND_INSTABILITY ? "mid-band instability" : "unclassified";
     }
 
     private static String range(double a, double b) {

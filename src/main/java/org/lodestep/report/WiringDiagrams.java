@@ -118,6 +118,28 @@ public final class WiringDiagrams {
                     !w.halvesMeasured().get(1))};
     }
 
+    /**
+     * The windings the readings have found so far, before the layout is certain: each a coil with its ends and tap,
+     * wired to nothing yet; the phase names are provisional (alternating, in the order the windings were found).
+     *
+     * @throws IllegalArgumentException when there is no winding yet
+     */
+    public static WiringDiagram soFar(Identification id) {
+        if (id.windings().isEmpty()) {
+            throw new IllegalArgumentException("no winding found yet: nothing to draw");
+        }
+        WiringDiagram.Builder b = WiringDiagram.builder("Windings found so far (phases provisional)");
+        Set<String> leads = new LinkedHashSet<>();
+        List<Winding> ws = id.windings();
+        for (int i = 0; i < ws.size(); i++) {
+            Winding w = ws.get(i);
+            b.coil(i % 2 == 0 ? "A" : "B", w.ends().get(0), w.ends().get(1), w.tap()).values(values(w));
+            leads.addAll(w.leads());
+        }
+        leads.forEach(b::pending);
+        return b.build();
+    }
+
     /** A heading such as "Bipolar series, 6-lead". */
     static String title(Topology t, String connectionName) {
         String n = connectionName.replace('-', ' ');

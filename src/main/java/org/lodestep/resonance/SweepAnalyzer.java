@@ -4,6 +4,8 @@ import java.util.ArrayList;
 import java.util.List;
 import java.util.Map;
 import java.util.TreeMap;
+import java.util.concurrent.ForkJoinPool;
+import java.util.concurrent.ForkJoinTask;
 
 import org.lodestep.signal.OrderTracking;
 import org.lodestep.signal.SegmentSpectra;
@@ -27,6 +29,8 @@ public final class SweepAnalyzer {
     static final double MIN_ELECTRICAL_BINS = 4;
     /** Pulse thresholds are set from the first second of the pulse channel. */
     private static final double PULSE_PROBE_S = 1.0;
+    /** Blocks from this many frames on run the synchronism check beside the spectra (smaller: not worth a hand-off). */
+    private static final int BESIDE_MIN_FRAMES = 4096;
 
     private final SweepSettings settings;
     private final double sampleRateHz;
@@ -125,17 +129,30 @@ public final class SweepAnalyzer {
         if (stepsBuffer.length < len) {
             stepsBuffer = new double[len];
         }
-        if (law != null) {
-            for (int i = 0; i < len; i++) {
-                stepsBuffer[i] = law.fullStepsAt((fed + i) / sampleRateHz);
-            }
-        } else {
-            pulses.feed(pulseLevels, off, len);
+        long first = fed;
+        if (law == null) {
+            pulses.feed(pulseLevels, off, len); // before the spectra: a segment's rate comes from its pulses
             pulsePhase.feed(pulseLevels, off, len, stepsBuffer, 0);
         }
         fed += len;
+        // The step counts of a programmed sweep and the synchronism check need nothing from the spectra: they run
+        // on a second core while this thread frames and transforms. The detector sees the blocks one after another,
+        // in order, whichever thread runs it, so its results do not change.
+        Runnable beside = () -> {
+            if (law != null) {
+                law.fullStepsAt(first, sampleRateHz, stepsBuffer, len);
+            }
+            sync.feed(x, shifted(off, len), off, len);
+        };
+        ForkJoinTask<?> task = len >= BESIDE_MIN_FRAMES && Runtime.getRuntime().availableProcessors() > 1
+                ? ForkJoinPool.commonPool().submit(beside) : null;
+        if (task == null) {
+            beside.run();
+        }
         framer.feed(x, off, len);
-        sync.feed(x, shifted(off, len), off, len);
+        if (task != null) {
+            task.join(); // runs it here if no pool thread took it yet
+        }
     }
 
     /** The step counts laid out at the same offset as the samples they belong to. */
@@ -233,13 +250,8 @@ public final class SweepAnalyzer {
                     + (law != null ? "the sweep law (" + law.durationS() + " s) does not overlap the capture"
                     : "the step-pulse channel has fewer than two rising edges per segment"));
         }
-        List<ResponsePoint> points = new ArrayList<>();
         List<RateBin> binList = new ArrayList<>(bins.values());
-        for (RateBin b : binList) {
-            double rms = Math.sqrt(b.sumMeanSquare / b.count);
-            points.add(new ResponsePoint(b.sumRate / b.count, rms, 20 * Math.log10(Math.max(rms, Double.MIN_NORMAL)),
-                    b.order(0), b.order(1), b.order(2), b.order(3), b.count, Double.NaN, Double.NaN));
-        }
+        List<ResponsePoint> points = points(binList);
         double[] rates = new double[points.size()];
         double[] levels = new double[points.size()];
         for (int i = 0; i < rates.length; i++) {
@@ -284,6 +296,24 @@ public final class SweepAnalyzer {
         return new SweepResult(points, bands, fn, source, law != null ? "law" : "pulses",
                 welch.spectrum(SpectrumScaling.DENSITY), spectrogram, framer.segmentCount(), outside,
                 fed / sampleRateHz, kind, stall, watch, CurrentBands.note(kind));
+    }
+
+    /**
+     * The response curve of the segments fed so far, by rising step rate: what a front end draws while a sweep is
+     * still streaming. The points of the rate bins still filling may change with the next segments.
+     */
+    public List<ResponsePoint> responseSoFar() {
+        return points(new ArrayList<>(bins.values()));
+    }
+
+    private static List<ResponsePoint> points(List<RateBin> binList) {
+        List<ResponsePoint> points = new ArrayList<>(binList.size());
+        for (RateBin b : binList) {
+            double rms = Math.sqrt(b.sumMeanSquare / b.count);
+            points.add(new ResponsePoint(b.sumRate / b.count, rms, 20 * Math.log10(Math.max(rms, Double.MIN_NORMAL)),
+                    b.order(0), b.order(1), b.order(2), b.order(3), b.count, Double.NaN, Double.NaN));
+        }
+        return points;
     }
 
     private List<ResonanceBand> vibrationBands(List<ResponsePoint> points, List<RateBin> binList, double[] rates,

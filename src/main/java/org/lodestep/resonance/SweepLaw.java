@@ -58,6 +58,25 @@ public record SweepLaw(SweepShape shape, double startFullStepsPerS, double endFu
         return startFullStepsPerS * durationS / q * Math.expm1(q * timeS / durationS);
     }
 
+    /**
+     * {@link #fullStepsAt} at t = (first + i) / f_s for i = 0 ... n-1, into {@code out[0 ... n-1]}: the same values
+     * bit for bit, with the sweep's constants worked out once rather than per sample.
+     */
+    void fullStepsAt(long firstSample, double sampleRateHz, double[] out, int n) {
+        if (shape == SweepShape.LINEAR) {
+            for (int i = 0; i < n; i++) {
+                out[i] = fullStepsAt((firstSample + i) / sampleRateHz);
+            }
+            return;
+        }
+        double q = Math.log(endFullStepsPerS / startFullStepsPerS);
+        double scale = startFullStepsPerS * durationS / q;
+        for (int i = 0; i < n; i++) {
+            double timeS = (firstSample + i) / sampleRateHz;
+            out[i] = timeS >= 0 && timeS <= durationS ? scale * Math.expm1(q * timeS / durationS) : Double.NaN;
+        }
+    }
+
     /** Rate of change of the commanded rate at time t, in full steps/s² (the sweep's acceleration). */
     public double accelerationFullStepsPerS2At(double timeS) {
         double r = rateFullStepsPerSAt(timeS);

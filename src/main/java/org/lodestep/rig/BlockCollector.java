@@ -105,6 +105,25 @@ final class BlockCollector {
         }
     }
 
+    /** Blocks held without a gap from the first: those a listener may hear in order. */
+    int contiguous() {
+        return lowestMissing;
+    }
+
+    /** One held block's samples in the channels' units, [channel][frame]. */
+    double[][] block(int seq) {
+        short[] v = got[seq];
+        int nc = spec.channels().size();
+        int n = v.length / nc;
+        double[][] out = new double[nc][n];
+        for (int i = 0; i < n; i++) {
+            for (int c = 0; c < nc; c++) {
+                out[c][i] = v[i * nc + c] * spec.lsb()[c];
+            }
+        }
+        return out;
+    }
+
     /** The samples in the channels' units, [channel][frame]; only when {@link #complete()}. */
     double[][] samples() {
         if (!complete()) {

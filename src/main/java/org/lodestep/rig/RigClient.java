@@ -2,6 +2,7 @@ package org.lodestep.rig;
 
 import org.lodestep.drive.DriveMode;
 
+import org.lodestep.sample.Channel;
 import org.lodestep.wiring.InsulationReading;
 
 import java.io.Closeable;
@@ -43,6 +44,28 @@ public final class RigClient implements Closeable {
         void frames(long received, long total);
 
         Progress NONE = (r, t) -> { };
+    }
+
+    /**
+     * Hears a stream's samples in order while it arrives (a block re-sent after damage holds back the ones after it
+     * until it comes), for a live view; the capture returned at the end is still the only complete record.
+     */
+    public interface Samples {
+        /** The stream's channels and sample rate, before the first samples. */
+        void started(List<Channel> channels, double sampleRateHz);
+
+        /** The next {@code samples[c].length} frames of every channel, in the channels' units. */
+        void frames(double[][] samples);
+
+        Samples NONE = new Samples() {
+            @Override
+            public void started(List<Channel> channels, double sampleRateHz) {
+            }
+
+            @Override
+            public void frames(double[][] samples) {
+            }
+        };
     }
 
     /** Counters of line trouble seen so far. */
@@ -169,11 +192,15 @@ public final class RigClient implements Closeable {
 
     /** A step-rate sweep of the user's driver: channels accel (g), current (A, phase A), step (V). */
     public RigCapture sweep(SweepPlan profile, Progress p) throws RigException {
-        RigCapture c = stream("sweep", "SWEEP from=" + StreamSpec.fmt(profile.fromFullStepsPerS()) + " to="
+        return sweep(profile, p, Samples.NONE);
+    }
+
+    /** As {@link #sweep(SweepPlan, Progress)}, with the samples heard as they arrive. */
+    public RigCapture sweep(SweepPlan profile, Progress p, Samples live) throws RigException {
+        return stream("sweep", "SWEEP from=" + StreamSpec.fmt(profile.fromFullStepsPerS()) + " to="
                 + StreamSpec.fmt(profile.toFullStepsPerS()) + " seconds=" + StreamSpec.fmt(profile.seconds())
                 + " microsteps=" + profile.microsteps() + " rate_hz=" + StreamSpec.fmt(profile.sampleRateHz()),
-                profile.seconds(), p);
-        return c;
+                profile.seconds(), p, live);
     }
 
     /**
@@ -182,12 +209,18 @@ public final class RigClient implements Closeable {
      * current_a and current_b (phase currents, A), step (V).
      */
     public RigCapture sweep(SweepPlan profile, DriveMode drive, double supplyV, Progress p) throws RigException {
+        return sweep(profile, drive, supplyV, p, Samples.NONE);
+    }
+
+    /** As {@link #sweep(SweepPlan, DriveMode, double, Progress)}, with the samples heard as they arrive. */
+    public RigCapture sweep(SweepPlan profile, DriveMode drive, double supplyV, Progress p, Samples live)
+            throws RigException {
         String mode = drive == DriveMode.CONSTANT_VOLTAGE ? "voltage" : "chopper";
         return stream("sweep", "SWEEP from=" + StreamSpec.fmt(profile.fromFullStepsPerS()) + " to="
                 + StreamSpec.fmt(profile.toFullStepsPerS()) + " seconds=" + StreamSpec.fmt(profile.seconds())
                 + " microsteps=" + profile.microsteps() + " rate_hz=" + StreamSpec.fmt(profile.sampleRateHz())
                 + " drive=" + mode + (supplyV > 0 ? " supply_v=" + StreamSpec.fmt(supplyV) : ""),
-                profile.seconds(), p);
+                profile.seconds(), p, live);
     }
 
     /** Tells the rig to switch every output off. */
@@ -318,6 +351,11 @@ public final class RigClient implements Closeable {
     }
 
     private RigCapture stream(String kind, String text, double seconds, Progress progress) throws RigException {
+        return stream(kind, text, seconds, progress, Samples.NONE);
+    }
+
+    private RigCapture stream(String kind, String text, double seconds, Progress progress, Samples live)
+            throws RigException {
         String started = Instant.now().toString();
         long bytes0 = reader.bytesRead();
         // the virtual rig computes a record before it answers; a real one answers at once and streams in real time
@@ -327,8 +365,9 @@ public final class RigClient implements Closeable {
         lastClipped = "";
         lastRevolutions = "";
         BlockCollector blocks = new BlockCollector(spec);
+        live.started(spec.channels(), spec.rateHz());
         try {
-            receive(kind, text, header.tag(), blocks, progress);
+            receive(kind, text, header.tag(), blocks, progress, live);
         } catch (EOFException e) {
             throw failSafe(transport.address() + ": the line closed during the " + kind + " stream after "
                     + blocks.have() + " of " + blocks.blocks() + " blocks; capture discarded", e);
@@ -346,8 +385,9 @@ public final class RigClient implements Closeable {
     }
 
     /** Receives blocks until every one is present, asking again for damaged or lost ones. */
-    private void receive(String kind, String text, int tag, BlockCollector blocks, Progress progress)
+    private void receive(String kind, String text, int tag, BlockCollector blocks, Progress progress, Samples live)
             throws IOException, RigException {
+        int heard = 0;
         Map<Integer, Integer> resendTags = new HashMap<>();
         int waitMs = Math.min(settings.replyTimeoutMs(), settings.keepaliveMs());
         int idleMs = 0;
@@ -400,6 +440,9 @@ public final class RigClient implements Closeable {
                 highest = Math.max(highest, b.seq());
                 if (blocks.accept(b)) {
                     progress.frames(blocks.framesReceived(), blocks.totalFrames());
+                    for (; heard < blocks.contiguous(); heard++) {
+                        live.frames(blocks.block(heard));
+                    }
                 }
                 // a gap before this block means damaged or lost blocks: ask for each once now
                 for (int s : blocks.unrequestedBefore(b.seq())) {

@@ -21,6 +21,7 @@ final class Desk {
     final Station.Settings settings;
     final Access access;
     final Tasks tasks;
+    final RigArming arming = new RigArming();
 
     Desk(Station.Settings settings, Access access, Tasks tasks) {
         this.settings = settings;
@@ -41,6 +42,15 @@ final class Desk {
         r.get("/", ctx -> ctx.html(page("Home", "", home())));
         r.get("/assets/station.css", ctx -> asset(ctx, "station.css", "text/css"));
         r.get("/assets/station.js", ctx -> asset(ctx, "station.js", "text/javascript"));
+        r.post("/api/rig/arm", ctx -> {
+            RigArming.Action action = switch (String.valueOf(ctx.formParam("action"))) {
+                case "leads" -> RigArming.Action.LEADS;
+                case "motor" -> RigArming.Action.MOTOR;
+                default -> throw new org.lodestep.workflow.SettingsException("action: expected leads or motor");
+            };
+            json(ctx, Map.of("arm", arming.arm(action, ctx.formParam("tab"), System.currentTimeMillis()),
+                    "valid_s", RigArming.VALID_MS / 1000));
+        });
         r.sse("/api/tasks/{id}/events", client -> {
             client.keepAlive();
             Tasks.Task t = tasks.find(client.ctx().pathParam("id")).orElse(null);
@@ -86,14 +96,17 @@ final class Desk {
                 + "<code>" + Layout.esc(settings.db() == null ? RecordStores.DEFAULT_FILE : settings.db())
                 + "</code>.</p><ul class=\"cards\">"
                 + "<li><a href=\"/leads\"><strong>Leads</strong></a><span>Guided probe: the next lead pair in large "
-                + "type, type the meter's reading, Enter; then the windings, findings and wiring guide.</span></li>"
-                + "<li><a href=\"/motor\"><strong>Motor</strong></a><span>Upload step responses and a back-EMF capture:"
-                + " the motor card.</span></li>"
+                + "type, type the meter's reading, Enter; the schematic fills in as you go; or let the rig measure. "
+                + "Then the windings, findings and wiring guide.</span></li>"
+                + "<li><a href=\"/motor\"><strong>Motor</strong></a><span>Upload step responses and a back-EMF capture,"
+                + " or measure them on the rig: the motor card.</span></li>"
                 + "<li><a href=\"/qa\"><strong>QA station</strong></a><span>Incoming inspection: pick a part spec, scan "
-                + "serial numbers, read the verdict, print a certificate.</span></li>"
+                + "serial numbers (or type the meter's readings), read the verdict and why, print a certificate."
+                + "</span></li>"
                 + "<li><a href=\"/records\"><strong>Records</strong></a><span>Lot summaries: yield, capability, control "
                 + "charts; filter, export, certificates.</span></li>"
-                + "<li><a href=\"/sweep\"><strong>Sweep</strong></a><span>Step-rate sweep through the rig with live "
-                + "progress, then the resonance bands and the rates to avoid.</span></li></ul>";
+                + "<li><a href=\"/sweep\"><strong>Sweep</strong></a><span>Step-rate sweep through the rig, the "
+                + "response curve drawn as it streams, then the resonance bands, the rates to avoid and a drive "
+                + "profile across them.</span></li></ul>";
     }
 }

@@ -7,7 +7,13 @@ import java.util.Map;
 import java.util.OptionalDouble;
 import java.util.concurrent.ConcurrentHashMap;
 
+import org.lodestep.report.IdentifyProgressText;
 import org.lodestep.report.LeadsHtml;
+import org.lodestep.report.html.SafetyNote;
+import org.lodestep.rig.RigClient;
+import org.lodestep.rig.RigInfo;
+import org.lodestep.workflow.LeadsOnRig;
+import org.lodestep.wiring.LeadPair;
 import org.lodestep.report.LeadsTextReport;
 import org.lodestep.report.html.Status;
 import org.lodestep.workflow.LeadsProbe;
@@ -30,6 +36,7 @@ final class LeadsPages {
     private final Desk desk;
     private final Map<String, LeadsProbeRun> probes = new ConcurrentHashMap<>();
     private final List<String> order = new ArrayList<>();
+    private final Map<String, String> rigReports = new ConcurrentHashMap<>();
 
     LeadsPages(Desk desk) {
         this.desk = desk;
@@ -42,6 +49,70 @@ final class LeadsPages {
         r.get("/leads/probes/{id}/panel", ctx -> ctx.html(panel(probe(ctx))));
         r.post("/api/leads/probes/{id}/answer", this::answer);
         r.get("/leads/probes/{id}/report.html", this::report);
+        r.post("/api/leads/rig", this::onRig);
+        r.get("/leads/rig/{id}", ctx -> {
+            String html = rigReports.get(ctx.pathParam("id"));
+            if (html == null) {
+                throw new NotFoundResponse("no such rig identification (the station keeps the last " + KEEP + ")");
+            }
+            ctx.html(html);
+        });
+    }
+
+    /**
+     * The rig measures the pairs the probe session asks for ({@link LeadsOnRig}), once this page's arming is taken;
+     * each reading is an event, the rig switches its outputs off when the session ends or the line drops.
+     */
+    private void onRig(Context ctx) {
+        desk.arming.take(ctx.formParam("arm"), RigArming.Action.LEADS, ctx.formParam("tab"), System.currentTimeMillis());
+        String address = desk.settings.rig();
+        Tasks.Task task = desk.tasks.submit(t -> {
+            LeadsOnRig.Result r;
+            try (RigClient c = RigClient.open(address)) {
+                r = LeadsOnRig.run(c, LeadsSettings.DEFAULT, new LeadsOnRig.Listener() {
+                    @Override
+                    public void step(String step) {
+                        t.step(step);
+                    }
+
+                    @Override
+                    public void advanced(long done, long total) {
+                        t.advanced(done, total);
+                    }
+
+                    @Override
+                    public void note(String message) {
+                        t.note(message);
+                    }
+
+                    @Override
+                    public void connected(RigInfo info, List<String> leads, int allPairs) {
+                        t.note(IdentifyProgressText.leadsConnected(address, info, leads.size(), allPairs));
+                    }
+
+                    @Override
+                    public void measured(LeadPair pair, OptionalDouble ohms) {
+                        t.add("reading", Map.of("text", IdentifyProgressText.leadsMeasured(pair, ohms).strip()));
+                    }
+                });
+            }
+            String id = Access.random();
+            if (rigReports.size() >= KEEP) {
+                rigReports.clear();
+            }
+            String title = r.motorSerial() == null ? "Motor on the rig" : r.motorSerial();
+            rigReports.put(id, LeadsHtml.report(title, address, r.identification()).html());
+            Identification idn = r.identification();
+            Status st = idn.hasError() ? Status.FAIL : idn.determined() ? Status.PASS : Status.WARN;
+            String html = "<section class=\"verdict " + (st == Status.PASS ? "pass" : st == Status.FAIL ? "fail"
+                    : "incomplete") + "\"><p class=\"big\">" + Layout.symbol(st) + " " + Layout.esc(idn.topology().label())
+                    + "</p><p>" + Layout.esc(IdentifyProgressText.leadsDone(r.readings(), r.allPairs())) + " Outputs "
+                    + "off.</p></section><p class=\"actions\"><a href=\"/leads/rig/" + id + "\">Wiring guide and report "
+                    + "(print view)</a></p><iframe class=\"report\" title=\"Lead identification on the rig\" src=\""
+                    + "/leads/rig/" + id + "\"></iframe>";
+            return Map.of("html", html, "topology", idn.topology().label());
+        });
+        Desk.json(ctx, Map.of("task", task.id));
     }
 
     private LeadsProbeRun probe(Context ctx) {
@@ -64,7 +135,22 @@ final class LeadsPages {
                 + "spellcheck=\"false\" autofocus>"
                 + "<label for=\"ambient\">Winding temperature, \u00b0C (optional)</label><input id=\"ambient\" "
                 + "name=\"ambient_c\" inputmode=\"decimal\"></fieldset>"
-                + "<button type=\"submit\" class=\"primary\">Start probing</button></form>";
+                + "<button type=\"submit\" class=\"primary\">Start probing</button></form>"
+                + rigSection();
+    }
+
+    /** Or let the rig measure: its caution, the arming, the start. */
+    private String rigSection() {
+        return "<section class=\"rig-action\" data-rig-action=\"leads\" data-url=\"/api/leads/rig\"><h2>Or let the rig "
+                + "measure</h2>" + Layout.caution(SafetyNote.ENERGISED_COILS.title(), List.of(
+                "The rig passes a measuring current through each lead pair of the motor clipped to it (rig "
+                        + desk.settings.rig() + ").", SafetyNote.ENERGISED_COILS.text()))
+                + "<div class=\"arm\"><button type=\"button\" class=\"arm-button\">Arm the rig for one session"
+                + "</button> <span class=\"arm-state\" role=\"status\" aria-live=\"assertive\">Not armed: the rig will "
+                + "not energise anything.</span></div><button type=\"button\" class=\"primary fire\" disabled>Measure "
+                + "the leads on the rig</button>" + Layout.progressArea("leads-rig-progress")
+                + "<ol class=\"rig-readings\" aria-label=\"Readings so far\"></ol><div class=\"rig-result\" "
+                + "aria-live=\"polite\"></div></section>";
     }
 
     private void start(Context ctx) throws Exception {
@@ -166,6 +252,11 @@ final class LeadsPages {
             sb.append("<p class=\"notice\" role=\"status\">").append(Layout.esc(p.notice())).append("</p>");
         }
         List<LeadsProbeRun.Entry> entries = p.entries();
+        Identification soFar = p.soFar();
+        boolean live = q != null && soFar != null && !entries.isEmpty();
+        if (live) {
+            sb.append("<div class=\"live-leads\">").append(LeadsHtml.soFar(soFar));
+        }
         if (!entries.isEmpty()) {
             sb.append("<table class=\"rows\"><caption>Readings so far, newest first</caption><thead><tr><th scope=\"col\">"
                     + "#</th><th scope=\"col\">Pair</th><th scope=\"col\">Reading</th></tr></thead><tbody>");
@@ -177,6 +268,9 @@ final class LeadsPages {
                                 : "OL (open)").append("</td></tr>");
             }
             sb.append("</tbody></table>");
+        }
+        if (live) {
+            sb.append("</div>");
         }
         return sb.toString();
     }

@@ -8,6 +8,7 @@ import java.util.concurrent.SynchronousQueue;
 import org.lodestep.workflow.LeadsProbe;
 import org.lodestep.workflow.Progress;
 import org.lodestep.workflow.SettingsException;
+import org.lodestep.wiring.Identification;
 
 /**
  * One guided probe session at the Leads page: {@link LeadsProbe} runs on a thread of its own (it waits for a person
@@ -27,6 +28,7 @@ final class LeadsProbeRun implements LeadsProbe.Meter {
     private LeadsProbe.Result result;
     private String failure;
     private String notice = "";
+    private Identification soFar;
     private long version;
     private final Thread thread;
 
@@ -95,6 +97,21 @@ final class LeadsProbeRun implements LeadsProbe.Meter {
     @Override
     public synchronized void refused(String reason) {
         notice = reason;
+    }
+
+    @Override
+    public boolean followsIdentification() {
+        return true;
+    }
+
+    @Override
+    public synchronized void soFar(Identification identification) {
+        soFar = identification;
+    }
+
+    /** The identification from the readings so far, or null before the first. */
+    synchronized Identification soFar() {
+        return soFar;
     }
 
     /** Hands the answer to the session and waits (briefly) until it has asked the next question or finished. */

@@ -7,12 +7,18 @@ import java.util.List;
 import java.util.Map;
 import java.util.concurrent.ConcurrentHashMap;
 
+import org.lodestep.report.IdentifyProgressText;
 import org.lodestep.report.MotorCardText;
 import org.lodestep.report.MotorHtml;
 import org.lodestep.report.MotorPhrasing;
 import org.lodestep.report.html.SafetyNote;
 import org.lodestep.workflow.MotorCardSettings;
 import org.lodestep.workflow.MotorFromFiles;
+import org.lodestep.workflow.MotorOnRig;
+import org.lodestep.motor.OrientedLeads;
+import org.lodestep.motor.WindingInput;
+import org.lodestep.rig.RigClient;
+import org.lodestep.rig.RigInfo;
 import org.lodestep.workflow.SettingsException;
 
 import io.javalin.config.RoutesConfig;
@@ -37,6 +43,7 @@ final class MotorPages {
     void routes(RoutesConfig r) {
         r.get("/motor", ctx -> ctx.html(desk.page("Motor", "/motor", form())));
         r.post("/api/motor", this::identify);
+        r.post("/api/motor/rig", this::onRig);
         r.get("/motor/reports/{id}", ctx -> {
             String html = reports.get(ctx.pathParam("id"));
             if (html == null) {
@@ -63,7 +70,105 @@ final class MotorPages {
                 + field("revolutions", "Revolutions turned") + field("phase_current_a", "Rated phase current, A")
                 + field("supply_v", "Drive supply, V") + "</fieldset>"
                 + "<button type=\"submit\" class=\"primary\">Identify the motor</button></form>"
-                + Layout.progressArea("motor-progress") + "<div id=\"motor-result\" aria-live=\"polite\"></div>";
+                + Layout.progressArea("motor-progress") + "<div id=\"motor-result\" aria-live=\"polite\"></div>"
+                + rigSection();
+    }
+
+    /** Or measure on the rig: resistances, step responses, a hand-turned back-EMF, after the caution and arming. */
+    private String rigSection() {
+        return "<section class=\"rig-action\" data-rig-action=\"motor\" data-url=\"/api/motor/rig\"><h2>Or measure on "
+                + "the rig</h2>" + Layout.caution(SafetyNote.ENERGISED_COILS.title(), List.of("The rig ("
+                + desk.settings.rig() + ") measures the lead-pair resistances, then drives a voltage step through each "
+                + "coil (the caution above applies), then asks you to turn the shaft by hand while it records the "
+                + "back-EMF.", "Turning the shaft generates voltage at the leads, more the faster it turns: keep them "
+                + "apart and off any driver while you turn it."))
+                + "<form class=\"stack rig-fields\"><fieldset class=\"grid\"><legend>Where the rig does not say</legend>"
+                + field("rig_revolutions", "Revolutions you will turn") + field("rig_phase_current_a",
+                "Rated phase current, A") + field("rig_supply_v", "Drive supply, V") + "</fieldset></form>"
+                + "<div class=\"arm\"><button type=\"button\" class=\"arm-button\">Arm the rig for one motor</button> "
+                + "<span class=\"arm-state\" role=\"status\" aria-live=\"assertive\">Not armed: the rig will not energise "
+                + "anything.</span></div><button type=\"button\" class=\"primary fire\" disabled>Measure the motor on the "
+                + "rig</button>" + Layout.progressArea("motor-rig-progress") + "<ol class=\"rig-readings\" aria-label=\""
+                + "Stages\"></ol><div class=\"rig-result\" aria-live=\"polite\"></div></section>";
+    }
+
+    /** {@link MotorOnRig} through the station's rig once this page's arming is taken; outputs off at the end. */
+    private void onRig(Context ctx) {
+        MotorCardSettings card = new MotorCardSettings(null,
+                boxed(ctx.formParam("rig_phase_current_a"), "phase current", "A"),
+                boxed(ctx.formParam("rig_supply_v"), "supply voltage", "V"), null);
+        MotorOnRig.Settings s = new MotorOnRig.Settings(boxed(ctx.formParam("rig_revolutions"), "revolutions", ""),
+                card);
+        desk.arming.take(ctx.formParam("arm"), RigArming.Action.MOTOR, ctx.formParam("tab"), System.currentTimeMillis());
+        String address = desk.settings.rig();
+        Tasks.Task task = desk.tasks.submit(t -> {
+            MotorOnRig.Result r;
+            try (RigClient c = RigClient.open(address)) {
+                r = MotorOnRig.run(c, s, new StageEvents(t));
+            }
+            String id = Access.random();
+            if (reports.size() >= KEEP) {
+                reports.clear();
+            }
+            reports.put(id, MotorHtml.report("Motor card (rig)", r.card(), List.of(), r.emf(), MotorPhrasing.PLAIN).html());
+            String html = "<h3>Motor card</h3><p class=\"actions\"><a href=\"/motor/reports/" + id + "\">Motor report "
+                    + "(print view)</a></p><pre class=\"text\">" + Layout.esc(MotorCardText.render(r.card()))
+                    + "</pre>";
+            return Map.of("html", html, "report", "/motor/reports/" + id);
+        });
+        Desk.json(ctx, Map.of("task", task.id));
+    }
+
+    /** Each stage of the rig sequence as an event the page lists, in the command line's words. */
+    private record StageEvents(Tasks.Task t) implements MotorOnRig.Listener {
+        @Override
+        public void step(String step) {
+            t.step(step);
+        }
+
+        @Override
+        public void advanced(long done, long total) {
+            t.advanced(done, total);
+        }
+
+        @Override
+        public void note(String message) {
+            t.note(message);
+        }
+
+        private void stage(String text) {
+            t.add("reading", Map.of("text", text.strip()));
+        }
+
+        @Override
+        public void connected(RigInfo info, List<String> leads) {
+            stage(IdentifyProgressText.motorConnected(info, leads));
+        }
+
+        @Override
+        public void measuringResistances(int pairs) {
+            stage(IdentifyProgressText.motorResistances(pairs));
+        }
+
+        @Override
+        public void windingsFound(WindingInput windings) {
+            stage(IdentifyProgressText.motorWindings(windings));
+        }
+
+        @Override
+        public void stepResponse(int k, int n, double volts, OrientedLeads coil) {
+            stage(IdentifyProgressText.motorStep(k, n, volts, coil));
+        }
+
+        @Override
+        public void turnTheShaft(int coils, double seconds) {
+            t.add("attention", Map.of("text", IdentifyProgressText.motorTurnTheShaft(coils, seconds).strip()));
+        }
+
+        @Override
+        public void outputsOff() {
+            stage(IdentifyProgressText.motorOutputsOff());
+        }
     }
 
     private static String field(String name, String label) {

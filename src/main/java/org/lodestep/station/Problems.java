@@ -36,6 +36,9 @@ final class Problems {
         if (e instanceof InputFormatException) {
             return new Problem("input", e.getMessage(), HttpStatus.BAD_REQUEST);
         }
+        if (e instanceof org.lodestep.drive.PlanningException) { // the command line's "no profile" finding
+            return new Problem("finding", "no profile: " + e.getMessage(), HttpStatus.UNPROCESSABLE_CONTENT);
+        }
         if (e instanceof IllegalArgumentException) { // SettingsException and the records' own checks
             return new Problem("setting", e.getMessage(), HttpStatus.BAD_REQUEST);
         }

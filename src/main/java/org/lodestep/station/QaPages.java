@@ -122,6 +122,8 @@ final class QaPages {
             }
             sb.append("</select>");
         }
+        sb.append("<label class=\"choice\"><input type=\"radio\" name=\"source\" value=\"typed\"> typed at the meter "
+                + "for each motor: phase resistances, inductances, insulation (no rig)</label>");
         sb.append("</fieldset><button type=\"submit\" class=\"primary\">Start the run</button></form>");
         return sb.toString();
     }
@@ -167,6 +169,9 @@ final class QaPages {
             readings = new QaReadingSources(null, dir.resolve("{serial}.csv").toString(), null, null, null, null,
                     null, null, meterLog, null, null, null, null, null, null, null, null);
             sourceText = "capture folder " + dir + (meterLog == null ? "" : ", meter log " + log);
+        } else if ("typed".equals(source)) {
+            readings = QaReadingSources.none(); // each scan brings its own typed values
+            sourceText = "readings typed at the meter";
         } else if ("rig".equals(source)) {
             readings = new QaReadingSources(null, null, null, null, null, null, null, desk.settings.rig(), null,
                     null, null, null, null, null, null, null, null);
@@ -178,7 +183,7 @@ final class QaPages {
         QaCheck.Settings settings = new QaCheck.Settings(spec, ctx.formParam("lot"), readings, ambient,
                 ctx.formParam("operator"), "bench station", desk.settings.toolVersion(), null);
         boolean rigInsulation = readings.rigAddress() != null && settings.insulationTest();
-        return new QaRun(Access.random(), settings, specName, sourceText, rigInsulation);
+        return new QaRun(Access.random(), settings, specName, sourceText, rigInsulation, "typed".equals(source));
     }
 
     // ---- the run page ----
@@ -186,7 +191,7 @@ final class QaPages {
     private String runPage(QaRun run) {
         PartSpec spec = run.settings.spec();
         StringBuilder sb = new StringBuilder("<div data-page=\"qa-run\" data-run=\"").append(Layout.esc(run.id))
-                .append("\"><h1 class=\"sr-only\">QA run</h1><p class=\"context\">Part <strong>")
+                .append(run.typed ? "\" data-typed=\"true" : "").append("\"><h1 class=\"sr-only\">QA run</h1><p class=\"context\">Part <strong>")
                 .append(Layout.esc(spec.partNumber())).append("</strong> rev ").append(Layout.esc(spec.revision()))
                 .append(" \u00b7 spec ").append(Layout.esc(run.specName)).append(" v").append(spec.specVersion())
                 .append(run.settings.lot().isEmpty() ? "" : " \u00b7 lot <strong>" + Layout.esc(run.settings.lot())
@@ -200,14 +205,69 @@ final class QaPages {
                     .append(" V insulation test for the next motor</button> <span id=\"arm-state\" role=\"status\" "
                             + "aria-live=\"assertive\">Not armed: the rig will not apply the test voltage.</span></div>");
         }
-        sb.append("<form id=\"scan-form\" class=\"scan\" autocomplete=\"off\"><label for=\"serial\">Scan or type the "
-                        + "serial number, then Enter</label><input id=\"serial\" name=\"serial\" autofocus "
-                        + "spellcheck=\"false\" maxlength=\"80\" required><button type=\"submit\">Check</button></form>")
+        sb.append("<form id=\"scan-form\" class=\"scan\" autocomplete=\"off\"").append(run.typed ? " data-typed=\"true\""
+                        : "").append("><label for=\"serial\">Scan or type the serial number, then Enter")
+                .append(run.typed ? ", each reading, Enter (the last Enter records)" : "")
+                .append("</label><input id=\"serial\" name=\"serial\" autofocus spellcheck=\"false\" maxlength=\"80\" "
+                        + "required>")
+                .append(run.typed ? typedFields(spec) : "")
+                .append("<button type=\"submit\">Check</button></form>")
                 .append(Layout.progressArea("scan-progress"))
                 // one live region that stays in the page, so a screen reader speaks each new verdict
                 .append("<p id=\"announce\" class=\"sr-only\" role=\"status\" aria-live=\"assertive\"></p>")
                 .append("<div id=\"panel\">").append(panel(run)).append("</div></div>");
         return sb.toString();
+    }
+
+    /** The meter readings an inspector types per motor, in the meter's units; insulation OL above the range. */
+    private static final String[][] TYPED = {
+        {"phase_a_ohm", "Phase A, \u03a9"}, {"phase_b_ohm", "Phase B, \u03a9"},
+        {"inductance_a_mh", "Inductance A, mH"}, {"inductance_b_mh", "Inductance B, mH"},
+        {"insulation_a_frame_mohm", "Insulation A\u2013frame, M\u03a9"},
+        {"insulation_b_frame_mohm", "Insulation B\u2013frame, M\u03a9"},
+        {"step_angle_deg", "Step angle, \u00b0"}};
+
+    private static String typedFields(PartSpec spec) {
+        StringBuilder sb = new StringBuilder("<fieldset class=\"grid typed\"><legend>Meter readings");
+        if (!Double.isNaN(spec.insulationTestVoltageV())) {
+            sb.append(" (insulation at ").append(Math.round(spec.insulationTestVoltageV())).append(" V DC, OL = over "
+                    + "range)");
+        }
+        sb.append("</legend>");
+        for (String[] f : TYPED) {
+            sb.append("<label>").append(Layout.esc(f[1])).append(" <input id=\"").append(f[0]).append("\" name=\"")
+                    .append(f[0]).append("\" inputmode=\"decimal\" spellcheck=\"false\" maxlength=\"24\"></label>");
+        }
+        return sb.append("</fieldset>").toString();
+    }
+
+    /** The typed readings of one motor as the workflow takes them (meter units; it converts to SI). */
+    private static QaReadingSources typedReadings(Context ctx) {
+        List<Double> phases = pair(ctx, "phase_a_ohm", "phase_b_ohm", "phase resistance", "\u03a9");
+        List<Double> inductances = pair(ctx, "inductance_a_mh", "inductance_b_mh", "inductance", "mH");
+        List<QaReadingSources.TypedInsulation> insulation = new java.util.ArrayList<>();
+        for (String[] f : new String[][] {{"insulation_a_frame_mohm", "A-frame"}, {"insulation_b_frame_mohm",
+            "B-frame"}}) {
+            String t = Forms.optional(ctx.formParam(f[0]));
+            if (t != null) {
+                double mohm = t.equalsIgnoreCase("OL") ? Double.POSITIVE_INFINITY
+                        : Forms.optionalNumber(t, "insulation " + f[1], "M\u03a9 (or OL above the range)");
+                insulation.add(new QaReadingSources.TypedInsulation(f[1], mohm, Double.NaN));
+            }
+        }
+        double step = Forms.optionalNumber(ctx.formParam("step_angle_deg"), "step angle", "\u00b0");
+        return new QaReadingSources(null, null, phases, inductances, insulation, null,
+                Double.isNaN(step) ? null : step, null, null, null, null, null, null, null, null, null, null);
+    }
+
+    /** Phase A then B; B alone is refused, since the list is phase A first. */
+    private static List<Double> pair(Context ctx, String a, String b, String what, String unit) {
+        double va = Forms.optionalNumber(ctx.formParam(a), what + " A", unit);
+        double vb = Forms.optionalNumber(ctx.formParam(b), what + " B", unit);
+        if (Double.isNaN(va) && !Double.isNaN(vb)) {
+            throw new SettingsException(what + ": phase B without phase A; type phase A first");
+        }
+        return Double.isNaN(va) ? List.of() : Double.isNaN(vb) ? List.of(va) : List.of(va, vb);
     }
 
     /** The big verdict of the latest motor, the tally and the motors of the run, newest first. */
@@ -284,9 +344,8 @@ final class QaPages {
             if (!off.isEmpty()) {
                 sb.append("<ul class=\"off\">");
                 for (CheckResult c : off) {
-                    sb.append("<li>").append(badge(c.verdict())).append(' ').append(Layout.esc(c.parameter()))
-                            .append(c.label().isEmpty() ? "" : " " + Layout.esc(c.label()))
-                            .append(c.note() == null || c.note().isEmpty() ? "" : ": " + Layout.esc(c.note()))
+                    // which check, the value against the limit it crossed, by how much
+                    sb.append("<li>").append(badge(c.verdict())).append(' ').append(Layout.esc(QaText.reason(c)))
                             .append("</li>");
                 }
                 sb.append("</ul>");
@@ -321,7 +380,8 @@ final class QaPages {
         boolean armed = run.rigInsulation && run.takeArm(ctx.formParam("arm"), System.currentTimeMillis());
         String sn = serial;
         QaCheck.Settings s = run.settings;
-        QaCheck.Settings perMotor = new QaCheck.Settings(s.spec(), s.lot(), s.readings(), s.ambientC(), s.operator(),
+        QaReadingSources readings = run.typed ? typedReadings(ctx) : s.readings();
+        QaCheck.Settings perMotor = new QaCheck.Settings(s.spec(), s.lot(), readings, s.ambientC(), s.operator(),
                 s.station(), s.toolVersion(), volts -> armed);
         Tasks.Task task = desk.tasks.submit(progress -> check(run, perMotor, sn, progress));
         Desk.json(ctx, Map.of("task", task.id));

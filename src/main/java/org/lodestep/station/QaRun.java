@@ -34,13 +34,17 @@ final class QaRun {
     final String specName;
     final String sourceText;
     final boolean rigInsulation;
+    /** Readings typed per motor at the meter (no rig, no capture files). */
+    final boolean typed;
     private final List<Row> rows = new ArrayList<>();
     private Tally tally = Tally.NONE;
     private String armKey;
     private long armExpiresMs;
 
-    QaRun(String id, QaCheck.Settings settings, String specName, String sourceText, boolean rigInsulation) {
+    QaRun(String id, QaCheck.Settings settings, String specName, String sourceText, boolean rigInsulation,
+          boolean typed) {
         this.id = id;
+        this.typed = typed;
         this.settings = settings;
         this.specName = specName;
         this.sourceText = sourceText;

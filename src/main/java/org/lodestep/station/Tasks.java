@@ -28,7 +28,8 @@ final class Tasks implements AutoCloseable {
     /** What a task does; returns the fields of its {@code done} event. */
     @FunctionalInterface
     interface Work {
-        Map<String, Object> run(Progress progress) throws Exception;
+        /** Runs on the worker; {@code task} is its progress and takes events of the work's own kinds. */
+        Map<String, Object> run(Task task) throws Exception;
     }
 
     /** One task and its events so far. */

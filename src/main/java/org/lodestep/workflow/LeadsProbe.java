@@ -91,6 +91,18 @@ public final class LeadsProbe {
         /** A reading could not be recorded (a lead that is not one of the labels): the reason. */
         default void refused(String reason) {
         }
+
+        /**
+         * Whether this meter shows the identification as it fills in; when true, {@link #soFar} hears it after
+         * each reading or undo (a prompt that only asks need not pay for it).
+         */
+        default boolean followsIdentification() {
+            return false;
+        }
+
+        /** The identification from the readings so far: windings, connections and findings as they settle. */
+        default void soFar(Identification identification) {
+        }
     }
 
     /**
@@ -134,6 +146,9 @@ public final class LeadsProbe {
                 } catch (IllegalArgumentException e) {
                     meter.refused(e.getMessage());
                 }
+            }
+            if (stopped == null && meter.followsIdentification()) {
+                meter.soFar(session.result());
             }
             progress.advanced(session.readingCount(), settings.allPairs());
         }

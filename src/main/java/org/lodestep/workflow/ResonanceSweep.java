@@ -252,6 +252,16 @@ public final class ResonanceSweep {
                 d.spectrogramColumns());
     }
 
+    /**
+     * An analyzer for a capture still arriving whose rate follows {@code law}, set up as {@link #analyse} sets up
+     * the default analysis of channel {@code channel}: what a live response curve is drawn from.
+     */
+    static SweepAnalyzer live(Channel channel, double sampleRateHz, SweepLaw law) {
+        ResponseChannel kind = kind(channel, Settings.defaults());
+        return SweepAnalyzer.programmed(sweepSettings(sampleRateHz, Settings.defaults(), kind), sampleRateHz, law,
+                kind);
+    }
+
     /** The law's rate at each spectrogram column, so the map can be drawn against step rate. */
     private static double[] columnRates(SweepLaw law, SweepResult r) {
         if (law == null || r.spectrogram() == null) {

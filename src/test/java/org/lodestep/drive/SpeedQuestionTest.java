@@ -33,6 +33,16 @@ class SpeedQuestionTest {
     }
 
     @Test
+    void aLoadWithNoSteadyTorqueHasNoHighestRateRatherThanASearchCap() {
+        // with no torque at constant speed, (1 − m)·T_po ≥ 0 holds wherever the model's torque is positive: at every
+        // rate (it only tends to zero as 1/ω, PhasorTorque), so no finite highest rate exists
+        TorqueCurve c = TorqueCurves.of(MOTOR, DRIVE);
+        SpeedAnswer a = SpeedQuestion.answer(c, new Load(1e-5, 0, 0, 40), 500, 0.3, UNITS, false);
+        assertEquals(SpeedAnswer.Verdict.REACHABLE, a.verdict());
+        assertTrue(Double.isInfinite(a.maxRateWithMarginFullStepsPerS()), "got " + a.maxRateWithMarginFullStepsPerS());
+    }
+
+    @Test
     void gravityLoadBecomesTorqueThroughTheTravelPerRevolution() {
         // F·p/2π: 50 N on a 5 mm/rev screw is 0.0398 N·m (energy balance)
         Load load = new Load(0, 0, 50, 5);

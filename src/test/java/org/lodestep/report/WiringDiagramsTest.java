@@ -161,4 +161,25 @@ class WiringDiagramsTest {
         assertEquals(List.of(new WiringDiagram.BrokenCoil("c", "d", null)), found.brokenCoils());
         assertTrue(found.toSvg().markup().contains(">open</text>"));
     }
+
+    @Test
+    void theWindingsFoundSoFarAreDrawnWiredToNothing() {
+        // a six-lead motor part-probed: one centre-tapped winding 1-2-3 found (1.2 ohm a half, invented), the other
+        // leads not measured yet
+        ResistanceMatrix.Builder b = ResistanceMatrix.builder();
+        for (String l : List.of("1", "2", "3", "4", "5", "6")) {
+            b.lead(l);
+        }
+        b.reading("1", "2", OptionalDouble.of(1.2)).reading("2", "3", OptionalDouble.of(1.2))
+                .reading("1", "3", OptionalDouble.of(2.4)).reading("1", "4", OptionalDouble.empty());
+        Identification id = LeadIdentifier.identify(b.build(), IdentifySettings.DEFAULT);
+        assertTrue(id.connections().isEmpty(), "not certain yet: no connection to draw");
+        WiringDiagram d = WiringDiagrams.soFar(id);
+        assertEquals(1, d.coils().size());
+        assertEquals("2", d.coils().get(0).tapLead());
+        assertEquals(List.of("Not wired yet: 1, 2, 3"), d.summary());
+        String svg = d.toSvg().markup();
+        assertFalse(svg.contains(">Driver<"), "nothing is wired: no driver drawn");
+        assertTrue(svg.contains(">Phase A<"), svg);
+    }
 }

@@ -47,6 +47,33 @@ class SweepAnalyzerTest {
     }
 
     @Test
+    void theCurveSoFarGrowsAlongTheSweepAndEndsAsTheFinishedCurve() {
+        SweepLaw law = new SweepLaw(SweepShape.LINEAR, 30, 400, 20);
+        double[][] sig = rotor(1).run(law::rateFullStepsPerSAt, FS, (int) (FS * 20));
+        SweepAnalyzer a = SweepAnalyzer.programmed(SweepSettings.forSampleRate(FS), FS, law);
+        assertTrue(a.responseSoFar().isEmpty());
+        int half = sig[0].length / 2;
+        a.feed(sig[0], null, 0, half);
+        java.util.List<ResponsePoint> early = a.responseSoFar();
+        // halfway through a linear 30 ... 400 sweep the rate is 215 full steps/s: the curve reaches no further
+        double last = early.get(early.size() - 1).rateFullStepsPerS();
+        assertTrue(last > 200 && last <= law.rateFullStepsPerSAt(half / FS), "curve so far ends at " + last);
+        a.feed(sig[0], null, half, sig[0].length - half);
+        java.util.List<ResponsePoint> all = a.responseSoFar();
+        // the finished curve is the curve so far once every sample is in, point for point (finish adds the
+        // detection baseline and threshold to each point)
+        java.util.List<ResponsePoint> finished = a.finish(BandSettings.defaults(), Double.NaN).response();
+        assertEquals(all.size(), finished.size());
+        for (int i = 0; i < all.size(); i++) {
+            assertEquals(all.get(i).rateFullStepsPerS(), finished.get(i).rateFullStepsPerS(), 0.0);
+            assertEquals(all.get(i).levelDb(), finished.get(i).levelDb(), 0.0);
+            assertEquals(all.get(i).segments(), finished.get(i).segments());
+        }
+        // bins behind the sweep take no more segments: the early curve, less its filling last bin, is unchanged
+        assertEquals(early.subList(0, early.size() - 1), all.subList(0, early.size() - 1));
+    }
+
+    @Test
     void pulseChannelGivesTheSameBandAsTheProgrammedLaw() {
         SweepLaw law = new SweepLaw(SweepShape.LOG, 40, 400, 16);
         RotorSimulator sim = rotor(1);
@@ -131,5 +158,33 @@ class SweepAnalyzerTest {
         double[] z = new double[8000];
         IllegalArgumentException e = assertThrows(IllegalArgumentException.class, () -> a.feed(z, z, 0, 8000));
         assertTrue(e.getMessage().contains("flat"), e.getMessage());
+    }
+
+    @Test
+    void synchronismCheckBesideTheSpectraGivesTheSameResultsAsInline() {
+        // Blocks of 1000 frames run the step counts and the synchronism check on the feeding thread, blocks of 8191
+        // hand them to a second thread beside the transforms: every result must be the same, for a programmed law
+        // and for a pulse channel.
+        SweepLaw law = new SweepLaw(SweepShape.LOG, 40, 400, 16);
+        double[][] sig = rotor(1).run(law::rateFullStepsPerSAt, FS, (int) (FS * 16) - 333);
+        for (boolean withPulses : new boolean[] {false, true}) {
+            SweepResult[] r = new SweepResult[2];
+            int[] blocks = {1000, 8191};
+            for (int t = 0; t < 2; t++) {
+                SweepAnalyzer a = withPulses ? SweepAnalyzer.fromPulses(SweepSettings.forSampleRate(FS), FS, 1)
+                        : SweepAnalyzer.programmed(SweepSettings.forSampleRate(FS), FS, law);
+                for (int i = 0; i < sig[0].length; i += blocks[t]) {
+                    a.feed(sig[0], withPulses ? sig[1] : null, i, Math.min(blocks[t], sig[0].length - i));
+                }
+                r[t] = a.finish(BandSettings.defaults(), Double.NaN);
+            }
+            String what = withPulses ? "pulses" : "law";
+            assertEquals(r[0].stall(), r[1].stall(), what);
+            assertEquals(r[0].response(), r[1].response(), what);
+            assertEquals(r[0].bands(), r[1].bands(), what);
+            assertEquals(r[0].watch(), r[1].watch(), what);
+            assertEquals(r[0].evidenceNote(), r[1].evidenceNote(), what);
+            assertTrue(r[0].stall().lowestSynchronousShare() > 0, "the check ran: " + r[0].stall());
+        }
     }
 }

@@ -27,4 +27,22 @@ class SweepLawTest {
                 () -> new SweepLaw(SweepShape.LINEAR, 100, 100, 10));
         assertTrue(e.getMessage().contains("dwell"), e.getMessage());
     }
+
+    @Test
+    void stepCountsForABlockAreThoseOfEachSampleBitForBit() {
+        // The block form only hoists the sweep's constants: every value must be the per-sample one, NaN outside.
+        double rateHz = 51_200;
+        for (SweepLaw law : new SweepLaw[] {new SweepLaw(SweepShape.LINEAR, 20, 2000, 3.0),
+                new SweepLaw(SweepShape.LOG, 40, 600, 3.0)}) {
+            for (long first : new long[] {-5, 0, 1234, 153_590}) {
+                double[] out = new double[1000];
+                law.fullStepsAt(first, rateHz, out, out.length);
+                for (int i = 0; i < out.length; i++) {
+                    double expected = law.fullStepsAt((first + i) / rateHz);
+                    assertEquals(Double.doubleToRawLongBits(expected), Double.doubleToRawLongBits(out[i]),
+                            law + " sample " + (first + i));
+                }
+            }
+        }
+    }
 }

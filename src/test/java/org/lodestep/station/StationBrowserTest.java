@@ -99,9 +99,15 @@ class StationBrowserTest {
 
     /** Screenshots the page at desktop and phone width; checks neither scrolls sideways. */
     static void shots(String name, String mustBeInView) throws Exception {
+        shots(name, mustBeInView, null);
+    }
+
+    /** As {@link #shots(String, String)}, the picture taken with {@code showSelector} scrolled to the top. */
+    static void shots(String name, String mustBeInView, String showSelector) throws Exception {
         for (int width : new int[] {DESKTOP, PHONE}) {
             driver.manage().window().setSize(new Dimension(width, 900));
-            js("window.scrollTo(0,0)");
+            js(showSelector == null ? "window.scrollTo(0,0)"
+                    : "document.querySelector('" + showSelector + "').scrollIntoView({block:'start'})");
             long scroll = ((Number) js("return document.documentElement.scrollWidth")).longValue();
             long inner = ((Number) js("return window.innerWidth")).longValue();
             File png = driver.getScreenshotAs(OutputType.FILE);
@@ -142,6 +148,7 @@ class StationBrowserTest {
         waiting().until(d -> d.findElements(By.cssSelector("[data-page=leads-probe]")).size() == 1);
         WebElement root = driver.findElement(By.cssSelector("[data-page=leads-probe]"));
         boolean undone = false;
+        boolean schematic = false;
         for (int i = 0; i < 40 && root.getAttribute("data-done") == null; i++) {
             String pair = driver.findElement(By.cssSelector("#next .pair")).getText();
             String[] ab = pair.split("\\s*\u2013\\s*");
@@ -159,7 +166,16 @@ class StationBrowserTest {
             }
             ohms.sendKeys(meter(ab[0], ab[1]), Keys.ENTER);
             waitAnswers(root, answers + 1);
+            if (root.getAttribute("data-done") == null) {
+                // still probing: the readings so far, the windings found and their schematic are on the page
+                assertTrue(driver.findElement(By.id("probe-panel")).getText().contains("So far"));
+                if (!schematic && !driver.findElements(By.cssSelector("#probe-panel .so-far svg")).isEmpty()) {
+                    schematic = true;
+                    shots("leads-live", "#next");
+                }
+            }
         }
+        assertTrue(schematic, "the schematic fills in while the readings are typed");
         assertEquals("true", root.getAttribute("data-done"));
         String result = driver.findElement(By.id("next")).getText();
         assertTrue(result.contains("6-lead"), result);
@@ -223,6 +239,55 @@ class StationBrowserTest {
     }
 
     @Test
+    @Order(5)
+    void aMotorTypedAtTheMeterThatFailsShowsTheValueAgainstTheLimit() throws Exception {
+        driver.get(base + "/qa");
+        new Select(driver.findElement(By.id("spec"))).selectByVisibleText("kv-4218-m.toml");
+        driver.findElement(By.id("lot")).sendKeys("L-2608");
+        driver.findElement(By.cssSelector("input[name=source][value=typed]")).click();
+        driver.findElement(By.id("lot")).sendKeys(Keys.ENTER);
+        waiting().until(d -> d.findElements(By.id("phase_a_ohm")).size() == 1);
+        // the scanner types the serial and Enter; then the inspector types each reading and Enter, keyboard only
+        driver.findElement(By.id("serial")).sendKeys("KV24-00131", Keys.ENTER);
+        // the sample spec kv-4218-m.toml: 1.90 ohm +- 10 %: phase A at 2.31 ohm is above the upper limit 2.09 ohm
+        for (String v : List.of("2.31", "1.92", "2.8", "2.81", "OL", "950", "1.8")) {
+            WebElement field = driver.switchTo().activeElement();
+            assertEquals("input", field.getTagName());
+            field.sendKeys(v, Keys.ENTER);
+        }
+        waiting().until(d -> "1".equals(d.findElement(By.cssSelector("[data-page=qa-run]")).getAttribute("data-scans")));
+        String verdict = driver.findElement(By.id("verdict")).getText();
+        assertTrue(verdict.contains("FAIL") && verdict.contains("KV24-00131"), verdict);
+        assertTrue(verdict.contains("phase resistance A: 2.31 ohm, above the upper limit 2.09 ohm by 0.22 ohm"), verdict);
+        assertEquals(driver.findElement(By.id("serial")), driver.switchTo().activeElement(), "ready for the next motor");
+        assertEquals("", driver.findElement(By.id("phase_a_ohm")).getAttribute("value"), "the fields are cleared");
+        shots("qa-typed", "#verdict");
+    }
+
+    @Test
+    @Order(6)
+    void theRigMeasuresLeadsAndTheMotorOnlyOnceArmedOnThePage() throws Exception {
+        for (String page : List.of("leads", "motor")) {
+            driver.get(base + "/" + page);
+            WebElement section = driver.findElement(By.cssSelector("[data-rig-action=" + page + "]"));
+            WebElement fire = section.findElement(By.cssSelector("button.fire"));
+            assertTrue(!fire.isEnabled(), "nothing can be energised before the arming");
+            section.findElement(By.cssSelector("button.arm-button")).sendKeys(Keys.ENTER);
+            waiting().until(d -> fire.isEnabled());
+            assertTrue(section.findElement(By.cssSelector(".arm-state")).getText().contains("ARMED"));
+            assertEquals(fire, driver.switchTo().activeElement(), "the armed action has the focus");
+            fire.sendKeys(Keys.ENTER);
+            new WebDriverWait(driver, Duration.ofSeconds(60)).until(d -> section.getAttribute("data-done") != null);
+            assertEquals("true", section.getAttribute("data-done"),
+                    section.findElement(By.cssSelector(".progress")).getText());
+            // a healthy 4-lead motor on the rig takes two readings (its two windings; the cross pairs are inferred)
+            assertTrue(Integer.parseInt(section.getAttribute("data-readings")) >= 2, "each reading or stage listed");
+            assertTrue(!fire.isEnabled(), "the arming was used once");
+            shots(page + "-rig", null, "[data-rig-action=" + page + "]");
+        }
+    }
+
+    @Test
     @Order(2)
     void theLotsRecordsShowYieldAndTheReportCharts() throws Exception {
         driver.get(base + "/records?lot=L-2607");
@@ -242,12 +307,44 @@ class StationBrowserTest {
         assertTrue(!startButton.isEnabled(), "the sweep cannot start before the caution is acknowledged");
         driver.findElement(By.id("ack")).sendKeys(Keys.SPACE);
         assertTrue(startButton.isEnabled());
+        // the virtual rig in real time: samples leave no faster than they were sampled, as from a real rig
+        WebElement rig = driver.findElement(By.id("rig"));
+        rig.clear();
+        rig.sendKeys("sim:gantry-axis?realtime=1");
         startButton.sendKeys(Keys.ENTER);
-        waiting().until(d -> d.findElement(By.id("sweep-result")).getAttribute("data-bands") != null);
+        // the response curve is drawn while the sweep still runs: points before the end, no bands yet
+        WebElement figure = driver.findElement(By.id("live-curve"));
+        waiting().until(d -> figure.getAttribute("data-updates") != null
+                && Integer.parseInt(figure.getAttribute("data-updates")) >= 3);
+        assertEquals(null, driver.findElement(By.id("sweep-result")).getAttribute("data-bands"),
+                "the curve must be live, not drawn at the end");
+        assertTrue(Integer.parseInt(figure.getAttribute("data-points")) > 0);
+        assertTrue(figure.findElements(By.cssSelector("svg polyline")).size() == 1);
+        assertTrue(driver.findElement(By.id("curve-state")).getText().contains("live"));
+        shots("sweep-live", null, "#sweep-progress");
+        new WebDriverWait(driver, Duration.ofSeconds(60))
+                .until(d -> d.findElement(By.id("sweep-result")).getAttribute("data-bands") != null);
         int bands = Integer.parseInt(driver.findElement(By.id("sweep-result")).getAttribute("data-bands"));
         assertTrue(bands > 0, "the gantry axis has resonance bands");
+        // then the bands over the final curve, and the avoid-list beside it
+        assertEquals(bands, figure.findElements(By.cssSelector("svg rect.band")).size());
+        assertTrue(driver.findElement(By.id("avoid-table")).getText().contains("full steps/s"));
         assertTrue(driver.findElement(By.cssSelector("#sweep-progress .progress-text")).getText().contains("done"));
-        shots("sweep", null);
+        shots("sweep", null, "#sweep-progress");
+        shots("sweep-bands", null, "#sweep-result");
+        // a profile across those bands: the gantry-axis scenario's motor (scenarios.toml), typed as from its card
+        String[][] typed = {{"phase_resistance_ohm", "1.2"}, {"phase_inductance_h", "0.00276"}, {"kt_nm_per_a", "0.3"},
+            {"rotor_inertia_kgm2", "8.2e-6"}, {"supply_v", "48"}, {"current_a", "2.5"},
+            {"load_inertia_kgm2", "5.5e-5"}, {"target_full_steps_per_s", "300"}};
+        for (String[] f : typed) {
+            WebElement in = driver.findElement(By.id(f[0]));
+            in.clear();
+            in.sendKeys(f[1]);
+        }
+        driver.findElement(By.id("target_full_steps_per_s")).sendKeys(Keys.ENTER);
+        waiting().until(d -> d.findElement(By.id("plan-result")).getAttribute("data-rows") != null);
+        assertTrue(driver.findElement(By.id("plan-result")).getText().contains("crossed at"));
+        shots("sweep-profile", null, "#plan-result");
         driver.get(base + "/");
         shots("home", null);
     }

@@ -201,6 +201,12 @@ class StationServerTest {
         Matcher report = Pattern.compile("\"report\"\\s*:\\s*\"(/sweep/reports/[0-9a-f]+)\"").matcher(ev);
         assertTrue(report.find(), ev);
         assertTrue(get(base(station) + report.group(1)).body().contains("<svg"));
+        // the response curve streams while the sweep runs: curve events with points, all before the end
+        int firstCurve = ev.indexOf("\"type\":\"curve\"");
+        assertTrue(firstCurve > 0 && firstCurve < ev.indexOf("\"type\":\"done\""), ev);
+        assertTrue(Pattern.compile("\"type\":\"curve\",\"points\":\\[\\[[0-9.]+,-?[0-9.]+\\]").matcher(ev).find(), ev);
+        // then the bands over the final curve
+        assertTrue(Pattern.compile("\"band_spans\":\\[\\[[0-9.]+,[0-9.]+,[0-9.]+\\]").matcher(ev).find(), ev);
         assertEquals(400, post(base(station) + "/api/sweep", "ack=yes&rig=tcp:10.0.0.9:7000",
                 Access.FORM_KEY_HEADER, key).statusCode());
     }
@@ -366,5 +372,190 @@ class StationServerTest {
         HttpResponse<String> none = multipart(base(station) + "/api/motor", key, List.<String[]>of(), List.<byte[]>of());
         assertEquals(400, none.statusCode());
         assertTrue(none.body().contains("nothing to identify"), none.body());
+    }
+
+    /** A finished sweep of the gantry axis: the task's events. */
+    static String gantrySweep(String key) throws Exception {
+        HttpResponse<String> r = post(base(station) + "/api/sweep",
+                "ack=yes&rig=sim:gantry-axis&from=40&to=200&seconds=8&microsteps=1", Access.FORM_KEY_HEADER, key);
+        assertEquals(200, r.statusCode(), r.body());
+        return events(station, field(r.body(), "task"));
+    }
+
+    @Test
+    void aProfileIsPlannedAcrossTheBandsOfASweep() throws Exception {
+        String key = formKey(station);
+        String ev = gantrySweep(key);
+        String sweep = field(ev.substring(ev.indexOf("\"type\":\"done\"")), "sweep");
+        String url = base(station) + "/api/sweep/" + sweep + "/plan";
+        // the gantry-axis scenario's motor (scenarios.toml): two 0.6 ohm, 0.7 mH halves in series per phase
+        // (coupling 0.97: L = 2 x 0.7 mH x 1.97), Ke 0.3 V s/rad, rotor 8.2e-6 kg m2, load 5.5e-5 kg m2
+        String motor = "phase_resistance_ohm=1.2&phase_inductance_h=0.00276&kt_nm_per_a=0.3&rotor_inertia_kgm2=8.2e-6"
+                + "&rotor_teeth=50&drive=chopper&supply_v=48&current_a=2.5&plan_microsteps=1&load_inertia_kgm2=5.5e-5"
+                + "&friction_torque_nm=0&margin=0.3&shape=trapezoidal&cruise_s=0.2";
+        HttpResponse<String> noTarget = post(url, motor, Access.FORM_KEY_HEADER, key);
+        assertEquals(400, noTarget.statusCode());
+        assertTrue(noTarget.body().contains("target"), noTarget.body());
+        assertEquals(400, post(url, motor + "&target_full_steps_per_s=fast", Access.FORM_KEY_HEADER, key).statusCode());
+        assertEquals(400, post(url, motor.replace("drive=chopper", "drive=steam") + "&target_full_steps_per_s=300",
+                Access.FORM_KEY_HEADER, key).statusCode());
+        assertEquals(403, post(url, motor + "&target_full_steps_per_s=300").statusCode());
+        assertEquals(403, post(url, motor + "&target_full_steps_per_s=300", Access.FORM_KEY_HEADER, key,
+                "Sec-Fetch-Site", "cross-site").statusCode());
+        assertEquals(404, post(base(station) + "/api/sweep/nope/plan", motor + "&target_full_steps_per_s=300",
+                Access.FORM_KEY_HEADER, key).statusCode());
+        HttpResponse<String> r = post(url, motor + "&target_full_steps_per_s=300", Access.FORM_KEY_HEADER, key);
+        assertEquals(200, r.statusCode(), r.body());
+        String planned = events(station, field(r.body(), "task"));
+        assertTrue(planned.contains("\"type\":\"done\""), planned);
+        assertTrue(planned.contains("band ") && planned.contains("crossed at"), planned);
+        Matcher plan = Pattern.compile("\"plan\"\\s*:\\s*\"(/sweep/plans/[0-9a-f]+)\"").matcher(planned);
+        assertTrue(plan.find(), planned);
+        String csv = get(base(station) + plan.group(1) + "/table.csv").body();
+        assertTrue(csv.lines().count() > 10, csv);
+        assertTrue(get(base(station) + plan.group(1)).body().contains("<svg"));
+    }
+
+    @Test
+    void aProbeSessionShowsTheSchematicAndFindingsAfterEachReading() throws Exception {
+        String key = formKey(station);
+        HttpResponse<String> start = post(base(station) + "/leads/probes", "labels=6&" + Access.FORM_KEY_FIELD + "="
+                + key);
+        String path = start.headers().firstValue("Location").orElseThrow();
+        String id = path.substring(path.lastIndexOf('/') + 1);
+        String panel = get(base(station) + path + "/panel").body();
+        assertFalse(panel.contains("So far"), "nothing to show before the first reading");
+        Pattern next = Pattern.compile("class=\"big pair\">(\\d+) \u2013 (\\d+)<");
+        boolean schematicBeforeTheEnd = false;
+        boolean windingBeforeTheEnd = false;
+        for (int i = 0; i < 15; i++) {
+            Matcher m = next.matcher(panel);
+            if (!m.find()) {
+                break;
+            }
+            String reply = post(base(station) + "/api/leads/probes/" + id + "/answer", "value="
+                    + sixLead(m.group(1), m.group(2)), Access.FORM_KEY_HEADER, key).body();
+            panel = get(base(station) + path + "/panel").body();
+            if (panel.contains("class=\"big pair\"")) {
+                // still probing: the identification so far is on the page after every reading
+                assertTrue(panel.contains("So far"), panel);
+                schematicBeforeTheEnd |= panel.contains("<svg");
+                windingBeforeTheEnd |= panel.contains("winding 1 \u2013 3, centre tap 2");
+            }
+            assertTrue(reply.contains("\"html\""), reply);
+        }
+        assertTrue(windingBeforeTheEnd, "the first winding shows as soon as its three readings are in");
+        assertTrue(schematicBeforeTheEnd, "the schematic fills in before the session ends");
+        assertTrue(panel.contains("6-lead"), panel);
+    }
+
+    /** A six-lead motor: two centre-tapped windings 1-2-3 and 4-5-6, 1.2 ohm per half (invented). */
+    static String sixLead(String a, String b) {
+        List<String> one = List.of("1", "2", "3");
+        List<String> two = List.of("4", "5", "6");
+        for (List<String> w : List.of(one, two)) {
+            if (w.contains(a) && w.contains(b)) {
+                return Math.abs(w.indexOf(a) - w.indexOf(b)) == 2 ? "2.4" : "1.2";
+            }
+        }
+        return "OL";
+    }
+
+    @Test
+    void typedMeterReadingsAreJudgedAndAFailSaysWhichCheckByHowMuch() throws Exception {
+        String key = formKey(station);
+        HttpResponse<String> start = post(base(station) + "/qa/runs", "spec=kv-4218-m.toml&lot=L-TYPED&source=typed&"
+                + Access.FORM_KEY_FIELD + "=" + key);
+        assertEquals(303, start.statusCode(), start.body());
+        String runPath = start.headers().firstValue("Location").orElseThrow();
+        String id = runPath.substring(runPath.lastIndexOf('/') + 1);
+        assertTrue(get(base(station) + runPath).body().contains("id=\"phase_a_ohm\""));
+        String scan = base(station) + "/api/qa/runs/" + id + "/scan";
+        HttpResponse<String> bad = post(scan, "serial=KV24-T1&phase_a_ohm=two", Access.FORM_KEY_HEADER, key);
+        assertEquals(400, bad.statusCode());
+        assertTrue(bad.body().contains("phase resistance A 'two' is not a number"), bad.body());
+        assertEquals(400, post(scan, "serial=KV24-T1&phase_b_ohm=1.9", Access.FORM_KEY_HEADER, key).statusCode());
+        assertEquals(403, post(scan, "serial=KV24-T1&phase_a_ohm=1.9").statusCode());
+        // the sample spec kv-4218-m.toml: 1.90 ohm +- 10 % -> upper limit 2.09 ohm; 2.31 ohm is 0.22 ohm beyond it
+        String good = "&inductance_a_mh=2.8&inductance_b_mh=2.8&insulation_a_frame_mohm=OL&insulation_b_frame_mohm=900"
+                + "&step_angle_deg=1.8";
+        events(station, field(post(scan, "serial=KV24-T1&phase_a_ohm=1.90&phase_b_ohm=1.91" + good,
+                Access.FORM_KEY_HEADER, key).body(), "task"));
+        events(station, field(post(scan, "serial=KV24-T2&phase_a_ohm=2.31&phase_b_ohm=2.30" + good,
+                Access.FORM_KEY_HEADER, key).body(), "task"));
+        String panel = get(base(station) + runPath + "/panel").body();
+        assertTrue(panel.contains("1 PASS, 1 FAIL"), panel);
+        assertTrue(panel.contains("phase resistance A: 2.31 ohm, above the upper limit 2.09 ohm by 0.22 ohm (10.5 %)"),
+                panel);
+    }
+
+    static final String TAB_A = "0123456789abcdef0123456789abcdef";
+    static final String TAB_B = "fedcba9876543210fedcba9876543210";
+
+    static String arm(Station s, String key, String action, String tab) throws Exception {
+        HttpResponse<String> r = post(base(s) + "/api/rig/arm", "action=" + action + "&tab=" + tab,
+                Access.FORM_KEY_HEADER, key);
+        assertEquals(200, r.statusCode(), r.body());
+        return field(r.body(), "arm");
+    }
+
+    @Test
+    void energisingFromTheBrowserNeedsThisPagesOwnArmingOnce() throws Exception {
+        String key = formKey(station);
+        String url = base(station) + "/api/leads/rig";
+        assertEquals(403, post(base(station) + "/api/rig/arm", "action=leads&tab=" + TAB_A).statusCode());
+        assertEquals(400, post(base(station) + "/api/rig/arm", "action=weld&tab=" + TAB_A, Access.FORM_KEY_HEADER,
+                key).statusCode());
+        HttpResponse<String> unarmed = post(url, "tab=" + TAB_A, Access.FORM_KEY_HEADER, key);
+        assertEquals(400, unarmed.statusCode());
+        assertTrue(unarmed.body().contains("not armed") && unarmed.body().contains("nothing was energised"),
+                unarmed.body());
+        String armA = arm(station, key, "leads", TAB_A);
+        // another tab holding the key (it never should) still cannot fire what this one armed
+        HttpResponse<String> otherTab = post(url, "arm=" + armA + "&tab=" + TAB_B, Access.FORM_KEY_HEADER, key);
+        assertEquals(400, otherTab.statusCode());
+        assertTrue(otherTab.body().contains("another page"), otherTab.body());
+        // nor another action
+        assertEquals(400, post(base(station) + "/api/motor/rig", "arm=" + armA + "&tab=" + TAB_A,
+                Access.FORM_KEY_HEADER, key).statusCode());
+        armA = arm(station, key, "leads", TAB_A);
+        assertEquals(403, post(url, "arm=" + armA + "&tab=" + TAB_A, Access.FORM_KEY_HEADER, key, "Sec-Fetch-Site",
+                "cross-site").statusCode());
+        HttpResponse<String> fired = post(url, "arm=" + armA + "&tab=" + TAB_A, Access.FORM_KEY_HEADER, key);
+        assertEquals(200, fired.statusCode(), fired.body());
+        String ev = events(station, field(fired.body(), "task"));
+        // the bench-4 scenario is a four-lead motor (scenarios.toml): each reading arrives as it is measured
+        assertTrue(ev.indexOf("\"type\":\"reading\"") > 0 && ev.indexOf("\"type\":\"reading\"")
+                < ev.indexOf("\"type\":\"done\""), ev);
+        assertTrue(ev.contains("4-lead"), ev);
+        // used once
+        HttpResponse<String> again = post(url, "arm=" + armA + "&tab=" + TAB_A, Access.FORM_KEY_HEADER, key);
+        assertEquals(400, again.statusCode());
+    }
+
+    @Test
+    void theMotorIsMeasuredOnTheRigStageByStageWithOutputsOffAtTheEnd() throws Exception {
+        String key = formKey(station);
+        String armKey = arm(station, key, "motor", TAB_A);
+        HttpResponse<String> bad = post(base(station) + "/api/motor/rig", "arm=" + armKey + "&tab=" + TAB_A
+                + "&rig_supply_v=lots", Access.FORM_KEY_HEADER, key);
+        assertEquals(400, bad.statusCode());
+        assertTrue(bad.body().contains("supply voltage 'lots'"), bad.body());
+        HttpResponse<String> r = post(base(station) + "/api/motor/rig", "arm=" + armKey + "&tab=" + TAB_A
+                + "&rig_supply_v=24&rig_phase_current_a=1.5", Access.FORM_KEY_HEADER, key);
+        assertEquals(200, r.statusCode(), r.body());
+        String ev = events(station, field(r.body(), "task"));
+        assertTrue(ev.contains("[1/3]") && ev.contains("[2/3]") && ev.contains("\"type\":\"attention\""), ev);
+        assertTrue(ev.contains("outputs switched off") && ev.contains("\"type\":\"done\""), ev);
+    }
+
+    @Test
+    void aRigLineThatDropsDuringLeadsSaysNothingWasRecorded() throws Exception {
+        String key = formKey(dead);
+        String armKey = arm(dead, key, "leads", TAB_A);
+        HttpResponse<String> r = post(base(dead) + "/api/leads/rig", "arm=" + armKey + "&tab=" + TAB_A,
+                Access.FORM_KEY_HEADER, key);
+        String ev = events(dead, field(r.body(), "task"));
+        assertTrue(ev.contains("\"kind\":\"rig\"") && ev.contains("nothing was recorded"), ev);
     }
 }

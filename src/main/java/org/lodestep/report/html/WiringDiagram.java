@@ -112,7 +112,11 @@ public final class WiringDiagram {
     }
 
     /** Where one lead goes. */
-    sealed interface Destination permits ToTerminal, ToTie, Insulated {
+    sealed interface Destination permits ToTerminal, ToTie, Insulated, Pending {
+    }
+
+    /** A lead whose wiring is not known yet: a drawing of the windings a probe session has found so far. */
+    record Pending() implements Destination {
     }
 
     record ToTerminal(DriverTerminal terminal) implements Destination {
@@ -214,6 +218,15 @@ public final class WiringDiagram {
             lines.add("Open coil (drawn broken): " + c.startLead() + " \u2013 "
                     + (c.endLead() != null ? c.endLead() : c.endNote()) + ", no continuity");
         }
+        List<String> pending = new ArrayList<>();
+        for (String lead : leads()) {
+            if (destinations.get(lead) instanceof Pending) {
+                pending.add(lead);
+            }
+        }
+        if (!pending.isEmpty()) {
+            lines.add("Not wired yet: " + String.join(", ", pending));
+        }
         return lines;
     }
 
@@ -286,6 +299,11 @@ public final class WiringDiagram {
             }
             ties.add(List.of(leads));
             return this;
+        }
+
+        /** Leaves a lead's wiring open: it is drawn on its coil, going nowhere yet. */
+        public Builder pending(String lead) {
+            return assign(lead, new Pending());
         }
 
         /** Insulates a lead and leaves it unconnected. */

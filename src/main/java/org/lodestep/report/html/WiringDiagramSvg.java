@@ -108,7 +108,7 @@ final class WiringDiagramSvg {
                 laneRows.computeIfAbsent(tt.terminal(), k -> new ArrayList<>()).add(t.y());
             } else if (dest instanceof WiringDiagram.ToTie tie) {
                 tieRows.computeIfAbsent(tie.index(), k -> new ArrayList<>()).add(t.y());
-            } else {
+            } else if (dest instanceof WiringDiagram.Insulated) {
                 caps.append(line(PILL_RIGHT, t.y(), PILL_RIGHT + 12, t.y(), MUTED, 2, null))
                         .append("<rect x=\"").append(PILL_RIGHT + 12).append("\" y=\"").append(t.y() - 7)
                         .append("\" width=\"5\" height=\"14\" fill=\"").append(MUTED).append("\"/>")
@@ -160,9 +160,12 @@ final class WiringDiagramSvg {
         for (Tag t : tags) {
             drawTag(tagsSvg, t.lead(), t.y(), d.destination(t.lead()) instanceof WiringDiagram.Insulated);
         }
-        StringBuilder driver = drawDriver(termY, laneRows);
+        // windings found so far, wired to nothing yet: no driver to draw
+        boolean wired = !laneRows.isEmpty();
+        StringBuilder driver = wired ? drawDriver(termY, laneRows) : new StringBuilder();
 
-        int bottom = Math.max(y, termY.values().stream().mapToInt(Integer::intValue).max().orElse(y) + 30) + 24;
+        int bottom = (wired ? Math.max(y, termY.values().stream().mapToInt(Integer::intValue).max().orElse(y) + 30)
+                : y) + 24;
         StringBuilder legend = new StringBuilder();
         int ly = bottom;
         legend.append(line(24, ly - 4, 60, ly - 4, PHASE_A, 2.2, null)).append(text(66, ly, 12, MUTED, "phase A"))
