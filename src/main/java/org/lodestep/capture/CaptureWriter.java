@@ -90,7 +90,16 @@ public final class CaptureWriter implements Closeable {
             throw new IllegalStateException("every Java runtime has SHA-256", e);
         }
         this.tempCsv = tempSibling(this.csvPath);
-        this.channel = FileChannel.open(tempCsv, StandardOpenOption.WRITE, StandardOpenOption.CREATE_NEW);
+        try {
+            this.channel = FileChannel.open(tempCsv, StandardOpenOption.WRITE, StandardOpenOption.CREATE_NEW);
+        } catch (java.nio.file.NoSuchFileException e) {
+            // named as the user gave it, never by the hidden temporary file's name
+            throw new java.nio.file.NoSuchFileException(csvPath.toString());
+        } catch (java.nio.file.AccessDeniedException e) {
+            throw new java.nio.file.AccessDeniedException(csvPath.toString());
+        } catch (java.nio.file.FileSystemException e) {
+            throw new java.nio.file.FileSystemException(csvPath.toString(), null, e.getReason());
+        }
         OutputStream os = new DigestOutputStream(Channels.newOutputStream(channel), digest);
         this.out = new BufferedWriter(new OutputStreamWriter(os, StandardCharsets.UTF_8), 1 << 16);
         // Enough decimals that consecutive time stamps differ by a hundred or more in the last digit.

@@ -1,6 +1,7 @@
 package org.lodestep.capture;
 
 import org.lodestep.sample.ArraySampleStream;
+import org.lodestep.sample.InputFiles;
 import org.lodestep.sample.InputFormatException;
 import org.lodestep.sample.SampleStream;
 import org.lodestep.sample.SampledSignal;
@@ -30,6 +31,7 @@ public final class Captures {
     /** Opens a file, with the caller's choice for a capture whose sidecar says it is incomplete. */
     public static SampleStream open(Path path, CaptureReader.Incomplete incomplete)
             throws IOException, InputFormatException {
+        InputFiles.requireFile(path, "a capture file (CSV, WAV or a rig capture)");
         Kind kind = kindOf(path);
         switch (kind) {
             case WAV:

@@ -91,9 +91,11 @@ final class CsvColumns {
             List<String> fields = new ArrayList<>();
             records.get(0).forEach(fields::add);
             return fields;
-        } catch (IOException | java.io.UncheckedIOException e) {
-            throw new InputFormatException(source, lineNumber, null, line,
-                    "is not a well-formed CSV row (" + e.getMessage() + ")");
+        } catch (IOException | RuntimeException e) {
+            // Commons CSV's own text names neither file nor line and speaks of its tokenizer: say what is wrong here
+            throw new InputFormatException(source, lineNumber, null, line, "is not a well-formed CSV row: expected"
+                    + " fields separated by '" + (delimiter == '\t' ? "<tab>" : String.valueOf(delimiter))
+                    + "', a quoted field closed by a quote on the same line");
         }
     }
 

@@ -1,8 +1,6 @@
 package org.lodestep.capture;
 
 import java.io.IOException;
-import java.nio.charset.StandardCharsets;
-import java.nio.file.Files;
 import java.nio.file.Path;
 import java.util.HashMap;
 import java.util.Map;
@@ -15,6 +13,7 @@ import com.fasterxml.jackson.databind.JsonNode;
 import com.fasterxml.jackson.databind.ObjectMapper;
 
 import org.lodestep.sample.InputFormatException;
+import org.lodestep.sample.Utf8Text;
 
 /**
  * A JSON file read as a tree, remembering the line of every value so a reader's complaint names it: for our own
@@ -35,10 +34,7 @@ final class JsonDocument {
 
     static JsonDocument read(Path file) throws IOException, InputFormatException {
         String source = file.toString();
-        String text = new String(Files.readAllBytes(file), StandardCharsets.UTF_8);
-        if (text.startsWith("\uFEFF")) {
-            text = text.substring(1);
-        }
+        String text = Utf8Text.read(file, "a JSON document");
         Map<String, Integer> lines = new HashMap<>();
         try (JsonParser p = new JsonFactory().createParser(text)) {
             for (JsonToken t = p.nextToken(); t != null; t = p.nextToken()) {

@@ -32,6 +32,8 @@ public final class LeadPairArgument {
         }
         String a = leads[0].strip();
         String b = leads[1].strip();
+        ResistanceCsvReader.refuseLongLabel(source, InputFormatException.NO_LINE, "lead", a);
+        ResistanceCsvReader.refuseLongLabel(source, InputFormatException.NO_LINE, "lead", b);
         if (a.equals(b)) {
             throw new InputFormatException(source, InputFormatException.NO_LINE, null, text,
                     "pairs a lead with itself: expected two different leads");

@@ -1,12 +1,10 @@
 package org.lodestep.capture;
 
 import org.lodestep.sample.InputFormatException;
+import org.lodestep.sample.InputLimits;
+import org.lodestep.sample.Utf8Text;
 import java.io.IOException;
 import java.io.UncheckedIOException;
-import java.nio.charset.CharacterCodingException;
-import java.nio.charset.CodingErrorAction;
-import java.nio.charset.StandardCharsets;
-import java.nio.file.Files;
 import java.nio.file.Path;
 import java.util.ArrayList;
 import java.util.LinkedHashMap;
@@ -46,15 +44,7 @@ public final class ResistanceCsvReader {
 
     /** Reads a file; the message of any error names {@code path}'s file name. */
     public static ResistanceReadings read(Path path) throws IOException, InputFormatException {
-        byte[] bytes = Files.readAllBytes(path);
-        String text;
-        try {
-            text = StandardCharsets.UTF_8.newDecoder().onMalformedInput(CodingErrorAction.REPORT)
-                    .decode(java.nio.ByteBuffer.wrap(bytes)).toString();
-        } catch (CharacterCodingException e) {
-            throw new InputFormatException(path.toString(), InputFormatException.NO_LINE, null, null,
-                    "is not UTF-8 text: expected a CSV file of lead-pair resistances");
-        }
+        String text = Utf8Text.read(path, "a CSV file of lead-pair resistances");
         return parse(text, path.toString());
     }
 
@@ -180,6 +170,8 @@ public final class ResistanceCsvReader {
                 throw new InputFormatException(r.source, row.line, a.isEmpty() ? "lead_a" : "lead_b", "",
                         "is empty: expected a lead label");
             }
+            refuseLongLabel(r.source, row.line, "lead_a", a);
+            refuseLongLabel(r.source, row.line, "lead_b", b);
             if (a.equals(b)) {
                 throw new InputFormatException(r.source, row.line, "lead_b", b,
                         "pairs a lead with itself: expected two different leads");
@@ -199,6 +191,14 @@ public final class ResistanceCsvReader {
         }
     }
 
+    /** A label longer than {@link InputLimits#MAX_LABEL_CHARS} is damage or a pasted paragraph, never a lead. */
+    static void refuseLongLabel(String source, int line, String column, String label) throws InputFormatException {
+        if (label.length() > InputLimits.MAX_LABEL_CHARS) {
+            throw new InputFormatException(source, line, column, label, "is " + label.length()
+                    + " characters long: expected a lead label of at most " + InputLimits.MAX_LABEL_CHARS);
+        }
+    }
+
     private static void readMatrix(List<Row> rows, Reading r) throws InputFormatException {
         List<String> header = rows.get(0).cells;
         String corner = header.get(0).strip();
@@ -214,6 +214,7 @@ public final class ResistanceCsvReader {
         List<String> labels = new ArrayList<>();
         for (int j = 1; j < header.size(); j++) {
             String l = header.get(j).strip();
+            refuseLongLabel(r.source, rows.get(0).line, null, l);
             if (l.isEmpty() || labels.contains(l)) {
                 throw new InputFormatException(r.source, rows.get(0).line, String.valueOf(j + 1), l,
                         l.isEmpty() ? "is empty: expected a lead label" : "repeats a lead label: expected each lead once");

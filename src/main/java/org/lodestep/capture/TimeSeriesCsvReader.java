@@ -2,7 +2,9 @@ package org.lodestep.capture;
 
 import org.lodestep.sample.Channel;
 
+import org.lodestep.sample.InputFiles;
 import org.lodestep.sample.InputFormatException;
+import org.lodestep.sample.InputLimits;
 import org.lodestep.sample.SampleStream;
 import java.io.IOException;
 import java.io.InputStream;
@@ -36,6 +38,8 @@ import ch.randelshofer.fastdoubleparser.JavaDoubleParser;
  */
 public final class TimeSeriesCsvReader implements SampleStream {
     private static final int BUFFER_BYTES = 1 << 20;
+    private static final String BEYOND_LIMIT = "is beyond the plausible magnitude "
+            + InputLimits.MAX_SAMPLE_MAGNITUDE;
 
     private final String source;
     private final ByteLines lines;
@@ -103,6 +107,14 @@ public final class TimeSeriesCsvReader implements SampleStream {
         if (meta.containsKey("sample_rate_hz")) {
             declaredRateHz = positiveNumber(meta.get("sample_rate_hz"), metaLine.get("sample_rate_hz"),
                     "sample_rate_hz", "a positive sample rate in Hz");
+            if (!InputLimits.plausibleSampleRate(declaredRateHz)) {
+                throw new InputFormatException(source, metaLine.get("sample_rate_hz"), "sample_rate_hz",
+                        meta.get("sample_rate_hz"), InputLimits.sampleRateExpected());
+            }
+        }
+        if (columns.channels.size() > InputLimits.MAX_CHANNELS) {
+            throw new InputFormatException(source, headerLine, null, null, "has " + columns.channels.size()
+                    + " channel columns: expected at most " + InputLimits.MAX_CHANNELS);
         }
         if (columns.timeIndex < 0 && Double.isNaN(declaredRateHz)) {
             throw new InputFormatException(source, headerLine, null, header,
@@ -130,6 +142,10 @@ public final class TimeSeriesCsvReader implements SampleStream {
         if (columns.timeIndex >= 0) {
             this.axis = TimeAxis.fromFirstRows(times, rowLines, n, declaredRateHz, source,
                     columns.headers[columns.timeIndex]);
+            if (!InputLimits.plausibleSampleRate(axis.sampleRateHz)) {
+                throw new InputFormatException(source, rowLines[0], columns.headers[columns.timeIndex], null,
+                        "gives a sample rate of " + axis.sampleRateHz + " Hz: " + InputLimits.sampleRateExpected());
+            }
             this.sampleRateHz = axis.sampleRateHz;
             this.startTimeS = axis.startTimeS;
         } else {
@@ -145,6 +161,7 @@ public final class TimeSeriesCsvReader implements SampleStream {
 
     /** Opens a CSV file for streaming. */
     public static TimeSeriesCsvReader open(Path path) throws IOException, InputFormatException {
+        InputFiles.requireFile(path, "a time-series CSV");
         InputStream in = Files.newInputStream(path);
         try {
             return new TimeSeriesCsvReader(in, path.toString());
@@ -312,6 +329,9 @@ public final class TimeSeriesCsvReader implements SampleStream {
             throw badCell(col, new String(b, from, len, java.nio.charset.StandardCharsets.UTF_8),
                     "is not a finite number");
         }
+        if (!InputLimits.plausibleMagnitude(v)) {
+            throw badCell(col, new String(b, from, len, java.nio.charset.StandardCharsets.UTF_8), BEYOND_LIMIT);
+        }
         return v;
     }
 
@@ -342,6 +362,9 @@ public final class TimeSeriesCsvReader implements SampleStream {
             }
             if (!Double.isFinite(v)) {
                 throw badCell(col, f, "is not a finite number");
+            }
+            if (!InputLimits.plausibleMagnitude(v)) {
+                throw badCell(col, f, BEYOND_LIMIT);
             }
             store(dest, at, col, v);
         }
@@ -530,7 +553,8 @@ public final class TimeSeriesCsvReader implements SampleStream {
         }
         try {
             double v = JavaDoubleParser.parseDouble(b, from, q - from);
-            return Double.isFinite(v) ? v : Double.NaN;
+            // beyond the limit: NaN sends the row to the general path, which words the refusal
+            return InputLimits.plausibleMagnitude(v) ? v : Double.NaN;
         } catch (NumberFormatException e) {
             return Double.NaN;
         }

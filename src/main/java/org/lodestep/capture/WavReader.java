@@ -1,7 +1,9 @@
 package org.lodestep.capture;
 
 import org.lodestep.sample.Channel;
+import org.lodestep.sample.InputFiles;
 import org.lodestep.sample.InputFormatException;
+import org.lodestep.sample.InputLimits;
 import org.lodestep.sample.SampleStream;
 import java.io.BufferedInputStream;
 import java.io.IOException;
@@ -190,11 +192,12 @@ public final class WavReader implements SampleStream {
             throw at(fmtAt, Integer.toString(fmtFormat),
                     "is the audio format: expected 1 (PCM), 3 (IEEE float) or 0xFFFE (extensible)");
         }
-        if (fmtChannels < 1) {
-            throw at(fmtAt + 2, Integer.toString(fmtChannels), "channels: expected at least 1");
+        if (fmtChannels < 1 || fmtChannels > InputLimits.MAX_CHANNELS) {
+            throw at(fmtAt + 2, Integer.toString(fmtChannels),
+                    "channels: expected 1 to " + InputLimits.MAX_CHANNELS);
         }
-        if (fmtRate < 1) {
-            throw at(fmtAt + 4, Long.toString(fmtRate), "sample rate: expected a positive rate in Hz");
+        if (fmtRate < 1 || !InputLimits.plausibleSampleRate(fmtRate)) {
+            throw at(fmtAt + 4, Long.toString(fmtRate), "sample rate: " + InputLimits.sampleRateExpected());
         }
         if (fmtBlockAlign != fmtChannels * fmtBits / 8) {
             throw at(fmtAt + 12, Integer.toString(fmtBlockAlign),
@@ -204,6 +207,7 @@ public final class WavReader implements SampleStream {
 
     /** Opens a WAV file for streaming. */
     public static WavReader open(Path path) throws IOException, InputFormatException {
+        InputFiles.requireFile(path, "a WAV file");
         long size = Files.size(path);
         InputStream in = Files.newInputStream(path);
         try {

@@ -4,6 +4,8 @@ import java.io.PrintWriter;
 import java.nio.file.Path;
 import java.util.concurrent.Callable;
 
+import org.lodestep.report.ProvenanceBlock;
+import org.lodestep.workflow.Provenance;
 import org.lodestep.drive.SpeedAnswer;
 import org.lodestep.report.DriveHtml;
 import org.lodestep.report.DriveJson;
@@ -53,13 +55,15 @@ final class DriveCurveCommand implements Callable<Integer> {
         PrintWriter out = spec.commandLine().getOut();
         DriveCurve.Settings s = options.settings(simulate);
         DriveCurve.Result r = DriveOptions.usage(() -> DriveCurve.run(s, Progress.NONE));
+        Provenance provenance = options.provenance(spec);
         if (report != null) {
-            DriveHtml.curve(r).write(report);
+            ProvenanceBlock.html(DriveHtml.curve(r), provenance).write(report);
         }
         if (json) {
-            out.println(DriveJson.curve(r));
+            out.println(ProvenanceBlock.json(DriveJson.curve(r), provenance));
         } else {
             DriveText.curve(out, r);
+            out.print(ProvenanceBlock.text(provenance));
         }
         out.flush();
         return r.answer() != null && r.answer().verdict() != SpeedAnswer.Verdict.REACHABLE

@@ -16,6 +16,12 @@ final class DriveOptions {
             description = "Motor card JSON written by 'motor identify --json' (R, L, Kt, rotor teeth, current, supply).")
     Path card;
 
+    /** The run's provenance with the motor card file, when one was given. */
+    org.lodestep.workflow.Provenance provenance(picocli.CommandLine.Model.CommandSpec spec) {
+        org.lodestep.workflow.Provenance p = RunProvenance.of(spec);
+        return card == null ? p : p.withInput("motor card", card);
+    }
+
     @Option(names = "--phase-resistance-ohm", paramLabel = "OHM", description = "Phase resistance, ohm (overrides the card).")
     Double resistanceOhm;
 

@@ -4,6 +4,8 @@ import java.io.PrintWriter;
 import java.nio.file.Path;
 import java.util.concurrent.Callable;
 
+import org.lodestep.report.ProvenanceBlock;
+import org.lodestep.workflow.Provenance;
 import org.lodestep.drive.PlanningException;
 import org.lodestep.drive.ProfileShape;
 import org.lodestep.report.DriveHtml;
@@ -106,22 +108,28 @@ final class DrivePlanCommand implements Callable<Integer> {
             err.flush();
             return ExitCode.FINDING;
         }
+        Provenance provenance = options.provenance(spec);
+        if (avoidList != null) {
+            provenance = provenance.withInput("avoid-list", avoidList);
+        }
         if (tableCsv != null) {
             OutputFile.write(tableCsv, r.table().csv());
         }
         if (tableJson != null) {
-            OutputFile.write(tableJson, DriveJson.table(r.table()) + System.lineSeparator());
+            OutputFile.write(tableJson, ProvenanceBlock.json(DriveJson.table(r.table()), provenance)
+                    + System.lineSeparator());
         }
         if (report != null) {
-            DriveHtml.plan(r).write(report);
+            ProvenanceBlock.html(DriveHtml.plan(r), provenance).write(report);
         }
         if (json) {
-            out.println(DriveJson.plan(r));
+            out.println(ProvenanceBlock.json(DriveJson.plan(r), provenance));
         } else {
             DriveText.plan(out, r);
             if (tableCsv != null) {
                 out.println("step-rate table: " + tableCsv);
             }
+            out.print(ProvenanceBlock.text(provenance));
         }
         out.flush();
         return r.simulation() != null && r.simulation().planned().lostFullSteps() != 0

@@ -19,6 +19,16 @@ public final class ExitCode {
     public static final int RIG_OR_IO = 4;
     /** The QA database could not be opened, migrated, read or written. */
     public static final int DATABASE = 5;
+    /**
+     * Not yet determined: the answer is not certain (a probe session ended before it was, the readings leave the
+     * winding layout open) and no fault was found; a script must not take it for done. A fault found wins (3).
+     */
+    public static final int UNDETERMINED = 6;
+
+    /** The code of a leads identification: a fault first, then an answer not yet certain, else done. */
+    static int ofIdentification(boolean hasError, boolean determined) {
+        return hasError ? FINDING : determined ? OK : UNDETERMINED;
+    }
 
     private ExitCode() {
     }

@@ -9,6 +9,7 @@ import java.util.Locale;
 import java.util.OptionalDouble;
 import java.util.stream.Stream;
 
+import org.lodestep.report.ProvenanceBlock;
 import org.lodestep.capture.LeadPairReading;
 import org.lodestep.capture.ResistanceCsvReader;
 import org.lodestep.capture.ResistanceReadings;
@@ -53,7 +54,9 @@ final class LeadsDemo implements DemoCommand.Section {
             String title = (m.motor() != null ? m.motor() : f.getFileName().toString());
             LeadsTextReport.writeBrief(out, title, id);
             Path html = outDir.resolve("leads-" + f.getFileName().toString().replaceAll("\\.(csv|tsv)$", "") + ".html");
-            LeadsHtml.report(m.motor() != null ? "Motor " + m.motor() : title, f.toString(), id).write(html);
+            ProvenanceBlock.html(LeadsHtml.report(m.motor() != null ? "Motor " + m.motor() : title, f.toString(), id),
+                    RunProvenance.ofDemo("leads", "identify", f.toString(), "--report", html.toString())
+                            .withInput("readings", f)).write(html);
             out.println("  report: " + html);
             if (probeTarget == null && id.leads().size() == 6 && !id.hasError() && id.determined()) {
                 probeTarget = ResistanceCsvReader.read(f);

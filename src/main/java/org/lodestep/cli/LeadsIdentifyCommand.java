@@ -9,6 +9,8 @@ import java.util.concurrent.Callable;
 import org.lodestep.capture.LeadPairArgument;
 import org.lodestep.capture.LeadPairReading;
 import org.lodestep.report.LeadsHtml;
+import org.lodestep.report.ProvenanceBlock;
+import org.lodestep.workflow.Provenance;
 import org.lodestep.report.LeadsJsonView;
 import org.lodestep.report.LeadsTextReport;
 import org.lodestep.workflow.LeadsFromReadings;
@@ -68,7 +70,7 @@ final class LeadsIdentifyCommand implements Callable<Integer> {
                 throw new UsageException("--rig measures the motor itself: give no FILE or --pair with it");
             }
             PrintWriter out = spec.commandLine().getOut();
-            return RigLeadsIdentify.run(rig, options.settings(), options.json, out,
+            return RigLeadsIdentify.run(RunProvenance.of(spec), rig, options.settings(), options.json, out,
                     options.json ? spec.commandLine().getErr() : out);
         }
         if (files.isEmpty() && pairs.isEmpty()) {
@@ -84,14 +86,15 @@ final class LeadsIdentifyCommand implements Callable<Integer> {
         LeadsFromReadings.Result result = WorkflowCall.run(() -> LeadsFromReadings.run(
                 new LeadsFromReadings.Settings(files, extra, options.settings()), Progress.NONE));
         PrintWriter out = spec.commandLine().getOut();
+        Provenance provenance = RunProvenance.of(spec).withInputs("readings", files);
         List<LeadsJsonView.MotorJson> json = new ArrayList<>();
         for (LeadsFromReadings.Motor m : result.motors()) {
             String source = m.source() != null ? m.source() : "--pair";
             String title = m.motor() != null ? "Motor " + m.motor() + " (" + source + ")"
                     : m.source() == null ? "Readings from --pair" : source;
             if (report != null) {
-                LeadsHtml.report(m.motor() != null ? "Motor " + m.motor() : title, m.source(), m.identification())
-                        .write(report);
+                ProvenanceBlock.html(LeadsHtml.report(m.motor() != null ? "Motor " + m.motor() : title, m.source(),
+                        m.identification()), provenance).write(report);
             }
             if (options.json) {
                 json.add(LeadsJsonView.of(source, m.motor(), m.identification(), null));
@@ -101,11 +104,13 @@ final class LeadsIdentifyCommand implements Callable<Integer> {
             }
         }
         if (options.json) {
-            out.println(LeadsJsonView.write(json));
+            out.println(ProvenanceBlock.json(LeadsJsonView.write(json), provenance));
         } else {
             out.println(LeadsTextReport.CAUTION);
+            out.print(ProvenanceBlock.text(provenance));
         }
         out.flush();
-        return result.hasError() ? ExitCode.FINDING : ExitCode.OK;
+        return ExitCode.ofIdentification(result.hasError(),
+                result.motors().stream().allMatch(m -> m.identification().determined()));
     }
 }

@@ -19,6 +19,8 @@ import org.lodestep.capture.LeadPairReading;
 import org.lodestep.report.IdentifyProgressText;
 import org.lodestep.report.LeadsJsonView;
 import org.lodestep.report.LeadsTextReport;
+import org.lodestep.report.ProvenanceBlock;
+import org.lodestep.workflow.Provenance;
 import org.lodestep.wiring.Identification;
 import org.lodestep.workflow.LeadsProbe;
 import org.lodestep.workflow.Progress;
@@ -75,16 +77,21 @@ final class LeadsProbeCommand implements Callable<Integer> {
             LeadsProbe.Result r = WorkflowCall.run(() -> LeadsProbe.run(settings, new Prompt(in, prompts, scripted),
                     Progress.NONE));
             Identification id = r.identification();
+            Provenance provenance = RunProvenance.of(spec);
+            if (answers != null) {
+                provenance = provenance.withInput("answers", answers);
+            }
             if (options.json) {
-                out.println(LeadsJsonView.write(List.of(LeadsJsonView.of("probe", null, id,
-                        new LeadsJsonView.ProbeJson(r.readings(), all)))));
+                out.println(ProvenanceBlock.json(LeadsJsonView.write(List.of(LeadsJsonView.of("probe", null, id,
+                        new LeadsJsonView.ProbeJson(r.readings(), all)))), provenance));
             } else {
                 out.println();
                 out.println(IdentifyProgressText.probeDone(r.readings(), all, leads.size(), r.stopped() != null));
                 LeadsTextReport.write(out, "Probed motor", id);
+                out.print(ProvenanceBlock.text(provenance));
             }
             out.flush();
-            return id.hasError() ? ExitCode.FINDING : ExitCode.OK;
+            return ExitCode.ofIdentification(id.hasError(), id.determined());
         }
     }
 

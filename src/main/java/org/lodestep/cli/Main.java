@@ -9,6 +9,7 @@ import java.nio.file.AccessDeniedException;
 import java.nio.file.NoSuchFileException;
 
 import org.lodestep.sample.InputFormatException;
+import org.lodestep.sample.InputLimits;
 import org.lodestep.qa.DatabaseUrls;
 import org.lodestep.qa.StoreException;
 import org.lodestep.rig.RigException;
@@ -32,7 +33,8 @@ import picocli.CommandLine.Option;
             "  2  usage error or unreadable input",
             "  3  the analysis found an error-severity fault, or a QA check failed",
             "  4  rig or I/O failure",
-            "  5  database failure"
+            "  5  database failure",
+            "  6  not yet determined: a probe ended early, or the readings leave the answer open"
         })
 public final class Main implements Runnable {
 
@@ -118,7 +120,44 @@ public final class Main implements Runnable {
         cl.setCaseInsensitiveEnumValuesAllowed(true);
         cl.setUsageHelpAutoWidth(true);
         cl.setExecutionExceptionHandler((ex, cmd, parseResult) -> handle(ex, cmd, isVerbose(parseResult)));
+        cl.setParameterExceptionHandler(Main::badParameter);
+        cl.registerConverter(Double.class, Main::plausibleNumber);
+        cl.registerConverter(Double.TYPE, Main::plausibleNumber);
         return cl;
+    }
+
+    /**
+     * Every number typed on the command line: finite and no larger in magnitude than any bench quantity can be
+     * ({@link InputLimits#MAX_SAMPLE_MAGNITUDE}), so {@code 1e308} or {@code NaN} never reaches a formula; a bad value
+     * is the one-line parameter error of {@link #badParameter}.
+     */
+    static Double plausibleNumber(String text) {
+        double v;
+        try {
+            v = Double.parseDouble(text.strip());
+        } catch (NumberFormatException e) {
+            throw new CommandLine.TypeConversionException("'" + text + "' is not a number");
+        }
+        if (!InputLimits.plausibleMagnitude(v)) {
+            throw new CommandLine.TypeConversionException("'" + text + "' is not a plausible value: expected a finite"
+                    + " number of magnitude at most " + InputLimits.MAX_SAMPLE_MAGNITUDE);
+        }
+        return v;
+    }
+
+    /**
+     * A bad option or value: one line naming it and where help is, instead of the whole usage (which buries the
+     * reason under 60 lines); exit 2.
+     */
+    static int badParameter(CommandLine.ParameterException ex, String[] args) {
+        CommandLine cmd = ex.getCommandLine();
+        String name = cmd.getCommandSpec().qualifiedName();
+        String reason = String.valueOf(ex.getMessage()).strip().lines().findFirst().orElse("bad option")
+                .replaceAll("\\p{Cntrl}", "?");
+        PrintWriter err = cmd.getErr();
+        err.println(name + ": " + DatabaseUrls.redact(reason) + " (see '" + name + " --help')");
+        err.flush();
+        return ExitCode.USAGE;
     }
 
     private static boolean isVerbose(CommandLine.ParseResult parseResult) {
@@ -153,6 +192,9 @@ public final class Main implements Runnable {
         } else if (t instanceof AccessDeniedException) {
             code = ExitCode.USAGE;
             message = t.getMessage() + ": permission denied";
+        } else if (t instanceof org.lodestep.report.html.OutputFile.NotWritten) {
+            code = ExitCode.USAGE;
+            message = t.getMessage();
         } else if (t instanceof UsageException || t instanceof org.lodestep.workflow.SettingsException) {
             code = ExitCode.USAGE;
             message = t.getMessage();

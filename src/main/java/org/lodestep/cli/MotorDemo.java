@@ -6,6 +6,7 @@ import java.nio.file.Path;
 import java.util.ArrayList;
 import java.util.List;
 
+import org.lodestep.report.ProvenanceBlock;
 import org.lodestep.wiring.Connection;
 import org.lodestep.motor.MotorCard;
 import org.lodestep.report.MotorCardText;
@@ -52,11 +53,16 @@ final class MotorDemo implements DemoCommand.Section {
         Path html = outDir.resolve("motor-card.html");
         List<MotorHtml.Trace> traces = r.traces().stream()
                 .map(t -> new MotorHtml.Trace(t.source(), t.timeS(), t.currentA())).toList();
-        MotorHtml.report(resistance.toString(), card, traces, r.emf(), MotorOptionHints.INSTANCE).write(html);
+        org.lodestep.workflow.Provenance provenance = RunProvenance.ofDemo(args.toArray(String[]::new))
+                .withInput("resistance", resistance).withInputs("step response", steps).withInput("back-EMF", backEmf);
+        ProvenanceBlock.html(MotorHtml.report(resistance.toString(), card, traces, r.emf(),
+                MotorOptionHints.INSTANCE), provenance).write(html);
         printCard(out, card);
+        out.print(ProvenanceBlock.text(provenance));
         out.println("report: " + html);
         Path json = outDir.resolve("motor-card.json");
-        OutputFile.write(json, MotorJson.write(card, MotorOptionHints.INSTANCE) + System.lineSeparator());
+        OutputFile.write(json, ProvenanceBlock.json(MotorJson.write(card, MotorOptionHints.INSTANCE), provenance)
+                + System.lineSeparator());
         out.println("(the same card as JSON: " + json + ")");
         int code = card.hasError() ? ExitCode.FINDING : ExitCode.OK;
 

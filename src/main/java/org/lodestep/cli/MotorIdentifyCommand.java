@@ -20,6 +20,8 @@ import org.lodestep.workflow.Progress;
 import org.lodestep.report.IdentifyProgressText;
 import org.lodestep.report.MotorHtml;
 import org.lodestep.report.MotorJson;
+import org.lodestep.report.ProvenanceBlock;
+import org.lodestep.workflow.Provenance;
 import org.lodestep.report.MotorCardText;
 
 import picocli.CommandLine.Command;
@@ -152,6 +154,14 @@ final class MotorIdentifyCommand implements Callable<Integer> {
         MotorCardSettings cardSettings = new MotorCardSettings(connection, phaseCurrentA, supplyV, inertiaKgM2);
         MotorCard card;
         List<MotorHtml.Trace> traces = new ArrayList<>();
+        Provenance provenance = RunProvenance.of(spec);
+        if (resistance != null) {
+            provenance = provenance.withInput("resistance", resistance);
+        }
+        provenance = provenance.withInputs("step response", stepResponses);
+        if (backEmf != null) {
+            provenance = provenance.withInput("back-EMF", backEmf);
+        }
         BackEmfTrace emfTrace = null;
         if (rig != null) {
             if (!json) {
@@ -159,11 +169,15 @@ final class MotorIdentifyCommand implements Callable<Integer> {
                 out.println();
             }
             PrintWriter log = json ? spec.commandLine().getErr() : out;
+            RigLog rigLog = new RigLog(log, new RigInfo[1]);
             try (RigClient c = RigCli.connect(rig)) {
                 MotorOnRig.Result r = WorkflowCall.run(() -> MotorOnRig.run(c, new MotorOnRig.Settings(revolutions,
-                        cardSettings), new RigLog(log)));
+                        cardSettings), rigLog));
                 card = r.card();
                 emfTrace = r.emf();
+            }
+            if (rigLog.info()[0] != null) {
+                provenance = provenance.withRig(RunProvenance.rig(rigLog.info()[0]));
             }
         } else {
             MotorFromFiles.Result r = WorkflowCall.run(() -> MotorFromFiles.run(new MotorFromFiles.Settings(
@@ -175,23 +189,30 @@ final class MotorIdentifyCommand implements Callable<Integer> {
             emfTrace = r.emf();
         }
         if (report != null) {
-            MotorHtml.report(title(), card, traces, emfTrace, MotorOptionHints.INSTANCE).write(report);
+            ProvenanceBlock.html(MotorHtml.report(title(), card, traces, emfTrace, MotorOptionHints.INSTANCE),
+                    provenance).write(report);
         }
         if (json) {
-            out.println(MotorJson.write(card, MotorOptionHints.INSTANCE));
+            out.println(ProvenanceBlock.json(MotorJson.write(card, MotorOptionHints.INSTANCE), provenance));
         } else {
             out.print(MotorCardText.render(card, MotorOptionHints.INSTANCE));
             out.println();
             SAFETY.forEach(out::println);
+            out.print(ProvenanceBlock.text(provenance));
         }
         out.flush();
         return card.hasError() ? ExitCode.FINDING : ExitCode.OK;
     }
 
     /** Prints the rig sequence's stages as they begin. */
-    record RigLog(PrintWriter out) implements MotorOnRig.Listener {
+    record RigLog(PrintWriter out, RigInfo[] info) implements MotorOnRig.Listener {
+        RigLog(PrintWriter out) {
+            this(out, new RigInfo[1]);
+        }
+
         @Override
         public void connected(RigInfo info, List<String> leads) {
+            this.info[0] = info;
             out.println(IdentifyProgressText.motorConnected(info, leads));
         }
 

@@ -5,6 +5,8 @@ import java.util.LinkedHashMap;
 import java.util.Map;
 import java.util.concurrent.Callable;
 
+import org.lodestep.report.ProvenanceBlock;
+import org.lodestep.workflow.Provenance;
 import org.lodestep.qa.RecordStore;
 import org.lodestep.qa.StoredRecord;
 import org.lodestep.report.Json;
@@ -63,9 +65,10 @@ final class QaCertificateCommand implements Callable<Integer> {
             doc.put("serial", serial);
             doc.put("latest", latest);
             doc.put("history", c.earlier());
-            text = Json.write(doc) + System.lineSeparator();
+            text = ProvenanceBlock.json(Json.write(doc), store.provenance(RunProvenance.of(spec)))
+                    + System.lineSeparator();
         } else {
-            text = QaText.certificate(c.history());
+            text = QaText.certificate(c.history()) + ProvenanceBlock.text(store.provenance(RunProvenance.of(spec)));
         }
         if (outFile != null) {
             OutputFile.write(outFile, text);

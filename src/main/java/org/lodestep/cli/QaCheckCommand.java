@@ -6,7 +6,6 @@ import java.io.InputStreamReader;
 import java.io.PrintWriter;
 import java.net.InetAddress;
 import java.nio.charset.StandardCharsets;
-import java.nio.file.Files;
 import java.nio.file.Path;
 import java.util.ArrayList;
 import java.util.LinkedHashMap;
@@ -14,12 +13,17 @@ import java.util.List;
 import java.util.Map;
 import java.util.concurrent.Callable;
 
+import org.lodestep.report.ProvenanceBlock;
+import org.lodestep.workflow.Provenance;
 import org.lodestep.sample.InputFormatException;
+import org.lodestep.sample.InputLimits;
+import org.lodestep.sample.Utf8Text;
 import org.lodestep.qa.Parameters;
 import org.lodestep.qa.PartSpec;
 import org.lodestep.qa.PartSpecReader;
 import org.lodestep.qa.RecordStore;
 import org.lodestep.qa.StoreException;
+import org.lodestep.qa.LotTally;
 import org.lodestep.qa.Tally;
 import org.lodestep.qa.Verdict;
 import org.lodestep.report.Json;
@@ -100,6 +104,7 @@ final class QaCheckCommand implements Callable<Integer> {
     picocli.CommandLine.Model.CommandSpec spec;
 
     private PartSpec partSpec;
+    private Provenance provenance;
 
     @Override
     public Integer call() throws Exception {
@@ -125,41 +130,79 @@ final class QaCheckCommand implements Callable<Integer> {
             throw new UsageException("--series-ohm must be 0 or more, got " + readings.seriesOhm);
         }
         partSpec = PartSpecReader.read(specFile);
-        if (!json && partSpec.limit(Parameters.INSULATION_RESISTANCE).isPresent()) {
-            out.println(QaText.insulationCaution(partSpec.insulationTestVoltageV()));
+        provenance = readings.provenance(RunProvenance.of(spec).withInput("spec", specFile));
+        if (serialsFile != null && !serialsFile.equals("-")) {
+            provenance = provenance.withInput("serials", Path.of(serialsFile));
         }
+        // Every input the whole lot shares is read before the first motor, so a bad one stops the run at once.
+        List<String> listedSerials = serial == null && serialsFile != null && !serialsFile.equals("-")
+                ? serialsFromFile(Path.of(serialsFile)) : null;
         QaCheck.Settings settings = new QaCheck.Settings(partSpec, lot, readings.sources(),
                 ambientC == null ? Double.NaN : ambientC, operator(), station(), VersionProvider.version(),
                 readings.confirmation());
         try (RecordStore records = store.open()) {
             QaCheck check = new QaCheck(settings, records);
+            // the caution once every shared input has been read, and only where an insulation test is part of the work
+            if (!json && partSpec.limit(Parameters.INSULATION_RESISTANCE).isPresent() && insulationTested()) {
+                out.println(QaText.insulationCaution(partSpec.insulationTestVoltageV()));
+            }
             if (serial != null) {
                 RecordStore.Appended a = check.check(serial, progress());
                 if (report != null) {
-                    QaHtml.check(serial, List.of(a.record()), partSpec.insulationTestVoltageV(), Map.of())
-                            .write(report);
+                    ProvenanceBlock.html(QaHtml.check(serial, List.of(a.record()), partSpec.insulationTestVoltageV(),
+                            Map.of()), provenance).write(report);
                 }
                 if (json) {
-                    out.println(Json.write(a));
+                    out.println(ProvenanceBlock.json(Json.write(a), provenance));
                 } else {
                     out.print(QaText.check(a.record(), a.created(), records.location()));
+                    out.print(ProvenanceBlock.text(provenance));
                 }
                 out.flush();
                 return a.record().submission().verdict() == Verdict.PASS ? ExitCode.OK : ExitCode.FINDING;
             }
-            return lot(check, records, out);
+            return lot(check, records, out, listedSerials);
         }
     }
 
-    private int lot(QaCheck check, RecordStore records, PrintWriter out)
+    /** Whether this run involves an insulation test: the rig applies it, or the inspector logs or types readings. */
+    private boolean insulationTested() {
+        return readings.rig != null || !readings.insulation.isEmpty() || readings.meterLogFile != null;
+    }
+
+    /** The serial numbers of a list file, read strictly; a file without any is refused before the lot starts. */
+    private static List<String> serialsFromFile(Path file) throws IOException, InputFormatException {
+        String text = Utf8Text.read(file, "serial numbers, one per line");
+        List<String> serials = new ArrayList<>();
+        String[] lines = text.split("\r?\n", -1);
+        for (int i = 0; i < lines.length; i++) {
+            String sn = lines[i].strip();
+            if (sn.isEmpty() || sn.startsWith("#")) {
+                continue;
+            }
+            if (sn.length() > InputLimits.MAX_SERIAL_CHARS) {
+                throw new InputFormatException(file.toString(), i + 1, null, sn, "is " + sn.length()
+                        + " characters long: expected a serial number of at most " + InputLimits.MAX_SERIAL_CHARS);
+            }
+            serials.add(sn);
+        }
+        if (serials.isEmpty()) {
+            throw new InputFormatException(file.toString(), InputFormatException.NO_LINE, null, null,
+                    "has no serial numbers: expected one serial number per line");
+        }
+        return serials;
+    }
+
+    private int lot(QaCheck check, RecordStore records, PrintWriter out, List<String> listedSerials)
             throws IOException, StoreException {
         PrintWriter err = spec.commandLine().getErr();
+        LotTally lotTally = new LotTally();
         Tally tally = Tally.NONE;
         List<RecordStore.Appended> results = new ArrayList<>();
         List<Map<String, String>> errors = new ArrayList<>();
-        try (BufferedReader in = serialsFile == null || serialsFile.equals("-")
-                ? new BufferedReader(new InputStreamReader(System.in, StandardCharsets.UTF_8))
-                : Files.newBufferedReader(Path.of(serialsFile), StandardCharsets.UTF_8)) {
+        try (BufferedReader in = listedSerials != null
+                ? new BufferedReader(new java.io.StringReader(String.join("\n", listedSerials)))
+                : new BufferedReader(new InputStreamReader(System.in, StandardCharsets.UTF_8))) {
             if (!json) {
                 out.println("lot " + lot + ": scan or type serial numbers, one per line; end of input (Ctrl-D) ends the lot");
                 out.flush();
@@ -181,11 +224,11 @@ final class QaCheckCommand implements Callable<Integer> {
                     err.println("lodestep qa check: serial " + sn.replaceAll("\\p{Cntrl}", "?") + " not recorded: " + msg);
                     err.flush();
                     errors.add(Map.of("serial", sn, "message", msg));
-                    tally = tally.plus(Verdict.INCOMPLETE);
+                    tally = lotTally.add(sn, Verdict.INCOMPLETE);
                     continue;
                 }
                 results.add(a);
-                tally = tally.plus(a.record().submission().verdict());
+                tally = lotTally.add(sn, a.record().submission().verdict());
                 if (!json) {
                     out.print(QaText.check(a.record(), a.created(), records.location()));
                     out.println(QaText.tally(tally));
@@ -199,8 +242,8 @@ final class QaCheckCommand implements Callable<Integer> {
             for (Map<String, String> e : errors) {
                 notRecorded.put(e.get("serial"), e.get("message"));
             }
-            QaHtml.check("lot " + lot, results.stream().map(RecordStore.Appended::record).toList(),
-                    partSpec.insulationTestVoltageV(), notRecorded).write(report);
+            ProvenanceBlock.html(QaHtml.check("lot " + lot, results.stream().map(RecordStore.Appended::record)
+                    .toList(), partSpec.insulationTestVoltageV(), notRecorded), provenance).write(report);
         }
         if (json) {
             Map<String, Object> doc = new LinkedHashMap<>();
@@ -211,9 +254,10 @@ final class QaCheckCommand implements Callable<Integer> {
             doc.put("incomplete", tally.incomplete());
             doc.put("results", results);
             doc.put("errors", errors);
-            out.println(Json.write(doc));
+            out.println(ProvenanceBlock.json(Json.write(doc), provenance));
         } else {
             out.println("lot " + lot + " done: " + QaText.tally(tally));
+            out.print(ProvenanceBlock.text(provenance));
         }
         out.flush();
         return tally.allPassed() ? ExitCode.OK : ExitCode.FINDING;

@@ -8,11 +8,13 @@ import java.util.ArrayList;
 import java.util.List;
 import java.util.Map;
 
+import org.lodestep.report.ProvenanceBlock;
 import org.lodestep.qa.PartSpec;
 import org.lodestep.qa.PartSpecReader;
 import org.lodestep.qa.RecordQuery;
 import org.lodestep.qa.RecordStore;
 import org.lodestep.qa.RecordStores;
+import org.lodestep.qa.LotTally;
 import org.lodestep.qa.Tally;
 import org.lodestep.qa.Verdict;
 import org.lodestep.report.html.OutputFile;
@@ -63,7 +65,7 @@ final class QaDemo implements DemoCommand.Section {
             worst = expect(worst, lot(spec, qa, dir, store, out), ExitCode.FINDING);
 
             out.println();
-            out.println("KV24-00124 read 62 Mohm phase B to frame. After a night in the drying cabinet it is re-tested:");
+            out.println("KV24-00124 read 62 M\u03A9 phase B to frame. After a night in the drying cabinet it is re-tested:");
             QaReadingSources retest = new QaReadingSources(qa.resolve("KV24-00124.csv"), null, null,
                     List.of(2.79, 2.81), List.of(new TypedInsulation("a-frame", 1320, Double.NaN),
                     new TypedInsulation("b-frame", 1150, Double.NaN), new TypedInsulation("a-b", 1710, Double.NaN)),
@@ -78,7 +80,9 @@ final class QaDemo implements DemoCommand.Section {
             RecordQuery lot = new RecordQuery(null, LOT, null, null, null);
             QaLotReport.Result report = QaLotReport.run(lot, store, Progress.NONE);
             String title = "QA report, lot " + LOT;
-            QaHtml.lot(title, report.summary()).write(dir.resolve("qa-report-" + LOT + ".html"));
+            ProvenanceBlock.html(QaHtml.lot(title, report.summary()), RunProvenance.ofDemo("qa", "report", "--lot",
+                    LOT, "--db", db.toString()).withInput("record store", db))
+                    .write(dir.resolve("qa-report-" + LOT + ".html"));
             out.print(QaText.lotReport(title, report.summary()));
             out.println("reports: " + dir.resolve("qa-check-" + LOT + ".html") + ", " + dir.resolve("qa-report-" + LOT
                     + ".html"));
@@ -110,6 +114,7 @@ final class QaDemo implements DemoCommand.Section {
         out.println();
         out.println("$ lodestep qa check --spec kv-4218-m.toml --lot " + LOT + " ... < lot-L2607-serials.txt");
         List<RecordStore.Appended> results = new ArrayList<>();
+        LotTally lotTally = new LotTally();
         Tally tally = Tally.NONE;
         for (String line : Files.readAllLines(qa.resolve("lot-L2607-serials.txt"))) {
             String sn = line.strip();
@@ -118,7 +123,7 @@ final class QaDemo implements DemoCommand.Section {
             }
             RecordStore.Appended a = check.check(sn, Progress.NONE);
             results.add(a);
-            tally = tally.plus(a.record().submission().verdict());
+            tally = lotTally.add(sn, a.record().submission().verdict());
             if (a.record().submission().verdict() == Verdict.PASS) {
                 // Compact: the framed serial line and the tally; the full verdict only for motors that did not pass.
                 QaText.check(a.record(), a.created(), store.location()).lines().filter(l -> l.startsWith("=   serial"))
@@ -130,8 +135,15 @@ final class QaDemo implements DemoCommand.Section {
                 out.println();
             }
         }
-        QaHtml.check("lot " + LOT, results.stream().map(RecordStore.Appended::record).toList(),
-                spec.insulationTestVoltageV(), Map.of()).write(dir.resolve("qa-check-" + LOT + ".html"));
+        ProvenanceBlock.html(QaHtml.check("lot " + LOT, results.stream().map(RecordStore.Appended::record).toList(),
+                spec.insulationTestVoltageV(), Map.of()), RunProvenance.ofDemo("qa", "check", "--spec",
+                qa.resolve("kv-4218-m.toml").toString(), "--lot", LOT, "--resistance-pattern",
+                qa.resolve("{serial}.csv").toString(), "--meter-log", qa.resolve("lot-L2607-meter-log.csv").toString(),
+                "--serials", qa.resolve("lot-L2607-serials.txt").toString())
+                .withInput("spec", qa.resolve("kv-4218-m.toml"))
+                .withInput("meter log", qa.resolve("lot-L2607-meter-log.csv"))
+                .withInput("serials", qa.resolve("lot-L2607-serials.txt")))
+                .write(dir.resolve("qa-check-" + LOT + ".html"));
         out.println("lot " + LOT + " done: " + QaText.tally(tally));
         return tally.allPassed() ? ExitCode.OK : ExitCode.FINDING;
     }

@@ -6,6 +6,8 @@ import java.util.LinkedHashMap;
 import java.util.Map;
 import java.util.concurrent.Callable;
 
+import org.lodestep.report.ProvenanceBlock;
+import org.lodestep.workflow.Provenance;
 import org.lodestep.qa.RecordStore;
 import org.lodestep.report.Json;
 import org.lodestep.report.html.OutputFile;
@@ -58,7 +60,7 @@ final class QaExportCommand implements Callable<Integer> {
             doc.put("out", outFile.toString());
             doc.put("records", records);
             doc.put("rows", rows);
-            out.println(Json.write(doc));
+            out.println(ProvenanceBlock.json(Json.write(doc), store.provenance(RunProvenance.of(spec))));
         } else {
             out.println("wrote " + rows + " rows from " + records + " records to " + outFile);
         }

@@ -24,6 +24,18 @@ final class QaReadings {
                     + " the windings are identified and their end-to-end resistances become the phase resistances.")
     Path resistanceFile;
 
+    /** {@code p} with the reading files given for one motor (patterns are resolved per serial: the records hash them). */
+    org.lodestep.workflow.Provenance provenance(org.lodestep.workflow.Provenance p) {
+        if (resistanceFile != null) {
+            p = p.withInput("resistance", resistanceFile);
+        }
+        if (meterLogFile != null) {
+            p = p.withInput("meter log", meterLogFile);
+        }
+        p = p.withInputs("step response", stepResponses);
+        return backEmfFile == null ? p : p.withInput("back-EMF", backEmfFile);
+    }
+
     @Option(names = "--resistance-pattern", paramLabel = "PATTERN",
             description = "Lot mode: the resistance CSV of each serial number, {serial} replaced, e.g. "
                     + "'captures/{serial}.csv'.")

@@ -5,6 +5,8 @@ import java.util.LinkedHashMap;
 import java.util.Map;
 import java.util.concurrent.Callable;
 
+import org.lodestep.report.ProvenanceBlock;
+import org.lodestep.workflow.Provenance;
 import org.lodestep.qa.RecordStore;
 import org.lodestep.report.Json;
 import org.lodestep.report.QaHtml;
@@ -51,8 +53,9 @@ final class QaReportCommand implements Callable<Integer> {
         try (RecordStore rs = store.openExisting()) {
             r = QaLotReport.run(filter.query(), rs, Progress.NONE);
         }
+        Provenance provenance = store.provenance(RunProvenance.of(spec));
         if (report != null) {
-            QaHtml.lot(filter.title(), r.summary()).write(report);
+            ProvenanceBlock.html(QaHtml.lot(filter.title(), r.summary()), provenance).write(report);
         }
         if (json) {
             Map<String, Object> doc = new LinkedHashMap<>();
@@ -61,9 +64,10 @@ final class QaReportCommand implements Callable<Integer> {
             doc.put("from", filter.from);
             doc.put("to", filter.to);
             doc.put("summary", r.summary());
-            out.println(Json.write(doc));
+            out.println(ProvenanceBlock.json(Json.write(doc), provenance));
         } else {
             out.print(QaText.lotReport(filter.title(), r.summary()));
+            out.print(ProvenanceBlock.text(provenance));
         }
         out.flush();
         return ExitCode.OK;

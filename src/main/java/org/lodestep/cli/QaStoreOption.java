@@ -24,6 +24,15 @@ final class QaStoreOption {
         return open();
     }
 
+    /**
+     * {@code p} with the record store as an input: a SQLite file is hashed as it is now (the state the report read);
+     * a PostgreSQL store is named by the command line, and each record carries its own SHA-256.
+     */
+    org.lodestep.workflow.Provenance provenance(org.lodestep.workflow.Provenance p) {
+        return RecordStores.sqliteFile(db).filter(java.nio.file.Files::exists)
+                .map(f -> p.withInput("record store", f)).orElse(p);
+    }
+
     RecordStore open() throws StoreException {
         try {
             return RecordStores.open(db, System.getenv());

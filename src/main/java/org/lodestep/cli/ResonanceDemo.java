@@ -89,13 +89,14 @@ final class ResonanceDemo implements DemoCommand.Section {
         return worst;
     }
 
-    /** The sweep's header and band table; the cautions were printed once already. */
+    /** The sweep's answer, header and band table; the cautions were printed once already, so they are left out. */
     private static void printUntilRecommendations(String text, PrintWriter out) {
+        boolean safety = false;
         for (String line : text.split("\\R")) {
-            if (line.startsWith("Recommendations") || line.startsWith("Safety")) {
-                break;
+            safety = line.startsWith("Safety") || safety && !line.isBlank();
+            if (!safety) {
+                out.println(line);
             }
-            out.println(line);
         }
     }
 

@@ -3,6 +3,8 @@ package org.lodestep.cli;
 import java.io.PrintWriter;
 import java.util.concurrent.Callable;
 
+import org.lodestep.report.ProvenanceBlock;
+import org.lodestep.workflow.Provenance;
 import org.lodestep.report.ResonanceJson;
 import org.lodestep.report.ResonanceText;
 import org.lodestep.workflow.ResonancePredict;
@@ -80,9 +82,10 @@ final class ResonancePredictCommand implements Callable<Integer> {
                         nanIfNull(measuredNaturalHz), microsteps, nanIfNull(travelMmPerRev),
                         nanIfNull(phaseResistanceOhm), nanIfNull(phaseInductanceH))));
         if (json) {
-            out.println(ResonanceJson.prediction(r.prediction()));
+            out.println(ProvenanceBlock.json(ResonanceJson.prediction(r.prediction()), RunProvenance.of(spec)));
         } else {
             ResonanceText.prediction(out, r.prediction(), r.units());
+            out.print(ProvenanceBlock.text(RunProvenance.of(spec)));
         }
         out.flush();
         return ExitCode.OK;

@@ -4,6 +4,8 @@ import java.io.PrintWriter;
 import java.nio.file.Path;
 import java.util.concurrent.Callable;
 
+import org.lodestep.report.ProvenanceBlock;
+import org.lodestep.workflow.Provenance;
 import org.lodestep.report.ResonanceHtml;
 import org.lodestep.report.ResonanceJson;
 import org.lodestep.report.ResonanceText;
@@ -56,13 +58,15 @@ final class ResonanceRingdownCommand implements Callable<Integer> {
         PrintWriter out = spec.commandLine().getOut();
         ResonanceRingdown.Result r = WorkflowCall.run(() -> ResonanceRingdown.fit(file,
                 new ResonanceRingdown.Settings(channel, fromS, toS), Progress.NONE));
+        Provenance provenance = RunProvenance.of(spec).withInput("ring-down", file);
         if (report != null) {
-            ResonanceHtml.ringDown(r).write(report);
+            ProvenanceBlock.html(ResonanceHtml.ringDown(r), provenance).write(report);
         }
         if (json) {
-            out.println(ResonanceJson.ringDown(r.source(), r.channel(), r.fit()));
+            out.println(ProvenanceBlock.json(ResonanceJson.ringDown(r.source(), r.channel(), r.fit()), provenance));
         } else {
             ResonanceText.ringDown(out, r.source(), r.channel(), r.fit());
+            out.print(ProvenanceBlock.text(provenance));
         }
         out.flush();
         return ExitCode.OK;

@@ -4,6 +4,8 @@ import java.io.PrintWriter;
 import java.nio.file.Path;
 import java.util.concurrent.Callable;
 
+import org.lodestep.report.ProvenanceBlock;
+import org.lodestep.workflow.Provenance;
 import org.lodestep.report.html.OutputFile;
 import org.lodestep.report.ResonanceHtml;
 import org.lodestep.report.ResonanceJson;
@@ -150,23 +152,27 @@ final class ResonanceSweepCommand implements Callable<Integer> {
         PrintWriter out = spec.commandLine().getOut();
         ResonanceSweep.Settings settings = WorkflowCall.run(this::settings);
         ResonanceSweep.Result r = WorkflowCall.run(() -> ResonanceSweep.analyse(file, settings, Progress.NONE));
+        Provenance provenance = RunProvenance.of(spec).withInput("sweep", file);
         if (avoidListFile != null) {
-            OutputFile.write(avoidListFile, ResonanceJson.avoidList(r.avoid()) + System.lineSeparator());
+            OutputFile.write(avoidListFile, ProvenanceBlock.json(ResonanceJson.avoidList(r.avoid()), provenance)
+                    + System.lineSeparator());
         }
         ResonanceText.SweepHeader header = new ResonanceText.SweepHeader(r.source(), r.channel(), r.unit(),
                 r.sampleRateHz(), r.rateLaw());
         if (report != null) {
-            ResonanceHtml.sweep(header, r.sweep(), r.units(), r.avoid(), r.spectrogramColumnRatesFullStepsPerS())
-                    .write(report);
+            ProvenanceBlock.html(ResonanceHtml.sweep(header, r.sweep(), r.units(), r.avoid(),
+                    r.spectrogramColumnRatesFullStepsPerS()), provenance).write(report);
         }
         if (json) {
-            out.println(ResonanceJson.sweep(header, r.sweep(), r.units(), r.avoid(), response));
+            out.println(ProvenanceBlock.json(ResonanceJson.sweep(header, r.sweep(), r.units(), r.avoid(), response),
+                    provenance));
         } else {
             ResonanceText.sweep(out, header, r.sweep(), r.units(), r.avoid());
             if (avoidListFile != null) {
                 out.println();
                 out.println("Avoid-list written to " + avoidListFile);
             }
+            out.print(ProvenanceBlock.text(provenance));
         }
         out.flush();
         // a rotor that slipped lost position: an error-severity finding

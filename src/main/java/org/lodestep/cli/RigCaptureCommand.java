@@ -4,6 +4,7 @@ import java.io.PrintWriter;
 import java.nio.file.Path;
 import java.util.concurrent.Callable;
 
+import org.lodestep.report.ProvenanceBlock;
 import org.lodestep.report.Json;
 import org.lodestep.report.RigText;
 import org.lodestep.drive.DriveMode;
@@ -108,11 +109,13 @@ final class RigCaptureCommand implements Callable<Integer> {
             r = WorkflowCall.run(() -> RigSweepCapture.run(settings, bar));
         }
         if (json) {
-            o.println(Json.write(r.capture().metadata()));
+            o.println(ProvenanceBlock.json(Json.write(r.capture().metadata()),
+                    RunProvenance.withCaptureRig(RunProvenance.of(spec), r.capture().metadata())));
             spec.commandLine().getErr().println("saved " + r.saved());
         } else {
             o.print(RigText.capture(r.capture()));
             o.println("saved " + r.saved());
+            o.print(ProvenanceBlock.text(RunProvenance.withCaptureRig(RunProvenance.of(spec), r.capture().metadata())));
         }
         o.flush();
         return ExitCode.OK;

@@ -4,6 +4,7 @@ import java.io.Console;
 import java.io.PrintWriter;
 import java.util.concurrent.Callable;
 
+import org.lodestep.report.ProvenanceBlock;
 import org.lodestep.report.ConformanceText;
 import org.lodestep.report.Json;
 import org.lodestep.rig.RigConformance;
@@ -66,7 +67,8 @@ final class RigConformanceCommand implements Callable<Integer> {
                         }
                     }
                 });
-        out.print(json ? Json.write(r) + "\n" : ConformanceText.table(r));
+        out.print(json ? ProvenanceBlock.json(Json.write(r), RunProvenance.of(spec)) + "\n"
+                : ConformanceText.table(r) + ProvenanceBlock.text(RunProvenance.of(spec)));
         out.flush();
         return r.passed() ? ExitCode.OK : ExitCode.FINDING;
     }

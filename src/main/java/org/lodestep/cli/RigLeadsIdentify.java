@@ -6,6 +6,8 @@ import java.util.OptionalDouble;
 
 import org.lodestep.report.LeadsJsonView;
 import org.lodestep.report.LeadsTextReport;
+import org.lodestep.report.ProvenanceBlock;
+import org.lodestep.workflow.Provenance;
 import org.lodestep.report.IdentifyProgressText;
 import org.lodestep.rig.RigClient;
 import org.lodestep.rig.RigInfo;
@@ -22,13 +24,15 @@ final class RigLeadsIdentify {
     }
 
     /** Runs the session; returns {@link ExitCode#FINDING} when the motor has an error-severity finding. */
-    static int run(String address, LeadsSettings settings, boolean json, PrintWriter out, PrintWriter log)
-            throws Exception {
+    static int run(Provenance run, String address, LeadsSettings settings, boolean json, PrintWriter out,
+                   PrintWriter log) throws Exception {
         LeadsOnRig.Result r;
+        RigInfo[] rig = new RigInfo[1];
         try (RigClient c = RigCli.connect(address)) {
             r = WorkflowCall.run(() -> LeadsOnRig.run(c, settings, new LeadsOnRig.Listener() {
                 @Override
                 public void connected(RigInfo info, List<String> leads, int allPairs) {
+                    rig[0] = info;
                     log.println(IdentifyProgressText.leadsConnected(address, info, leads.size(), allPairs));
                 }
 
@@ -41,16 +45,18 @@ final class RigLeadsIdentify {
         log.println(IdentifyProgressText.leadsDone(r.readings(), r.allPairs()));
         log.flush();
         String motor = r.motorSerial();
+        Provenance provenance = rig[0] == null ? run : run.withRig(RunProvenance.rig(rig[0]));
         if (json) {
-            out.println(LeadsJsonView.write(List.of(LeadsJsonView.of(address, motor, r.identification(),
-                    new LeadsJsonView.ProbeJson(r.readings(), r.allPairs())))));
+            out.println(ProvenanceBlock.json(LeadsJsonView.write(List.of(LeadsJsonView.of(address, motor,
+                    r.identification(), new LeadsJsonView.ProbeJson(r.readings(), r.allPairs())))), provenance));
         } else {
             LeadsTextReport.write(out, "Motor on " + address + (motor == null ? "" : " (" + motor + ")"),
                     r.identification());
             out.println();
             out.println(LeadsTextReport.CAUTION);
+            out.print(ProvenanceBlock.text(provenance));
         }
         out.flush();
-        return r.identification().hasError() ? ExitCode.FINDING : ExitCode.OK;
+        return ExitCode.ofIdentification(r.identification().hasError(), r.identification().determined());
     }
 }

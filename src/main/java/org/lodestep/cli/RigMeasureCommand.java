@@ -8,6 +8,7 @@ import java.util.List;
 import java.util.Locale;
 import java.util.concurrent.Callable;
 
+import org.lodestep.report.ProvenanceBlock;
 import org.lodestep.report.Json;
 import org.lodestep.report.RigText;
 import org.lodestep.workflow.RigCaptureFile;
@@ -132,14 +133,17 @@ final class RigMeasureCommand implements Callable<Integer> {
         }
         switch (k) {
             case RESISTANCE -> o.print(json ? Json.write(r.resistances()) + "\n"
-                    : RigText.resistances(r.resistances(), r.labels()));
+                    : RigText.resistances(r.resistances(), r.labels()) + ProvenanceBlock.text(RunProvenance.of(spec)));
             case INSULATION -> o.print(json ? Json.write(r.insulation()) + "\n"
-                    : RigText.insulation(r.insulation(), r.labels()));
+                    : RigText.insulation(r.insulation(), r.labels()) + ProvenanceBlock.text(RunProvenance.of(spec)));
             default -> {
                 if (json) {
-                    o.println(Json.write(r.capture().metadata()));
+                    o.println(ProvenanceBlock.json(Json.write(r.capture().metadata()),
+                            RunProvenance.withCaptureRig(RunProvenance.of(spec), r.capture().metadata())));
                 } else {
                     o.print(RigText.capture(r.capture()));
+                    o.print(ProvenanceBlock.text(RunProvenance.withCaptureRig(RunProvenance.of(spec),
+                            r.capture().metadata())));
                 }
                 if (r.saved() != null) {
                     (json ? spec.commandLine().getErr() : o).println("saved " + r.saved());

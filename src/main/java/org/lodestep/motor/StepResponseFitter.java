@@ -28,6 +28,12 @@ import org.lodestep.wiring.Finding;
 public final class StepResponseFitter {
     /** Relative difference between the early and late time constants above which the shape is not exponential. */
     static final double SHAPE_TOLERANCE = 0.15;
+    /**
+     * Largest RMS residual, as a fraction of the fitted rise, for which the trace is still a step response: noise or
+     * a trace of another shape fits an exponential with a residual comparable to the rise itself. The 20 % bound is
+     * our own choice (common practice for a goodness-of-fit screen), far above the residual of a real, noisy rise.
+     */
+    static final double MAX_RESIDUAL_OF_RISE = 0.20;
 
     private final Double supplyV;
     private final double seriesOhm;
@@ -64,24 +70,42 @@ public final class StepResponseFitter {
             throw new IllegalArgumentException("a step response needs at least 20 samples, got " + n);
         }
         double[] guess = initialGuess(timeS, currentA);
-        LeastSquaresOptimizer.Optimum optimum = new LevenbergMarquardtOptimizer().optimize(new LeastSquaresBuilder()
-                .start(guess)
-                .model(model(timeS))
-                .target(currentA)
-                .lazyEvaluation(false)
-                .maxEvaluations(2000)
-                .maxIterations(2000)
-                .build());
+        LeastSquaresOptimizer.Optimum optimum;
+        try {
+            optimum = new LevenbergMarquardtOptimizer().optimize(new LeastSquaresBuilder()
+                    .start(guess)
+                    .model(model(timeS))
+                    .target(currentA)
+                    .lazyEvaluation(false)
+                    .maxEvaluations(2000)
+                    .maxIterations(2000)
+                    .build());
+        } catch (IllegalStateException | ArithmeticException e) {
+            // Commons Math's convergence and evaluation-count failures: the trace has no RL rise to fit
+            throw new IllegalArgumentException("no RL step response found: the least-squares fit of the rise did not"
+                    + " converge; expected a current rising to a settled level after the step");
+        }
         double[] p = optimum.getPoint().toArray();
         double offsetA = p[0];
         double finalA = p[1];
         double stepS = p[2];
         double tauS = Math.abs(p[3]);
         if (!(finalA > 0) || !(tauS > 0)) {
-            throw new IllegalArgumentException("the current does not rise after the step (fitted rise "
+            throw new IllegalArgumentException("no RL step response found: the current does not rise after the step (fitted rise "
                     + finalA + " A); is the current channel inverted or the winding open?");
         }
         double rms = optimum.getRMS();
+        double recordS = timeS[n - 1] - timeS[0];
+        if (!(stepS >= timeS[0] - recordS && stepS < timeS[n - 1]) || !(tauS < recordS)) {
+            throw new IllegalArgumentException(String.format("no settled RL step response found: the fitted time"
+                    + " constant (%.3g s) or step instant lies outside the record of %.3g s; expected a record that"
+                    + " shows the current settle", tauS, recordS));
+        }
+        if (!(rms <= MAX_RESIDUAL_OF_RISE * finalA)) {
+            throw new IllegalArgumentException(String.format("no RL step response found: the current scatters by"
+                    + " %.3g A about the best exponential rise of %.3g A (more than %.0f %%); expected a clean rise, not"
+                    + " noise", rms, finalA, MAX_RESIDUAL_OF_RISE * 100));
+        }
 
         List<Finding> findings = new ArrayList<>();
         double early = localTimeConstant(timeS, currentA, offsetA, finalA, stepS, 0.05, 0.50);

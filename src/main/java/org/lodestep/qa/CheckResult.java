@@ -27,4 +27,42 @@ public record CheckResult(String parameter, String label, double measured, doubl
                     + " verdict needs a judged value, got " + judged + " " + limit.unit());
         }
     }
+
+    /**
+     * The limit that decides the margin: the one the judged value is outside, else the nearer one; "LSL" or "USL",
+     * "" when the value was not judged.
+     */
+    public String decidingLimit() {
+        if (Double.isNaN(judged)) {
+            return "";
+        }
+        if (!limit.hasLower()) {
+            return "USL";
+        }
+        if (!limit.hasUpper()) {
+            return "LSL";
+        }
+        return limit.upper() - judged < judged - limit.lower() ? "USL" : "LSL";
+    }
+
+    /** The value of {@link #decidingLimit}, in {@code limit.unit()}, or NaN. */
+    public double decidingLimitValue() {
+        return switch (decidingLimit()) {
+            case "USL" -> limit.upper();
+            case "LSL" -> limit.lower();
+            default -> Double.NaN;
+        };
+    }
+
+    /**
+     * Signed distance of the judged value inside its deciding limit (USL − value, or value − LSL), in
+     * {@code limit.unit()}: negative outside the spec, NaN when not judged.
+     */
+    public double margin() {
+        return switch (decidingLimit()) {
+            case "USL" -> limit.upper() - judged;
+            case "LSL" -> judged - limit.lower();
+            default -> Double.NaN;
+        };
+    }
 }

@@ -7,7 +7,8 @@ import java.util.List;
  * Equal-width histogram with Sturges' bin count, k = ⌈log2 n⌉ + 1 (H. A. Sturges, "The choice of a class
  * interval", J. American Statistical Association 21 (153), 1926, pp. 65-66), spanning the data and any given limits
  * so a reader sees where the lot sits between them. The one binning rule of the QA reports: text, JSON and HTML draw
- * these bins, so every rendering of a lot shows the same histogram.
+ * these bins, so every rendering of a lot shows the same histogram. A non-negative quantity with a maximum only (phase
+ * imbalance) is binned from zero, its natural lower bound, rather than from its smallest value.
  */
 public final class Histogram {
 
@@ -42,6 +43,16 @@ public final class Histogram {
      * @param usl    upper limit to include in the span, or NaN
      */
     public static List<Bin> of(double[] x, double lsl, double usl) {
+        return of(x, lsl, usl, false);
+    }
+
+    /**
+     * @param x        the values
+     * @param lsl      lower limit to include in the span, or NaN
+     * @param usl      upper limit to include in the span, or NaN
+     * @param fromZero start the span at zero (every value must then be non-negative)
+     */
+    static List<Bin> of(double[] x, double lsl, double usl, boolean fromZero) {
         if (x.length == 0) {
             return List.of();
         }
@@ -50,6 +61,12 @@ public final class Histogram {
         for (double v : x) {
             lo = Math.min(lo, v);
             hi = Math.max(hi, v);
+        }
+        if (fromZero) {
+            if (lo < 0) {
+                throw new IllegalArgumentException("a histogram from zero needs non-negative values, got " + lo);
+            }
+            lo = 0;
         }
         if (!Double.isNaN(lsl)) {
             lo = Math.min(lo, lsl);

@@ -11,6 +11,10 @@ import java.util.List;
  * range MR_i = |x_i − x_(i−1)| (span 2), σ̂ = MR̄/d2, X chart x̄ ± 3·MR̄/d2, MR chart UCL = D4·MR̄, LCL = 0. The
  * factors for n = 2 are computed exactly (d2 = 2/√π, d3 = √(2 − 4/π), D4 = 1 + 3·d3/d2) rather than taken from the
  * rounded table (1.128, 3.267); the difference is below 0.05 %.
+ *
+ * <p>The limits are computed on the series' {@link ValueScale}: on ln x for a log scale (centre and X limits
+ * transformed back, moving ranges left on ln x), and on the linear scale a lower X limit below zero is clipped at
+ * zero for a series that cannot go negative. A series without variation (see {@link #noVariation}) has no limits.
  */
 public final class IndividualsChart {
 
@@ -20,6 +24,13 @@ public final class IndividualsChart {
     static final double D3_FACTOR = Math.sqrt(2.0 - 4.0 / Math.PI);
     /** D4 for subgroups of 2: 1 + 3·d3/d2 = 3.266532. */
     static final double D4 = 1.0 + 3.0 * D3_FACTOR / D2;
+
+    /**
+     * Relative spread below which a series counts as constant: a part in 10⁹ of its value, far below what any bench
+     * instrument resolves (a 6½-digit meter resolves about a part in 10⁶ of its range), so a smaller spread can only be
+     * floating-point rounding of one value (1.8 and 1.8000000000000003).
+     */
+    static final double RESOLUTION = 1e-9;
 
     /**
      * The chart of a series.
@@ -32,9 +43,14 @@ public final class IndividualsChart {
      * @param upperMr      MR-chart upper control limit (its lower limit is 0)
      * @param outsideX     indexes of individuals outside the X limits
      * @param outsideMr    indexes i of moving ranges |x_i − x_(i−1)| above the MR limit
+     * @param scale        the scale the limits were computed on; on LOG, centre and X limits are in the values' unit
+     *                     (the centre is the geometric mean) and MR̄, σ and the MR limit are on ln x
+     * @param computedLowerX the X chart's lower limit as computed, before clipping (in the values' unit)
+     * @param clippedAtZero true when the computed lower limit was below zero and {@code lowerX} is its clip at zero
      */
     public record Limits(double centre, double movingRangeMean, double sigmaWithin, double upperX, double lowerX,
-                         double upperMr, List<Integer> outsideX, List<Integer> outsideMr) {
+                         double upperMr, List<Integer> outsideX, List<Integer> outsideMr, ValueScale scale,
+                         double computedLowerX, boolean clippedAtZero) {
         public Limits {
             outsideX = List.copyOf(outsideX);
             outsideMr = List.copyOf(outsideMr);
@@ -58,19 +74,48 @@ public final class IndividualsChart {
         return mr;
     }
 
-    /** Limits for {@code x} in production order; needs at least two values (else every figure is NaN). */
+    /** Limits for {@code x} in production order on the linear scale; see {@link #of(double[], ValueScale)}. */
     static Limits of(double[] x) {
-        int n = x.length;
-        if (n < 2) {
-            return new Limits(n == 1 ? x[0] : Double.NaN, Double.NaN, Double.NaN, Double.NaN, Double.NaN, Double.NaN,
-                    List.of(), List.of());
+        return of(x, ValueScale.LINEAR);
+    }
+
+    /**
+     * True when the series does not vary: every value equal, or a spread below {@link #RESOLUTION} of the largest
+     * magnitude. Such a series has no control limits (σ̂ would be zero or rounding noise).
+     */
+    static boolean noVariation(double[] x) {
+        double lo = Double.POSITIVE_INFINITY;
+        double hi = Double.NEGATIVE_INFINITY;
+        for (double v : x) {
+            lo = Math.min(lo, v);
+            hi = Math.max(hi, v);
         }
+        return x.length > 0 && hi - lo <= RESOLUTION * Math.max(Math.abs(lo), Math.abs(hi));
+    }
+
+    /**
+     * Limits for {@code x} in production order on {@code scale}; needs at least two values that vary (else every
+     * limit is NaN and the centre is the mean).
+     */
+    static Limits of(double[] x, ValueScale scale) {
+        int n = x.length;
+        if (n < 2 || noVariation(x)) {
+            double mean = 0;
+            for (double v : x) {
+                mean += v / n;
+            }
+            return new Limits(n == 0 ? Double.NaN : n == 1 ? x[0] : mean, n < 2 ? Double.NaN : 0, n < 2 ? Double.NaN : 0,
+                    Double.NaN, Double.NaN, Double.NaN, List.of(), List.of(), scale, Double.NaN, false);
+        }
+        double[] y = scale.transform(x);
         double sum = 0;
         double mrSum = 0;
+        boolean nonNegative = true;
         for (int i = 0; i < n; i++) {
-            sum += x[i];
+            sum += y[i];
+            nonNegative &= x[i] >= 0;
             if (i > 0) {
-                mrSum += movingRange(x, i);
+                mrSum += movingRange(y, i);
             }
         }
         double centre = sum / n;
@@ -81,16 +126,17 @@ public final class IndividualsChart {
         double uclMr = D4 * mrBar;
         List<Integer> outX = new ArrayList<>();
         List<Integer> outMr = new ArrayList<>();
-        // No variation at all (a discrete value such as a step angle): the limits collapse onto the centre and no point
-        // is out of control, whatever the last bit of rounding in the mean says.
-        for (int i = 0; mrBar > 0 && i < n; i++) {
-            if (x[i] > ucl || x[i] < lcl) {
+        for (int i = 0; i < n; i++) {
+            if (y[i] > ucl || y[i] < lcl) {
                 outX.add(i);
             }
-            if (i > 0 && movingRange(x, i) > uclMr) {
+            if (i > 0 && movingRange(y, i) > uclMr) {
                 outMr.add(i);
             }
         }
-        return new Limits(centre, mrBar, sigma, ucl, lcl, uclMr, outX, outMr);
+        double lclComputed = scale.back(lcl);
+        boolean clip = scale == ValueScale.LINEAR && nonNegative && lcl < 0;
+        return new Limits(scale.back(centre), mrBar, sigma, scale.back(ucl), clip ? 0 : lclComputed, uclMr, outX, outMr,
+                scale, lclComputed, clip);
     }
 }

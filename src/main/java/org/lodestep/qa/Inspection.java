@@ -72,7 +72,7 @@ public final class Inspection {
                 note = "no winding temperature given: judged as measured, not corrected to " + fmt(ref) + " °C";
             } else {
                 judged = WindingResistance.toReference(raw, t, ref);
-                note = fmt(raw) + " ohm at " + fmt(t) + " °C = " + fmt(judged) + " ohm at " + fmt(ref) + " °C ("
+                note = fmt(raw) + " \u03A9 at " + fmt(t) + " °C = " + fmt(judged) + " \u03A9 at " + fmt(ref) + " °C ("
                         + WindingResistance.STANDARD + ")";
             }
             out.add(judgedResult(limit, phaseLabel(i), raw, judged, note));
@@ -132,7 +132,7 @@ public final class Inspection {
             } else if (r.resistanceOhm() > 0 && !Double.isNaN(m.windingTemperatureC())) {
                 // a dead short (0 Ω) fails as it reads; there is nothing to refer to 40 °C
                 note += "; " + fmt(InsulationResistance.correctedTo40C(r.resistanceOhm(), m.windingTemperatureC()) / 1e6)
-                        + " Mohm at 40 °C for trending (IEEE 43 clause 6.3)";
+                        + " M\u03A9 at 40 °C for trending (IEEE 43 clause 6.3)";
             }
             out.add(judgedResult(limit, r.label(), r.resistanceOhm(), r.resistanceOhm(), note));
         }

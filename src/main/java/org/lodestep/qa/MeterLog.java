@@ -1,9 +1,7 @@
 package org.lodestep.qa;
 
 import java.io.IOException;
-import java.io.Reader;
 import java.io.StringReader;
-import java.nio.charset.StandardCharsets;
 import java.nio.file.Files;
 import java.nio.file.Path;
 import java.util.ArrayList;
@@ -20,6 +18,8 @@ import org.apache.commons.csv.CSVFormat;
 import org.apache.commons.csv.CSVParser;
 import org.apache.commons.csv.CSVRecord;
 import org.lodestep.sample.InputFormatException;
+import org.lodestep.sample.InputLimits;
+import org.lodestep.sample.Utf8Text;
 
 /**
  * A bench log of hand-held meter readings, one row per motor: what an inspector types while testing a lot with
@@ -73,7 +73,7 @@ public final class MeterLog {
     }
 
     public static MeterLog read(Path file) throws IOException, InputFormatException {
-        return parse(file.toString(), Files.readString(file, StandardCharsets.UTF_8));
+        return parse(file.toString(), Utf8Text.read(file, "a CSV meter log"));
     }
 
     public static MeterLog parse(String source, String text) throws InputFormatException {
@@ -81,71 +81,112 @@ public final class MeterLog {
             text = text.substring(1);
         }
         String[] lines = text.split("\r?\n", -1);
+        int headerLine = headerLine(lines);
         CSVFormat format = CSVFormat.DEFAULT.builder().setHeader().setSkipHeaderRecord(true)
                 .setCommentMarker('#').setIgnoreEmptyLines(true).setTrim(true).get();
+        CSVParser p;
+        try {
+            p = CSVParser.builder().setReader(new StringReader(text)).setFormat(format).get();
+        } catch (IOException | RuntimeException e) {
+            // Commons CSV refuses an empty, repeated or unterminated header name before any row
+            throw new InputFormatException(source, headerLine, null, null, "is not a readable meter-log header:"
+                    + " expected each column named once, e.g. serial,phase_a_ohm,insulation_a_frame_mohm");
+        }
         Map<String, Row> rows = new LinkedHashMap<>();
-        Map<String, Integer> firstLine = new HashMap<>();
-        try (Reader r = new StringReader(text); CSVParser p = CSVParser.builder().setReader(r).setFormat(format).get()) {
-            List<String> header = new ArrayList<>();
-            for (String h : p.getHeaderNames()) {
-                String k = h.toLowerCase(Locale.ROOT).trim();
-                if (!KNOWN.contains(k) && !INSULATION.matcher(k).matches()) {
-                    throw new InputFormatException(source, headerLine(lines), h, h, "is not a meter-log column; expected "
-                            + String.join(", ", KNOWN) + " or insulation_<label>_mohm");
-                }
-                header.add(k);
-            }
-            if (!header.contains("serial")) {
-                throw new InputFormatException(source, headerLine(lines), null, null,
-                        "has no serial column: expected a header such as serial,phase_a_ohm,insulation_a_frame_mohm");
-            }
-            int headerLine = headerLine(lines);
+        int lastLine = headerLine;
+        try (p) {
+            List<String> header = header(source, headerLine, p.getHeaderNames());
             for (CSVRecord rec : p) {
                 int line = (int) rec.getParser().getCurrentLineNumber();
-                String serial = rec.get(p.getHeaderNames().get(header.indexOf("serial")));
-                if (serial.isEmpty()) {
-                    throw new InputFormatException(source, line, "serial", "", "expected a serial number");
-                }
-                Map<String, Double> values = new HashMap<>();
-                for (int i = 0; i < header.size(); i++) {
-                    if (header.get(i).equals("serial") || i >= rec.size()) {
-                        continue;
-                    }
-                    String cell = rec.get(i);
-                    if (cell.isEmpty()) {
-                        continue;
-                    }
-                    if (INSULATION.matcher(header.get(i)).matches() && OVER_RANGE.contains(cell.toLowerCase(Locale.ROOT))) {
-                        values.put(header.get(i), Double.POSITIVE_INFINITY);
-                        continue;
-                    }
-                    try {
-                        double v = Double.parseDouble(cell);
-                        if (!Double.isFinite(v)) {
-                            throw new NumberFormatException();
-                        }
-                        values.put(header.get(i), v);
-                    } catch (NumberFormatException e) {
-                        throw new InputFormatException(source, line, p.getHeaderNames().get(i), cell,
-                                "is not a number (" + unit(header.get(i)) + " expected)");
-                    }
-                }
-                Integer before = firstLine.putIfAbsent(serial, line);
+                lastLine = line;
+                Row row = row(source, header, rec, line, lines[headerLine - 1] + "\n"
+                        + (line - 1 < lines.length ? lines[line - 1] : ""));
+                Row before = rows.putIfAbsent(row.serial(), row);
                 if (before != null) {
-                    throw new InputFormatException(source, line, "serial", serial, "is listed twice (also line "
-                            + before + "): one row per motor expected");
+                    throw new InputFormatException(source, line, "serial", row.serial(), "is listed twice (also line "
+                            + before.line() + "): one row per motor expected");
                 }
-                String raw = lines[headerLine - 1] + "\n" + (line - 1 < lines.length ? lines[line - 1] : "");
-                rows.put(serial, new Row(serial, values, line, Hashes.sha256(raw)));
             }
-        } catch (IOException | IllegalStateException | IllegalArgumentException e) {
+        } catch (IOException | RuntimeException e) {
             if (e.getCause() instanceof InputFormatException ife) {
                 throw ife;
             }
-            throw new InputFormatException(source, InputFormatException.NO_LINE, null, null,
-                    "is not a readable CSV meter log (" + e.getMessage() + ")");
+            // An unterminated quote or a broken field: Commons CSV's own text names no file, so say it here
+            throw new InputFormatException(source, lastLine + 1, null, null, "is not a readable CSV row: expected"
+                    + " cells separated by commas, a quoted cell closed by a quote");
+        }
+        if (rows.isEmpty()) {
+            throw new InputFormatException(source, headerLine, null, null, "has no rows: expected one row of readings"
+                    + " per motor under the header");
         }
         return new MeterLog(source, rows);
+    }
+
+    private static List<String> header(String source, int headerLine, List<String> names)
+            throws InputFormatException {
+        List<String> header = new ArrayList<>();
+        for (String h : names) {
+            String k = h.toLowerCase(Locale.ROOT).trim();
+            if (!KNOWN.contains(k) && !INSULATION.matcher(k).matches()) {
+                throw new InputFormatException(source, headerLine, h, h, "is not a meter-log column; expected "
+                        + String.join(", ", KNOWN) + " or insulation_<label>_mohm");
+            }
+            if (header.contains(k)) {
+                throw new InputFormatException(source, headerLine, h, h, "is a repeated column: expected each"
+                        + " column once");
+            }
+            header.add(k);
+        }
+        if (!header.contains("serial")) {
+            throw new InputFormatException(source, headerLine, null, null,
+                    "has no serial column: expected a header such as serial,phase_a_ohm,insulation_a_frame_mohm");
+        }
+        return header;
+    }
+
+    private static Row row(String source, List<String> header, CSVRecord rec, int line, String raw)
+            throws InputFormatException {
+        if (rec.size() != header.size()) {
+            throw new InputFormatException(source, line, null, null, "has " + rec.size() + " cells: expected "
+                    + header.size() + ", one per column of the header (an empty cell for a value not measured)");
+        }
+        int serialAt = header.indexOf("serial");
+        String serial = rec.get(serialAt);
+        if (serial.isEmpty()) {
+            throw new InputFormatException(source, line, "serial", "", "expected a serial number");
+        }
+        if (serial.length() > InputLimits.MAX_SERIAL_CHARS) {
+            throw new InputFormatException(source, line, "serial", serial, "is " + serial.length()
+                    + " characters long: expected a serial number of at most " + InputLimits.MAX_SERIAL_CHARS);
+        }
+        Map<String, Double> values = new HashMap<>();
+        for (int i = 0; i < header.size(); i++) {
+            String column = header.get(i);
+            String cell = rec.get(i);
+            if (column.equals("serial") || cell.isEmpty()) {
+                continue;
+            }
+            double v;
+            if (INSULATION.matcher(column).matches() && OVER_RANGE.contains(cell.toLowerCase(Locale.ROOT))) {
+                v = Double.POSITIVE_INFINITY;
+            } else {
+                try {
+                    v = Double.parseDouble(cell);
+                } catch (NumberFormatException e) {
+                    v = Double.NaN;
+                }
+                if (!Double.isFinite(v)) {
+                    throw new InputFormatException(source, line, column, cell,
+                            "is not a number (" + unit(column) + " expected)");
+                }
+            }
+            String refusal = PlausibleReadings.refusal(column, v);
+            if (refusal != null) {
+                throw new InputFormatException(source, line, column, cell, "is not a plausible reading: " + refusal);
+            }
+            values.put(column, v);
+        }
+        return new Row(serial, values, line, Hashes.sha256(raw));
     }
 
     /** The row of one serial number, if the log has one. */

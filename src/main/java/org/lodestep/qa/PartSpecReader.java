@@ -1,7 +1,6 @@
 package org.lodestep.qa;
 
 import java.io.IOException;
-import java.nio.charset.StandardCharsets;
 import java.nio.file.Files;
 import java.nio.file.Path;
 import java.util.ArrayList;
@@ -12,7 +11,10 @@ import java.util.Map;
 import java.util.Set;
 import java.util.regex.Pattern;
 
+import org.lodestep.sample.InputFiles;
 import org.lodestep.sample.InputFormatException;
+import org.lodestep.sample.InputLimits;
+import org.lodestep.sample.Utf8Text;
 
 import com.fasterxml.jackson.core.JsonProcessingException;
 import com.fasterxml.jackson.databind.JsonNode;
@@ -56,30 +58,85 @@ public final class PartSpecReader {
         KEYS.put("insulation", Set.of("minimum_mohm", "test_voltage_v", "rated_voltage_v"));
     }
 
+    /** Largest spec file read, bytes: a spec is a page of text. */
+    static final int MAX_SPEC_BYTES = 1 << 20;
+
     private PartSpecReader() {
     }
 
     /** Reads a spec file. */
     public static PartSpec read(Path file) throws IOException, InputFormatException {
+        InputFiles.requireFile(file, "a part spec in TOML");
+        if (Files.size(file) > MAX_SPEC_BYTES) {
+            throw new InputFormatException(file.toString(), InputFormatException.NO_LINE, null, null, "is "
+                    + Files.size(file) + " bytes: expected a part spec in TOML of at most " + MAX_SPEC_BYTES + " bytes");
+        }
         byte[] bytes = Files.readAllBytes(file);
         return parse(file.toString(), bytes);
     }
 
     /** Parses spec bytes; {@code source} names them in error messages. */
     public static PartSpec parse(String source, byte[] bytes) throws InputFormatException {
-        String text = new String(bytes, StandardCharsets.UTF_8);
-        if (text.startsWith("\uFEFF")) {
-            text = text.substring(1);
+        if (bytes.length > MAX_SPEC_BYTES) {
+            throw new InputFormatException(source, InputFormatException.NO_LINE, null, null, "is " + bytes.length
+                    + " bytes: expected a part spec in TOML of at most " + MAX_SPEC_BYTES + " bytes");
         }
+        String text = Utf8Text.decode(bytes, source, "a part spec in TOML");
         JsonNode root;
         try {
             root = new TomlMapper().readTree(text);
         } catch (JsonProcessingException e) {
             int line = e.getLocation() == null ? InputFormatException.NO_LINE : e.getLocation().getLineNr();
             throw new InputFormatException(source, Math.max(line, 0), null, null,
-                    "is not valid TOML (" + e.getOriginalMessage() + ")");
+                    "is not valid TOML (" + oneLine(e.getOriginalMessage()) + ")");
+        } catch (RuntimeException | StackOverflowError e) {
+            // The TOML library's other failures (a number it cannot hold, nesting too deep) carry no line
+            throw new InputFormatException(source, InputFormatException.NO_LINE, null, null,
+                    "is not a TOML part spec this reader can hold: expected the sections and keys of the README");
         }
         return new Validator(source, text, root).spec(Hashes.sha256(bytes));
+    }
+
+    private static String oneLine(String s) {
+        String t = String.valueOf(s).replaceAll("\\s+", " ").strip();
+        return t.length() > 120 ? t.substring(0, 117) + "..." : t;
+    }
+
+    /**
+     * The known name closest to a misspelt one (fewest single-character edits, V. I. Levenshtein, "Binary codes
+     * capable of correcting deletions, insertions and reversals", Soviet Physics Doklady 10(8), 1966; references §28), or null when
+     * none is within a third of the name's length.
+     */
+    static String nearest(String name, Iterable<String> known) {
+        String best = null;
+        int bestDistance = Integer.MAX_VALUE;
+        for (String k : known) {
+            int d = editDistance(name, k);
+            if (d < bestDistance) {
+                best = k;
+                bestDistance = d;
+            }
+        }
+        return bestDistance <= Math.max(2, name.length() / 3) ? best : null;
+    }
+
+    private static int editDistance(String a, String b) {
+        int[] prev = new int[b.length() + 1];
+        int[] cur = new int[b.length() + 1];
+        for (int j = 0; j <= b.length(); j++) {
+            prev[j] = j;
+        }
+        for (int i = 1; i <= a.length(); i++) {
+            cur[0] = i;
+            for (int j = 1; j <= b.length(); j++) {
+                int cost = a.charAt(i - 1) == b.charAt(j - 1) ? 0 : 1;
+                cur[j] = Math.min(Math.min(cur[j - 1] + 1, prev[j] + 1), prev[j - 1] + cost);
+            }
+            int[] t = prev;
+            prev = cur;
+            cur = t;
+        }
+        return prev[b.length()];
     }
 
     /** Walks the tree once, checking each key where it is read. */
@@ -178,14 +235,19 @@ public final class PartSpecReader {
                 Map.Entry<String, JsonNode> e = it.next();
                 Set<String> keys = KEYS.get(e.getKey());
                 if (keys == null || !e.getValue().isObject()) {
+                    String near = nearest(e.getKey(), KEYS.keySet());
                     throw new InputFormatException(source, lineOf(null, e.getKey()), e.getKey(), e.getKey(),
-                            "is not a known section; expected one of [" + String.join("], [", KEYS.keySet()) + "]");
+                            "is not a known section" + (near == null ? "" : ": did you mean [" + near + "]?")
+                                    + " Expected one of [" + String.join("], [", KEYS.keySet()) + "]");
                 }
                 for (Iterator<String> names = e.getValue().fieldNames(); names.hasNext(); ) {
                     String name = names.next();
                     if (!keys.contains(name)) {
-                        throw error(e.getKey(), name, name, "is not a key of [" + e.getKey() + "]; expected one of "
-                                + String.join(", ", keys.stream().sorted().toList()));
+                        List<String> sorted = keys.stream().sorted().toList();
+                        String near = nearest(name, sorted);
+                        throw new InputFormatException(source, lineOf(e.getKey(), name), e.getKey() + "." + name, name,
+                                "is not a key of [" + e.getKey() + "]" + (near == null ? "" : ": did you mean "
+                                        + near + "?") + " Known keys: " + String.join(", ", sorted));
                     }
                 }
             }
@@ -207,6 +269,10 @@ public final class PartSpecReader {
             }
             if (!v.isTextual() || (nonBlank && v.asText().isBlank())) {
                 throw error(section, key, v.asText(), "a quoted, non-empty text");
+            }
+            if (v.asText().length() > InputLimits.MAX_NAME_CHARS) {
+                throw error(section, key, v.asText(), "a text of at most " + InputLimits.MAX_NAME_CHARS
+                        + " characters, not " + v.asText().length());
             }
             return v.asText();
         }

@@ -1,6 +1,5 @@
 package org.lodestep.qa;
 
-import java.io.IOException;
 import java.nio.file.Files;
 import java.nio.file.Path;
 import java.util.Map;
@@ -69,13 +68,14 @@ public final class RecordStores {
     }
 
     private static RecordStore openSqlite(Path file) throws StoreException {
-        try {
-            Path parent = file.toAbsolutePath().getParent();
-            if (parent != null) {
-                Files.createDirectories(parent);
-            }
-        } catch (IOException e) {
-            throw new StoreException("cannot create the folder of " + file + ": " + e.getMessage(), e);
+        // A mistyped folder must not silently become a new, empty store next to the real one: the folder must exist.
+        Path parent = file.toAbsolutePath().getParent();
+        if (parent != null && !Files.isDirectory(parent)) {
+            throw new IllegalArgumentException(file + ": the folder " + parent
+                    + " does not exist: expected the path of a SQLite file in an existing folder");
+        }
+        if (Files.isDirectory(file)) {
+            throw new IllegalArgumentException(file + " is a folder: expected the path of a SQLite file");
         }
         // WAL lets stations read while one writes; IMMEDIATE takes the write lock at BEGIN so two writers queue
         // instead of failing on a lock upgrade; the busy timeout is how long they queue.

@@ -22,13 +22,13 @@ public record Tally(int passed, int failed, int incomplete) {
         }
     }
 
-    /** The tally of records, in any order. */
+    /** The tally of records in test order: each serial number counted once, with its latest record's verdict. */
     public static Tally of(List<StoredRecord> records) {
-        Tally t = NONE;
+        LotTally t = new LotTally();
         for (StoredRecord r : records) {
-            t = t.plus(r.submission().verdict());
+            t.add(r.submission().serial(), r.submission().verdict());
         }
-        return t;
+        return t.tally();
     }
 
     /** Motors counted. */

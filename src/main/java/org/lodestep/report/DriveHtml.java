@@ -113,9 +113,16 @@ public final class DriveHtml {
                 case MARGIN_SHORT -> "Reaches the target, with less margin than asked";
                 case NOT_REACHABLE -> "Does not reach the target";
             };
-            b.verdict(s, head, "Target " + DriveText.rate(r.units(), a.target().fullStepsPerS()) + ": margin "
+            // the answer with its margin in one line; what would do, when the margin falls short
+            String answer = "Target " + DriveText.rate(r.units(), a.target().fullStepsPerS()) + ": margin "
                     + (Double.isFinite(a.marginAtTarget()) ? DriveText.pct(a.marginAtTarget()) : "none")
-                    + " (asked " + DriveText.pct(a.requiredMargin()) + ").");
+                    + " (asked " + DriveText.pct(a.requiredMargin()) + ")";
+            String detail = a.verdict() == SpeedAnswer.Verdict.REACHABLE ? null
+                    : (Double.isFinite(a.maxRateWithMarginFullStepsPerS()) && a.maxRateWithMarginFullStepsPerS() > 0
+                    ? "Highest speed with that margin: " + DriveText.rate(r.units(), a.maxRateWithMarginFullStepsPerS())
+                    + ". " : "") + (a.suggestions().isEmpty() ? "" : "To reach it: " + a.suggestions().get(0).text()
+                    + (a.suggestions().size() > 1 ? " (more below)" : ""));
+            b.verdict(s, head, answer, detail);
         }
         b.safety(SafetyNote.MOVING_AXIS, SafetyNote.HOT_MOTOR);
         return b;

@@ -44,6 +44,11 @@ public final class DriveText {
     public static void curve(PrintWriter out, DriveCurve.Result r) {
         header(out, r);
         TorqueCurve c = r.curve();
+        if (r.answer() != null) {
+            // the answer with its margin first, the curve it comes from after
+            out.println();
+            answer(out, r.answer(), r.units(), r.load());
+        }
         out.println();
         double margin = r.answer() != null ? r.answer().requiredMargin() : org.lodestep.drive.Margin.DEFAULT;
         out.println("Pull-out torque curve:");
@@ -70,10 +75,6 @@ public final class DriveText {
                         p.lostWithoutLoad() ? "—" : String.format(Locale.ROOT, "%.3f", p.ratio()));
             }
             out.println("  (lost: the rotor slipped with no load, a resonance or instability of the simulated drive)");
-        }
-        if (r.answer() != null) {
-            out.println();
-            answer(out, r.answer(), r.units(), r.load());
         }
         notes(out, r.notes(), r.midBandCentreFullStepsPerS(), r.units());
     }
@@ -201,13 +202,16 @@ public final class DriveText {
 
     /** A rate in full steps/s, pulses/s, rpm and (with a travel) mm/s. */
     static String rate(RateUnits u, double fullStepsPerS) {
-        StringBuilder b = new StringBuilder(String.format(Locale.ROOT, "%.1f full steps/s", fullStepsPerS));
+        // about three figures: a rate of 1383.9 full steps/s is not known to a tenth
+        StringBuilder b = new StringBuilder(String.format(Locale.ROOT, Math.abs(fullStepsPerS) >= 100 ? "%.0f full steps/s"
+                : "%.1f full steps/s", fullStepsPerS));
         if (u.microsteps() > 1) {
             b.append(String.format(Locale.ROOT, " = %.0f pulses/s", u.pulsesPerS(fullStepsPerS)));
         }
         b.append(String.format(Locale.ROOT, " = %.0f rpm", u.rpm(fullStepsPerS)));
         if (u.hasTravel()) {
-            b.append(String.format(Locale.ROOT, " = %.1f mm/s", u.mmPerS(fullStepsPerS)));
+            b.append(String.format(Locale.ROOT, Math.abs(u.mmPerS(fullStepsPerS)) >= 100 ? " = %.0f mm/s"
+                    : " = %.1f mm/s", u.mmPerS(fullStepsPerS)));
         }
         return b.toString();
     }
@@ -217,7 +221,7 @@ public final class DriveText {
     }
 
     static String sig(double v) {
-        return Double.isFinite(v) ? String.format(Locale.ROOT, "%.4g", v) : "—";
+        return Double.isFinite(v) ? MotorCardText.num(v, 3) : "—";
     }
 
     /** The highest rate with the margin, or why there is none or no bound; shared by the text and HTML reports. */

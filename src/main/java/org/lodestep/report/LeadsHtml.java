@@ -1,10 +1,8 @@
 package org.lodestep.report;
 
 import java.util.ArrayList;
-import java.util.LinkedHashMap;
 import java.util.List;
 import java.util.Locale;
-import java.util.Map;
 
 import org.lodestep.report.html.Cell;
 import org.lodestep.report.html.Html;
@@ -43,8 +41,7 @@ public final class LeadsHtml {
             b.meta("Source", source);
         }
         if (id.temperature() != null) {
-            b.meta("Temperature", String.format(Locale.ROOT, "%.1f \u00B0C, corrected to %.1f \u00B0C",
-                    id.temperature().measuredC(), id.temperature().referenceC()));
+            b.meta("Temperature", LeadsTextReport.temperature(id));
         }
         verdict(b, id);
         b.safety(SafetyNote.ENERGISED_COILS);
@@ -52,12 +49,11 @@ public final class LeadsHtml {
         if (!id.connections().isEmpty()) {
             b.section("How to wire it");
             for (DriverWiring c : id.connections()) {
-                b.figure(WiringDiagrams.of(id, c).toSvg(), caption(c));
+                b.figure(WiringDiagrams.of(id, c).toSvg(), caption(id, c));
                 List<HtmlReport.Finding> notes = new ArrayList<>();
                 notes.add(new HtmlReport.Finding(Status.INFO, c.tradeoff()));
                 if (!c.note().isEmpty()) {
-                    notes.add(new HtmlReport.Finding(c.verified() ? Status.INFO : Status.WARN,
-                            (c.verified() ? "" : "Provisional: ") + c.note()));
+                    notes.add(new HtmlReport.Finding(c.verified() ? Status.INFO : Status.PROVISIONAL, c.note()));
                 }
                 b.findings(notes);
             }
@@ -130,7 +126,7 @@ public final class LeadsHtml {
         if (!id.connections().isEmpty()) {
             DriverWiring c = id.connections().get(0);
             sb.append("<figure class=\"schematic\">").append(WiringDiagrams.of(id, c).toSvg().markup())
-                    .append("<figcaption>").append(Html.escape(caption(c))).append("</figcaption></figure>");
+                    .append("<figcaption>").append(Html.escape(caption(id, c))).append("</figcaption></figure>");
         } else if (!id.windings().isEmpty()) {
             sb.append("<figure class=\"schematic\">").append(WiringDiagrams.soFar(id).toSvg().markup())
                     .append("<figcaption>The windings found so far; how to wire them follows once the layout is "
@@ -159,28 +155,42 @@ public final class LeadsHtml {
     }
 
     private static void verdict(HtmlReport.Builder b, Identification id) {
+        DriverWiring first = id.connections().isEmpty() ? null : id.connections().get(0);
+        String answer = first == null ? null : LeadsTextReport.wiringLine(first);
         if (id.hasError()) {
-            Finding first = id.findings().get(0);
-            b.verdict(Status.FAIL, "Fault found: do not use this motor as it is", first.message());
+            Finding f = id.findings().get(0);
+            b.verdict(Status.FAIL, "Fault found: do not use this motor as it is",
+                    answer == null ? null : answer.startsWith("salvage") ? Character.toUpperCase(answer.charAt(0))
+                            + answer.substring(1) : "Salvage wiring, " + answer, f.message());
         } else if (!id.determined()) {
-            b.verdict(Status.WARN, "Not yet certain", id.missingPairs().isEmpty() ? "The readings allow more than one"
-                    + " layout." : "Measure " + id.missingPairs().size() + " more pair(s) to settle the layout.");
+            b.verdict(Status.WARN, "Not yet certain", null, id.missingPairs().isEmpty() ? "The readings allow more"
+                    + " than one layout." : "Measure " + id.missingPairs().size() + " more pair(s) to settle the layout: "
+                    + String.join(", ", id.missingPairs().stream().map(Object::toString).toList()) + ".");
         } else if (id.topology() == Topology.UNKNOWN) {
             b.verdict(Status.WARN, "No two-phase layout fits the readings", null);
         } else {
             boolean warned = id.findings().stream().anyMatch(f -> f.severity() == Severity.WARNING);
-            b.verdict(warned ? Status.WARN : Status.PASS, id.topology().label() + " motor, "
-                    + id.windings().size() + (id.topology() == Topology.FIVE_LEAD || id.topology() == Topology.EIGHT_LEAD
-                    ? " half-windings" : " windings"), warned ? "See the findings before wiring it." : null);
+            String layout = id.topology().label() + " motor, " + id.windings().size()
+                    + (id.topology() == Topology.FIVE_LEAD || id.topology() == Topology.EIGHT_LEAD
+                    ? " half-windings" : " windings");
+            if (first != null && !first.verified()) {
+                // the tool guessed which coils pair and where each starts: usable, but not a pass
+                b.verdict(Status.PROVISIONAL, layout + ": wiring provisional", answer, (warned
+                        ? "See the findings before wiring it. " : "") + first.note());
+            } else {
+                b.verdict(warned ? Status.WARN : Status.PASS, layout, answer,
+                        warned ? "See the findings before wiring it." : null);
+            }
         }
     }
 
-    private static String caption(DriverWiring c) {
-        Map<String, String> parts = new LinkedHashMap<>();
-        parts.put("phase", LeadsTextReport.ohm(c.phaseResistanceOhm()));
-        return String.format(Locale.ROOT, "%s: phase resistance %s, inductance \u00D7%s and current rating \u00D7%s"
-                        + " of one half-winding%s.", c.name(), parts.get("phase"), trim(c.inductanceFactor()),
-                trim(c.currentFactor()), c.verified() ? "" : " (provisional)");
+    private static String caption(Identification id, DriverWiring c) {
+        String measured = id.temperature() == null ? "" : String.format(Locale.ROOT, " as measured at %.1f \u00B0C",
+                id.temperature().measuredC());
+        return String.format(Locale.ROOT, "%s: phase resistance %s%s, inductance \u00D7%s and current rating \u00D7%s"
+                        + " of one half-winding%s.", c.name(), LeadsTextReport.ohm(c.phaseResistanceOhm()), measured,
+                trim(c.inductanceFactor()), trim(c.currentFactor()), c.verified() ? ""
+                        : "; provisional: which coils pair and where each starts are a guess (hollow ? dots)");
     }
 
     private static String trim(double v) {

@@ -10,6 +10,7 @@ import org.lodestep.wiring.Finding;
 import org.lodestep.wiring.Identification;
 import org.lodestep.wiring.LeadPair;
 import org.lodestep.wiring.OpenCoil;
+import org.lodestep.wiring.TemperatureCorrection;
 import org.lodestep.wiring.Topology;
 import org.lodestep.wiring.Winding;
 
@@ -29,14 +30,16 @@ public final class LeadsTextReport {
     public static void write(PrintWriter out, String title, Identification id) {
         out.printf(Locale.ROOT, "%s: %d leads, %d of %d pairs measured%n", title, id.leads().size(),
                 id.measuredPairs(), id.totalPairs());
+        String answer = answer(id);
+        if (answer != null) {
+            out.println(answer);
+        }
         out.println("Topology: " + id.topology().label()
                 + (id.determined() ? describe(id.topology()) : " (not yet certain: more pairs needed)"));
         out.println();
         schematic(out, id);
         if (id.temperature() != null) {
-            out.printf(Locale.ROOT, "  Corrected from %.1f °C to %.1f °C for copper with k = %s °C (%s).%n",
-                    id.temperature().measuredC(), id.temperature().referenceC(), num(id.temperature().constantC()),
-                    id.temperature().standard());
+            out.println("  " + temperature(id) + ".");
         }
         findings(out, id.findings(), id.determined());
         connections(out, id.connections());
@@ -44,6 +47,58 @@ public final class LeadsTextReport {
             out.println();
             out.println("Not yet certain. Measure next: " + pairs(id.missingPairs()));
         }
+    }
+
+    /**
+     * The line a person acts on: the first driver connection in one line, its status first ("PROVISIONAL" where
+     * resistance could not settle the pairing or polarity), or null when there is no connection to give.
+     */
+    static String answer(Identification id) {
+        if (id.connections().isEmpty()) {
+            return null;
+        }
+        DriverWiring c = id.connections().get(0);
+        String state = id.hasError() ? "FAULT" : !id.determined() ? "NOT YET CERTAIN"
+                : c.verified() ? "WIRING" : "PROVISIONAL";
+        return state + ": " + wiringLine(c);
+    }
+
+    /** One connection in one line: "bipolar series: A+ = 1, A− = 7, B+ = 3, B− = 6; join 5 + 2, 8 + 4". */
+    static String wiringLine(DriverWiring c) {
+        return c.name().replace('-', ' ') + ": " + wiringLine(c.terminals(), c.jumpers(), c.insulate());
+    }
+
+    /**
+     * Terminals, joins and insulated leads in one line, the one way every report writes a wiring:
+     * "A+ = 1, A− = 7, B+ = 3, B− = 6; join 5 + 2, 8 + 4; insulate 9".
+     */
+    static String wiringLine(Map<String, List<String>> terminals, List<List<String>> joins, List<String> insulate) {
+        StringBuilder b = new StringBuilder();
+        for (Map.Entry<String, List<String>> e : terminals.entrySet()) {
+            b.append(b.length() == 0 ? "" : ", ").append(e.getKey().replace("-", "\u2212")).append(" = ")
+                    .append(String.join(" + ", e.getValue()));
+        }
+        if (!joins.isEmpty()) {
+            b.append("; join ").append(String.join(", ", joins.stream().map(j -> String.join(" + ", j)).toList()));
+        }
+        if (!insulate.isEmpty()) {
+            b.append("; insulate ").append(String.join(", ", insulate));
+        }
+        return b.toString();
+    }
+
+    /**
+     * The temperature line: "measured at 23.0 °C, corrected to 20.0 °C for copper (k = 234.5 °C, IEC 60034-1)", or
+     * "measured at 20.0 °C, the reference: no correction needed".
+     */
+    static String temperature(Identification id) {
+        TemperatureCorrection t = id.temperature();
+        if (Math.abs(t.measuredC() - t.referenceC()) < 0.05) {
+            return String.format(Locale.ROOT, "Measured at %.1f \u00B0C, the reference temperature: no correction"
+                    + " needed", t.measuredC());
+        }
+        return String.format(Locale.ROOT, "Measured at %.1f \u00B0C, corrected to %.1f \u00B0C for copper (k = %s"
+                + " \u00B0C, %s)", t.measuredC(), t.referenceC(), num(t.constantC()), t.standard());
     }
 
     /** A compact summary: one line for the layout, one per finding, the first connection. */
@@ -65,11 +120,8 @@ public final class LeadsTextReport {
                     + f.message());
         }
         if (!id.connections().isEmpty()) {
-            DriverWiring c = id.connections().get(0);
-            String joins = c.jumpers().isEmpty() ? "" : "  join " + String.join(", ",
-                    c.jumpers().stream().map(j -> String.join("+", j)).toList());
-            out.println("  " + c.name() + ": " + terminals(c.terminals()) + joins
-                    + (c.verified() ? "" : "  (provisional: back-EMF phasing settles it)"));
+            out.println("  " + answer(id) + (id.connections().get(0).verified() ? ""
+                    : "  (pairing and coil starts guessed: back-EMF phasing settles them)"));
         }
         if (!id.missingPairs().isEmpty()) {
             out.println("  measure next: " + pairs(id.missingPairs()));

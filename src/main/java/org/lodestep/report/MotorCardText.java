@@ -31,6 +31,17 @@ public final class MotorCardText {
             b.append(", ").append(connectionName(card.connection()));
         }
         b.append('\n');
+        // the answer first: how to wire it, its key figures, and what is still unknown, by name
+        if (card.wiring() != null) {
+            b.append(provisional(card) ? "PROVISIONAL: " : "Wire: ").append(wiringLine(card.wiring())).append('\n');
+        }
+        String key = keyFigures(card);
+        if (!key.isEmpty()) {
+            b.append("Key figures: ").append(key).append('\n');
+        }
+        if (!card.unknowns().isEmpty()) {
+            b.append("Unknown: ").append(unknownNames(card, phrasing)).append('\n');
+        }
         b.append("Leads: ").append(String.join(" ", card.leads())).append("\n\n");
 
         b.append("Wiring\n");
@@ -186,7 +197,49 @@ public final class MotorCardText {
     }
 
     private static String ohm(Double v) {
-        return v == null ? "R ?" : num(v, 3) + " ohm";
+        return v == null ? "R ?" : num(v, 3) + " \u03A9";
+    }
+
+    /** True when the card's wiring rests on a guess of which coils pair (5- and 8-lead without back-EMF). */
+    static boolean provisional(MotorCard card) {
+        return card.unknowns().stream().anyMatch(u -> u.what() == org.lodestep.motor.Unknown.What.PHASES_OF_EIGHT_LEAD
+                || u.what() == org.lodestep.motor.Unknown.What.PHASES_OF_FIVE_LEAD);
+    }
+
+    /** The wiring in one line: "A+ = 1, A− = 4, B+ = 5, B− = 8; join 7 + 6, 2 + 3". */
+    static String wiringLine(Wiring w) {
+        java.util.Map<String, List<String>> terminals = new java.util.LinkedHashMap<>();
+        for (Terminal t : w.terminals()) {
+            terminals.put(t.terminal(), t.leads());
+        }
+        return LeadsTextReport.wiringLine(terminals, w.joinTogether(), w.insulate());
+    }
+
+    /** The figures a person sets a driver by: phase R and L as wired, Ke, the rated-current range; known ones only. */
+    static String keyFigures(MotorCard card) {
+        List<String> parts = new java.util.ArrayList<>();
+        if (!card.phases().isEmpty()) {
+            PhaseCard p = card.phases().get(0);
+            if (p.resistanceOhm() != null) {
+                parts.add("phase " + ohm(p.resistanceOhm()) + (p.inductanceH() == null ? "" : ", " + henry(p.inductanceH())));
+            }
+        }
+        if (card.keVsPerRad() != null) {
+            parts.add("Ke " + ke(card.keVsPerRad()));
+        }
+        if (card.ratedCurrentMinA() != null && card.ratedCurrentMaxA() != null) {
+            parts.add("rated current about " + num(card.ratedCurrentMinA(), 2) + "\u2013" + num(card.ratedCurrentMaxA(), 2)
+                    + " A (estimate)");
+        }
+        if (card.stepAngleDeg() != null) {
+            parts.add(num(card.stepAngleDeg(), 3) + "\u00B0 step");
+        }
+        return String.join("; ", parts);
+    }
+
+    /** The unknowns by name, joined: "coupling of phase B (the other phase's used); step angle". */
+    static String unknownNames(MotorCard card, MotorPhrasing phrasing) {
+        return String.join("; ", card.unknowns().stream().map(phrasing::name).toList());
     }
 
     private static String henry(Double v) {

@@ -74,10 +74,26 @@ public final class MotorHtml {
             String head = card.stepAngleDeg() == null ? card.topology() + " motor"
                     : String.format(Locale.ROOT, "%s motor, %s\u00B0 step (%d steps/rev)", card.topology(),
                     num(card.stepAngleDeg()), card.fullStepsPerRevolution());
-            b.verdict(warn || !card.unknowns().isEmpty() ? Status.WARN : Status.PASS, head,
-                    card.unknowns().isEmpty() ? null : card.unknowns().size() + " value(s) still unknown: see below.");
+            // a card measures; it has no spec to pass. Guessed pairing is provisional, a warning finding a warning.
+            Status st = MotorCardText.provisional(card) ? Status.PROVISIONAL : warn ? Status.WARN : Status.INFO;
+            String wiring = card.wiring() == null ? null : "Wire " + connectionTitle(card.connection()).toLowerCase(
+                    Locale.ROOT) + ": " + MotorCardText.wiringLine(card.wiring());
+            String key = MotorCardText.keyFigures(card);
+            b.verdict(st, head, wiring, (key.isEmpty() ? "" : "Key figures: " + key + ". ")
+                    + (card.unknowns().isEmpty() ? "Nothing left unknown."
+                    : "Still unknown: " + MotorCardText.unknownNames(card, phrasing) + "; see below."));
         }
         b.safety(SafetyNote.ENERGISED_COILS, SafetyNote.HOT_MOTOR);
+
+        if (card.wiring() != null && !card.phases().isEmpty()) {
+            b.section("How to wire it");
+            WiringDiagram d = diagram(card);
+            if (d != null) {
+                b.figure(d.toSvg(), "Driver connection (" + card.connection() + "). Direction: "
+                        + card.rotationConvention() + (d.startsKnown() ? "." : "; coil starts not measured (hollow ?"
+                        + " rings): a back-EMF capture fixes them."));
+            }
+        }
 
         b.section("The card");
         Map<String, String> f = new LinkedHashMap<>();
@@ -88,7 +104,9 @@ public final class MotorHtml {
         put(f, "Phase current", card.phaseCurrentA(), "%s A");
         put(f, "Holding torque (est.)", card.holdingTorqueNm(), "%s N\u00B7m");
         if (card.ratedCurrentMinA() != null && card.ratedCurrentMaxA() != null) {
-            f.put("Rated current (est.)", num(card.ratedCurrentMinA()) + "\u2013" + num(card.ratedCurrentMaxA()) + " A");
+            // an estimate from an assumed copper loss: two figures are all it has
+            f.put("Rated current (est.)", MotorCardText.num(card.ratedCurrentMinA(), 2) + "\u2013"
+                    + MotorCardText.num(card.ratedCurrentMaxA(), 2) + " A");
         }
         put(f, "Supply", card.supplyV(), "%s V");
         put(f, "Suggested supply", card.suggestedSupplyV(), "%s V");
@@ -107,15 +125,6 @@ public final class MotorHtml {
                 basis.add(new HtmlReport.Finding(Status.INFO, "Supply: " + card.supplyBasis()));
             }
             b.findings(basis);
-        }
-
-        if (card.wiring() != null && !card.phases().isEmpty()) {
-            b.section("How to wire it");
-            WiringDiagram d = diagram(card);
-            if (d != null) {
-                b.figure(d.toSvg(), "Driver connection (" + card.connection() + "). Direction: "
-                        + card.rotationConvention());
-            }
         }
 
         if (!card.phases().isEmpty()) {
@@ -189,6 +198,10 @@ public final class MotorHtml {
     static WiringDiagram diagram(MotorCard card) {
         Wiring w = card.wiring();
         WiringDiagram.Builder d = WiringDiagram.builder(connectionTitle(card.connection()) + ", " + card.topology());
+        if (card.phases().stream().anyMatch(p -> !p.polarityKnown())) {
+            // no back-EMF fixed which end of each coil starts it: draw the starts as the guess they are
+            d.startsUnknown();
+        }
         for (PhaseCard p : card.phases()) {
             List<HalfWinding> h = p.halfWindings();
             if (h.size() == 2 && h.get(0).endLead().equals(h.get(1).startLead())) {
@@ -250,7 +263,11 @@ public final class MotorHtml {
         if (!Double.isFinite(v)) {
             return "\u2014";
         }
-        String s = String.format(Locale.ROOT, "%.4g", v);
+        // about three significant figures: what a bench measurement of R, L or Ke supports
+        if (Math.abs(v) >= 1000 && Math.abs(v) < 1e7) {
+            return String.format(Locale.ROOT, "%.0f", v);
+        }
+        String s = String.format(Locale.ROOT, "%.3g", v);
         if (s.contains(".") && !s.contains("e")) {
             s = s.replaceAll("0+$", "").replaceAll("\\.$", "");
         }

@@ -60,6 +60,26 @@ public interface MotorPhrasing {
         };
     }
 
+    /** What is unknown, by name in a few words ("coupling of phase B"), for the card's first lines. */
+    default String name(Unknown u) {
+        String phases = u.subjects().isEmpty() ? "" : " of phase" + (u.subjects().size() > 1 ? "s " : " ")
+                + String.join(" and ", u.subjects());
+        return switch (u.what()) {
+            case STEP_INDUCTANCE -> "inductance of step response " + String.join(", ", u.subjects());
+            case PHASES_OF_EIGHT_LEAD -> "which coils share a phase, and their polarity";
+            case PHASES_OF_FIVE_LEAD -> "which coils form phases A and B";
+            case PHASES_NO_LAYOUT, PHASES_NO_DATA -> "the phases";
+            case POLARITY -> "coil polarity (direction only)";
+            case COUPLING_ASSUMED_FULL -> "coupling" + phases + " (full coupling assumed)";
+            case COUPLING_FROM_OTHER_PHASE -> "coupling" + phases + " (the other phase's used)";
+            case STEP_ANGLE -> "step angle";
+            case KE -> "Ke, Kt and torque";
+            case RATED_CURRENT -> "rated current";
+            case INDUCTANCE -> "inductance and time constant";
+            case NATURAL_FREQUENCY -> "natural frequency";
+        };
+    }
+
     /** A finding's message, with the hint to its remedy where this phrasing has one. */
     default String finding(Finding f) {
         String hint = hint(f.code());

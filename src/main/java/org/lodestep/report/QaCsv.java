@@ -10,9 +10,10 @@ import org.lodestep.qa.StoredRecord;
 import org.lodestep.qa.Submission;
 
 /**
- * QA records as CSV (RFC 4180), one row per check result, values in SI units as stored. Text cells that a
- * spreadsheet would run as a formula (starting with =, +, @ or - followed by a non-digit) get a leading apostrophe;
- * everything else is written verbatim.
+ * QA records as CSV (RFC 4180), one row per check result, values in SI units as stored. Every text cell that a
+ * spreadsheet would evaluate (starting with {@code =}, {@code +}, {@code -}, {@code @}, tab or carriage return, so
+ * {@code -2+3} too) gets a leading apostrophe, as the OWASP "CSV Injection" guidance recommends (references §28);
+ * numbers we format ourselves are written as numbers.
  */
 public final class QaCsv {
     /** The header, in column order. */
@@ -51,8 +52,7 @@ public final class QaCsv {
             return s;
         }
         char c = s.charAt(0);
-        boolean formula = c == '=' || c == '+' || c == '@' || c == '\t' || c == '\r'
-                || (c == '-' && (s.length() == 1 || !Character.isDigit(s.charAt(1))));
+        boolean formula = c == '=' || c == '+' || c == '-' || c == '@' || c == '\t' || c == '\r';
         return formula ? "'" + s : s;
     }
 }

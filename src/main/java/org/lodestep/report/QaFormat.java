@@ -21,8 +21,9 @@ final class QaFormat {
     static String unit(String parameter, String storedUnit) {
         return switch (parameter) {
             case Parameters.PHASE_INDUCTANCE -> "mH";
-            case Parameters.INSULATION_RESISTANCE -> "Mohm";
-            default -> storedUnit;
+            case Parameters.INSULATION_RESISTANCE -> "M\u03A9";
+            // one way of writing each unit in every report (the spec stores ASCII "ohm")
+            default -> "ohm".equals(storedUnit) ? "\u03A9" : storedUnit;
         };
     }
 

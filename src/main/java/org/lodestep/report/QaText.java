@@ -42,13 +42,15 @@ public final class QaText {
     /** One line per check: parameter, phase, measured, judged, limits, verdict and note. */
     static String checkTable(List<CheckResult> checks) {
         List<String[]> rows = new ArrayList<>();
-        rows.add(new String[] {"check", "", "measured", "judged", "limits", "unit", "result"});
+        rows.add(new String[] {"check", "", "measured", "judged", "limits", "margin", "unit", "result"});
         for (CheckResult c : checks) {
             String p = c.parameter();
             String limits = (c.limit().hasLower() ? QaFormat.value(p, c.limit().lower()) : "")
                     + " .. " + (c.limit().hasUpper() ? QaFormat.value(p, c.limit().upper()) : "");
+            String margin = c.decidingLimit().isEmpty() ? "-"
+                    : QaLotPhrases.signed(p, c.margin()) + " " + c.decidingLimit();
             rows.add(new String[] {p.replace('_', ' '), QaFormat.visible(c.label()), QaFormat.value(p, c.measured()),
-                    QaFormat.value(p, c.judged()), limits.trim(), QaFormat.unit(p, c.limit().unit()),
+                    QaFormat.value(p, c.judged()), limits.trim(), margin, QaFormat.unit(p, c.limit().unit()),
                     c.verdict().name()});
         }
         StringBuilder b = new StringBuilder(table(rows));
@@ -108,22 +110,27 @@ public final class QaText {
                 + " electrical-safety rules take precedence.";
     }
 
-    /** The lot (or part, or date-range) report. */
+    /**
+     * The lot (or part, or date-range) report: the answer first (yield, failed and re-tested serials), the failed
+     * checks with their margins, then each series (a parameter of one phase or pair).
+     */
     public static String lotReport(String title, LotStatistics.Summary sum) {
         StringBuilder b = new StringBuilder();
         b.append(QaFormat.visible(title)).append('\n');
         LotStatistics.Counts c = sum.counts();
+        b.append(QaLotPhrases.answer(sum)).append('\n');
         b.append(String.format(Locale.ROOT, "motors %d (records %d, re-tests %d): %d PASS, %d FAIL, %d INCOMPLETE%n",
                 c.motors(), c.records(), c.retests(), c.passed(), c.failed(), c.incomplete()));
-        b.append(String.format(Locale.ROOT, "first-pass yield %s, final yield %s%n", QaFormat.pct(c.firstPassYieldPct()),
-                QaFormat.pct(c.finalYieldPct())));
-        for (LotStatistics.NotPassed n : sum.notPassed()) {
-            b.append(String.format(Locale.ROOT, "  %-10s %s (#%d): %s%n", n.verdict(), QaFormat.visible(n.serial()),
-                    n.recordId(), QaFormat.visible(String.join(", ", n.checks())).replace('_', ' ')));
-        }
         if (c.notIntact() > 0) {
             b.append(String.format(Locale.ROOT, "WARNING: %d record(s) no longer match their SHA-256: the database "
                     + "was changed outside Lodestep; see qa certificate for each%n", c.notIntact()));
+        }
+        if (!sum.failedChecks().isEmpty()) {
+            b.append("\nfailed and re-tested:\n").append(failedTable(sum.failedChecks()));
+        }
+        if (!sum.parameters().isEmpty()) {
+            b.append("\nevery series at a glance:\n").append(overview(sum.parameters()));
+            b.append(QaLotPhrases.CI_SOURCE).append('\n');
         }
         for (LotStatistics.ParameterStatistics p : sum.parameters()) {
             b.append('\n').append(parameter(p));
@@ -134,32 +141,77 @@ public final class QaText {
         return b.toString();
     }
 
+    /** One row per check that did not pass: serial, record, check, value, limit, margin, re-test. */
+    private static String failedTable(List<LotStatistics.FailedCheck> failed) {
+        List<String[]> rows = new ArrayList<>();
+        rows.add(new String[] {"serial", "record", "check", "verdict", "value", "limit", "margin", "unit", "re-test"});
+        for (LotStatistics.FailedCheck f : failed) {
+            rows.add(new String[] {QaFormat.visible(f.serial()), "#" + f.recordId(),
+                    QaLotPhrases.title(f.parameter(), f.label()), f.verdict().name(),
+                    QaFormat.value(f.parameter(), f.value()), QaLotPhrases.limit(f),
+                    QaLotPhrases.signed(f.parameter(), f.margin()), QaFormat.unit(f.parameter(), f.unit()),
+                    QaLotPhrases.retest(f)});
+        }
+        return table(rows);
+    }
+
+    /** One line per series: n, mean, spec, values outside it, capability and points out of control. */
+    private static String overview(List<LotStatistics.ParameterStatistics> all) {
+        List<String[]> rows = new ArrayList<>();
+        rows.add(new String[] {"series", "n", "mean", "spec", "unit", "outside spec", "capability (95 % CI)",
+                "out of control"});
+        for (LotStatistics.ParameterStatistics p : all) {
+            String name = p.parameter();
+            rows.add(new String[] {QaLotPhrases.title(p), Integer.toString(p.n()),
+                    (p.constant() ? "all " : "") + QaFormat.value(name, p.mean()),
+                    QaLotPhrases.spec(name, p.lsl(), p.usl()), QaLotPhrases.unit(p), Integer.toString(p.outOfSpec()),
+                    p.constant() ? "no variation" : p.cpk().index() + " "
+                            + QaLotPhrases.capabilityFigure(p.cpk(), false),
+                    p.constant() ? "-" : Integer.toString(p.outOfControl().size())});
+        }
+        return table(rows);
+    }
+
     private static String parameter(LotStatistics.ParameterStatistics p) {
         String name = p.parameter();
-        String unit = QaFormat.unit(name, p.unit());
+        String unit = QaLotPhrases.unit(p);
         StringBuilder b = new StringBuilder();
-        b.append(String.format(Locale.ROOT, "%s [%s]  n=%d  mean %s  s %s  min %s  max %s%n", name.replace('_', ' '),
+        String specLine = String.format(Locale.ROOT, "  spec %s %s%s, outside spec: %d%n",
+                QaLotPhrases.spec(name, p.lsl(), p.usl()), unit,
+                p.limitsVaried() ? " (limits of the latest spec version; earlier records used others)" : "",
+                p.outOfSpec());
+        if (p.constant()) {
+            b.append(String.format(Locale.ROOT, "%s [%s]  n=%d: %s%n", QaLotPhrases.title(p), unit, p.n(),
+                    QaLotPhrases.noVariation(p)));
+            b.append(specLine);
+            return b.toString();
+        }
+        b.append(String.format(Locale.ROOT, "%s [%s]  n=%d  mean %s  s %s  min %s  max %s%n", QaLotPhrases.title(p),
                 unit, p.n(), QaFormat.value(name, p.mean()), QaFormat.value(name, p.stdDev()),
                 QaFormat.value(name, p.min()), QaFormat.value(name, p.max())));
-        b.append(String.format(Locale.ROOT, "  spec %s .. %s%s, outside spec: %d%n",
-                QaFormat.value(name, p.lsl()), QaFormat.value(name, p.usl()),
-                p.limitsVaried() ? " (limits of the latest spec version; earlier records used others)" : "",
-                p.outOfSpec()));
-        b.append(String.format(Locale.ROOT, "  Cp %s  Cpk %s (sigma within = MRbar/d2 = %s)   Pp %s  Ppk %s%n",
-                QaFormat.index(p.cp()), QaFormat.index(p.cpk()), QaFormat.value(name, p.chart().sigmaWithin()),
-                QaFormat.index(p.pp()), QaFormat.index(p.ppk())));
-        b.append(String.format(Locale.ROOT, "  I chart: centre %s, LCL %s, UCL %s;  MR chart: MRbar %s, UCL %s%n",
-                QaFormat.value(name, p.chart().centre()), QaFormat.value(name, p.chart().lowerX()),
-                QaFormat.value(name, p.chart().upperX()), QaFormat.value(name, p.chart().movingRangeMean()),
-                QaFormat.value(name, p.chart().upperMr())));
+        b.append(specLine);
+        b.append(String.format(Locale.ROOT, "  %s;  Cp %s%n", QaLotPhrases.capability(p.cpk()), QaFormat.index(p.cp())));
+        b.append(String.format(Locale.ROOT, "  %s;  Pp %s%n", QaLotPhrases.capability(p.ppk()),
+                QaFormat.index(p.pp())));
+        if (Double.isFinite(p.chart().upperX())) {
+            b.append(String.format(Locale.ROOT, "  I chart: centre %s, LCL %s, UCL %s;  MR chart %s: MRbar %s, UCL %s%n",
+                    QaFormat.value(name, p.chart().centre()), QaLotPhrases.lowerControlLimit(p),
+                    QaFormat.value(name, p.chart().upperX()), "(" + QaLotPhrases.movingRangeUnit(p) + ")",
+                    QaLotPhrases.movingRange(p, p.chart().movingRangeMean()),
+                    QaLotPhrases.movingRange(p, p.chart().upperMr())));
+            if (!QaLotPhrases.scaleNote(p).isEmpty()) {
+                b.append("  ").append(QaLotPhrases.scaleNote(p)).append('\n');
+            }
+        }
         if (p.outOfControl().isEmpty()) {
             b.append("  no point outside the control limits\n");
         } else {
             for (LotStatistics.OutOfControl o : p.outOfControl()) {
-                b.append(String.format(Locale.ROOT, "  outside %s-chart limits: point %d, serial %s%s, %s %s%n",
+                boolean mr = o.chart().equals("MR");
+                b.append(String.format(Locale.ROOT, "  outside %s-chart limits: motor %d, serial %s, %s %s%n",
                         o.chart(), o.index() + 1, QaFormat.visible(o.serial()),
-                        o.label().isEmpty() ? "" : " phase " + QaFormat.visible(o.label()),
-                        QaFormat.value(name, o.value()), unit));
+                        mr ? QaLotPhrases.movingRange(p, o.value()) : QaFormat.value(name, o.value()),
+                        mr ? QaLotPhrases.movingRangeUnit(p) : unit));
             }
         }
         b.append(histogram(name, p.histogram(), p.lsl(), p.usl()));
@@ -213,7 +265,7 @@ public final class QaText {
         if (!s.measurements().insulation().isEmpty()) {
             b.append("insulation readings:");
             for (InsulationReading i : s.measurements().insulation()) {
-                b.append(String.format(Locale.ROOT, "  %s %s Mohm at %s V DC;", QaFormat.visible(i.label()),
+                b.append(String.format(Locale.ROOT, "  %s %s M\u03A9 at %s V DC;", QaFormat.visible(i.label()),
                         QaFormat.num(i.resistanceOhm() / 1e6), QaFormat.num(i.testVoltageV())));
             }
             b.append('\n');

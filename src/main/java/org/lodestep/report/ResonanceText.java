@@ -25,6 +25,9 @@ public final class ResonanceText {
 
     public static void sweep(PrintWriter out, SweepHeader h, SweepResult r, RateUnits u, AvoidList avoid) {
         stall(out, r.stall(), u);
+        // the answer first: what to avoid, then how it was found
+        avoidList(out, avoid, u);
+        out.println();
         out.printf(Locale.ROOT, "Resonance sweep: %s, channel %s%s, %s Hz, %.1f s analysed%n", h.source(),
                 h.channel(), h.unit().isEmpty() ? "" : " (" + h.unit() + ")", num(h.sampleRateHz()), r.durationS());
         out.printf(Locale.ROOT, "Step rate: %s%n", h.rateLaw());
@@ -82,8 +85,6 @@ public final class ResonanceText {
             out.println("Evidence: " + r.evidenceNote());
         }
         out.println();
-        avoidList(out, avoid, u);
-        out.println();
         safety(out);
     }
 
@@ -133,15 +134,15 @@ public final class ResonanceText {
     public static void ringDown(PrintWriter out, String source, String channel, RingDownResult r) {
         out.printf(Locale.ROOT, "Ring-down: %s, channel %s%n", source, channel);
         boolean bb = !r.backbone().isEmpty();
-        out.printf(Locale.ROOT, "  natural frequency   %10.2f Hz%s%n", r.naturalFrequencyHz(), bb
-                ? String.format(Locale.ROOT, " ± %.2f  (small-signal, extrapolated to zero swing)",
+        out.printf(Locale.ROOT, "  natural frequency   %10.1f Hz%s%n", r.naturalFrequencyHz(), bb
+                ? String.format(Locale.ROOT, " ± %.1f  (small-signal, extrapolated to zero swing)",
                 r.naturalFrequencyErrorHz()) : "");
-        out.printf(Locale.ROOT, "  damped frequency    %10.2f Hz%s%n", r.dampedFrequencyHz(), "");
+        out.printf(Locale.ROOT, "  damped frequency    %10.1f Hz%s%n", r.dampedFrequencyHz(), "");
         out.printf(Locale.ROOT, "  damping ratio       %10.4f%s   (Q = %.1f)%n", r.dampingRatio(), bb
                 ? String.format(Locale.ROOT, " ± %.4f", r.dampingRatioError()) : "", r.qualityFactor());
         if (bb) {
-            out.printf(Locale.ROOT, "  large-swing freq.   %10.2f Hz   (first cycle; %d cycles measured; one sinusoid"
-                    + " over the whole ring would say %.2f Hz, R² %.3f)%n", r.largeSwingFrequencyHz(),
+            out.printf(Locale.ROOT, "  large-swing freq.   %10.1f Hz   (first cycle; %d cycles measured; one sinusoid"
+                    + " over the whole ring would say %.1f Hz, R² %.3f)%n", r.largeSwingFrequencyHz(),
                     r.backbone().size(), r.wholeRingFrequencyHz(), r.wholeRingRSquared());
             out.println("  Backbone (cycle amplitude -> frequency): " + backbone(r));
             out.println("  A large swing rings slower: the torque-angle curve is sinusoidal, so stiffness falls with"
@@ -149,13 +150,12 @@ public final class ResonanceText {
             out.println("  A microstepped sweep may resonate a little below this: at a full-step rest the detent adds"
                     + " its stiffness, between full steps it partly cancels.");
         }
-        out.printf(Locale.ROOT, "  decay rate          %10.2f 1/s%n", r.decayRatePerS());
+        out.printf(Locale.ROOT, "  decay rate          %10.1f 1/s%n", r.decayRatePerS());
         out.printf(Locale.ROOT, "  fit quality R²      %10.4f   (RMS residual %s, %.1f periods from t = %.4f s)%n",
                 r.rSquared(), sig(r.rmsResidual()), r.periodsFitted(), r.startTimeS());
-        if (r.rSquared() < 0.9) {
-            out.println("  The fit is poor (R² below 0.9): the response is not a single damped oscillation; treat the"
-                    + " figures as rough.");
-        }
+        out.println(r.rSquared() < 0.9 ? "  The fit is poor (criterion R² ≥ 0.9 for a single damped oscillation):"
+                + " treat the figures as rough." : "  Fit criterion: R² ≥ 0.9 for a single damped oscillation: met."
+                + " (A ring-down measures; it has no limit to pass.)");
         out.println("  Low-speed resonance is expected near full-step rates of f_n, f_n/2, f_n/3:");
         java.util.List<Double> risky = r.riskyRatesFullStepsPerS(3);
         out.printf(Locale.ROOT, "  %.1f, %.1f, %.1f full steps/s%n", risky.get(0), risky.get(1), risky.get(2));

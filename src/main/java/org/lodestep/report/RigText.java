@@ -88,15 +88,15 @@ public final class RigText {
     /** Ohms with an SI prefix, 4 significant figures. */
     public static String ohm(double v) {
         if (v >= 1e9) {
-            return String.format(Locale.ROOT, "%.4g GOhm", v / 1e9);
+            return String.format(Locale.ROOT, "%.4g G\u03A9", v / 1e9);
         }
         if (v >= 1e6) {
-            return String.format(Locale.ROOT, "%.4g MOhm", v / 1e6);
+            return String.format(Locale.ROOT, "%.4g M\u03A9", v / 1e6);
         }
         if (v >= 1e3) {
-            return String.format(Locale.ROOT, "%.4g kOhm", v / 1e3);
+            return String.format(Locale.ROOT, "%.4g k\u03A9", v / 1e3);
         }
-        return String.format(Locale.ROOT, "%.4g Ohm", v);
+        return String.format(Locale.ROOT, "%.4g \u03A9", v);
     }
 
     /** What a stream delivered: channels, length, rate, and how the line carried it. */

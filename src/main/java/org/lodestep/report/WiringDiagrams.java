@@ -32,6 +32,10 @@ public final class WiringDiagrams {
     public static WiringDiagram of(Identification id, DriverWiring connection) {
         String title = title(id.topology(), connection.name());
         WiringDiagram.Builder b = WiringDiagram.builder(title);
+        if (!connection.verified()) {
+            // resistance cannot tell which ends are coil starts (nor, 5- and 8-lead, which coils pair): say so
+            b.startsUnknown();
+        }
         Map<String, List<String>> terminals = connection.terminals();
         if (id.topology() == Topology.FIVE_LEAD) {
             fiveLeadCoils(b, id.windings(), terminals);

@@ -30,6 +30,13 @@ import org.apache.commons.math3.util.Pair;
 public final class RingDownFit {
     /** The fit stops where the envelope falls below this fraction of the first peak. */
     private static final double END_FRACTION = 0.03;
+    /**
+     * Least ratio of the first swing to the RMS noise of the record's last fifth for a signal to count as a ring-down.
+     * The largest of a million samples of Gaussian noise lies near 5 σ (the normal distribution's tail), so pure
+     * noise stays below 8 (references §28); a measured ring starts tens to hundreds of times above its noise floor.
+     * Our own screen (common practice).
+     */
+    static final double MIN_PEAK_TO_NOISE = 8;
 
     private RingDownFit() {
     }
@@ -91,6 +98,11 @@ public final class RingDownFit {
         }
         // Cycle by cycle first: the backbone, and where the small swings (the settled tail) begin.
         double noise = tailNoise(x, settled);
+        if (!(peak >= MIN_PEAK_TO_NOISE * noise)) {
+            throw new IllegalArgumentException(String.format("no decaying oscillation found: the largest swing (%.3g)"
+                    + " is only %.1f times the noise of the record's end (%.3g); expected a ring that rises clearly"
+                    + " above the noise and dies away", peak, peak / noise, noise));
+        }
         RingDownBackbone.Result bb = RingDownBackbone.measure(x, start, settled, noise, sampleRateHz, startTimeS);
         int tail = start;
         if (bb != null && bb.firstTailCycle() > 0) {
@@ -183,13 +195,20 @@ public final class RingDownFit {
             sst += (y[i] - ym) * (y[i] - ym);
         }
         double a0 = x[start] - settled;
-        LeastSquaresOptimizer.Optimum opt = new LevenbergMarquardtOptimizer().optimize(new LeastSquaresBuilder()
-                .model(model(t))
-                .target(y)
-                .start(new double[] {a0, sigma0, omegaD0, 0.0, settled})
-                .maxEvaluations(10_000)
-                .maxIterations(10_000)
-                .build());
+        LeastSquaresOptimizer.Optimum opt;
+        try {
+            opt = new LevenbergMarquardtOptimizer().optimize(new LeastSquaresBuilder()
+                    .model(model(t))
+                    .target(y)
+                    .start(new double[] {a0, sigma0, omegaD0, 0.0, settled})
+                    .maxEvaluations(10_000)
+                    .maxIterations(10_000)
+                    .build());
+        } catch (IllegalStateException | ArithmeticException e) {
+            // Commons Math's convergence and evaluation-count failures: nothing shaped like a damped sinusoid
+            throw new IllegalArgumentException("no decaying oscillation found: the damped-sinusoid fit did not"
+                    + " converge; expected a ring-down of at least two periods");
+        }
         double[] p = opt.getPoint().toArray();
         double amplitude = p[0];
         double phase = p[3];

@@ -49,7 +49,8 @@ public class InputFormatException extends Exception {
             b.append('\'').append(oneLine(text)).append("' ");
         }
         b.append(expected);
-        return b.toString();
+        // one line whatever the parts hold: a file name or a chunk id read from the file may carry line breaks
+        return b.toString().replaceAll("\\p{Cntrl}", "?");
     }
 
     private static String oneLine(String s) {

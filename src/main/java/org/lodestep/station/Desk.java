@@ -34,6 +34,12 @@ final class Desk {
         return RecordStores.open(settings.db(), System.getenv());
     }
 
+    /** The provenance of one station run: this tool, "station" as the command, the time now (inputs added by the page). */
+    org.lodestep.workflow.Provenance provenance() {
+        return org.lodestep.workflow.Provenance.of(settings.toolVersion(), java.util.List.of("station"),
+                java.time.Instant.now());
+    }
+
     String page(String title, String active, String main) {
         return Layout.page(title, active, main, access.formKey());
     }

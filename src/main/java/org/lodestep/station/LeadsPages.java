@@ -316,6 +316,7 @@ final class LeadsPages {
         if (r == null) {
             throw new SettingsException("the probe session has not finished yet");
         }
-        ctx.html(LeadsHtml.report("Probed motor", null, r.identification()).html());
+        ctx.html(org.lodestep.report.ProvenanceBlock.html(LeadsHtml.report("Probed motor", null,
+                r.identification()), desk.provenance()).html());
     }
 }

@@ -197,7 +197,13 @@ final class MotorPages {
                 boxed(ctx.formParam("revolutions"), "revolutions", ""), null,
                 boxed(ctx.formParam("step_supply_v"), "step voltage", "V"),
                 boxed(ctx.formParam("series_ohm"), "series resistance", "\u03a9"), card, true);
-        Tasks.Task task = desk.tasks.submit(progress -> result(MotorFromFiles.run(s, progress)));
+        org.lodestep.workflow.Provenance prov = desk.provenance();
+        if (resistance != null) {
+            prov = prov.withInput("resistance", resistance);
+        }
+        prov = prov.withInputs("step response", steps);
+        org.lodestep.workflow.Provenance provenance = emf == null ? prov : prov.withInput("back-EMF", emf);
+        Tasks.Task task = desk.tasks.submit(progress -> result(MotorFromFiles.run(s, progress), provenance));
         Desk.json(ctx, Map.of("task", task.id));
     }
 
@@ -217,14 +223,15 @@ final class MotorPages {
         return p;
     }
 
-    private Map<String, Object> result(MotorFromFiles.Result r) {
+    private Map<String, Object> result(MotorFromFiles.Result r, org.lodestep.workflow.Provenance provenance) {
         List<MotorHtml.Trace> traces = r.traces().stream()
                 .map(t -> new MotorHtml.Trace(t.source(), t.timeS(), t.currentA())).toList();
         String id = Access.random();
         if (reports.size() >= KEEP) {
             reports.clear();
         }
-        reports.put(id, MotorHtml.report("Motor card", r.card(), traces, r.emf(), MotorPhrasing.PLAIN).html());
+        reports.put(id, org.lodestep.report.ProvenanceBlock.html(MotorHtml.report("Motor card", r.card(), traces,
+                r.emf(), MotorPhrasing.PLAIN), provenance).html());
         String html = "<h2>Motor card</h2><p class=\"actions\"><a href=\"/motor/reports/" + id + "\">Motor report "
                 + "(print view)</a></p><pre class=\"text\">" + Layout.esc(MotorCardText.render(r.card()))
                 + "</pre><iframe class=\"report\" title=\"Motor report: fits, back-EMF, constants\" src=\"/motor/reports/"

@@ -433,6 +433,7 @@ final class QaPages {
         QaCertificate.Result c = certificateOf(ctx);
         double volts = c.latest().submission().measurements().insulation().stream()
                 .mapToDouble(r -> r.testVoltageV()).findFirst().orElse(Double.NaN);
-        ctx.html(QaHtml.check(c.serial(), c.history(), volts, Map.of()).html());
+        ctx.html(org.lodestep.report.ProvenanceBlock.html(QaHtml.check(c.serial(), c.history(), volts, Map.of()),
+                desk.provenance()).html());
     }
 }

@@ -4,6 +4,7 @@ import java.util.ArrayList;
 import java.util.List;
 import java.util.Objects;
 
+import org.lodestep.qa.LotTally;
 import org.lodestep.qa.StoredRecord;
 import org.lodestep.qa.Tally;
 import org.lodestep.qa.Verdict;
@@ -37,7 +38,7 @@ final class QaRun {
     /** Readings typed per motor at the meter (no rig, no capture files). */
     final boolean typed;
     private final List<Row> rows = new ArrayList<>();
-    private Tally tally = Tally.NONE;
+    private final LotTally tally = new LotTally();
     private String armKey;
     private long armExpiresMs;
 
@@ -53,7 +54,7 @@ final class QaRun {
 
     synchronized void add(Row row) {
         rows.add(row);
-        tally = tally.plus(row.verdict());
+        tally.add(row.serial(), row.verdict());
     }
 
     synchronized List<Row> rows() {
@@ -61,7 +62,7 @@ final class QaRun {
     }
 
     synchronized Tally tally() {
-        return tally;
+        return tally.tally();
     }
 
     /** Arms the insulation test for the next motor; any earlier arming is void. Returns the page's key. */

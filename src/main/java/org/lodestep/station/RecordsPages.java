@@ -157,7 +157,8 @@ final class RecordsPages {
         try (RecordStore store = desk.openStore()) {
             r = QaLotReport.run(f.query(), store, Progress.NONE);
         }
-        ctx.html(QaHtml.lot(f.title(), r.summary()).html());
+        ctx.html(org.lodestep.report.ProvenanceBlock.html(QaHtml.lot(f.title(), r.summary()), desk.provenance())
+                .html());
     }
 
     private void export(Context ctx) throws Exception {

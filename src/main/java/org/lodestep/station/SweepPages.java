@@ -176,7 +176,8 @@ final class SweepPages {
         Files.write(file, Uploads.bytes(up));
         Tasks.Task task = desk.tasks.submit(t -> {
             ResonanceSweep.Result r = ResonanceSweep.analyse(file, ResonanceSweep.Settings.defaults(), t);
-            return result(r, "Uploaded capture " + Uploads.safeName(up.filename()), folder);
+            return result(r, "Uploaded capture " + Uploads.safeName(up.filename()), folder,
+                    desk.provenance().withInput("sweep", file));
         });
         Desk.json(ctx, Map.of("task", task.id));
     }
@@ -186,7 +187,8 @@ final class SweepPages {
                 task.add("curve", curveEvent(soFar, capturedS, sweepS)));
         // the saved capture carries its sweep law, as `resonance sweep FILE` reads it after `rig capture`
         ResonanceSweep.Result r = ResonanceSweep.analyse(cap.saved(), ResonanceSweep.Settings.defaults(), task);
-        return result(r, "Capture saved to " + cap.saved(), cap.saved().getParent());
+        return result(r, "Capture saved to " + cap.saved(), cap.saved().getParent(),
+                desk.provenance().withInput("sweep", cap.saved()).withRig(desk.settings.rig()));
     }
 
     private static Map<String, Object> curveEvent(List<ResponsePoint> soFar, double capturedS, double sweepS) {
@@ -210,7 +212,8 @@ final class SweepPages {
         return Math.rint(v * per) / per;
     }
 
-    private Map<String, Object> result(ResonanceSweep.Result r, String origin, Path folder) throws Exception {
+    private Map<String, Object> result(ResonanceSweep.Result r, String origin, Path folder,
+                                       org.lodestep.workflow.Provenance provenance) throws Exception {
         ResonanceText.SweepHeader header = new ResonanceText.SweepHeader(r.source(), r.channel(), r.unit(),
                 r.sampleRateHz(), r.rateLaw());
         String id = Access.random();
@@ -219,9 +222,11 @@ final class SweepPages {
         }
         // the avoid-list as `resonance sweep --avoid-list` writes it: what `drive plan` and the profile read
         Path avoid = folder.resolve(id.substring(0, 12) + "-avoid-list.json");
-        OutputFile.write(avoid, ResonanceJson.avoidList(r.avoid()) + System.lineSeparator());
-        sweeps.put(id, new Analysed(ResonanceHtml.sweep(header, r.sweep(), r.units(), r.avoid(),
-                r.spectrogramColumnRatesFullStepsPerS()).html(), avoid, r.units().microsteps()));
+        OutputFile.write(avoid, org.lodestep.report.ProvenanceBlock.json(ResonanceJson.avoidList(r.avoid()),
+                provenance) + System.lineSeparator());
+        sweeps.put(id, new Analysed(org.lodestep.report.ProvenanceBlock.html(ResonanceHtml.sweep(header, r.sweep(),
+                r.units(), r.avoid(), r.spectrogramColumnRatesFullStepsPerS()), provenance).html(), avoid,
+                r.units().microsteps()));
         StringWriter text = new StringWriter();
         try (PrintWriter out = new PrintWriter(text)) {
             ResonanceText.sweep(out, header, r.sweep(), r.units(), r.avoid());

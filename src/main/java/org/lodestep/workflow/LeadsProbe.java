@@ -31,6 +31,12 @@ public final class LeadsProbe {
                     || leads.stream().anyMatch(String::isBlank)) {
                 throw new SettingsException("expected at least two distinct, non-blank lead labels: " + leads);
             }
+            for (String l : leads) {
+                if (l.length() > org.lodestep.sample.InputLimits.MAX_LABEL_CHARS) {
+                    throw new SettingsException("a lead label is " + l.length() + " characters long: expected at most "
+                            + org.lodestep.sample.InputLimits.MAX_LABEL_CHARS);
+                }
+            }
         }
 
         /** Every pair the leads make, N(N−1)/2. */

@@ -116,16 +116,20 @@ public final class MotorCaptureInputs {
                         "expected the two leads joined during the test, e.g. '# joined=2,5'");
             }
         }
-        Double supply = number(s, "supply_v", "volts");
+        Double supply = number(s, "supply_v", "volts", false, MAX_STEP_SUPPLY_V);
         if (supply == null) {
             supply = supplyFlagV;
+            if (supply != null && !(supply > 0 && supply <= MAX_STEP_SUPPLY_V)) {
+                throw new SettingsException("step supply " + supply + " V is not plausible: expected above 0 and at"
+                        + " most " + MAX_STEP_SUPPLY_V + " V");
+            }
         }
         int voltage = s.indexOf("voltage");
         if (supply == null && voltage >= 0 && s.channels().get(voltage).unit().equals("v")) {
             // a recorded drive voltage: its level over the last half of the record is the step voltage
             supply = settledLevel(s.channel(voltage));
         }
-        Double series = number(s, "series_ohm", "ohms", true);
+        Double series = number(s, "series_ohm", "ohms", true, MAX_SERIES_OHM);
         if (series == null) {
             series = seriesFlagOhm == null ? 0.0 : seriesFlagOhm;
         }
@@ -218,8 +222,8 @@ public final class MotorCaptureInputs {
                     s.channelNames()), "has no back-EMF column: expected columns named emf_<lead>_<lead>_v, "
                     + "+ on the first lead, e.g. emf_1_2_v");
         }
-        Double revs = revolutionsFlag != null ? revolutionsFlag : number(s, "revolutions", "revolutions");
-        Double pulses = pulsesFlag != null ? Double.valueOf(pulsesFlag) : number(s, "pulses_per_rev", "pulses");
+        Double revs = revolutionsFlag != null ? revolutionsFlag : number(s, "revolutions", "revolutions", false, MAX_REVOLUTIONS);
+        Double pulses = pulsesFlag != null ? Double.valueOf(pulsesFlag) : number(s, "pulses_per_rev", "pulses", false, MAX_PULSES_PER_REV);
         try {
             BackEmfResult r = new BackEmfAnalyzer(s.sampleRateHz()).analyze(channels, revs, index,
                     pulses == null ? 1 : (int) Math.round(pulses));
@@ -243,25 +247,33 @@ public final class MotorCaptureInputs {
         return out;
     }
 
-    private static Double number(SampledSignal s, String key, String unit) throws InputFormatException {
-        return number(s, key, unit, false);
-    }
+    /**
+     * Upper bounds of capture metadata: far above any bench value (a step test runs from a bench supply of a few
+     * volts to a drive supply of a few hundred), so only damage or a slip is refused. Our own sanity bounds (common
+     * practice), not physical limits.
+     */
+    static final double MAX_STEP_SUPPLY_V = 1000;
+    static final double MAX_SERIES_OHM = 1e6;
+    static final double MAX_REVOLUTIONS = 1e6;
+    static final double MAX_PULSES_PER_REV = 1e7;
 
-    private static Double number(SampledSignal s, String key, String unit, boolean zeroAllowed)
+    private static Double number(SampledSignal s, String key, String unit, boolean zeroAllowed, double max)
             throws InputFormatException {
         String text = s.metadata().get(key);
         if (text == null) {
             return null;
         }
+        double v;
         try {
-            double v = Double.parseDouble(text.trim());
-            if (!(v > 0 || zeroAllowed && v == 0) || !Double.isFinite(v)) {
-                throw new NumberFormatException();
-            }
-            return v;
+            v = Double.parseDouble(text.trim());
         } catch (NumberFormatException e) {
-            throw new InputFormatException(s.source(), InputFormatException.NO_LINE, key, text,
-                    "is not a " + (zeroAllowed ? "non-negative" : "positive") + " number (" + unit.toLowerCase(Locale.ROOT) + " expected)");
+            v = Double.NaN;
         }
+        if (!(v > 0 || zeroAllowed && v == 0) || !(v <= max)) {
+            throw new InputFormatException(s.source(), InputFormatException.NO_LINE, key, text,
+                    "is not a plausible value: expected a " + (zeroAllowed ? "non-negative" : "positive") + " number"
+                            + " of " + unit.toLowerCase(Locale.ROOT) + " up to " + max);
+        }
+        return v;
     }
 }

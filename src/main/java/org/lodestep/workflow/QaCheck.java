@@ -12,6 +12,7 @@ import org.lodestep.qa.Submission;
 import org.lodestep.qa.Timestamps;
 import org.lodestep.rig.RigException;
 import org.lodestep.sample.InputFormatException;
+import org.lodestep.sample.InputLimits;
 
 /**
  * Incoming-QA check of one motor: assemble its readings ({@link QaReadingSources}), judge them against the part
@@ -54,6 +55,9 @@ public final class QaCheck {
             station = station == null ? "" : station;
             toolVersion = toolVersion == null ? "" : toolVersion;
             confirmation = confirmation == null ? InsulationConfirmation.REFUSE : confirmation;
+            longest("lot", lot, InputLimits.MAX_SERIAL_CHARS);
+            longest("operator", operator, InputLimits.MAX_NAME_CHARS);
+            longest("station", station, InputLimits.MAX_NAME_CHARS);
         }
 
         /** True when the spec includes an insulation test: the front end shows its caution before the run. */
@@ -62,15 +66,29 @@ public final class QaCheck {
         }
     }
 
+    /** A text longer than its limit is a pasted paragraph or a stuck scanner, never a name: refused, not stored. */
+    private static void longest(String what, String text, int maxChars) {
+        if (text.length() > maxChars) {
+            throw new SettingsException("the " + what + " is " + text.length() + " characters long: expected at most "
+                    + maxChars);
+        }
+    }
+
     private final Settings settings;
     private final RecordStore store;
     private final QaMeasurementsAssembly assembly;
 
-    /** A check run writing to {@code store} (opened and closed by the caller). */
-    public QaCheck(Settings settings, RecordStore store) {
+    /**
+     * A check run writing to {@code store} (opened and closed by the caller). The inputs every motor shares (the
+     * meter log) are read here, so an unreadable one is refused before the first motor, not reported per motor.
+     *
+     * @throws InputFormatException the meter log is unreadable
+     */
+    public QaCheck(Settings settings, RecordStore store) throws IOException, InputFormatException {
         this.settings = Objects.requireNonNull(settings, "settings");
         this.store = Objects.requireNonNull(store, "store");
         this.assembly = new QaMeasurementsAssembly(settings.readings(), settings.confirmation());
+        assembly.readSharedInputs();
     }
 
     /**
@@ -88,6 +106,7 @@ public final class QaCheck {
         if (serial.isEmpty()) {
             throw new SettingsException("the serial number is empty");
         }
+        longest("serial number", serial, InputLimits.MAX_SERIAL_CHARS);
         String started = Timestamps.now();
         PartSpec spec = settings.spec();
         Measurements m = assembly.measure(serial, settings.ambientC(), spec.insulationTestVoltageV(), progress);

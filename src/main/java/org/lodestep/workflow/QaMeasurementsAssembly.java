@@ -40,6 +40,13 @@ final class QaMeasurementsAssembly {
         this.confirmation = confirmation;
     }
 
+    /** Reads what every motor of a run shares (the meter log) now, so an unreadable one stops the run at once. */
+    void readSharedInputs() throws IOException, InputFormatException {
+        if (src.meterLogFile() != null && meterLog == null) {
+            meterLog = MeterLog.read(src.meterLogFile());
+        }
+    }
+
     /** The readings of one motor; {@code serial} fills the patterns in lot mode and picks the meter-log row. */
     Measurements measure(String serial, double ambientC, double specTestVoltageV, Progress progress)
             throws IOException, InputFormatException, RigException {
@@ -102,9 +109,7 @@ final class QaMeasurementsAssembly {
             captures.addAll(r.captures());
         }
         if (src.meterLogFile() != null) {
-            if (meterLog == null) {
-                meterLog = MeterLog.read(src.meterLogFile());
-            }
+            readSharedInputs();
             MeterLog.Row row = meterLog.row(serial).orElse(null);
             if (row != null) {
                 captures.add(new CaptureRef(src.meterLogFile() + " line " + row.line(), "meter_log", row.sha256()));

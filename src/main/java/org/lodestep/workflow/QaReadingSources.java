@@ -4,6 +4,8 @@ import java.nio.file.Path;
 import java.util.List;
 import java.util.Objects;
 
+import org.lodestep.qa.PlausibleReadings;
+
 /**
  * Where one motor's readings come from, as the inspector gives them: capture files and patterns, values typed from a
  * hand-held meter in the meter's units (the workflow converts them to SI, once), a bench rig's address. Every field
@@ -58,6 +60,29 @@ public record QaReadingSources(Path resistanceFile, String resistancePattern, Li
         inductanceMh = inductanceMh == null ? List.of() : List.copyOf(inductanceMh);
         insulation = insulation == null ? List.of() : List.copyOf(insulation);
         stepResponses = stepResponses == null ? List.of() : List.copyOf(stepResponses);
+        phaseCount(phaseOhm, "phase resistances", "--phase-ohm 2.03,2.05");
+        phaseCount(inductanceMh, "phase inductances", "--inductance-mh 2.82,2.83");
+        for (double v : phaseOhm) {
+            plausible("phase_a_ohm", v, "phase resistance " + v + " Ω");
+        }
+        for (double v : inductanceMh) {
+            plausible("inductance_a_mh", v, "phase inductance " + v + " mH");
+        }
+        for (TypedInsulation t : insulation) {
+            plausible("insulation_x_mohm", t.megohm(), "insulation " + t.label() + " " + t.megohm() + " MΩ");
+            if (!Double.isNaN(t.testVoltageV())) {
+                plausible("insulation_test_v", t.testVoltageV(), "insulation test voltage " + t.testVoltageV() + " V");
+            }
+        }
+        if (keVsPerRad != null) {
+            plausible("ke_v_s_per_rad", keVsPerRad, "back-EMF constant " + keVsPerRad + " V·s/rad");
+        }
+        if (stepAngleDeg != null) {
+            plausible("step_angle_deg", stepAngleDeg, "step angle " + stepAngleDeg + "°");
+        }
+        if (windingC != null) {
+            plausible("winding_c", windingC, "winding temperature " + windingC + " °C");
+        }
         positive(stepSupplyV, "step supply voltage", "V");
         positive(revolutions, "revolutions", "");
         if (seriesOhm != null && !(seriesOhm >= 0 && Double.isFinite(seriesOhm))) {
@@ -79,6 +104,25 @@ public record QaReadingSources(Path resistanceFile, String resistancePattern, Li
     /** True when a source names one motor's file (single mode). */
     public boolean hasSingleFiles() {
         return resistanceFile != null || !stepResponses.isEmpty() || backEmfFile != null;
+    }
+
+    /**
+     * A two-phase motor has phases A and B: one value, or three, cannot be judged and must not become a recorded FAIL
+     * ("phase B not found"), so the input is refused before anything is measured.
+     */
+    private static void phaseCount(List<Double> values, String what, String example) {
+        if (!values.isEmpty() && values.size() != 2) {
+            throw new SettingsException(values.size() + " " + (values.size() == 1 ? what.replaceAll("s$", "") : what)
+                    + " given: expected two, phase A then phase B"
+                    + " (e.g. " + example + ")");
+        }
+    }
+
+    private static void plausible(String column, double value, String what) {
+        String refusal = PlausibleReadings.refusal(column, value);
+        if (refusal != null) {
+            throw new SettingsException(what + " is not a plausible reading: " + refusal);
+        }
     }
 
     private static void positive(Double v, String what, String unit) {

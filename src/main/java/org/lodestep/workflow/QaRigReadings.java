@@ -76,7 +76,7 @@ final class QaRigReadings {
                 ins.add(r);
                 progress.note(String.format(Locale.ROOT, "insulation %s to frame at %d V DC: %s", lead,
                         Math.round(r.testVoltageV()), Double.isInfinite(r.resistanceOhm()) ? "above range"
-                                : String.format(Locale.ROOT, "%.4g Mohm", r.resistanceOhm() / 1e6)));
+                                : String.format(Locale.ROOT, "%.4g M\u03A9", r.resistanceOhm() / 1e6)));
             }
         }
         String text = raw.toString();

@@ -28,8 +28,9 @@ class QaDemoTest {
         // and 00126 fails balance (6.3 % against 5 %): 9 of 12 pass first time, 10 after 00124 is re-tested.
         assertTrue(s.contains("lot L-2607 done: tally: 12 tested, 9 PASS, 3 FAIL, 0 INCOMPLETE"), s);
         assertTrue(s.contains("(re-test of #8)"), s);
-        assertTrue(s.contains("first-pass yield 75.0 %, final yield 83.3 %"), s);
-        assertTrue(s.contains("outside X-chart limits: point 10, serial KV24-00121 phase B"), s);
+        assertTrue(s.contains("final yield 83.3 % (10 of 12 motors pass), first-pass yield 75.0 %; failed: KV24-00121,"
+                + " KV24-00126; re-tested: KV24-00124 PASS"), s);
+        assertTrue(s.contains("outside X-chart limits: motor 5, serial KV24-00121"), s);
         assertTrue(s.contains("(verified)"), s);
         assertTrue(Files.readString(out.resolve("qa/lot-L-2607.csv")).lines().count() > 100);
         assertEquals("", err.toString());

@@ -71,7 +71,7 @@ class RigCommandTest {
         Result r = run("rig", "measure", "sim:bench-4", "insulation", "--volts", "250",
                 "--yes-i-have-read-the-caution");
         assertEquals(0, r.code(), r.err());
-        assertEquals(4, r.out().lines().filter(l -> l.contains("GOhm")).count(), r.out());
+        assertEquals(4, r.out().lines().filter(l -> l.contains("G\u03A9")).count(), r.out());
     }
 
     @Test

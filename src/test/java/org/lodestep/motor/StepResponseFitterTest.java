@@ -78,4 +78,32 @@ class StepResponseFitterTest {
         double[] i = new double[200];
         assertThrows(IllegalArgumentException.class, () -> new StepResponseFitter(2.0, 0, null).fit(t, i));
     }
+
+    @Test
+    void refusesNoiseInsteadOfFittingACoil() {
+        // Gaussian noise of 10 mA with no step in it: no RL rise (L·di/dt = V - R·i, references §10) can be found, so
+        // the fitter says so instead of reporting an inductance.
+        double[] t = SyntheticMotor.times(600, 20e-6);
+        java.util.Random rnd = new java.util.Random(5);
+        double[] i = new double[t.length];
+        for (int k = 0; k < i.length; k++) {
+            i[k] = 0.01 * rnd.nextGaussian();
+        }
+        IllegalArgumentException e = assertThrows(IllegalArgumentException.class,
+                () -> new StepResponseFitter(2.0, 0, null).fit(t, i));
+        assertTrue(e.getMessage().startsWith("no "), e.getMessage());
+    }
+
+    @Test
+    void refusesARecordThatNeverSettles() {
+        // a straight ramp: its exponential fit needs a time constant far longer than the record
+        double[] t = SyntheticMotor.times(600, 20e-6);
+        double[] i = new double[t.length];
+        for (int k = 0; k < i.length; k++) {
+            i[k] = 0.5 * k / i.length;
+        }
+        IllegalArgumentException e = assertThrows(IllegalArgumentException.class,
+                () -> new StepResponseFitter(2.0, 0, null).fit(t, i));
+        assertTrue(e.getMessage().startsWith("no settled RL step response found"), e.getMessage());
+    }
 }

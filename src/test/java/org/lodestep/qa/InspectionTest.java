@@ -82,7 +82,7 @@ class InspectionTest {
         Inspection.Judgement j = Inspection.judge(Fixtures.spec(), m);
         CheckResult a = check(j, Parameters.INSULATION_RESISTANCE, "A-frame");
         assertEquals(Verdict.PASS, a.verdict());
-        assertTrue(a.note().contains("53.03 Mohm at 40 °C"), a.note());
+        assertTrue(a.note().contains("53.03 M\u03A9 at 40 °C"), a.note());
         CheckResult b = check(j, Parameters.INSULATION_RESISTANCE, "B-frame");
         assertEquals(Verdict.INCOMPLETE, b.verdict());
         assertTrue(b.note().contains("repeat at 500 V"), b.note());

@@ -45,13 +45,17 @@ class QaFormatTest {
         assertFalse(h.contains("######"), h);
     }
 
-    // Common practice (no published source): spreadsheet formula injection guard on text cells only.
+    // OWASP "CSV Injection" (references §28): prefix a text cell starting with = + - @ tab or CR with a single quote.
     @Test
-    void csvNeutralisesFormulaCellsButKeepsNegativeNumbersAndPlainText() {
+    void csvNeutralisesEveryCellASpreadsheetWouldEvaluateAndKeepsPlainText() {
         assertEquals("'=1+1", QaCsv.text("=1+1"));
         assertEquals("'@SUM(A1)", QaCsv.text("@SUM(A1)"));
         assertEquals("'-cmd", QaCsv.text("-cmd"));
-        assertEquals("-12", QaCsv.text("-12"));
+        assertEquals("'-2+3", QaCsv.text("-2+3"));
+        assertEquals("'+2", QaCsv.text("+2"));
+        assertEquals("'\tx", QaCsv.text("\tx"));
+        assertEquals("'\r=1", QaCsv.text("\r=1"));
         assertEquals("KV24-00117", QaCsv.text("KV24-00117"));
+        assertEquals("", QaCsv.text(""));
     }
 }

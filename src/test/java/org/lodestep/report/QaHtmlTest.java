@@ -48,6 +48,45 @@ class QaHtmlTest {
         assertTrue(String.join(" ", ReportCli.texts(lotCheck, ReportCli.XHTML, "aside")).contains("local electrical"));
     }
 
+    // The lot's check page is compact: a motor that passed is one collapsed line, one that failed shows its checks
+    // with the margin to the deciding limit; notes and the caution sit collapsed (the page was 11 090 px tall at
+    // 1280 px before, measured in Chromium).
+    @Test
+    void lotCheckPageCollapsesPassedMotorsAndShowsMargins() throws Exception {
+        org.w3c.dom.NodeList details = lotCheck.getElementsByTagNameNS(ReportCli.XHTML, "details");
+        int open = 0;
+        int closedPass = 0;
+        for (int i = 0; i < details.getLength(); i++) {
+            org.w3c.dom.Element e = (org.w3c.dom.Element) details.item(i);
+            String summary = e.getElementsByTagNameNS(ReportCli.XHTML, "summary").item(0).getTextContent();
+            if (e.hasAttribute("open")) {
+                open++;
+                assertTrue(summary.contains(": fail"), summary);
+            } else if (summary.matches("KV24-\\d+: pass, \\d+ checks")) {
+                closedPass++;
+            }
+        }
+        // sample lot: 00121, 00124 and 00126 fail, nine pass
+        assertEquals(3, open);
+        assertEquals(9, closedPass);
+        assertTrue(ReportCli.texts(lotCheck, ReportCli.XHTML, "th").contains("Margin"));
+        String cells = String.join("|", ReportCli.texts(lotCheck, ReportCli.XHTML, "td"));
+        String ohm = QaFormat.unit("phase_resistance", "ohm");
+        assertTrue(cells.contains("2.2797 " + ohm + "|1.71 \u2013 2.09 " + ohm + "|\u22120.18965 (USL)"), cells);
+        Chromium.require();
+        Chromium.Page page = Chromium.render(tmp.resolve("check.html"), 1280);
+        // scrollHeight is at least the window's; the report's white column ends where its content does
+        java.awt.image.BufferedImage shot = page.screenshot();
+        int bottom = 0;
+        for (int y = 0; y < shot.getHeight(); y++) {
+            if ((shot.getRGB(shot.getWidth() / 2, y) & 0xffffff) == 0xffffff) {
+                bottom = y;
+            }
+        }
+        assertTrue(bottom > 1000 && bottom < 4000, "lot check page is " + bottom + " px tall");
+        assertTrue(page.scrollWidth() <= page.viewportWidth());
+    }
+
     @Test
     void lotReportHasAHistogramAndIndividualsAndMovingRangeChartsPerParameter(@TempDir Path out) throws Exception {
         Path html = out.resolve("lot.html");
@@ -58,7 +97,8 @@ class QaHtmlTest {
         JsonNode params = json.at("/summary/parameters");
         int charted = 0;
         for (JsonNode p : params) {
-            charted += p.get("n").asInt() >= 2 ? 3 : 1;
+            // a series without variation has no chart at all
+            charted += p.get("constant").asBoolean() ? 0 : p.get("n").asInt() >= 2 ? 3 : 1;
         }
         assertEquals(charted, ReportCli.count(d, ReportCli.SVG, "svg"));
         List<String> svgText = ReportCli.texts(d, ReportCli.SVG, "text");
@@ -76,6 +116,9 @@ class QaHtmlTest {
             figures.add(((org.w3c.dom.Element) fs.item(i)).getAttribute("aria-label"));
         }
         for (JsonNode p : params) {
+            if (p.get("constant").asBoolean()) {
+                continue;
+            }
             int bins = p.get("histogram").size();
             int n = p.get("n").asInt();
             assertTrue(figures.stream().anyMatch(f -> f.contains(n + " values of ")

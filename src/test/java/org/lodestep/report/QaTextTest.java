@@ -16,7 +16,7 @@ class QaTextTest {
     void aFailNamesTheCheckTheValueTheLimitAndTheMargin() {
         CheckResult c = new CheckResult("phase_resistance", "A", 2.31, 2.31, PHASE, Verdict.FAIL, "");
         // 2.31 - 2.09 = 0.22 ohm beyond the upper limit, 0.22 / 2.09 = 10.5 % of it
-        assertEquals("phase resistance A: 2.31 ohm, above the upper limit 2.09 ohm by 0.22 ohm (10.5 %)",
+        assertEquals("phase resistance A: 2.31 \u03A9, above the upper limit 2.09 \u03A9 by 0.22 \u03A9 (10.5 %)",
                 QaText.reason(c));
     }
 

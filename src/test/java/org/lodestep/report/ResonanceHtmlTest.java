@@ -57,7 +57,8 @@ class ResonanceHtmlTest {
         JsonNode json = Json.mapper().readTree(ReportCli.run("resonance", "ringdown", csv, "--json").out());
         double fn = json.get("natural_frequency_hz").asDouble();
         String dd = String.join("|", ReportCli.texts(d, ReportCli.XHTML, "dd"));
-        assertTrue(dd.contains(String.format(Locale.ROOT, "%.2f Hz", fn)), fn + " in " + dd);
+        // to the tenth of a hertz shown (the fit's own uncertainty is about 1 Hz)
+        assertTrue(dd.contains(String.format(Locale.ROOT, "%.1f Hz", fn)), fn + " in " + dd);
         List<String> svgText = ReportCli.texts(d, ReportCli.SVG, "text");
         assertTrue(svgText.contains("measured"), svgText.toString());
         assertTrue(svgText.stream().anyMatch(t -> t.startsWith("fitted envelope")), svgText.toString());

@@ -13,10 +13,10 @@ class RigTextTest {
 
     @Test
     void ohmsGetAnSiPrefixAndFourSignificantFigures() {
-        assertEquals("1.250 Ohm", RigText.ohm(1.25));
-        assertEquals("47.00 kOhm", RigText.ohm(47_000));
-        assertEquals("2.000 MOhm", RigText.ohm(2e6));
-        assertEquals("5.256 GOhm", RigText.ohm(5.2561e9));
+        assertEquals("1.250 \u03A9", RigText.ohm(1.25));
+        assertEquals("47.00 k\u03A9", RigText.ohm(47_000));
+        assertEquals("2.000 M\u03A9", RigText.ohm(2e6));
+        assertEquals("5.256 G\u03A9", RigText.ohm(5.2561e9));
     }
 
     @Test

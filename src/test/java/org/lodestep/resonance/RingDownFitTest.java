@@ -106,4 +106,17 @@ class RingDownFitTest {
         IllegalArgumentException e = assertThrows(IllegalArgumentException.class, () -> RingDownFit.fit(x, 1000, 0));
         assertTrue(e.getMessage().contains("zero crossings"), e.getMessage());
     }
+
+    @Test
+    void refusesNoiseWithoutARing() {
+        // Gaussian noise crosses zero often, but its largest swing stays within about 5 σ (normal tail, references
+        // §28): no decaying oscillation is there to fit.
+        java.util.Random rnd = new java.util.Random(8);
+        double[] x = new double[5000];
+        for (int i = 0; i < x.length; i++) {
+            x[i] = rnd.nextGaussian();
+        }
+        IllegalArgumentException e = assertThrows(IllegalArgumentException.class, () -> RingDownFit.fit(x, 1000, 0));
+        assertTrue(e.getMessage().startsWith("no decaying oscillation found"), e.getMessage());
+    }
 }

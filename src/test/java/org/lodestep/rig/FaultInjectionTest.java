@@ -105,7 +105,10 @@ class FaultInjectionTest {
         link.thread().join(5000);
         assertFalse(link.thread().isAlive(), "the virtual rig ends its session when the line drops");
         assertFalse(link.rig().energised());
-        assertEquals("line closed", link.rig().lastSafeReason());
+        // the rig hears the drop as end of input while reading, or as a failed write while it streams a block:
+        // which one depends on where its thread is when the line goes (a race, not a fault)
+        assertTrue(java.util.Set.of("line closed", "line failed").contains(link.rig().lastSafeReason()),
+                link.rig().lastSafeReason());
     }
 
     @Test

@@ -258,7 +258,7 @@ class StationBrowserTest {
         waiting().until(d -> "1".equals(d.findElement(By.cssSelector("[data-page=qa-run]")).getAttribute("data-scans")));
         String verdict = driver.findElement(By.id("verdict")).getText();
         assertTrue(verdict.contains("FAIL") && verdict.contains("KV24-00131"), verdict);
-        assertTrue(verdict.contains("phase resistance A: 2.31 ohm, above the upper limit 2.09 ohm by 0.22 ohm"), verdict);
+        assertTrue(verdict.contains("phase resistance A: 2.31 \u03A9, above the upper limit 2.09 \u03A9 by 0.22 \u03A9"), verdict);
         assertEquals(driver.findElement(By.id("serial")), driver.switchTo().activeElement(), "ready for the next motor");
         assertEquals("", driver.findElement(By.id("phase_a_ohm")).getAttribute("value"), "the fields are cleared");
         shots("qa-typed", "#verdict");

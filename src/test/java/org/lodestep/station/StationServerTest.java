@@ -485,7 +485,7 @@ class StationServerTest {
                 Access.FORM_KEY_HEADER, key).body(), "task"));
         String panel = get(base(station) + runPath + "/panel").body();
         assertTrue(panel.contains("1 PASS, 1 FAIL"), panel);
-        assertTrue(panel.contains("phase resistance A: 2.31 ohm, above the upper limit 2.09 ohm by 0.22 ohm (10.5 %)"),
+        assertTrue(panel.contains("phase resistance A: 2.31 \u03A9, above the upper limit 2.09 \u03A9 by 0.22 \u03A9 (10.5 %)"),
                 panel);
     }
 

@@ -36,7 +36,15 @@ public record Cell(String text, boolean numeric, Status status) {
     }
 
     void render(StringBuilder sb, String tag) {
+        render(sb, tag, null);
+    }
+
+    /** Renders the cell; {@code label} (its column heading, or null) is shown before the value when rows stack. */
+    void render(StringBuilder sb, String tag, String label) {
         sb.append('<').append(tag);
+        if (label != null) {
+            sb.append(" data-label=\"").append(Html.escape(label)).append('"');
+        }
         StringBuilder cls = new StringBuilder();
         if (numeric) {
             cls.append("num");

@@ -39,6 +39,7 @@ final class ChartStyle {
     static final Color WARN = new Color(0xb07800);
     static final Color PASS = new Color(0x2f6b3b);
     static final Color INFO = new Color(0x2b5d8a);
+    static final Color PROVISIONAL = new Color(0x5a3d86);
 
     /** Series colours in order: deep blue, rust, moss, slate, plum. */
     static final Color[] SERIES = {
@@ -104,6 +105,7 @@ final class ChartStyle {
             case WARN -> WARN;
             case FAIL -> FAIL;
             case INFO -> INFO;
+            case PROVISIONAL -> PROVISIONAL;
         };
     }
 

@@ -138,7 +138,8 @@ public final class HistogramChart {
             XYSeries in = new XYSeries("within limits (" + (n - outCount) + ")", false, false);
             XYSeries out = new XYSeries("\u2716 outside limits (" + outCount + ")", false, false);
             for (int b = 0; b < k; b++) {
-                double centre = start + (b + 0.5) * width;
+                // Each bar on the caller's own edges, so the chart shows exactly the bins the text and JSON list.
+                double centre = hi > edges[0] ? (edges[b] + edges[b + 1]) / 2 : start + (b + 0.5) * width;
                 in.add(centre, inside[b]);
                 out.add(centre, outside[b]);
             }
@@ -162,7 +163,8 @@ public final class HistogramChart {
             double xmin = Math.min(start, Double.isNaN(lower) ? start : lower);
             double xmax = Math.max(start + k * width, Double.isNaN(upper) ? hi : upper);
             double pad = (xmax - xmin) * 0.08;
-            xa.setRange(xmin - pad, xmax + pad);
+            // Bins of a non-negative quantity never sit on a negative axis: zero is the floor.
+            xa.setRange(xmin >= 0 ? Math.max(0, xmin - pad) : xmin - pad, xmax + pad);
             NumberAxis ya = new NumberAxis("count of motors");
             ya.setStandardTickUnits(NumberAxis.createIntegerTickUnits());
             ya.setUpperMargin(0.25);
@@ -186,11 +188,12 @@ public final class HistogramChart {
         private static ValueMarker limitMarker(double at, String label, boolean spec, boolean upperSide,
                                                boolean lowered) {
             ValueMarker m = new ValueMarker(at);
-            m.setPaint(spec ? ChartStyle.FAIL : ChartStyle.MUTED);
-            m.setStroke(spec ? ChartStyle.dashed(2.5f, 10f, 5f) : ChartStyle.dashed(1.5f, 2f, 3f));
+            // Spec limits solid and in ink, as on the control charts (whose dashed lines are control limits).
+            m.setPaint(spec ? ChartStyle.INK : ChartStyle.MUTED);
+            m.setStroke(spec ? new BasicStroke(2.2f) : ChartStyle.dashed(1.5f, 2f, 3f));
             m.setLabel(label);
             m.setLabelFont(ChartStyle.NOTE);
-            m.setLabelPaint(spec ? ChartStyle.FAIL : ChartStyle.INK);
+            m.setLabelPaint(ChartStyle.INK);
             m.setLabelBackgroundColor(new Color(255, 255, 255, 225));
             // Lower limit labelled to its left, upper to its right, so the labels sit outside the spec window.
             // Labels sit inside the spec window (lower limit's to its right, upper's to its left), where there is

@@ -25,10 +25,18 @@ import java.util.Objects;
  * }</pre>
  */
 public final class HtmlReport {
-    private final String html;
+    private final String head;
+    private final String header;
+    private final String body;
+    private final String footer;
+    private final String pageCss;
 
-    private HtmlReport(String html) {
-        this.html = html;
+    private HtmlReport(String head, String header, String body, String footer, String pageCss) {
+        this.head = head;
+        this.header = header;
+        this.body = body;
+        this.footer = footer;
+        this.pageCss = pageCss;
     }
 
     /** Starts a report; {@code kind} names the analysis (small heading), {@code title} the subject. */
@@ -38,12 +46,64 @@ public final class HtmlReport {
 
     /** The whole document. */
     public String html() {
-        return html;
+        StringBuilder sb = new StringBuilder(head.length() + header.length() + body.length() + HtmlStyle.CSS.length()
+                + 512);
+        sb.append(head).append("<style>\n").append(HtmlStyle.CSS).append(pageCss).append("</style>\n</head>\n<body>\n")
+                .append("<main class=\"report\">\n").append(header).append(body)
+                .append("<footer>").append(footer).append("</footer>\n</main>\n</body>\n</html>\n");
+        return sb.toString();
+    }
+
+    /**
+     * This report stamped with what produced it: a line under the title (report ID, run time, tool), a closing
+     * "Provenance" section (labelled facts, then the input files with their SHA-256), the report ID in the footer,
+     * and in print the report ID and "page N of M" in the bottom margin of every page (CSS Paged Media page-margin
+     * boxes and the page counters, references §24).
+     *
+     * @param reportId    the run's report ID
+     * @param summaryLine the line under the title
+     * @param facts       labelled facts (tool, command, time, rig), in order
+     * @param files       one row per input file: role, path, size, SHA-256 (hex)
+     */
+    public HtmlReport stamped(String reportId, String summaryLine, Map<String, String> facts, List<String[]> files) {
+        StringBuilder h = new StringBuilder(header);
+        int end = h.lastIndexOf("</header>");
+        h.insert(end, "<p class=\"provenance-line\">" + Html.escape(summaryLine)
+                + " <a href=\"#provenance\">Provenance</a></p>");
+        StringBuilder b = new StringBuilder(body);
+        b.append("<section class=\"provenance\" id=\"provenance\"><h2>Provenance</h2><dl class=\"facts prov\">");
+        for (Map.Entry<String, String> e : facts.entrySet()) {
+            b.append("<div><dt>").append(Html.escape(e.getKey())).append("</dt><dd class=\"token\">")
+                    .append(Html.escape(e.getValue())).append("</dd></div>");
+        }
+        b.append("</dl>\n");
+        if (!files.isEmpty()) {
+            b.append("<div class=\"table-wrap\"><table class=\"files\"><caption>Input files</caption><thead><tr>")
+                    .append("<th scope=\"col\">Role</th><th scope=\"col\">File</th><th scope=\"col\" class=\"num\">")
+                    .append("Bytes</th><th scope=\"col\">SHA-256</th></tr></thead><tbody>");
+            for (String[] f : files) {
+                b.append("<tr><td>").append(Html.escape(f[0])).append("</td><td class=\"token\">")
+                        .append(Html.escape(f[1])).append("</td><td class=\"num\">").append(Html.escape(f[2]))
+                        .append("</td><td class=\"token\">").append(Html.escape(f[3])).append("</td></tr>");
+            }
+            b.append("</tbody></table></div>\n");
+        }
+        b.append("</section>\n");
+        String css = "@page{@bottom-left{content:\"Lodestep report " + cssString(reportId)
+                + "\";font-size:8pt;color:#5b6673}@bottom-right{content:\"page \" counter(page) \" of \" counter(pages);"
+                + "font-size:8pt;color:#5b6673}}\n";
+        return new HtmlReport(head, h.toString(), b.toString(), Html.escape("Report " + reportId + ". " + summaryLine),
+                css);
+    }
+
+    /** A CSS string body: only hex digits and letters survive, so nothing can close the string. */
+    private static String cssString(String s) {
+        return s.replaceAll("[^A-Za-z0-9 ._:-]", "");
     }
 
     /** Writes the report as UTF-8, whole or not at all (temporary file in the same folder, then an atomic move). */
     public void write(Path file) throws IOException {
-        OutputFile.write(file, html.getBytes(StandardCharsets.UTF_8));
+        OutputFile.write(file, html().getBytes(StandardCharsets.UTF_8));
     }
 
     /** One line of a findings list: a status and a sentence. */
@@ -84,12 +144,23 @@ public final class HtmlReport {
 
         /** The one-glance result: a banner with symbol, status word, headline and an optional detail sentence. */
         public Builder verdict(Status status, String headline, String detail) {
+            return verdict(status, headline, null, detail);
+        }
+
+        /**
+         * The one-glance result with the answer a person acts on (the wiring in one line, the rates to avoid) in
+         * its own line under the headline; {@code answer} and {@code detail} may be null.
+         */
+        public Builder verdict(Status status, String headline, String answer, String detail) {
             Objects.requireNonNull(status, "status");
             body.append("<section class=\"verdict ").append(status.cssClass()).append("\" role=\"status\">")
                     .append("<span class=\"mark\" aria-hidden=\"true\">").append(status.symbol()).append("</span>")
                     .append("<div class=\"text\"><span class=\"word ").append(status.cssClass()).append("\">")
                     .append(Html.escape(status.word())).append("</span><strong>").append(Html.escape(headline))
                     .append("</strong>");
+            if (answer != null && !answer.isBlank()) {
+                body.append("<p class=\"answer\">").append(Html.escape(answer)).append("</p>");
+            }
             if (detail != null && !detail.isBlank()) {
                 body.append("<p>").append(Html.escape(detail)).append("</p>");
             }
@@ -155,10 +226,34 @@ public final class HtmlReport {
 
         /** Safety notes, each in a bordered box with a warning sign. */
         public Builder safety(SafetyNote... notes) {
+            // one group, so that print can set the notes side by side and leave page 1 to the answer
+            body.append("<div class=\"safety-notes\">");
             for (SafetyNote n : notes) {
                 body.append("<aside class=\"safety\"><h3>").append(Html.escape(n.title())).append("</h3><p>")
                         .append(Html.escape(n.text())).append("</p></aside>\n");
             }
+            body.append("</div>\n");
+            return this;
+        }
+
+        /**
+         * Opens a collapsed block (HTML {@code details}) whose one-line {@code summary} is always shown; the blocks
+         * that follow, up to {@link #endCollapsed}, open on a click (and in print stay as the browser prints them).
+         */
+        public Builder collapsed(String summary) {
+            return collapsed(summary, false);
+        }
+
+        /** A block like {@link #collapsed(String)} that starts open when {@code open}. */
+        public Builder collapsed(String summary, boolean open) {
+            body.append(open ? "<details open=\"open\"><summary>" : "<details><summary>").append(Html.escape(summary))
+                    .append("</summary>\n");
+            return this;
+        }
+
+        /** Closes the block {@link #collapsed} opened. */
+        public Builder endCollapsed() {
+            body.append("</details>\n");
             return this;
         }
 
@@ -177,14 +272,13 @@ public final class HtmlReport {
 
         public HtmlReport build() {
             closeSection();
-            StringBuilder sb = new StringBuilder(body.length() + HtmlStyle.CSS.length() + 2048);
-            sb.append("<!DOCTYPE html>\n<html xmlns=\"http://www.w3.org/1999/xhtml\" lang=\"en\">\n<head>\n")
-                    .append("<meta charset=\"utf-8\"/>\n")
-                    .append("<meta name=\"viewport\" content=\"width=device-width, initial-scale=1\"/>\n")
-                    .append("<meta name=\"generator\" content=\"Lodestep\"/>\n")
-                    .append("<title>").append(Html.escape(kind + ": " + title)).append("</title>\n")
-                    .append("<style>\n").append(HtmlStyle.CSS).append("</style>\n</head>\n<body>\n")
-                    .append("<main class=\"report\">\n<header class=\"head\"><p class=\"kind\">")
+            String head = "<!DOCTYPE html>\n<html xmlns=\"http://www.w3.org/1999/xhtml\" lang=\"en\">\n<head>\n"
+                    + "<meta charset=\"utf-8\"/>\n"
+                    + "<meta name=\"viewport\" content=\"width=device-width, initial-scale=1\"/>\n"
+                    + "<meta name=\"generator\" content=\"Lodestep\"/>\n"
+                    + "<title>" + Html.escape(kind + ": " + title) + "</title>\n";
+            StringBuilder sb = new StringBuilder(1024);
+            sb.append("<header class=\"head\"><p class=\"kind\">")
                     .append(Html.escape(kind)).append("</p><h1>").append(Html.escape(title)).append("</h1>");
             if (subtitle != null) {
                 sb.append("<p class=\"subtitle\">").append(Html.escape(subtitle)).append("</p>");
@@ -197,9 +291,8 @@ public final class HtmlReport {
                 }
                 sb.append("</dl>");
             }
-            sb.append("</header>\n").append(body)
-                    .append("<footer>").append(Html.escape(footer)).append("</footer>\n</main>\n</body>\n</html>\n");
-            return new HtmlReport(sb.toString());
+            sb.append("</header>\n");
+            return new HtmlReport(head, sb.toString(), body.toString(), Html.escape(footer), "");
         }
     }
 }

@@ -10,6 +10,8 @@ public final class HtmlTable {
     private final List<String> columns;
     private final List<List<Cell>> rows;
     private final List<Status> rowStatus;
+    /** Tables with this many columns or more stack into labelled cards at phone width. */
+    static final int STACK_FROM_COLUMNS = 6;
 
     private HtmlTable(Builder b) {
         this.caption = b.caption;
@@ -29,7 +31,10 @@ public final class HtmlTable {
     }
 
     void render(StringBuilder sb) {
-        sb.append("<div class=\"table-wrap\"><table>");
+        // a wide table stacks on a phone (each row a card of labelled values, so the verdict and value columns
+        // stay in view); a narrower one scrolls in its own box with its first column held
+        boolean stack = columns.size() >= STACK_FROM_COLUMNS;
+        sb.append("<div class=\"table-wrap\"><table").append(stack ? " class=\"stack\"" : "").append('>');
         if (caption != null) {
             sb.append("<caption>").append(Html.escape(caption)).append("</caption>");
         }
@@ -41,8 +46,9 @@ public final class HtmlTable {
         for (int r = 0; r < rows.size(); r++) {
             Status s = rowStatus.get(r);
             sb.append(s == null ? "<tr>" : "<tr class=\"row-" + s.cssClass() + "\">");
-            for (Cell c : rows.get(r)) {
-                c.render(sb, "td");
+            List<Cell> cells = rows.get(r);
+            for (int i = 0; i < cells.size(); i++) {
+                cells.get(i).render(sb, "td", stack ? columns.get(i) : null);
             }
             sb.append("</tr>");
         }

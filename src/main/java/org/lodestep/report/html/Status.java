@@ -11,8 +11,13 @@ public enum Status {
     WARN("\u25B2", "warning"),
     /** Out of limits, a fault, or a band to avoid. */
     FAIL("\u2716", "fail"),
-    /** Neutral information. */
-    INFO("\u25CF", "info");
+    /** Neutral information: nothing is judged (no criterion applies). */
+    INFO("\u25CF", "info"),
+    /**
+     * A usable answer that rests on a guess the measurement could not settle (which half-windings form a phase,
+     * a coil's start): try it as given, and confirm it (back-EMF phasing) before relying on it.
+     */
+    PROVISIONAL("\u25D0", "provisional");
 
     private final String symbol;
     private final String word;

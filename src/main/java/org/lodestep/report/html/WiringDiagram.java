@@ -33,11 +33,13 @@ public final class WiringDiagram {
     private final List<List<String>> ties;
     private final Map<Coil, List<SegmentValue>> values;
     private final List<BrokenCoil> brokenCoils;
+    private final boolean startsKnown;
 
     private WiringDiagram(Builder b) {
         this.connection = b.connection;
         this.values = Map.copyOf(b.values);
         this.brokenCoils = List.copyOf(b.brokenCoils);
+        this.startsKnown = b.startsKnown;
         this.coils = List.copyOf(b.coils);
         this.destinations = Map.copyOf(b.destinations);
         List<List<String>> t = new ArrayList<>();
@@ -131,6 +133,14 @@ public final class WiringDiagram {
     /** The connection's name. */
     public String connection() {
         return connection;
+    }
+
+    /**
+     * False when the coil starts (polarity dots) are a guess the measurement could not settle: they are then drawn
+     * hollow with a question mark, and the legend says so.
+     */
+    public boolean startsKnown() {
+        return startsKnown;
     }
 
     /** The coils in drawing order (phase A first). */
@@ -243,9 +253,16 @@ public final class WiringDiagram {
         private final List<List<String>> ties = new ArrayList<>();
         private final Map<Coil, List<SegmentValue>> values = new LinkedHashMap<>();
         private final List<BrokenCoil> brokenCoils = new ArrayList<>();
+        private boolean startsKnown = true;
 
         private Builder(String connection) {
             this.connection = Objects.requireNonNull(connection, "connection");
+        }
+
+        /** Marks the coil starts as guessed (resistance alone cannot tell a coil's polarity). */
+        public Builder startsUnknown() {
+            this.startsKnown = false;
+            return this;
         }
 
         /** A coil without a tap. */

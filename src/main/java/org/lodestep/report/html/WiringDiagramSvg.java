@@ -70,7 +70,7 @@ final class WiringDiagramSvg {
             int bot = y + h - 10;
             long samePhase = d.coils().stream().filter(k -> k.phase().equals(c.phase())).count();
             String name = samePhase > 1 ? c.phase() + coilsInPhase : c.phase();
-            drawCoil(body, c, name, top, bot);
+            drawCoil(body, c, name, top, bot, d.startsKnown());
             tags.add(new Tag(c.startLead(), top));
             if (c.tapLead() != null) {
                 tags.add(new Tag(c.tapLead(), (top + bot) / 2));
@@ -171,9 +171,10 @@ final class WiringDiagramSvg {
         legend.append(line(24, ly - 4, 60, ly - 4, PHASE_A, 2.2, null)).append(text(66, ly, 12, MUTED, "phase A"))
                 .append(line(140, ly - 4, 176, ly - 4, PHASE_B, 2.2, "7 4"))
                 .append(text(182, ly, 12, MUTED, "phase B"))
-                .append("<circle cx=\"262\" cy=\"").append(ly - 4).append("\" r=\"3\" fill=\"").append(INK)
-                .append("\"/>").append(text(270, ly, 12, MUTED, "coil start (dot end)"))
-                .append(text(420, ly, 12, MUTED, "wires cross without a dot: not joined"));
+                .append(startDot(262, ly - 4, d.startsKnown()))
+                .append(text(272, ly, 12, MUTED, d.startsKnown() ? "coil start (dot end)"
+                        : "coil start not known (guess)"))
+                .append(text(d.startsKnown() ? 440 : 476, ly, 12, MUTED, "wires cross without a dot: not joined"));
         ly += 26;
         for (String s : d.summary()) {
             legend.append(text(24, ly, 14, INK, s));
@@ -190,10 +191,11 @@ final class WiringDiagramSvg {
                 .append(title).append('\n').append(body).append(caps).append(driver).append(wires).append(tagsSvg)
                 .append(legend).append("</svg>");
         return new SvgFragment(svg.toString(), "Wiring diagram, " + d.connection() + ": "
-                + String.join("; ", d.summary()) + ".");
+                + String.join("; ", d.summary()) + (d.startsKnown() ? "." : "; coil starts not known (a guess)."));
     }
 
-    private static void drawCoil(StringBuilder sb, WiringDiagram.Coil c, String name, int top, int bot) {
+    private static void drawCoil(StringBuilder sb, WiringDiagram.Coil c, String name, int top, int bot,
+                                 boolean startKnown) {
         boolean tapped = c.tapLead() != null;
         int loops = tapped ? 8 : 5;
         double bodyTop = top + 14;
@@ -214,12 +216,11 @@ final class WiringDiagramSvg {
             int mid = (top + bot) / 2;
             sb.append(line(COIL_X, mid, PILL_X, mid, stroke, 2.2, null)).append(dot(COIL_X, mid, stroke));
         }
-        // Polarity dot beside the start of the coil.
-        sb.append("<circle cx=\"").append(COIL_X - 22).append("\" cy=\"").append(top + 10)
-                .append("\" r=\"3.5\" fill=\"").append(INK).append("\"/>\n");
+        // Polarity dot beside the start of the coil; a guessed start is a hollow ring with a question mark.
+        sb.append(startDot(COIL_X - 22, top + 10, startKnown));
         sb.append(text(COIL_X - 30, (top + bot) / 2 + 5, 14, INK, name).replace("<text ",
                 "<text text-anchor=\"end\" font-weight=\"700\" "));
-        sb.append(text(COIL_X + 6, top - 5, 11, MUTED, "start"));
+        sb.append(text(COIL_X + 6, top - 5, 11, MUTED, startKnown ? "start" : "start?"));
         if (tapped) {
             sb.append(text(COIL_X + 6, (top + bot) / 2 - 5, 11, MUTED, "tap"));
         }
@@ -400,6 +401,16 @@ final class WiringDiagramSvg {
         return "<line x1=\"" + fmt(x1) + "\" y1=\"" + fmt(y1) + "\" x2=\"" + fmt(x2) + "\" y2=\"" + fmt(y2)
                 + "\" stroke=\"" + color + "\" stroke-width=\"" + fmt(width) + "\""
                 + (dash == null ? "" : " stroke-dasharray=\"" + dash + "\"") + "/>\n";
+    }
+
+    /** A known coil start is a filled dot; a guessed one a ring with a question mark, distinct in grey-scale too. */
+    private static String startDot(int x, int y, boolean known) {
+        if (known) {
+            return "<circle cx=\"" + x + "\" cy=\"" + y + "\" r=\"3.5\" fill=\"" + INK + "\"/>\n";
+        }
+        return "<g class=\"start-unknown\"><circle cx=\"" + x + "\" cy=\"" + y + "\" r=\"6\" fill=\"#ffffff\" stroke=\""
+                + INK + "\" stroke-width=\"1.2\" stroke-dasharray=\"2 1.5\"/><text x=\"" + x + "\" y=\"" + (y + 4)
+                + "\" font-size=\"10\" font-weight=\"700\" text-anchor=\"middle\" fill=\"" + INK + "\">?</text></g>\n";
     }
 
     private static String dot(int x, int y, String color) {

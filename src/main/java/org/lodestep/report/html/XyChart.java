@@ -368,7 +368,9 @@ public final class XyChart {
                 }
                 r.setSeriesShape(i, s.x().length > 60 ? ChartStyle.smallShape(look) : ChartStyle.seriesShape(look));
                 r.setSeriesShapesFilled(i, look % 2 == 0);
-                r.setSeriesVisibleInLegend(i, s.styleOf() < 0 && !below);
+                // no legend entry for a series that draws nothing (no point, or a lone point of a line without markers)
+                boolean draws = xs.getItemCount() >= (s.shapes() && !dense ? 1 : 2);
+                r.setSeriesVisibleInLegend(i, s.styleOf() < 0 && !below && draws);
             }
             r.setDrawSeriesLineAsPath(true);
             XYPlot plot = new XYPlot(data, null, y, r);

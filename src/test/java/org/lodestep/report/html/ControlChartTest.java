@@ -56,4 +56,27 @@ class ControlChartTest {
         assertThrows(IllegalArgumentException.class,
                 () -> ControlChart.builder("", "x", new double[] {1}, null).upperLimit(Double.NaN, "UCL"));
     }
+
+    // Spec limits are their own labelled lines; a failed point gets the caller's note and the "failed the spec"
+    // legend entry; named runs replace the run numbers on the x axis.
+    @Test
+    void specLimitsAndTheFailedPointAreDrawnAndNamed() throws Exception {
+        double[] v = {1.90, 1.92, 2.30, 1.91};
+        String[] serials = {"S1", "S2", "S3", "S4"};
+        Chart c = ControlChart.builder("", "R (ohm)", v, serials).centre(2.0, "CL").upperLimit(2.4, "UCL 2.4")
+                .lowerLimit(1.6, "LCL 1.6").lowerSpec(1.71, "LSL 1.71 ohm").upperSpec(2.09, "USL 2.09 ohm")
+                .failed(new boolean[] {false, false, true, false}, new String[] {"", "", "S3 2.3 > USL", ""})
+                .runs("motor serial", serials).build();
+        List<String> texts = XmlCheck.texts(XmlCheck.parse(c.toSvg().markup()), XmlCheck.SVG, "text");
+        assertTrue(texts.containsAll(List.of("LSL 1.71 ohm", "USL 2.09 ohm", "S3 2.3 > USL", "failed the spec",
+                "motor serial", "S1", "S4")), texts.toString());
+        assertFalse(texts.contains("run order (motor number)"), texts.toString());
+    }
+
+    @Test
+    void logScaleRefusesValuesThatHaveNoLogarithm() {
+        IllegalArgumentException e = assertThrows(IllegalArgumentException.class,
+                () -> ControlChart.builder("", "R", new double[] {0, 1e9}, null).centre(1e8, "CL").logScale().build());
+        assertTrue(e.getMessage().contains("logarithmic axis needs positive values"), e.getMessage());
+    }
 }

@@ -163,4 +163,21 @@ class HtmlReportTest {
         assertThrows(java.io.IOException.class, () -> r.write(blocker.resolve("report.html")));
         assertEquals("old", Files.readString(target));
     }
+
+    @Test
+    void provisionalHasItsOwnSymbolWordAndColourAndTheAnswerItsOwnLine() throws Exception {
+        String html = HtmlReport.builder("Lead identification", "KL-04")
+                .verdict(Status.PROVISIONAL, "8-lead motor: wiring provisional", "A+ = 1, A\u2212 = 7", "guessed")
+                .build().html();
+        Document d = XmlCheck.parse(html);
+        Element verdict = (Element) d.getElementsByTagNameNS(XmlCheck.XHTML, "section").item(0);
+        assertTrue(verdict.getAttribute("class").contains("st-provisional"), verdict.getAttribute("class"));
+        assertTrue(verdict.getTextContent().contains("provisional"), verdict.getTextContent());
+        assertTrue(verdict.getTextContent().contains("\u25D0"), verdict.getTextContent());
+        assertTrue(html.contains("<p class=\"answer\">A+ = 1, A\u2212 = 7</p>"), html);
+        assertTrue(html.contains(".verdict.st-provisional{") && html.contains("--prov:"), "a colour of its own");
+        // every status differs from every other in symbol and in word, so grey print keeps the meaning
+        assertEquals(Status.values().length, Stream.of(Status.values()).map(Status::symbol).distinct().count());
+        assertEquals(Status.values().length, Stream.of(Status.values()).map(Status::word).distinct().count());
+    }
 }

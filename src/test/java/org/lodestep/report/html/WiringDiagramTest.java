@@ -147,4 +147,30 @@ class WiringDiagramTest {
         IllegalArgumentException e = assertThrows(IllegalArgumentException.class, () -> DriverTerminal.parse("C+"));
         assertTrue(e.getMessage().contains("'C+'"), e.getMessage());
     }
+
+    @Test
+    void guessedCoilStartsAreDrawnAsUnknownAndSaidSo() throws Exception {
+        WiringDiagram.Builder b = WiringDiagram.builder("Bipolar series, 8-lead").startsUnknown()
+                .coil("A", "1", "5").coil("A", "2", "7").coil("B", "3", "8").coil("B", "4", "6")
+                .connect("1", DriverTerminal.A_PLUS).connect("7", DriverTerminal.A_MINUS)
+                .connect("3", DriverTerminal.B_PLUS).connect("6", DriverTerminal.B_MINUS).tie("5", "2").tie("8", "4");
+        WiringDiagram d = b.build();
+        assertTrue(!d.startsKnown());
+        SvgFragment svg = d.toSvg();
+        Document doc = XmlCheck.parse(svg.markup());
+        org.w3c.dom.NodeList groups = doc.getElementsByTagNameNS(XmlCheck.SVG, "g");
+        int unknown = 0;
+        for (int i = 0; i < groups.getLength(); i++) {
+            unknown += ((Element) groups.item(i)).getAttribute("class").equals("start-unknown") ? 1 : 0;
+        }
+        assertEquals(4 + 1, unknown, "each coil's start and the legend's");
+        assertTrue(XmlCheck.texts(doc, XmlCheck.SVG, "text").contains("coil start not known (guess)"));
+        assertTrue(svg.description().contains("coil starts not known"), svg.description());
+        // the same wiring with known starts draws filled dots only
+        WiringDiagram known = WiringDiagram.builder("Bipolar, 4-lead").coil("A", "red", "blue")
+                .coil("B", "green", "black").connect("red", DriverTerminal.A_PLUS)
+                .connect("blue", DriverTerminal.A_MINUS).connect("green", DriverTerminal.B_PLUS)
+                .connect("black", DriverTerminal.B_MINUS).build();
+        assertTrue(!known.toSvg().markup().contains("start-unknown"));
+    }
 }

@@ -1,6 +1,7 @@
 package org.lodestep.report.html;
 
 import static org.junit.jupiter.api.Assertions.assertEquals;
+import static org.junit.jupiter.api.Assertions.assertFalse;
 import static org.junit.jupiter.api.Assertions.assertThrows;
 import static org.junit.jupiter.api.Assertions.assertTrue;
 
@@ -76,6 +77,19 @@ class XyChartTest {
         java.util.List<String> texts = XmlCheck.texts(XmlCheck.parse(c.toSvg().markup()), XmlCheck.SVG, "text");
         assertEquals(1, texts.stream().filter("envelope"::equals).count(), texts.toString());
         assertThrows(IllegalStateException.class, () -> XyChart.builder("", "x", "y").sameAsPrevious(t, t));
+    }
+
+    @Test
+    void aSeriesThatDrawsNothingGetsNoLegendEntry() throws Exception {
+        double[] t = {0, 1, 2, 3};
+        double nan = Double.NaN;
+        Chart c = XyChart.builder("", "t (s)", "x").line("measured", t, new double[] {1, 2, 3, 4})
+                .line("crossings", t, new double[] {nan, nan, nan, nan})
+                .line("one point", t, new double[] {nan, 5, nan, nan}).build();
+        java.util.List<String> texts = XmlCheck.texts(XmlCheck.parse(c.toSvg().markup()), XmlCheck.SVG, "text");
+        assertTrue(texts.contains("measured"), texts.toString());
+        assertFalse(texts.contains("crossings"), texts.toString());
+        assertFalse(texts.contains("one point"), "a line through one point draws nothing: " + texts);
     }
 
     @Test
