@@ -59,6 +59,11 @@ public final class LeadsHtml {
             }
         }
 
+        WiringDiagrams.asFound(id).ifPresent(d -> {
+            b.section("As found");
+            b.figure(d.toSvg(), "The windings as read; the open coil drawn broken.");
+        });
+
         b.section("Windings");
         HtmlTable.Builder t = HtmlTable.builder(null, "Winding", "Ends", "Centre tap", "End to end",
                 "Halves", id.temperature() == null ? "At reference"
@@ -67,11 +72,12 @@ public final class LeadsHtml {
         for (int i = 0; i < ws.size(); i++) {
             Winding w = ws.get(i);
             String halves = w.halfResistancesOhm().isEmpty() ? "\u2014"
-                    : String.join(" + ", w.halfResistancesOhm().stream().map(LeadsTextReport::ohm).toList());
+                    : LeadsTextReport.value(w.halfResistancesOhm().get(0), w.halvesMeasured().get(0)) + " + "
+                    + LeadsTextReport.value(w.halfResistancesOhm().get(1), w.halvesMeasured().get(1));
             t.row(Cell.text((w.halfWinding() ? "half-winding " : "winding ") + (i + 1)),
                     Cell.text(w.ends().get(0) + " \u2013 " + w.ends().get(1)),
                     Cell.text(w.tap() == null ? "\u2014" : w.tap()),
-                    Cell.number(LeadsTextReport.ohm(w.resistanceOhm()) + (w.resistanceMeasured() ? "" : " (sum)")),
+                    Cell.number(LeadsTextReport.value(w.resistanceOhm(), w.resistanceMeasured())),
                     Cell.number(halves),
                     Cell.number(id.windingsAtReferenceOhm().isEmpty() ? "\u2014"
                             : LeadsTextReport.ohm(id.windingsAtReferenceOhm().get(i))));
@@ -101,8 +107,9 @@ public final class LeadsHtml {
         b.section("Readings used");
         HtmlTable.Builder r = HtmlTable.builder(null, "Pair", "Reading", "Read as");
         for (ReadingUse u : id.readings()) {
-            r.row(Cell.text(u.pair().toString()), Cell.number(LeadsTextReport.ohm(u.resistanceOhm())),
-                    Cell.text(u.kind()));
+            r.row(Cell.text(u.pair().toString()), Cell.number(u.measured() ? LeadsTextReport.ohm(u.resistanceOhm())
+                    : "not read"), Cell.text(u.measured() ? u.kind() : u.kind() + ", inferred from the only healthy"
+                    + " layout left"));
         }
         b.table(r.build());
         return b.build();

@@ -24,17 +24,21 @@ public final class LeadsJsonView {
                             List<ReadingJson> readings, int measuredPairs, int totalPairs, ProbeJson probe) {
     }
 
-    /** A winding; {@code resistanceAtReferenceOhm} is null without a measurement temperature. */
+    /**
+     * A winding; {@code resistanceAtReferenceOhm} is null without a measurement temperature. A value whose
+     * measured flag is false was inferred from other readings, not read.
+     */
     public record WindingJson(List<String> ends, String tap, double resistanceOhm, List<Double> halfResistancesOhm,
-                              boolean halfWinding, boolean resistanceMeasured, Double resistanceAtReferenceOhm) {
+                              boolean halfWinding, boolean resistanceMeasured, List<Boolean> halfResistancesMeasured,
+                              Double resistanceAtReferenceOhm) {
     }
 
     /** A finding. */
     public record FindingJson(String code, String severity, String message, List<String> leads) {
     }
 
-    /** A reading: {@code resistance_ohm} null means open. */
-    public record ReadingJson(List<String> leads, double resistanceOhm, String kind) {
+    /** A reading: {@code resistance_ohm} null means open; {@code measured} false for a pair inferred, not read. */
+    public record ReadingJson(List<String> leads, double resistanceOhm, String kind, boolean measured) {
     }
 
     /** How a guided measurement went. */
@@ -49,10 +53,10 @@ public final class LeadsJsonView {
         List<WindingJson> windings = new ArrayList<>();
         for (int i = 0; i < id.windings().size(); i++) {
             Winding w = id.windings().get(i);
-            Double atRef = id.windingsAtReferenceOhm().isEmpty() ? null : id.windingsAtReferenceOhm().get(i);
+            Double atRef = id.windingsAtReferenceOhm().isEmpty() ? null : meter(id.windingsAtReferenceOhm().get(i));
             windings.add(new WindingJson(w.ends(), w.tap(), meter(w.resistanceOhm()),
                     w.halfResistancesOhm().stream().map(LeadsJsonView::meter).toList(), w.halfWinding(),
-                    w.resistanceMeasured(), atRef));
+                    w.resistanceMeasured(), w.halvesMeasured(), atRef));
         }
         List<FindingJson> findings = new ArrayList<>();
         for (Finding f : id.findings()) {
@@ -60,10 +64,14 @@ public final class LeadsJsonView {
         }
         List<ReadingJson> readings = new ArrayList<>();
         for (ReadingUse u : id.readings()) {
-            readings.add(new ReadingJson(pair(u.pair()), meter(u.resistanceOhm()), u.kind()));
+            readings.add(new ReadingJson(pair(u.pair()), meter(u.resistanceOhm()), u.kind(), u.measured()));
         }
+        // The phase resistance of a connection is a mean or sum of readings: to the meter's resolution too.
+        List<DriverWiring> connections = id.connections().stream().map(c -> new DriverWiring(c.name(), c.terminals(),
+                c.jumpers(), c.insulate(), meter(c.phaseResistanceOhm()), c.resistanceFactor(), c.inductanceFactor(),
+                c.currentFactor(), c.tradeoff(), c.verified(), c.note())).toList();
         return new MotorJson(source, motor, id.topology().label(), id.determined(), id.leads(), windings, findings,
-                id.connections(), id.missingPairs().stream().map(LeadsJsonView::pair).toList(), id.temperature(),
+                connections, id.missingPairs().stream().map(LeadsJsonView::pair).toList(), id.temperature(),
                 readings, id.measuredPairs(), id.totalPairs(), probe);
     }
 

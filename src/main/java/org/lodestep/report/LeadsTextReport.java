@@ -9,6 +9,7 @@ import org.lodestep.wiring.DriverWiring;
 import org.lodestep.wiring.Finding;
 import org.lodestep.wiring.Identification;
 import org.lodestep.wiring.LeadPair;
+import org.lodestep.wiring.OpenCoil;
 import org.lodestep.wiring.TemperatureCorrection;
 import org.lodestep.wiring.Topology;
 import org.lodestep.wiring.Winding;
@@ -142,36 +143,69 @@ public final class LeadsTextReport {
         if (ws.isEmpty()) {
             out.println("  (no winding found)");
         }
-        boolean common = id.topology() == Topology.FIVE_LEAD;
+        boolean common = id.topology() == Topology.FIVE_LEAD && !ws.isEmpty();
         if (common) {
             String com = ws.get(0).ends().get(0);
             String pad = " ".repeat(com.length() + 4);
             for (int i = 0; i < ws.size(); i++) {
                 Winding w = ws.get(i);
                 String head = i == 0 ? "  " + com + " o" : "  " + pad.substring(2);
-                out.printf(Locale.ROOT, "%s%s--[ %s ]--o %s%s%n", head, i == 0 ? "--+" : "  +", ohm(w.resistanceOhm()),
-                        w.ends().get(1), atRef(id, i));
+                out.printf(Locale.ROOT, "%s%s--[ %s ]--o %s%s%n", head, i == 0 ? "--+" : "  +",
+                        value(w.resistanceOhm(), w.resistanceMeasured()), w.ends().get(1), atRef(id, i));
+            }
+            for (OpenCoil c : id.openCoils()) {
+                out.printf(Locale.ROOT, "  %s  +--/ OPEN /--o %s%n", pad.substring(2), String.join(" or ",
+                        c.otherEnd()));
             }
             out.println("  " + com + " is the common lead.");
-            return;
-        }
-        for (int i = 0; i < ws.size(); i++) {
-            Winding w = ws.get(i);
-            String a = w.ends().get(0);
-            String b = w.ends().get(1);
-            String label = w.halfWinding() ? "half-winding " : "winding ";
-            if (w.tap() == null) {
-                out.printf(Locale.ROOT, "  %-15s %s o--[ %s ]--o %s%s%n", label + (i + 1) + ":", a,
-                        ohm(w.resistanceOhm()), b, atRef(id, i));
-            } else {
-                String left = String.format(Locale.ROOT, "  %-15s %s o--[ %s ]--", label + (i + 1) + ":", a,
-                        ohm(w.halfResistancesOhm().get(0)));
-                out.printf(Locale.ROOT, "%s+--[ %s ]--o %s   end to end %s%s%n", left,
-                        ohm(w.halfResistancesOhm().get(1)), b, ohm(w.resistanceOhm()), atRef(id, i));
-                out.println(" ".repeat(left.length()) + "|");
-                out.println(" ".repeat(left.length()) + "o " + w.tap() + " (centre tap)");
+        } else {
+            for (int i = 0; i < ws.size(); i++) {
+                Winding w = ws.get(i);
+                String a = w.ends().get(0);
+                String b = w.ends().get(1);
+                String label = w.halfWinding() ? "half-winding " : "winding ";
+                if (w.tap() == null) {
+                    out.printf(Locale.ROOT, "  %-15s %s o--[ %s ]--o %s%s%n", label + (i + 1) + ":", a,
+                            value(w.resistanceOhm(), w.resistanceMeasured()), b, atRef(id, i));
+                } else {
+                    String left = String.format(Locale.ROOT, "  %-15s %s o--[ %s ]--", label + (i + 1) + ":", a,
+                            value(w.halfResistancesOhm().get(0), w.halvesMeasured().get(0)));
+                    out.printf(Locale.ROOT, "%s+--[ %s ]--o %s   end to end %s%s%n", left,
+                            value(w.halfResistancesOhm().get(1), w.halvesMeasured().get(1)), b,
+                            value(w.resistanceOhm(), w.resistanceMeasured()), atRef(id, i));
+                    out.println(" ".repeat(left.length()) + "|");
+                    out.println(" ".repeat(left.length()) + "o " + w.tap() + " (centre tap)");
+                }
+            }
+            for (OpenCoil c : id.openCoils()) {
+                // drawn broken: the coil reads open, so it has no value
+                String to = c.otherEnd().size() == 1 ? c.otherEnd().get(0)
+                        : "tap (" + String.join(" or ", c.otherEnd()) + ")";
+                out.printf(Locale.ROOT, "  %-15s %s o--/ OPEN /--o %s%n", "open coil:", c.end(), to);
             }
         }
+        measuredAndInferred(out, id);
+    }
+
+    /** What was read and what was inferred, under the schematic, when anything was inferred. */
+    private static void measuredAndInferred(PrintWriter out, Identification id) {
+        List<String> inferredOpen = id.readings().stream().filter(u -> !u.measured())
+                .map(u -> u.pair().toString()).toList();
+        boolean values = id.windings().stream().anyMatch(w -> !w.resistanceMeasured()
+                || w.halvesMeasured().contains(false));
+        if (!inferredOpen.isEmpty()) {
+            out.println("  Inferred, not read: " + String.join(", ", inferredOpen) + " open (the only healthy "
+                    + id.topology().label() + " layout the readings leave has no coil between them).");
+        }
+        if (values) {
+            out.println("  Values marked inferred were not read: they follow from other readings by the series"
+                    + " relation; measure that pair to confirm.");
+        }
+    }
+
+    /** A resistance as the schematic shows it: the value, marked when it was inferred rather than read. */
+    static String value(double ohms, boolean measured) {
+        return measured ? ohm(ohms) : ohm(ohms) + " inferred";
     }
 
     private static String atRef(Identification id, int i) {

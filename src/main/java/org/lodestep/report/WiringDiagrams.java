@@ -10,6 +10,7 @@ import org.lodestep.report.html.DriverTerminal;
 import org.lodestep.report.html.WiringDiagram;
 import org.lodestep.wiring.DriverWiring;
 import org.lodestep.wiring.Identification;
+import org.lodestep.wiring.OpenCoil;
 import org.lodestep.wiring.Topology;
 import org.lodestep.wiring.Winding;
 
@@ -47,12 +48,13 @@ public final class WiringDiagrams {
                 (phaseOf(w, terminals, windings).equals("A") ? a : rest).add(w);
             }
             for (Winding w : a) {
-                b.coil("A", w.ends().get(0), w.ends().get(1), w.tap());
+                b.coil("A", w.ends().get(0), w.ends().get(1), w.tap()).values(values(w));
             }
             for (Winding w : rest) {
-                b.coil("B", w.ends().get(0), w.ends().get(1), w.tap());
+                b.coil("B", w.ends().get(0), w.ends().get(1), w.tap()).values(values(w));
             }
         }
+        Set<String> assigned = brokenCoils(b, id);
         for (Map.Entry<String, List<String>> e : terminals.entrySet()) {
             DriverTerminal t = DriverTerminal.parse(e.getKey());
             for (String lead : e.getValue()) {
@@ -65,12 +67,59 @@ public final class WiringDiagrams {
         Set<String> onCoils = new LinkedHashSet<>();
         id.windings().forEach(w -> onCoils.addAll(w.leads()));
         for (String lead : connection.insulate()) {
-            // a lead of an open coil is on no coil that still conducts: the findings name it, the drawing omits it
-            if (onCoils.contains(lead)) {
+            // a lead of an open coil is insulated with its broken coil; any other lead on no coil is left out
+            if (onCoils.contains(lead) && !assigned.contains(lead)) {
                 b.insulate(lead);
             }
         }
         return b.build();
+    }
+
+    /**
+     * The motor as found when no connection works (a 4-lead motor with a phase open): its windings with their
+     * values and the open coil drawn broken, every lead insulated; empty when there is nothing to draw that way.
+     */
+    public static java.util.Optional<WiringDiagram> asFound(Identification id) {
+        if (id.openCoils().isEmpty() || !id.connections().isEmpty() || id.topology() == Topology.FIVE_LEAD) {
+            return java.util.Optional.empty();
+        }
+        WiringDiagram.Builder b = WiringDiagram.builder("As found, " + id.topology().label() + ": no connection"
+                + " works");
+        for (Winding w : id.windings()) {
+            b.coil("A", w.ends().get(0), w.ends().get(1), w.tap()).values(values(w));
+            w.leads().forEach(b::insulate);
+        }
+        brokenCoils(b, id);
+        return java.util.Optional.of(b.build());
+    }
+
+    /** The open coils drawn broken, their leads insulated; returns those leads. */
+    private static Set<String> brokenCoils(WiringDiagram.Builder b, Identification id) {
+        Set<String> leads = new LinkedHashSet<>();
+        for (OpenCoil c : id.openCoils()) {
+            boolean known = c.otherEnd().size() == 1;
+            b.brokenCoil(c.end(), known ? c.otherEnd().get(0) : null,
+                    known ? null : "to the tap: " + String.join(" or ", c.otherEnd()));
+            leads.add(c.end());
+            if (known) {
+                leads.add(c.otherEnd().get(0));
+            }
+        }
+        leads.forEach(b::insulate);
+        return leads;
+    }
+
+    /** A winding's values as the diagram writes them: the whole, or its two halves, each marked when inferred. */
+    private static WiringDiagram.SegmentValue[] values(Winding w) {
+        if (w.tap() == null) {
+            return new WiringDiagram.SegmentValue[] {
+                new WiringDiagram.SegmentValue(LeadsTextReport.ohm(w.resistanceOhm()), !w.resistanceMeasured())};
+        }
+        return new WiringDiagram.SegmentValue[] {
+            new WiringDiagram.SegmentValue(LeadsTextReport.ohm(w.halfResistancesOhm().get(0)),
+                    !w.halvesMeasured().get(0)),
+            new WiringDiagram.SegmentValue(LeadsTextReport.ohm(w.halfResistancesOhm().get(1)),
+                    !w.halvesMeasured().get(1))};
     }
 
     /**
@@ -88,7 +137,7 @@ public final class WiringDiagrams {
         List<Winding> ws = id.windings();
         for (int i = 0; i < ws.size(); i++) {
             Winding w = ws.get(i);
-            b.coil(i % 2 == 0 ? "A" : "B", w.ends().get(0), w.ends().get(1), w.tap());
+            b.coil(i % 2 == 0 ? "A" : "B", w.ends().get(0), w.ends().get(1), w.tap()).values(values(w));
             leads.addAll(w.leads());
         }
         leads.forEach(b::pending);
@@ -129,6 +178,16 @@ public final class WiringDiagrams {
         return null;
     }
 
+    /** The value of the 5-lead coil from the common to {@code end}. */
+    private static WiringDiagram.SegmentValue coilValue(List<Winding> halves, String com, String end) {
+        for (Winding w : halves) {
+            if (w.ends().contains(com) && w.ends().contains(end)) {
+                return new WiringDiagram.SegmentValue(LeadsTextReport.ohm(w.resistanceOhm()), !w.resistanceMeasured());
+            }
+        }
+        throw new IllegalArgumentException("no coil from " + com + " to " + end);
+    }
+
     private static void fiveLeadCoils(WiringDiagram.Builder b, List<Winding> halves,
                                       Map<String, List<String>> terminals) {
         Set<String> common = new LinkedHashSet<>(terminals.getOrDefault("COM", List.of()));
@@ -147,7 +206,8 @@ public final class WiringDiagrams {
                 throw new IllegalArgumentException("phase " + phase + " of a 5-lead connection needs two half-windings,"
                         + " got " + ends);
             }
-            b.coil(phase, ends.get(0), ends.get(1), com);
+            b.coil(phase, ends.get(0), ends.get(1), com).values(coilValue(halves, com, ends.get(0)),
+                    coilValue(halves, com, ends.get(1)));
         }
     }
 }

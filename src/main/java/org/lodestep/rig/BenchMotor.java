@@ -40,6 +40,7 @@ final class BenchMotor {
     private final int[] nodeOfPosition;
     private final List<String> labelOfPosition;
     private final Random random;
+    private double lastHandTurnRevolutions = Double.NaN;
 
     BenchMotor(Scenario s) {
         this.scenario = s;
@@ -233,6 +234,7 @@ final class BenchMotor {
     double[][] handTurnEmf(List<int[]> pairs, double seconds, double sampleRateHz, int frames) {
         double peak = scenario.handTurnRpm() * 2 * Math.PI / 60;
         double theta = random.nextDouble() * 2 * Math.PI / scenario.rotorTeeth();
+        double theta0 = theta;
         int nr = scenario.rotorTeeth();
         List<List<WindingNetwork.Step>> paths = new ArrayList<>();
         for (int[] p : pairs) {
@@ -259,7 +261,13 @@ final class BenchMotor {
                 theta += handSpeed(t + (s + 0.5) * dt / sub, seconds, peak) * dt / sub;
             }
         }
+        lastHandTurnRevolutions = (theta - theta0) / (2 * Math.PI);
         return out;
+    }
+
+    /** Mechanical revolutions the hand turned during the last {@link #handTurnEmf} record (NaN before any). */
+    double handTurnRevolutions() {
+        return lastHandTurnRevolutions;
     }
 
     static double handSpeed(double t, double seconds, double peakRadPerS) {

@@ -83,6 +83,8 @@ public final class RigClient implements Closeable {
     private int protocolMinor;
     /** Samples at full scale per channel, from the last stream's end frame ({@code clipped=name:count,...}). */
     private String lastClipped = "";
+    /** The END frame's {@code revolutions} of the last stream (a rig that knows the shaft angle states it), or "". */
+    private String lastRevolutions = "";
 
     private RigClient(Transport transport, Settings settings) throws RigException {
         this.transport = transport;
@@ -361,6 +363,7 @@ public final class RigClient implements Closeable {
                 + settings.replyTimeoutMs()));
         StreamSpec spec = StreamSpec.decode(header.text());
         lastClipped = "";
+        lastRevolutions = "";
         BlockCollector blocks = new BlockCollector(spec);
         live.started(spec.channels(), spec.rateHz());
         try {
@@ -423,6 +426,7 @@ public final class RigClient implements Closeable {
             if (f.type() == Frame.END) {
                 ended = true;
                 lastClipped = Fields.parse(f.text()).get("clipped", "");
+                lastRevolutions = Fields.parse(f.text()).get("revolutions", "");
                 if (!Fields.parse(f.text()).get("status", "").equals("complete")) {
                     throw new RigException("the rig ended the " + kind + " stream early (" + f.text() + ") after "
                             + blocks.have() + " of " + blocks.blocks() + " blocks");
@@ -444,6 +448,17 @@ public final class RigClient implements Closeable {
                 for (int s : blocks.unrequestedBefore(b.seq())) {
                     request(s, blocks, kind, resendTags);
                 }
+            }
+        }
+        // The END frame follows the last block (section 6) and carries what the rig knows only at the end (clipped
+        // samples, the revolutions of a back-EMF record): wait for it briefly; the samples are complete either way.
+        long deadline = System.nanoTime() + settings.replyTimeoutMs() * 1_000_000L;
+        while (!ended && System.nanoTime() < deadline) {
+            Frame f = reader.next(waitMs);
+            if (f != null && f.tag() == tag && f.type() == Frame.END) {
+                ended = true;
+                lastClipped = Fields.parse(f.text()).get("clipped", "");
+                lastRevolutions = Fields.parse(f.text()).get("revolutions", "");
             }
         }
     }
@@ -468,6 +483,10 @@ public final class RigClient implements Closeable {
         if (!lastClipped.isEmpty()) {
             // samples at full scale: the true value is beyond the range, so peaks there are lower bounds
             meta.put("clipped_samples", lastClipped);
+        }
+        if (!lastRevolutions.isEmpty()) {
+            // mechanical revolutions during a back-EMF record, from a rig that knows the shaft angle
+            meta.put("revolutions", lastRevolutions);
         }
         meta.put("started_utc", started);
         meta.put("finished_utc", Instant.now().toString());

@@ -483,7 +483,9 @@ public final class VirtualRig implements Runnable {
         double[][] data = motor.handTurnEmf(pairs, seconds, rate, frames);
         double[] lsb = new double[pairs.size()];
         java.util.Arrays.fill(lsb, 0.001);
-        stream(tag, new StreamSpec(channels, lsb, rate, frames, blockFrames(pairs.size(), frames)), data, false);
+        // the simulated hand's turns are known exactly, as an encoder on a real rig would know them
+        stream(tag, new StreamSpec(channels, lsb, rate, frames, blockFrames(pairs.size(), frames)), data, false,
+                String.format(java.util.Locale.ROOT, " revolutions=%.4f", motor.handTurnRevolutions()));
     }
 
     private void sweep(int tag, CommandText c) throws IOException, CommandException {
@@ -541,6 +543,12 @@ public final class VirtualRig implements Runnable {
     }
 
     private void stream(int tag, StreamSpec spec, double[][] data, boolean drives) throws IOException {
+        stream(tag, spec, data, drives, "");
+    }
+
+    /** Streams a record; {@code endKeys} (" key=value ...") are added to the END frame of a complete stream. */
+    private void stream(int tag, StreamSpec spec, double[][] data, boolean drives, String endKeys)
+            throws IOException {
         int nc = spec.channels().size();
         long[] clipped = new long[nc];
         List<Frame> blocks = new ArrayList<>(spec.blocks());
@@ -601,6 +609,9 @@ public final class VirtualRig implements Runnable {
                 end.append(sep).append(spec.channels().get(ch).name()).append(':').append(clipped[ch]);
                 sep = ",";
             }
+        }
+        if (!abortStream) {
+            end.append(endKeys);
         }
         streamEnd = Frame.text(Frame.END, tag, end.toString());
         send(streamEnd);

@@ -52,7 +52,7 @@ final class ContinuityGroups {
         uses = new ArrayList<>();
         for (Map.Entry<LeadPair, Double> e : m.readings().entrySet()) {
             String kind = kindOf(e.getValue());
-            uses.add(new ReadingUse(e.getKey(), e.getValue(), kind));
+            uses.add(new ReadingUse(e.getKey(), e.getValue(), kind, !m.isInferred(e.getKey())));
             if (kind.equals("continuity")) {
                 union(parent, e.getKey().a(), e.getKey().b());
             }

@@ -38,39 +38,57 @@ final class FaultyLayout {
      * @param windings      the windings as they still read (a lone half marked as a half-winding)
      * @param salvage       connections that still work
      * @param message       what is open, for the open-winding finding
+     * @param openCoils     the open coil as a schematic draws it; empty when a tap lead, not a coil, is broken
      */
     record Inference(Topology topology, List<String> openLeads, List<String> tapCandidates, List<Winding> windings,
-                     List<DriverWiring> salvage, String message) {
+                     List<DriverWiring> salvage, String message, List<OpenCoil> openCoils) {
     }
 
     static Optional<Inference> infer(int leadCount, List<List<String>> groups, List<Winding> windings) {
         List<String> loose = new ArrayList<>();
         List<List<String>> pairs = new ArrayList<>();
         List<List<String>> triples = new ArrayList<>();
+        List<List<String>> fours = new ArrayList<>();
         for (List<String> g : groups) {
             switch (g.size()) {
                 case 1 -> loose.add(g.get(0));
                 case 2 -> pairs.add(g);
                 case 3 -> triples.add(g);
+                case 4 -> fours.add(g);
                 default -> {
                     return Optional.empty();
                 }
             }
         }
+        if (leadCount == 5 && loose.size() == 1 && fours.size() == 1 && windings.size() == 3) {
+            String common = windings.get(0).ends().get(0);
+            String l = loose.get(0);
+            List<Winding> coils = new ArrayList<>(windings);
+            return Optional.of(new Inference(Topology.FIVE_LEAD, List.of(common, l), List.of(), coils, List.of(),
+                    "5-lead motor, coil " + common + "-" + l + " open: " + l + " reads open to everything, and the"
+                    + " other three coils share the common lead " + common + ". Unipolar drive needs all four coils,"
+                    + " so no connection works until that coil is repaired.",
+                    List.of(new OpenCoil(common, List.of(l)))));
+        }
+        if (!fours.isEmpty()) {
+            return Optional.empty();
+        }
         if (leadCount == 4 && loose.size() == 2 && pairs.size() == 1 && triples.isEmpty()) {
             return Optional.of(new Inference(Topology.FOUR_LEAD, loose, List.of(), windings, List.of(),
                     "4-lead motor, phase " + loose.get(0) + "-" + loose.get(1) + " open: " + loose.get(0) + " and "
                     + loose.get(1) + " read open to each other and to everything else. A two-phase motor needs both "
-                    + "phases, so no connection works until that phase is repaired."));
+                    + "phases, so no connection works until that phase is repaired.",
+                    List.of(new OpenCoil(loose.get(0), List.of(loose.get(1))))));
         }
         if (leadCount == 8 && loose.size() == 2 && pairs.size() == 3 && triples.isEmpty()) {
             List<Winding> coils = windings.stream()
-                    .map(w -> new Winding(w.ends(), null, w.resistanceOhm(), List.of(), true, w.resistanceMeasured()))
+                    .map(w -> new Winding(w.ends(), w.resistanceOhm(), true, w.resistanceMeasured()))
                     .toList();
             return Optional.of(new Inference(Topology.EIGHT_LEAD, loose, List.of(), coils,
                     List.of(onePerPhase(coils, loose)), "8-lead motor, coil " + loose.get(0) + "-" + loose.get(1)
                     + " open: three coils read healthy and those two leads read open to everything. The motor can "
-                    + "still run bipolar on one healthy coil per phase (salvage connection)."));
+                    + "still run bipolar on one healthy coil per phase (salvage connection).",
+                    List.of(new OpenCoil(loose.get(0), List.of(loose.get(1))))));
         }
         if (leadCount == 6 && loose.size() == 1 && pairs.size() == 1 && triples.size() == 1) {
             Winding tapped = windings.stream().filter(w -> w.tap() != null).findFirst().orElse(null);
@@ -87,10 +105,9 @@ final class FaultyLayout {
                         + " tap %s of winding %s-%s is broken off: %s-%s reads a whole winding (%s) but %s connects to"
                         + " nothing. Bipolar series on the ends still works; half-winding and unipolar need the tap.",
                         l, pair.ends().get(0), pair.ends().get(1), pair.ends().get(0), pair.ends().get(1),
-                        ohm(pair.resistanceOhm()), l)));
+                        ohm(pair.resistanceOhm()), l), List.of()));
             }
-            Winding half = new Winding(pair.ends(), null, pair.resistanceOhm(), List.of(), true,
-                    pair.resistanceMeasured());
+            Winding half = new Winding(pair.ends(), pair.resistanceOhm(), true, pair.resistanceMeasured());
             List<String> open = new ArrayList<>(List.of(l));
             open.addAll(pair.ends());
             return Optional.of(new Inference(Topology.SIX_LEAD, open, pair.ends(), List.of(tapped, half),
@@ -100,7 +117,7 @@ final class FaultyLayout {
                     + "half-winding on its two healthy halves (salvage connection).",
                     l, pair.ends().get(0), pair.ends().get(1), pair.ends().get(0), pair.ends().get(1),
                     ohm(pair.resistanceOhm()), tapped.ends().get(0), tapped.ends().get(1), l, l,
-                    pair.ends().get(0), pair.ends().get(1))));
+                    pair.ends().get(0), pair.ends().get(1)), List.of(new OpenCoil(l, pair.ends()))));
         }
         return Optional.empty();
     }

@@ -18,11 +18,13 @@ import java.util.List;
  * @param readings               every reading used and how it was read
  * @param measuredPairs          number of distinct pairs measured
  * @param totalPairs             N(N−1)/2
+ * @param openCoils              coils that read open on a motor whose layout is still known (drawn broken)
  */
 public record Identification(List<String> leads, Topology topology, List<Winding> windings,
                              List<Double> windingsAtReferenceOhm, TemperatureCorrection temperature,
                              List<Finding> findings, List<DriverWiring> connections, List<LeadPair> missingPairs,
-                             boolean determined, List<ReadingUse> readings, int measuredPairs, int totalPairs) {
+                             boolean determined, List<ReadingUse> readings, int measuredPairs, int totalPairs,
+                             List<OpenCoil> openCoils) {
     public Identification {
         leads = List.copyOf(leads);
         windings = List.copyOf(windings);
@@ -31,6 +33,7 @@ public record Identification(List<String> leads, Topology topology, List<Winding
         connections = List.copyOf(connections);
         missingPairs = List.copyOf(missingPairs);
         readings = List.copyOf(readings);
+        openCoils = List.copyOf(openCoils);
     }
 
     /** Whether any finding has error severity (the CLI exits with code 3). */

@@ -11,7 +11,7 @@ import java.util.List;
  * <p>Method (circuit topology, common practice; references §4): leads joined by continuity form a group;
  * a group of two is one winding (or one half-winding of an 8-lead motor), a group of three is a centre-tapped winding
  * whose tap reads about half the end-to-end resistance to both ends, a group of five is four half-windings sharing
- * one common lead. The tap or common lead is found by fitting coil resistances (see {@link HubFit}), which tolerates
+ * one common lead (of four on a 5-lead motor, three coils on it with the fourth open). The tap or common lead is found by fitting coil resistances (see {@link HubFit}), which tolerates
  * meter noise and probe contact resistance and works from a spanning subset of the readings.
  */
 public final class LeadIdentifier {
@@ -37,10 +37,12 @@ public final class LeadIdentifier {
         for (List<String> g : cg.groups) {
             sizes.add(g.size());
             findings.addAll(WindingChecks.openInsideGroup(g, m));
-            switch (g.size()) {
+            // Four leads joined on a 5-lead motor: three coils on the common lead, the fourth open.
+            int shape = g.size() == 4 && m.leads().size() == 5 ? 5 : g.size();
+            switch (shape) {
                 case 1 -> singletons.add(g.get(0));
-                case 2 -> windings.add(new Winding(g, null, m.ohms(LeadPair.of(g.get(0), g.get(1))).getAsDouble(),
-                        List.of(), false, true));
+                case 2 -> windings.add(new Winding(g, m.ohms(LeadPair.of(g.get(0), g.get(1))).getAsDouble(), false,
+                        true));
                 case 3, 5 -> {
                     HubFit fit = new HubFit(g, m, s.contactAllowanceOhm());
                     if (fit.best != null) {
@@ -68,7 +70,7 @@ public final class LeadIdentifier {
         boolean groupsDecided = cg.undecided.isEmpty();
         Topology topology = groupsDecided && allStructured ? topologyOf(sizes) : Topology.UNKNOWN;
         if (topology == Topology.EIGHT_LEAD) {
-            windings = windings.stream().map(w -> new Winding(w.ends(), null, w.resistanceOhm(), List.of(), true, true))
+            windings = windings.stream().map(w -> new Winding(w.ends(), w.resistanceOhm(), true, true))
                     .toList();
         }
         for (Winding w : windings) {
@@ -80,6 +82,7 @@ public final class LeadIdentifier {
             }
         }
         List<DriverWiring> salvage = null;
+        List<OpenCoil> openCoils = List.of();
         if (groupsDecided && !singletons.isEmpty()) {
             var faulty = topology == Topology.UNKNOWN && allStructured
                     ? FaultyLayout.infer(m.leads().size(), cg.groups, windings) : java.util.Optional.<FaultyLayout.Inference>empty();
@@ -87,6 +90,7 @@ public final class LeadIdentifier {
                 topology = faulty.get().topology();
                 windings = faulty.get().windings();
                 salvage = faulty.get().salvage();
+                openCoils = faulty.get().openCoils();
                 findings.add(new Finding(FindingCode.OPEN_WINDING, Severity.ERROR, faulty.get().message(),
                         faulty.get().openLeads()));
             } else {
@@ -110,7 +114,7 @@ public final class LeadIdentifier {
         List<LeadPair> distinctMissing = missing.stream().distinct().toList();
         return new Identification(m.leads(), topology, windings, atReference, temperature, findings,
                 salvage != null ? salvage : ConnectionGuide.connections(topology, windings), distinctMissing, distinctMissing.isEmpty(), cg.uses,
-                m.readings().size(), m.allPairs().size());
+                m.readCount(), m.allPairs().size(), openCoils);
     }
 
     private static List<LeadPair> unmeasuredWithin(List<String> g, ResistanceMatrix m) {

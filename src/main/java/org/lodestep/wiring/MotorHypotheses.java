@@ -9,6 +9,12 @@ import java.util.List;
  *
  * <p>Counts: 4 leads 3 pairings; 5 leads 5 choices of the common lead; 6 leads 10 splits into two triples × 3 × 3
  * taps = 90; 8 leads 105 pairings into four coils. Each layout arises from the same number of the N! labelings.
+ *
+ * <p>A winding's resistance is read when a reading is that winding alone ({@link #windingReadings}): the pair of a
+ * 4-lead phase or an 8-lead coil, the common-to-end pair of a 5-lead coil, and for a 6-lead centre-tapped winding
+ * two of its three pairs: the end-to-end pair with one half (the other half is their difference) or both halves
+ * (the whole is their series sum). Two are needed there, not one, so that every lead of the winding, the tap
+ * included, is joined to it by a reading.
  */
 final class MotorHypotheses {
     private MotorHypotheses() {
@@ -55,6 +61,37 @@ final class MotorHypotheses {
                 }
             }
             default -> {
+            }
+        }
+        return out;
+    }
+
+    /** The bit of pair (i, j), i != j, in a set of pairs held as a {@code long} (at most 8 leads). */
+    static long bit(int i, int j) {
+        return 1L << (Math.min(i, j) * 8 + Math.max(i, j));
+    }
+
+    /**
+     * For each winding of layout {@code k}, the sets of pairs (as {@link #bit} masks) any one of which, read, gives
+     * that winding's resistance from its own coils alone.
+     */
+    static List<long[]> windingReadings(int[][] k) {
+        int n = k.length;
+        List<long[]> out = new ArrayList<>();
+        for (int i = 0; i < n; i++) {
+            for (int j = i + 1; j < n; j++) {
+                if (n == 6 && k[i][j] == 2) {
+                    int tap = -1;
+                    for (int t = 0; t < n; t++) {
+                        if (k[t][i] == 1 && k[t][j] == 1) {
+                            tap = t;
+                        }
+                    }
+                    long whole = bit(i, j);
+                    out.add(new long[] {whole | bit(tap, i), whole | bit(tap, j), bit(tap, i) | bit(tap, j)});
+                } else if (n != 6 && k[i][j] == 1) {
+                    out.add(new long[] {bit(i, j)});
+                }
             }
         }
         return out;

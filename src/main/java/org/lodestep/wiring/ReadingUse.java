@@ -5,7 +5,8 @@ package org.lodestep.wiring;
  *
  * @param pair          the leads
  * @param resistanceOhm the reading in ohms, {@code +Infinity} when open
- * @param kind          {@code continuity}, {@code open} or {@code leakage}
+ * @param kind          {@code continuity}, {@code open}, {@code leakage} or {@code suspect}
+ * @param measured      true for a reading, false for a pair inferred from the only healthy layout left
  */
-public record ReadingUse(LeadPair pair, double resistanceOhm, String kind) {
+public record ReadingUse(LeadPair pair, double resistanceOhm, String kind, boolean measured) {
 }

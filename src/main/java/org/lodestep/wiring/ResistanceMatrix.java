@@ -7,6 +7,7 @@ import java.util.LinkedHashSet;
 import java.util.List;
 import java.util.Map;
 import java.util.Objects;
+import java.util.Set;
 import java.util.OptionalDouble;
 import java.util.TreeMap;
 
@@ -14,15 +15,21 @@ import java.util.TreeMap;
  * The lead-pair resistances measured on one motor, possibly incomplete: each pair is either measured (a finite value
  * in ohms, or open circuit) or not measured at all.
  *
+ * <p>A pair may also be inferred rather than read: open because the only healthy layout the readings leave has no
+ * coil between its leads (a guided measurement that stopped once the answer was certain). Inferred pairs take part
+ * in the analysis like readings but are counted and shown apart from them.
+ *
  * <p>Immutable. Lead order is the order in which labels were first given, so output follows the user's own order.
  */
 public final class ResistanceMatrix {
     private final List<String> leads;
     private final Map<LeadPair, Double> ohms;
+    private final Set<LeadPair> inferred;
 
-    private ResistanceMatrix(List<String> leads, Map<LeadPair, Double> ohms) {
+    private ResistanceMatrix(List<String> leads, Map<LeadPair, Double> ohms, Set<LeadPair> inferred) {
         this.leads = List.copyOf(leads);
         this.ohms = Collections.unmodifiableMap(new TreeMap<>(ohms));
+        this.inferred = Set.copyOf(inferred);
     }
 
     /** A builder that collects leads and readings. */
@@ -35,9 +42,49 @@ public final class ResistanceMatrix {
         return leads;
     }
 
-    /** Whether the pair was measured (finite or open). */
+    /** Whether the pair's value is known (finite or open), read or inferred. */
     boolean isMeasured(LeadPair p) {
         return ohms.containsKey(p);
+    }
+
+    /** Whether the pair's value was inferred from the layout rather than read. */
+    public boolean isInferred(LeadPair p) {
+        return inferred.contains(p);
+    }
+
+    /** Number of pairs actually read (inferred ones not counted). */
+    public int readCount() {
+        return ohms.size() - inferred.size();
+    }
+
+    /** The same matrix without pair {@code p} (inferred pairs stay inferred). */
+    ResistanceMatrix without(LeadPair p) {
+        Map<LeadPair, Double> m = new LinkedHashMap<>(ohms);
+        m.remove(p);
+        Set<LeadPair> inf = new LinkedHashSet<>(inferred);
+        inf.remove(p);
+        return new ResistanceMatrix(leads, m, inf);
+    }
+
+    /** The same matrix with pair {@code p} reading {@code resistanceOhm} ({@code +Infinity} = open), as read. */
+    ResistanceMatrix with(LeadPair p, double resistanceOhm) {
+        Map<LeadPair, Double> m = new LinkedHashMap<>(ohms);
+        m.put(p, resistanceOhm);
+        Set<LeadPair> inf = new LinkedHashSet<>(inferred);
+        inf.remove(p);
+        return new ResistanceMatrix(leads, m, inf);
+    }
+
+    /** The same matrix with each pair of {@code pairs} inferred open (pairs already known are left as they are). */
+    ResistanceMatrix withInferredOpen(List<LeadPair> pairs) {
+        Map<LeadPair, Double> m = new LinkedHashMap<>(ohms);
+        Set<LeadPair> inf = new LinkedHashSet<>(inferred);
+        for (LeadPair p : pairs) {
+            if (m.putIfAbsent(p, Double.POSITIVE_INFINITY) == null) {
+                inf.add(p);
+            }
+        }
+        return new ResistanceMatrix(leads, m, inf);
     }
 
     /** Whether the pair was measured and read open circuit. */
@@ -52,7 +99,10 @@ public final class ResistanceMatrix {
         return v == null || v.isInfinite() ? OptionalDouble.empty() : OptionalDouble.of(v);
     }
 
-    /** Every measured pair with its value in ohms ({@code +Infinity} = open), in canonical pair order. */
+    /**
+     * Every known pair with its value in ohms ({@code +Infinity} = open), in canonical pair order; inferred pairs
+     * included ({@link #isInferred}).
+     */
     public Map<LeadPair, Double> readings() {
         return ohms;
     }
@@ -125,7 +175,7 @@ public final class ResistanceMatrix {
         }
 
         public ResistanceMatrix build() {
-            return new ResistanceMatrix(new ArrayList<>(leads), ohms);
+            return new ResistanceMatrix(new ArrayList<>(leads), ohms, Set.of());
         }
     }
 }

@@ -41,7 +41,10 @@ final class SingleSlip {
         Identification found = null;
         LeadPair slipped = null;
         for (LeadPair p : m.readings().keySet()) {
-            ResistanceMatrix rest = without(m, p);
+            if (m.isInferred(p)) {
+                continue;
+            }
+            ResistanceMatrix rest = m.without(p);
             Identification id = identify.apply(rest, s);
             if (!healthy(id)) {
                 continue;
@@ -72,11 +75,11 @@ final class SingleSlip {
         LeadPair slipped = null;
         double corrected = Double.NaN;
         for (Map.Entry<LeadPair, Double> e : m.readings().entrySet()) {
-            if (Double.isInfinite(e.getValue())) {
+            if (Double.isInfinite(e.getValue()) || m.isInferred(e.getKey())) {
                 continue;
             }
             for (double factor : new double[] {10, 0.1}) {
-                Identification id = identify.apply(replaced(m, e.getKey(), e.getValue() * factor), s);
+                Identification id = identify.apply(m.with(e.getKey(), e.getValue() * factor), s);
                 if (healthy(id) && id.findings().isEmpty()) {
                     if (found != null) {
                         return Optional.empty();
@@ -92,13 +95,25 @@ final class SingleSlip {
         }
         LeadPair p = slipped;
         List<Winding> windings = found.windings().stream().map(w -> w.leads().contains(p.a())
-                && w.leads().contains(p.b()) ? new Winding(w.ends(), w.tap(), w.resistanceOhm(),
-                w.halfResistancesOhm(), w.halfWinding(), false) : w).toList();
+                && w.leads().contains(p.b()) ? notRead(w, p) : w).toList();
         Identification marked = new Identification(found.leads(), found.topology(), windings,
                 found.windingsAtReferenceOhm(), found.temperature(), found.findings(), found.connections(),
                 found.missingPairs(), found.determined(), found.readings().stream().filter(u -> !u.pair().equals(p))
-                .toList(), found.measuredPairs(), found.totalPairs());
+                .toList(), found.measuredPairs(), found.totalPairs(), found.openCoils());
         return Optional.of(named(m, marked, slipped, corrected));
+    }
+
+    /** The winding with the reading of {@code p} no longer counted as read (the whole, or the half it is). */
+    private static Winding notRead(Winding w, LeadPair p) {
+        if (w.tap() == null || !(p.a().equals(w.tap()) || p.b().equals(w.tap()))) {
+            return new Winding(w.ends(), w.tap(), w.resistanceOhm(), w.halfResistancesOhm(), w.halfWinding(), false,
+                    w.halvesMeasured());
+        }
+        String end = p.a().equals(w.tap()) ? p.b() : p.a();
+        List<Boolean> halves = new ArrayList<>(w.halvesMeasured());
+        halves.set(w.ends().indexOf(end), false);
+        return new Winding(w.ends(), w.tap(), w.resistanceOhm(), w.halfResistancesOhm(), w.halfWinding(),
+                w.resistanceMeasured(), halves);
     }
 
     private static Identification named(ResistanceMatrix m, Identification found, LeadPair slipped,
@@ -110,10 +125,10 @@ final class SingleSlip {
                 + "from the other readings.", slipped.a(), slipped.b(), ohm(read), ohm(predicted),
                 cause(read, predicted, found, slipped), slipped.a(), slipped.b()), List.of(slipped.a(), slipped.b())));
         List<ReadingUse> uses = new ArrayList<>(found.readings());
-        uses.add(new ReadingUse(slipped, read, "suspect"));
+        uses.add(new ReadingUse(slipped, read, "suspect", true));
         return new Identification(found.leads(), found.topology(), found.windings(),
                 found.windingsAtReferenceOhm(), found.temperature(), findings, found.connections(),
-                found.missingPairs(), found.determined(), uses, m.readings().size(), found.totalPairs());
+                found.missingPairs(), found.determined(), uses, m.readCount(), found.totalPairs(), found.openCoils());
     }
 
     /**
@@ -183,36 +198,6 @@ final class SingleSlip {
             }
         }
         return ratio > 1 ? "likely a poor probe contact" : "likely a mis-recorded value";
-    }
-
-    private static ResistanceMatrix replaced(ResistanceMatrix m, LeadPair p, double ohms) {
-        ResistanceMatrix.Builder b = ResistanceMatrix.builder();
-        m.leads().forEach(b::lead);
-        for (Map.Entry<LeadPair, Double> e : m.readings().entrySet()) {
-            double v = e.getKey().equals(p) ? ohms : e.getValue();
-            if (Double.isInfinite(v)) {
-                b.open(e.getKey().a(), e.getKey().b());
-            } else {
-                b.reading(e.getKey().a(), e.getKey().b(), v);
-            }
-        }
-        return b.build();
-    }
-
-    private static ResistanceMatrix without(ResistanceMatrix m, LeadPair skip) {
-        ResistanceMatrix.Builder b = ResistanceMatrix.builder();
-        m.leads().forEach(b::lead);
-        for (Map.Entry<LeadPair, Double> e : m.readings().entrySet()) {
-            if (e.getKey().equals(skip)) {
-                continue;
-            }
-            if (Double.isInfinite(e.getValue())) {
-                b.open(e.getKey().a(), e.getKey().b());
-            } else {
-                b.reading(e.getKey().a(), e.getKey().b(), e.getValue());
-            }
-        }
-        return b.build();
     }
 
     private static String ohm(double v) {

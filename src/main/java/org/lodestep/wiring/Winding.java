@@ -14,9 +14,11 @@ import java.util.Objects;
  * @param halfWinding          true for one half of a phase (8-lead coils, 5-lead coils from the common lead)
  * @param resistanceMeasured   true when {@code resistanceOhm} is a reading, false when it follows from other readings
  *                             by the series relation (and so carries their contact resistance)
+ * @param halvesMeasured       for each of {@code halfResistancesOhm}, true when it is a reading, false when it was
+ *                             inferred (the whole less the other half, or the fitted coil); empty without a tap
  */
 public record Winding(List<String> ends, String tap, double resistanceOhm, List<Double> halfResistancesOhm,
-                      boolean halfWinding, boolean resistanceMeasured) {
+                      boolean halfWinding, boolean resistanceMeasured, List<Boolean> halvesMeasured) {
     public Winding {
         ends = List.copyOf(ends);
         if (ends.size() != 2) {
@@ -29,7 +31,24 @@ public record Winding(List<String> ends, String tap, double resistanceOhm, List<
         if (tap == null && !halfResistancesOhm.isEmpty()) {
             throw new IllegalArgumentException("half resistances without a tap");
         }
+        halvesMeasured = List.copyOf(halvesMeasured);
+        if (halvesMeasured.size() != halfResistancesOhm.size()) {
+            throw new IllegalArgumentException("one measured flag per half resistance: " + halvesMeasured);
+        }
         Objects.requireNonNull(ends.get(0));
+    }
+
+    /** A winding without a tap: read or inferred as a whole. */
+    public Winding(List<String> ends, double resistanceOhm, boolean halfWinding, boolean resistanceMeasured) {
+        this(ends, null, resistanceOhm, List.of(), halfWinding, resistanceMeasured, List.of());
+    }
+
+    /**
+     * Whether its resistance comes from readings of its own coils alone: the whole read, or (centre-tapped) both
+     * halves read, the whole being their series sum.
+     */
+    public boolean readDirectly() {
+        return resistanceMeasured || (!halvesMeasured.isEmpty() && !halvesMeasured.contains(false));
     }
 
     /** Every lead of the winding, ends first. */

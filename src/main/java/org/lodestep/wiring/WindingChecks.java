@@ -26,16 +26,19 @@ final class WindingChecks {
         if (c.ends().size() == 2) {
             String e1 = c.ends().get(0);
             String e2 = c.ends().get(1);
-            double h1 = m.ohms(LeadPair.of(c.hub(), e1)).orElse(c.coilOhm()[0]);
-            double h2 = m.ohms(LeadPair.of(c.hub(), e2)).orElse(c.coilOhm()[1]);
+            // A half not read is the fitted coil (with the whole and the other half read: their difference).
+            OptionalDouble r1 = m.ohms(LeadPair.of(c.hub(), e1));
+            OptionalDouble r2 = m.ohms(LeadPair.of(c.hub(), e2));
+            double h1 = r1.orElse(c.coilOhm()[0]);
+            double h2 = r2.orElse(c.coilOhm()[1]);
             OptionalDouble measured = m.ohms(LeadPair.of(e1, e2));
             out.add(new Winding(List.of(e1, e2), c.hub(), measured.orElse(h1 + h2), List.of(h1, h2), false,
-                    measured.isPresent()));
+                    measured.isPresent(), List.of(r1.isPresent(), r2.isPresent())));
         } else {
             for (int i = 0; i < c.ends().size(); i++) {
                 String e = c.ends().get(i);
                 OptionalDouble measured = m.ohms(LeadPair.of(c.hub(), e));
-                out.add(new Winding(List.of(c.hub(), e), null, measured.orElse(c.coilOhm()[i]), List.of(), true,
+                out.add(new Winding(List.of(c.hub(), e), measured.orElse(c.coilOhm()[i]), true,
                         measured.isPresent()));
             }
         }

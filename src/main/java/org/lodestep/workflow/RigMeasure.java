@@ -158,7 +158,7 @@ public final class RigMeasure {
             if (cap != null && s.saveTo() != null) {
                 progress.step("saving " + s.saveTo());
                 saved = RigCaptureFile.save(cap, s.saveTo(), null, s.toolVersion(),
-                        analysisMetadata(s, labels, c.info().capabilities()));
+                        analysisMetadata(s, labels, c.info().capabilities(), cap.metadata()));
             }
             return new Result(s.kind(), labels, rs, ins, cap, saved);
         }
@@ -175,17 +175,22 @@ public final class RigMeasure {
     }
 
     /**
-     * What {@code motor identify} and {@code qa check} need to analyse a saved step response: the leads (the rig's
-     * labels), the drive voltage and the rig's own series resistance (its {@code drive_series_ohm} capability).
+     * What {@code motor identify} and {@code qa check} need to analyse a saved capture: for a step response the
+     * leads (the rig's labels), the drive voltage and the rig's own series resistance (its {@code drive_series_ohm}
+     * capability); for back-EMF the revolutions turned, when the rig stated them.
      */
     static java.util.Map<String, String> analysisMetadata(Settings s, List<String> labels,
-                                                          java.util.Map<String, String> capabilities) {
+                                                          java.util.Map<String, String> capabilities,
+                                                          java.util.Map<String, String> captured) {
         java.util.Map<String, String> m = new java.util.LinkedHashMap<>();
         if (s.kind() == Kind.STEP_RESPONSE) {
             LeadPair p = s.pairs().get(0);
             m.put("leads", label(labels, p.leadA()) + "," + label(labels, p.leadB()));
             m.put("supply_v", Double.toString(s.stepVolts()));
             m.put("series_ohm", capabilities.getOrDefault("drive_series_ohm", "0"));
+        }
+        if (s.kind() == Kind.BACK_EMF && captured.containsKey("revolutions")) {
+            m.put("revolutions", captured.get("revolutions"));
         }
         return m;
     }

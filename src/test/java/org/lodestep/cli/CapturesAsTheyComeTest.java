@@ -66,4 +66,24 @@ class CapturesAsTheyComeTest {
         JsonNode fit = new ObjectMapper().readTree(r.out()).get("step_responses").get(0).get("fit");
         assertTrue(fit.get("inductance_h").asDouble() > 0, fit.toString());
     }
+
+    @Test
+    void rigBackEmfStatesItsRevolutionsAndGoesStraightIntoMotorIdentify() throws Exception {
+        Path f = dir.resolve("emf.csv");
+        CliRun m = CliRun.of("rig", "measure", "sim:bench-4", "back-emf", "--pair", "1-2", "--pair", "3-4",
+                "--seconds", "2", "--out", f.toString());
+        assertEquals(0, m.code(), m.err());
+        // The virtual hand (rig.BenchMotor.handSpeed) turns at 120 rpm with raised-cosine ramps over the first and
+        // last 20 % of the record, each averaging half the speed: 2 rev/s × 2 s × (0.6 + 2 × 0.2 × 0.5) = 3.2 rev.
+        String revs = Files.readString(f).lines().filter(l -> l.startsWith("# revolutions=")).findFirst()
+                .orElseThrow(() -> new AssertionError("no '# revolutions=' line"));
+        assertEquals(3.2, Double.parseDouble(revs.substring("# revolutions=".length())), 1e-3);
+        CliRun r = CliRun.of("motor", "identify", "--json", "--back-emf", f.toString());
+        assertEquals(0, r.code(), r.err() + r.out());
+        JsonNode card = new ObjectMapper().readTree(r.out());
+        // bench-4 is a 50-tooth rotor (scenarios.toml): 1.8° full steps, references §1
+        assertEquals(50, card.get("rotor_teeth").asInt(), card.toString());
+        assertEquals(1.8, card.get("step_angle_deg").asDouble(), 1e-9);
+        assertEquals("stated", card.get("back_emf").get("revolution_source").asText().toLowerCase(Locale.ROOT));
+    }
 }

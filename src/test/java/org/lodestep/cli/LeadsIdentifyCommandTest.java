@@ -39,8 +39,10 @@ class LeadsIdentifyCommandTest {
         assertEquals("blue", w.get("ends").get(1).asText());
         assertTrue(w.get("tap").isNull());
         assertEquals(2.48, w.get("resistance_ohm").asDouble(), 1e-9);
-        // 22.5 °C → 20 °C with k = 235 (IEC 60034-1): 2.48 × 255/257.5 (references §3 formula).
-        assertEquals(2.48 * 255 / 257.5, w.get("resistance_at_reference_ohm").asDouble(), 1e-9);
+        // 22.5 °C → 20 °C with k = 235 (IEC 60034-1): 2.48 × 255/257.5 (references §3 formula), given to the
+        // meter's 1 mΩ: 2.456.
+        assertEquals(2.456, w.get("resistance_at_reference_ohm").asDouble(), 1e-12);
+        assertEquals(2.48 * 255 / 257.5, w.get("resistance_at_reference_ohm").asDouble(), 5e-4);
         assertEquals(0, j.get("findings").size());
         assertEquals(0, j.get("missing_pairs").size());
         JsonNode c = j.get("connections").get(0);
@@ -133,8 +135,9 @@ class LeadsIdentifyCommandTest {
     void ambientOptionOverridesTheFileAndCopperKCanBeIeee() throws Exception {
         CliRun r = CliRun.of("leads", "identify", "--json", "--ambient-c", "25", "--copper-k", "234.5",
                 "--pair", "a-b=1.5", "--pair", "c-d=1.5", "--pair", "a-c=OL");
-        // IEC 60034-1, references §3: 1.500 Ω at 25 °C → 1.47110 Ω at 20 °C with k = 234.5.
-        assertEquals(1.47110, json(r).get("windings").get(0).get("resistance_at_reference_ohm").asDouble(), 1.5e-5);
+        // IEC 60034-1, references §3: 1.500 Ω at 25 °C → 1.47110 Ω at 20 °C with k = 234.5; JSON gives it to the
+        // meter's 1 mΩ.
+        assertEquals(1.471, json(r).get("windings").get(0).get("resistance_at_reference_ohm").asDouble(), 1e-12);
         assertEquals(2, CliRun.of("leads", "identify", "--copper-k", "240", "--pair", "a-b=1").code());
     }
 

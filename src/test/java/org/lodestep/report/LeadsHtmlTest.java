@@ -72,4 +72,25 @@ class LeadsHtmlTest {
         }
         return out;
     }
+
+    @Test
+    void aProbeThatStoppedOnceCertainMarksItsInferredPairsAndValues() throws Exception {
+        org.lodestep.wiring.ProbeSession s = new org.lodestep.wiring.ProbeSession(List.of("a", "b", "c", "d"),
+                org.lodestep.wiring.IdentifySettings.DEFAULT);
+        s.record(s.nextPair().orElseThrow(), java.util.OptionalDouble.of(2.41));
+        s.record(s.nextPair().orElseThrow(), java.util.OptionalDouble.of(2.45));
+        String html = LeadsHtml.report("Probed", null, s.result()).html();
+        parse(html);
+        assertTrue(html.contains("2 of 6"), "pairs measured counts readings only");
+        assertTrue(html.contains("not read") && html.contains("open, inferred from the only healthy layout left"),
+                html);
+        // a 6-lead winding with one half not read: that half is inferred in the windings table
+        Identification six = org.lodestep.wiring.LeadIdentifier.identify(org.lodestep.wiring.ResistanceMatrix.builder()
+                .reading("black", "green", 4.00).reading("black", "yellow", 2.16)
+                .reading("red", "blue", 4.00).reading("red", "white", 2.00).reading("blue", "white", 2.00)
+                .open("black", "red").build(), org.lodestep.wiring.IdentifySettings.DEFAULT);
+        String sixHtml = LeadsHtml.report("Six", null, six).html();
+        assertTrue(sixHtml.contains("1.84 Ω inferred"), sixHtml);
+        assertTrue(sixHtml.contains("2.16 Ω"), sixHtml);
+    }
 }

@@ -9,6 +9,7 @@ import org.junit.jupiter.api.Test;
 import org.lodestep.wiring.IdentifySettings;
 import org.lodestep.wiring.Identification;
 import org.lodestep.wiring.LeadIdentifier;
+import org.lodestep.wiring.ProbeSession;
 import org.lodestep.wiring.ResistanceMatrix;
 
 /** Text rendering; matrices follow common practice, from the circuit topology, references §4 (r = 1.20 Ω, end to end
@@ -69,5 +70,53 @@ class LeadsTextReportTest {
         assertTrue(t.contains("c o--+--[ 1.20 Ω ]--o p"), t);
         assertTrue(t.contains("c is the common lead"), t);
         assertTrue(t.contains("[PROVISIONAL]"), t);
+    }
+
+    @Test
+    void inferredValuesAreMarkedNextToTheReadOnes() {
+        // Issue 11's case: black-green read whole (4.00 Ω) and black-tap read 2.16 Ω; green-tap was not read, so its
+        // 1.84 Ω is the whole less the read half (series relation, references §4) and is marked inferred.
+        ResistanceMatrix m = ResistanceMatrix.builder()
+                .reading("black", "green", 4.00).reading("black", "yellow", 2.16)
+                .reading("red", "blue", 4.00).reading("red", "white", 2.00).reading("blue", "white", 2.00)
+                .open("black", "red").build();
+        String t = render(m, IdentifySettings.DEFAULT);
+        assertTrue(t.contains("black o--[ 2.16 Ω ]--+--[ 1.84 Ω inferred ]--o green   end to end 4.00 Ω\n")
+                || t.contains("green o--[ 1.84 Ω inferred ]--+--[ 2.16 Ω ]--o black   end to end 4.00 Ω\n"), t);
+        assertTrue(t.contains("red o--[ 2.00 Ω ]--+--[ 2.00 Ω ]--o blue   end to end 4.00 Ω\n"), t);
+        assertTrue(t.contains("Values marked inferred were not read"), t);
+    }
+
+    @Test
+    void aProbeThatStoppedOnceCertainShowsThePairsItInferred() {
+        ProbeSession s = new ProbeSession(java.util.List.of("a", "b", "c", "d"), IdentifySettings.DEFAULT);
+        // a-b is a winding; c-d must be the other one: read for its resistance, the cross pairs inferred open
+        s.record(s.nextPair().orElseThrow(), java.util.OptionalDouble.of(2.41));
+        s.record(s.nextPair().orElseThrow(), java.util.OptionalDouble.of(2.45));
+        StringWriter w = new StringWriter();
+        LeadsTextReport.write(new PrintWriter(w, true), "M-2", s.result());
+        String t = w.toString();
+        assertTrue(t.contains("M-2: 4 leads, 2 of 6 pairs measured"), t);
+        assertTrue(t.contains("Inferred, not read: a-c, a-d, b-c, b-d open"), t);
+        assertTrue(t.contains("a o--[ 2.41 Ω ]--o b"), t);
+    }
+
+    @Test
+    void anOpenCoilIsDrawnBrokenNotHealthy() {
+        ResistanceMatrix m = ResistanceMatrix.builder().reading("black", "orange", 2.4).open("black", "red")
+                .open("black", "blue").open("orange", "red").open("orange", "blue").open("red", "blue").build();
+        String t = render(m, IdentifySettings.DEFAULT);
+        assertTrue(t.contains("open coil:      red o--/ OPEN /--o blue"), t);
+        assertTrue(!t.contains("red o--["), "the open coil has no value:\n" + t);
+        // 5 leads: common c with three coils read, the coil to e open
+        ResistanceMatrix.Builder b = ResistanceMatrix.builder();
+        for (String x : new String[] {"p", "q", "r"}) {
+            b.reading("c", x, 1.2);
+            b.open(x, "e");
+        }
+        b.reading("p", "q", 2.4).reading("p", "r", 2.4).reading("q", "r", 2.4).open("c", "e");
+        String five = render(b.build(), IdentifySettings.DEFAULT);
+        assertTrue(five.contains("+--/ OPEN /--o e"), five);
+        assertTrue(five.contains("c is the common lead"), five);
     }
 }

@@ -53,11 +53,18 @@ class WiringDiagramsTest {
             for (DriverWiring c : id.connections()) {
                 WiringDiagram d = WiringDiagrams.of(id, c);
                 drawn++;
-                // Every lead the identification knows is on the drawing, each once.
-                // every lead on a coil that conducts is drawn (the leads of an open coil are named in the findings)
+                // Every lead on a coil that conducts is drawn, and so is each lead of an open coil (on its broken
+                // coil, insulated); a broken-off tap lead is named in the findings only.
                 Set<String> onCoils = new HashSet<>();
                 id.windings().forEach(w -> onCoils.addAll(w.leads()));
+                id.openCoils().forEach(o -> {
+                    onCoils.add(o.end());
+                    if (o.otherEnd().size() == 1) {
+                        onCoils.addAll(o.otherEnd());
+                    }
+                });
                 assertEquals(onCoils, new HashSet<>(d.leads()), csv + " " + c.name());
+                assertEquals(id.openCoils().size(), d.brokenCoils().size());
                 Set<String> insulated = new HashSet<>(c.insulate());
                 insulated.retainAll(onCoils);
                 for (Map.Entry<String, List<String>> e : c.terminals().entrySet()) {
@@ -98,6 +105,61 @@ class WiringDiagramsTest {
         assertEquals(List.of("A", "A", "B", "B"), phases);
         assertEquals("Bipolar series, 8-lead", d.connection());
         assertFalse(d.summary().isEmpty());
+    }
+
+    @Test
+    void valuesBesideTheCoilsSayWhichWereInferred() {
+        // 6 leads: black-green read whole and black-yellow one half; yellow-green was not read (the whole less the
+        // read half, series relation, references §4).
+        ResistanceMatrix m = ResistanceMatrix.builder()
+                .reading("black", "green", 4.00).reading("black", "yellow", 2.16)
+                .reading("red", "blue", 4.00).reading("red", "white", 2.00).reading("blue", "white", 2.00)
+                .open("black", "red").build();
+        Identification id = LeadIdentifier.identify(m, IdentifySettings.DEFAULT);
+        WiringDiagram d = WiringDiagrams.of(id, id.connections().get(0));
+        WiringDiagram.Coil black = d.coils().stream().filter(c -> List.of(c.startLead(), c.endLead()).contains("black") || "black".equals(c.tapLead())).findFirst()
+                .orElseThrow();
+        List<WiringDiagram.SegmentValue> v = d.valuesOf(black);
+        assertEquals(2, v.size());
+        int read = black.startLead().equals("black") ? 0 : 1;
+        assertEquals(new WiringDiagram.SegmentValue("2.16 Ω", false), v.get(read));
+        assertEquals(new WiringDiagram.SegmentValue("1.84 Ω", true), v.get(1 - read));
+        String svg = d.toSvg().markup();
+        assertTrue(svg.contains("1.84 Ω inferred</text>") && svg.contains("class=\"value inferred\""), svg);
+        assertTrue(svg.contains(">2.16 Ω</text>"), svg);
+    }
+
+    @Test
+    void anOpenCoilIsDrawnBrokenWithTheWordOpen() {
+        // 8 leads, coil g-h open: the salvage connection draws it broken and insulated
+        ResistanceMatrix.Builder b = ResistanceMatrix.builder();
+        String[] l = {"a", "b", "c", "d", "e", "f", "g", "h"};
+        for (int i = 0; i < 8; i++) {
+            for (int j = i + 1; j < 8; j++) {
+                if (j == i + 1 && i % 2 == 0 && i < 6) {
+                    b.reading(l[i], l[j], 1.2);
+                } else {
+                    b.open(l[i], l[j]);
+                }
+            }
+        }
+        Identification id = LeadIdentifier.identify(b.build(), IdentifySettings.DEFAULT);
+        assertEquals(Topology.EIGHT_LEAD, id.topology());
+        WiringDiagram d = WiringDiagrams.of(id, id.connections().get(0));
+        assertEquals(List.of(new WiringDiagram.BrokenCoil("g", "h", null)), d.brokenCoils());
+        assertTrue(d.insulated().containsAll(List.of("g", "h")));
+        String svg = d.toSvg().markup();
+        assertTrue(svg.contains("<g class=\"coil open\">") && svg.contains("stroke-dasharray=\"5 3\""), svg);
+        assertTrue(svg.contains(">open</text>"), svg);
+        assertTrue(d.summary().contains("Open coil (drawn broken): g \u2013 h, no continuity"), d.summary().toString());
+        // 4 leads, a phase open: no connection works, so the motor is drawn as found
+        Identification four = LeadIdentifier.identify(ResistanceMatrix.builder().reading("a", "b", 2.4)
+                .open("a", "c").open("a", "d").open("b", "c").open("b", "d").open("c", "d").build(),
+                IdentifySettings.DEFAULT);
+        assertTrue(four.connections().isEmpty());
+        WiringDiagram found = WiringDiagrams.asFound(four).orElseThrow();
+        assertEquals(List.of(new WiringDiagram.BrokenCoil("c", "d", null)), found.brokenCoils());
+        assertTrue(found.toSvg().markup().contains(">open</text>"));
     }
 
     @Test

@@ -280,7 +280,8 @@ class StationBrowserTest {
             new WebDriverWait(driver, Duration.ofSeconds(60)).until(d -> section.getAttribute("data-done") != null);
             assertEquals("true", section.getAttribute("data-done"),
                     section.findElement(By.cssSelector(".progress")).getText());
-            assertTrue(Integer.parseInt(section.getAttribute("data-readings")) > 2, "each reading or stage listed");
+            // a healthy 4-lead motor on the rig takes two readings (its two windings; the cross pairs are inferred)
+            assertTrue(Integer.parseInt(section.getAttribute("data-readings")) >= 2, "each reading or stage listed");
             assertTrue(!fire.isEnabled(), "the arming was used once");
             shots(page + "-rig", null, "[data-rig-action=" + page + "]");
         }

@@ -149,4 +149,36 @@ class FaultyLayoutTest {
             assertTrue(c.insulate().containsAll(labelsOf(net, seed, 6, 7)));
         }
     }
+
+    @Test
+    void fiveLeadWithOneCoilOpenIsFiveLeadAndNamesTheCoil() {
+        // common lead 0 with coils to 1, 2 and 3; the coil to 4 open
+        Network net = new Network(5, 5, List.of(coil(0, 1), coil(0, 2), coil(0, 3)));
+        for (long seed = 1; seed <= 20; seed++) {
+            Identification id = identify(net, seed);
+            assertEquals(Topology.FIVE_LEAD, id.topology());
+            assertEquals(new HashSet<>(labelsOf(net, seed, 0, 4)), openFindingLeads(id));
+            assertTrue(id.hasError());
+            assertEquals(3, id.windings().size());
+            String common = labelsOf(net, seed, 0).get(0);
+            assertTrue(id.windings().stream().allMatch(w -> w.ends().get(0).equals(common)), id.windings().toString());
+            assertEquals(List.of(new OpenCoil(common, labelsOf(net, seed, 4))),
+                    id.openCoils());
+            assertTrue(id.connections().isEmpty(), id.connections().toString());
+        }
+    }
+
+    @Test
+    void openCoilsAreGivenForTheSchematic() {
+        Network four = new Network(4, 4, List.of(coil(0, 1)));
+        assertEquals(List.of(new OpenCoil(labelsOf(four, 3, 2).get(0), labelsOf(four, 3, 3))),
+                identify(four, 3).openCoils());
+        // the open half of a 6-lead winding runs from the loose lead to the tap, one of the pair's leads
+        Network six = new Network(6, 6, List.of(coil(0, 1), coil(1, 2), coil(3, 4)));
+        OpenCoil half = identify(six, 4).openCoils().get(0);
+        assertEquals(labelsOf(six, 4, 5).get(0), half.end());
+        assertEquals(new HashSet<>(labelsOf(six, 4, 3, 4)), new HashSet<>(half.otherEnd()));
+        Network tapBroken = new Network(6, 7, List.of(coil(0, 1), coil(1, 2), coil(3, 6), coil(6, 5)));
+        assertTrue(identify(tapBroken, 5).openCoils().isEmpty(), "a broken tap lead is no open coil");
+    }
 }

@@ -50,15 +50,14 @@ class LeadsProbeTest {
         return new LeadsProbe.Answer.Reading(OptionalDouble.of(v));
     }
 
-    private static final LeadsProbe.Answer OPEN = new LeadsProbe.Answer.Reading(OptionalDouble.empty());
 
     @Test
-    void fourLeadSessionIsCertainAfterThreeReadings() throws Exception {
-        // Two windings and one cross pair open settle a 4-lead motor: 3 of N(N-1)/2 = 6 pairs.
-        Script s = new Script(ohm(2.41), ohm(2.45), OPEN);
+    void fourLeadSessionIsCertainAfterTwoReadings() throws Exception {
+        // Two windings settle a healthy 4-lead motor (the cross pairs are implied open): 2 of N(N-1)/2 = 6 pairs.
+        Script s = new Script(ohm(2.41), ohm(2.45));
         LeadsProbe.Result r = LeadsProbe.run(new LeadsProbe.Settings(List.of("1", "2", "3", "4"),
                 LeadsSettings.DEFAULT), s, Progress.NONE);
-        assertEquals(3, r.readings());
+        assertEquals(2, r.readings());
         assertEquals(6, r.allPairs());
         assertNull(r.stopped());
         assertEquals(Topology.FOUR_LEAD, r.identification().topology());
@@ -68,11 +67,11 @@ class LeadsProbeTest {
     @Test
     void undoWithdrawsAndAnUnknownLeadIsRefused() throws Exception {
         Script s = new Script(ohm(9.9), new LeadsProbe.Answer.Undo(), new LeadsProbe.Answer.Undo(),
-                new LeadsProbe.Answer.OtherPair("red", "violet", OptionalDouble.of(1.0)), ohm(2.41), ohm(2.45), OPEN);
+                new LeadsProbe.Answer.OtherPair("red", "violet", OptionalDouble.of(1.0)), ohm(2.41), ohm(2.45));
         LeadsProbe.Result r = LeadsProbe.run(new LeadsProbe.Settings(List.of("red", "blue", "green", "black"),
                 LeadsSettings.DEFAULT), s, Progress.NONE);
         assertTrue(s.log.contains("withdrew") && s.log.contains("nothing") && s.log.contains("refused"), s.log.toString());
-        assertEquals(3, r.readings());
+        assertEquals(2, r.readings());
         assertEquals(Topology.FOUR_LEAD, r.identification().topology());
         // questions come in the label order given (red before blue), not sorted
         assertEquals("1:red-blue", s.log.get(0));

@@ -31,10 +31,14 @@ public final class WiringDiagram {
     private final List<Coil> coils;
     private final Map<String, Destination> destinations;
     private final List<List<String>> ties;
+    private final Map<Coil, List<SegmentValue>> values;
+    private final List<BrokenCoil> brokenCoils;
     private final boolean startsKnown;
 
     private WiringDiagram(Builder b) {
         this.connection = b.connection;
+        this.values = Map.copyOf(b.values);
+        this.brokenCoils = List.copyOf(b.brokenCoils);
         this.startsKnown = b.startsKnown;
         this.coils = List.copyOf(b.coils);
         this.destinations = Map.copyOf(b.destinations);
@@ -81,6 +85,34 @@ public final class WiringDiagram {
         }
     }
 
+    /**
+     * The resistance written beside one segment of a coil (the whole coil, or start-to-tap and tap-to-end).
+     *
+     * @param text     the value as written, e.g. "2.16 Ω"
+     * @param inferred true when it was inferred from other readings, not read: drawn in italics, marked "inferred"
+     */
+    public record SegmentValue(String text, boolean inferred) {
+        public SegmentValue {
+            Objects.requireNonNull(text, "text");
+        }
+    }
+
+    /**
+     * A coil that reads open, drawn broken (dashed, with a gap and the word "open"), wired to nothing.
+     *
+     * @param startLead the lead at its one end
+     * @param endLead   the lead at its other end, or null when that end is not known
+     * @param endNote   what the unknown end is (e.g. "tap: red or blue"), or null when {@code endLead} is given
+     */
+    public record BrokenCoil(String startLead, String endLead, String endNote) {
+        public BrokenCoil {
+            Objects.requireNonNull(startLead, "startLead");
+            if ((endLead == null) == (endNote == null)) {
+                throw new IllegalArgumentException("a broken coil needs an end lead or a note for its end, not both");
+            }
+        }
+    }
+
     /** Where one lead goes. */
     sealed interface Destination permits ToTerminal, ToTie, Insulated, Pending {
     }
@@ -114,6 +146,16 @@ public final class WiringDiagram {
     /** The coils in drawing order (phase A first). */
     public List<Coil> coils() {
         return coils;
+    }
+
+    /** The values written beside {@code coil}'s segments (one, or two for a tapped coil); empty when none. */
+    public List<SegmentValue> valuesOf(Coil coil) {
+        return values.getOrDefault(coil, List.of());
+    }
+
+    /** Coils that read open, drawn broken after the others. */
+    public List<BrokenCoil> brokenCoils() {
+        return brokenCoils;
     }
 
     /** The leads wired to {@code terminal}, in coil order (two for a parallel connection). */
@@ -153,6 +195,12 @@ public final class WiringDiagram {
             }
             s.add(c.endLead());
         }
+        for (BrokenCoil c : brokenCoils) {
+            s.add(c.startLead());
+            if (c.endLead() != null) {
+                s.add(c.endLead());
+            }
+        }
         return List.copyOf(s);
     }
 
@@ -175,6 +223,10 @@ public final class WiringDiagram {
         List<String> ins = insulated();
         if (!ins.isEmpty()) {
             lines.add("Insulate, do not connect: " + String.join(", ", ins));
+        }
+        for (BrokenCoil c : brokenCoils) {
+            lines.add("Open coil (drawn broken): " + c.startLead() + " \u2013 "
+                    + (c.endLead() != null ? c.endLead() : c.endNote()) + ", no continuity");
         }
         List<String> pending = new ArrayList<>();
         for (String lead : leads()) {
@@ -199,6 +251,8 @@ public final class WiringDiagram {
         private final List<Coil> coils = new ArrayList<>();
         private final Map<String, Destination> destinations = new LinkedHashMap<>();
         private final List<List<String>> ties = new ArrayList<>();
+        private final Map<Coil, List<SegmentValue>> values = new LinkedHashMap<>();
+        private final List<BrokenCoil> brokenCoils = new ArrayList<>();
         private boolean startsKnown = true;
 
         private Builder(String connection) {
@@ -219,6 +273,30 @@ public final class WiringDiagram {
         /** A coil with a centre tap (tapLead may be null). */
         public Builder coil(String phase, String startLead, String endLead, String tapLead) {
             coils.add(new Coil(phase, startLead, endLead, tapLead));
+            return this;
+        }
+
+        /**
+         * The resistances of the coil added last, written beside it: one value for a coil without a tap, two
+         * (start to tap, tap to end) for a tapped one.
+         */
+        public Builder values(SegmentValue... perSegment) {
+            if (coils.isEmpty()) {
+                throw new IllegalStateException("values belong to a coil: add the coil first");
+            }
+            Coil last = coils.get(coils.size() - 1);
+            int segments = last.tapLead() == null ? 1 : 2;
+            if (perSegment.length != segments) {
+                throw new IllegalArgumentException("coil " + last.startLead() + "-" + last.endLead() + " has "
+                        + segments + " segment(s), got " + perSegment.length + " value(s)");
+            }
+            values.put(last, List.of(perSegment));
+            return this;
+        }
+
+        /** A coil that reads open, drawn broken; its leads still need a destination (insulate them). */
+        public Builder brokenCoil(String startLead, String endLead, String endNote) {
+            brokenCoils.add(new BrokenCoil(startLead, endLead, endNote));
             return this;
         }
 
@@ -260,13 +338,20 @@ public final class WiringDiagram {
         }
 
         public WiringDiagram build() {
-            if (coils.isEmpty()) {
+            if (coils.isEmpty() && brokenCoils.isEmpty()) {
                 throw new IllegalStateException("a wiring diagram needs at least one coil");
             }
             Set<String> leads = new LinkedHashSet<>();
             Map<String, Integer> uses = new LinkedHashMap<>();
+            List<String[]> onCoils = new ArrayList<>();
             for (Coil c : coils) {
-                for (String l : new String[] {c.startLead(), c.endLead(), c.tapLead()}) {
+                onCoils.add(new String[] {c.startLead(), c.endLead(), c.tapLead()});
+            }
+            for (BrokenCoil c : brokenCoils) {
+                onCoils.add(new String[] {c.startLead(), c.endLead()});
+            }
+            for (String[] coilLeads : onCoils) {
+                for (String l : coilLeads) {
                     if (l != null) {
                         leads.add(l);
                         uses.merge(l, 1, Integer::sum);

@@ -76,9 +76,22 @@ final class WiringDiagramSvg {
                 tags.add(new Tag(c.tapLead(), (top + bot) / 2));
             }
             tags.add(new Tag(c.endLead(), bot));
+            drawValues(body, d.valuesOf(c), top, bot);
             phaseSpan.merge(c.phase(), new int[] {top, bot}, (a, b) -> new int[] {Math.min(a[0], b[0]),
                 Math.max(a[1], b[1])});
             y += h;
+        }
+        for (WiringDiagram.BrokenCoil c : d.brokenCoils()) {
+            y += lastPhase != null ? 40 : 0;
+            lastPhase = "";
+            int top = y + 10;
+            int bot = y + 94;
+            drawBrokenCoil(body, c, top, bot);
+            tags.add(new Tag(c.startLead(), top));
+            if (c.endLead() != null) {
+                tags.add(new Tag(c.endLead(), bot));
+            }
+            y += 104;
         }
         for (Map.Entry<String, int[]> e : phaseSpan.entrySet()) {
             drawPhaseLabel(body, e.getKey(), e.getValue()[0], e.getValue()[1]);
@@ -212,6 +225,47 @@ final class WiringDiagramSvg {
             sb.append(text(COIL_X + 6, (top + bot) / 2 - 5, 11, MUTED, "tap"));
         }
         sb.append(text(COIL_X + 6, bot - 5, 11, MUTED, "end"));
+    }
+
+    /**
+     * The resistance beside each segment of a coil, left of the loops: under the coil's name for a whole coil, at
+     * the middle of each half for a tapped one. An inferred value is italic, grey and says "inferred".
+     */
+    private static void drawValues(StringBuilder sb, List<WiringDiagram.SegmentValue> values, int top, int bot) {
+        int mid = (top + bot) / 2;
+        int[] rows = values.size() == 1 ? new int[] {mid + 22} : new int[] {(top + mid) / 2 + 4, (mid + bot) / 2 + 4};
+        for (int i = 0; i < values.size(); i++) {
+            WiringDiagram.SegmentValue v = values.get(i);
+            String t = text(COIL_X - 30, rows[i], 11, v.inferred() ? MUTED : INK,
+                    v.inferred() ? v.text() + " inferred" : v.text());
+            sb.append(t.replace("<text ", v.inferred() ? "<text class=\"value inferred\" text-anchor=\"end\" "
+                    + "font-style=\"italic\" " : "<text class=\"value\" text-anchor=\"end\" "));
+        }
+    }
+
+    /**
+     * A coil that reads open: two dashed grey stubs from its leads that do not meet, a break mark between them and
+     * the word "open" where the coil's name would be. An unknown end is named in words instead of a lead tag.
+     */
+    private static void drawBrokenCoil(StringBuilder sb, WiringDiagram.BrokenCoil c, int top, int bot) {
+        int mid = (top + bot) / 2;
+        sb.append("<g class=\"coil open\">");
+        sb.append("<path d=\"M").append(PILL_X).append(' ').append(top).append(" H").append(COIL_X).append(" V")
+                .append(mid - 12).append("\" fill=\"none\" stroke=\"").append(MUTED)
+                .append("\" stroke-width=\"2.2\" stroke-dasharray=\"5 3\"/>");
+        sb.append("<path d=\"M").append(c.endLead() != null ? PILL_X : COIL_X + 10).append(' ').append(bot)
+                .append(" H").append(COIL_X).append(" V").append(mid + 12).append("\" fill=\"none\" stroke=\"")
+                .append(MUTED).append("\" stroke-width=\"2.2\" stroke-dasharray=\"5 3\"/>");
+        // the break: two short slashes across the gap
+        sb.append(line(COIL_X - 7, mid - 4, COIL_X + 7, mid - 10, INK, 1.6, null))
+                .append(line(COIL_X - 7, mid + 10, COIL_X + 7, mid + 4, INK, 1.6, null));
+        sb.append(text(COIL_X - 30, mid + 5, 14, INK, "open").replace("<text ",
+                "<text text-anchor=\"end\" font-weight=\"700\" "));
+        if (c.endLead() == null) {
+            sb.append(text(COIL_X + 16, bot + 4, 12, MUTED, c.endNote()).replace("<text ",
+                    "<text font-style=\"italic\" "));
+        }
+        sb.append("</g>\n");
     }
 
     private static void drawPhaseLabel(StringBuilder sb, String phase, int top, int bot) {
