@@ -389,11 +389,12 @@ public final class WavReader implements SampleStream {
             return -1;
         }
         if (format == FORMAT_FLOAT) {
-            // Frames before a non-finite sample are delivered; the next read reports it.
+            // Frames before a non-finite or absurd sample are delivered; the next read reports it.
             int good = finiteFrames(frames);
             if (good < frames) {
-                pendingError = at(position + (long) good * blockAlign, null, "holds a non-finite sample in frame "
-                        + ((position - dataStart) / blockAlign + good) + ": expected finite float samples");
+                pendingError = at(position + (long) good * blockAlign, null, "holds a non-finite or absurd sample in frame "
+                        + ((position - dataStart) / blockAlign + good) + ": expected finite float samples of magnitude"
+                        + " at most " + InputLimits.MAX_SAMPLE_MAGNITUDE);
                 if (good == 0) {
                     InputFormatException e = pendingError;
                     pendingError = null;
@@ -411,14 +412,14 @@ public final class WavReader implements SampleStream {
         return frames;
     }
 
-    /** Number of leading frames in the buffer whose float samples are all finite. */
+    /** Number of leading frames in the buffer whose float samples are all finite and of plausible magnitude. */
     private int finiteFrames(int frames) {
         int bytesPerSample = bits / 8;
         int samples = frames * channels.size();
         for (int k = 0; k < samples; k++) {
             int p = k * bytesPerSample;
             double v = bits == 32 ? (float) FLOAT_LE.get(buf, p) : (double) DOUBLE_LE.get(buf, p);
-            if (!Double.isFinite(v)) {
+            if (!InputLimits.plausibleMagnitude(v)) { // false for NaN and infinities too
                 return k / channels.size();
             }
         }

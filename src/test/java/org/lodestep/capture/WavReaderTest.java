@@ -249,8 +249,20 @@ class WavReaderTest {
             assertEquals(1, r.read(buf, 0, 8));
             assertEquals(0.5, buf[0][0]);
             InputFormatException e = assertThrows(InputFormatException.class, () -> r.read(buf, 0, 8));
-            assertTrue(e.expected().contains("non-finite sample in frame 1"), e.getMessage());
+            assertTrue(e.expected().contains("non-finite or absurd sample in frame 1"), e.getMessage());
             assertEquals("byte " + (44 + 4), e.column());
+        }
+    }
+
+    @Test
+    void rejectsAFloatSampleBeyondThePlausibleMagnitude() throws Exception {
+        // 1e38 is a finite float, but its square overflows a power spectrum: refused like a non-finite one
+        byte[] data = ByteBuffer.allocate(8).order(ByteOrder.LITTLE_ENDIAN).putFloat(0.5f).putFloat(1e38f).array();
+        try (WavReader r = read(wav(fmt(3, 1, 1000, 32), data))) {
+            double[][] buf = new double[1][8];
+            assertEquals(1, r.read(buf, 0, 8));
+            InputFormatException e = assertThrows(InputFormatException.class, () -> r.read(buf, 0, 8));
+            assertTrue(e.expected().contains("absurd sample in frame 1"), e.getMessage());
         }
     }
 }
