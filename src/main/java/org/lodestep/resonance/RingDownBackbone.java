@@ -4,17 +4,17 @@ import java.util.ArrayList;
 import java.util.List;
 
 /**
- * A ring-down measured cycle by cycle: zero crossings about the settled value give each cycle's period, parabola-
- * least-squares half waves its amplitude, and the ratio of successive peaks its logarithmic decrement. The backbone
+ * A ring-down measured cycle by cycle: zero crossings about the settled value give each cycle's period, each half
+ * wave fitted by least squares its amplitude, and the ratio of successive peaks its logarithmic decrement. The backbone
  * (frequency against amplitude) of a hybrid stepper softens: its restoring torque T_h·sin(N_r·δ) stiffens less than
  * linearly, so a large swing rings slower. For small swings the shift is quadratic in amplitude, f ≈ f_0·(1 − κ·a²)
  * (the Lindstedt–Poincaré result for a softening cubic term: A. H. Nayfeh, D. T. Mook, <i>Nonlinear
  * Oscillations</i>, Wiley 1979, ch. 4; from memory), so the small-signal frequency f_0 and decrement δ_0 are the
  * intercepts of weighted straight-line fits against a² (weights a², as the noise's effect falls with the swing;
  * weighted least squares with known relative variances: P. R. Bevington and D. K. Robinson, <i>Data Reduction and
- * Error Analysis for the Physical Sciences</i>, 3rd ed., McGraw-Hill 2003, ch. 6; from memory) over the cycles whose amplitude is at most {@link #SMALL_SWING} of the
- * largest, with their standard errors; ζ = δ/√(4π² + δ²) (S. S. Rao, <i>Mechanical Vibrations</i>, 5th ed., 2011,
- * ch. 2). The cycle frequencies are damped frequencies, so f_0 is the damped intercept divided by √(1 − ζ²). Zero
+ * Error Analysis for the Physical Sciences</i>, 3rd ed., McGraw-Hill 2003, ch. 6; from memory) over the cycles
+ * whose amplitude is at most {@link #SMALL_SWING} of the largest, with their standard errors; ζ = δ/√(4π² + δ²)
+ * (S. S. Rao, <i>Mechanical Vibrations</i>, 5th ed., 2011, ch. 2). The cycle frequencies are damped frequencies, so f_0 is the damped intercept divided by √(1 − ζ²). Zero
  * crossings need a hysteresis of {@link #HYSTERESIS} times the tail's noise, and cycles within {@link #NOISE_MARGIN}
  * times that noise are not used (common practice).
  */
@@ -124,7 +124,8 @@ final class RingDownBackbone {
         // dζ/dδ = 4π²/(4π² + δ²)^1.5
         double dz = 4 * Math.PI * Math.PI / Math.pow(4 * Math.PI * Math.PI + d0 * d0, 1.5);
         return new Result(List.copyOf(cycles), f0, orZero(freq.interceptStdErr()), zeta,
-                orZero(decay.interceptStdErr()) * dz, cycles.get(0).frequencyHz(), (int) freq.n, firstTail < 0 ? firstSmall : firstTail);
+                orZero(decay.interceptStdErr()) * dz, cycles.get(0).frequencyHz(), freq.n,
+                firstTail < 0 ? firstSmall : firstTail);
     }
 
     private static double orZero(double v) {
