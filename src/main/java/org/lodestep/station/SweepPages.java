@@ -236,10 +236,11 @@ final class SweepPages {
         try (PrintWriter out = new PrintWriter(stall)) {
             ResonanceText.stall(out, r.sweep().stall(), r.units());
         }
-        // lost synchronism is the first thing the text says, and the first thing the page shows
+        // lost synchronism is the first thing the text says, and the first thing the page shows: a warning (the
+        // reports mark it so), since the sweep itself worked
         String synchronism = r.sweep().stall().lostSynchronism()
                 ? "<div class=\"problem\" role=\"alert\"><pre class=\"plain\">" + Layout.symbol(
-                org.lodestep.report.html.Status.FAIL) + " " + Layout.esc(stall.toString().strip()) + "</pre></div>"
+                org.lodestep.report.html.Status.WARN) + " " + Layout.esc(stall.toString().strip()) + "</pre></div>"
                 : "<p>" + Layout.esc(stall.toString().strip()) + "</p>";
         String html = "<h2>Result: " + n + " resonance band" + (n == 1 ? "" : "s") + "</h2>" + synchronism + "<p>"
                 + Layout.esc(origin) + ". Avoid-list: <code>" + Layout.esc(avoid.toString()) + "</code></p>"
