@@ -154,9 +154,29 @@ public final class LeadsHtml {
         return sb.append("</ul></section>").toString();
     }
 
+    /**
+     * The verdict of an identification, one rule for every front end: a fault FAILs; an unsettled or unknown layout
+     * is a warning; a wiring the tool had to guess (which coils pair, where each starts) is PROVISIONAL; a warning
+     * finding makes it a warning; otherwise PASS.
+     */
+    public static Status status(Identification id) {
+        if (id.hasError()) {
+            return Status.FAIL;
+        }
+        if (!id.determined() || id.topology() == Topology.UNKNOWN) {
+            return Status.WARN;
+        }
+        DriverWiring first = id.connections().isEmpty() ? null : id.connections().get(0);
+        if (first != null && !first.verified()) {
+            return Status.PROVISIONAL;
+        }
+        return id.findings().stream().anyMatch(f -> f.severity() == Severity.WARNING) ? Status.WARN : Status.PASS;
+    }
+
     private static void verdict(HtmlReport.Builder b, Identification id) {
         DriverWiring first = id.connections().isEmpty() ? null : id.connections().get(0);
         String answer = first == null ? null : LeadsTextReport.wiringLine(first);
+        Status st = status(id);
         if (id.hasError()) {
             Finding f = id.findings().get(0);
             b.verdict(Status.FAIL, "Fault found: do not use this motor as it is",
@@ -173,13 +193,12 @@ public final class LeadsHtml {
             String layout = id.topology().label() + " motor, " + id.windings().size()
                     + (id.topology() == Topology.FIVE_LEAD || id.topology() == Topology.EIGHT_LEAD
                     ? " half-windings" : " windings");
-            if (first != null && !first.verified()) {
+            if (st == Status.PROVISIONAL) {
                 // the tool guessed which coils pair and where each starts: usable, but not a pass
-                b.verdict(Status.PROVISIONAL, layout + ": wiring provisional", answer, (warned
+                b.verdict(st, layout + ": wiring provisional", answer, (warned
                         ? "See the findings before wiring it. " : "") + first.note());
             } else {
-                b.verdict(warned ? Status.WARN : Status.PASS, layout, answer,
-                        warned ? "See the findings before wiring it." : null);
+                b.verdict(st, layout, answer, warned ? "See the findings before wiring it." : null);
             }
         }
     }

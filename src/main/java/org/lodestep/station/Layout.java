@@ -29,6 +29,16 @@ final class Layout {
         return "<span class=\"sym\" aria-hidden=\"true\">" + s.symbol() + "</span>";
     }
 
+    /** The verdict box's style for a status: pass, fail, or incomplete for everything between. */
+    static String verdictClass(Status s) {
+        return s == Status.PASS ? "pass" : s == Status.FAIL ? "fail" : "incomplete";
+    }
+
+    /** A layout's name under its verdict, with the word "provisional" where the wiring is a guess. */
+    static String layoutLabel(Status s, String layout) {
+        return esc((s == Status.PROVISIONAL ? s.word() + ": " : "") + layout);
+    }
+
     /**
      * A whole page.
      *

@@ -69,22 +69,7 @@ final class LeadsPages {
         Tasks.Task task = desk.tasks.submit(t -> {
             LeadsOnRig.Result r;
             try (RigClient c = RigClient.open(address)) {
-                r = LeadsOnRig.run(c, LeadsSettings.DEFAULT, new LeadsOnRig.Listener() {
-                    @Override
-                    public void step(String step) {
-                        t.step(step);
-                    }
-
-                    @Override
-                    public void advanced(long done, long total) {
-                        t.advanced(done, total);
-                    }
-
-                    @Override
-                    public void note(String message) {
-                        t.note(message);
-                    }
-
+                r = LeadsOnRig.run(c, LeadsSettings.DEFAULT, new TaskProgress.Leads(t) {
                     @Override
                     public void connected(RigInfo info, List<String> leads, int allPairs) {
                         t.note(IdentifyProgressText.leadsConnected(address, info, leads.size(), allPairs));
@@ -103,9 +88,9 @@ final class LeadsPages {
             String title = r.motorSerial() == null ? "Motor on the rig" : r.motorSerial();
             rigReports.put(id, LeadsHtml.report(title, address, r.identification()).html());
             Identification idn = r.identification();
-            Status st = idn.hasError() ? Status.FAIL : idn.determined() ? Status.PASS : Status.WARN;
-            String html = "<section class=\"verdict " + (st == Status.PASS ? "pass" : st == Status.FAIL ? "fail"
-                    : "incomplete") + "\"><p class=\"big\">" + Layout.symbol(st) + " " + Layout.esc(idn.topology().label())
+            Status st = LeadsHtml.status(idn);
+            String html = "<section class=\"verdict " + Layout.verdictClass(st) + "\"><p class=\"big\">"
+                    + Layout.symbol(st) + " " + Layout.layoutLabel(st, idn.topology().label())
                     + "</p><p>" + Layout.esc(IdentifyProgressText.leadsDone(r.readings(), r.allPairs())) + " Outputs "
                     + "off.</p></section><p class=\"actions\"><a href=\"/leads/rig/" + id + "\">Wiring guide and report "
                     + "(print view)</a></p><iframe class=\"report\" title=\"Lead identification on the rig\" src=\""
@@ -237,10 +222,11 @@ final class LeadsPages {
                             + "data-value=\"stop\">Stop</button></form>");
         } else if (r != null) {
             Identification id = r.identification();
-            Status st = id.hasError() ? Status.FAIL : id.determined() ? Status.PASS : Status.WARN;
-            sb.append("<section id=\"next\" class=\"verdict ").append(st == Status.PASS ? "pass" : st == Status.FAIL
-                            ? "fail" : "incomplete").append("\" aria-live=\"assertive\"><p class=\"big\">")
-                    .append(Layout.symbol(st)).append(' ').append(Layout.esc(id.topology().label())).append("</p><p>")
+            Status st = LeadsHtml.status(id);
+            sb.append("<section id=\"next\" class=\"verdict ").append(Layout.verdictClass(st))
+                    .append("\" aria-live=\"assertive\"><p class=\"big\">")
+                    .append(Layout.symbol(st)).append(' ').append(Layout.layoutLabel(st, id.topology().label()))
+                    .append("</p><p>")
                     .append(r.readings()).append(" of ").append(r.allPairs()).append(" pairs measured")
                     .append(r.stopped() == null ? "" : "; stopped before the answer was certain").append("</p></section>")
                     .append("<p class=\"actions\"><a href=\"/leads/probes/").append(Layout.esc(p.id))

@@ -120,20 +120,10 @@ final class MotorPages {
     }
 
     /** Each stage of the rig sequence as an event the page lists, in the command line's words. */
-    private record StageEvents(Tasks.Task t) implements MotorOnRig.Listener {
+    private record StageEvents(Tasks.Task t) implements MotorOnRig.Listener, TaskProgress {
         @Override
-        public void step(String step) {
-            t.step(step);
-        }
-
-        @Override
-        public void advanced(long done, long total) {
-            t.advanced(done, total);
-        }
-
-        @Override
-        public void note(String message) {
-            t.note(message);
+        public Tasks.Task task() {
+            return t;
         }
 
         private void stage(String text) {
