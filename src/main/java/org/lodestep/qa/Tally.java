@@ -1,5 +1,6 @@
 package org.lodestep.qa;
 
+import java.util.Collection;
 import java.util.List;
 
 /**
@@ -24,7 +25,18 @@ public record Tally(int passed, int failed, int incomplete) {
 
     /** The tally of records in test order: each serial number counted once, with its latest record's verdict. */
     public static Tally of(List<StoredRecord> records) {
+        return of(records, List.of());
+    }
+
+    /**
+     * As {@link #of(List)}, with the serial numbers that could not be recorded counted as incomplete motors, each once
+     * and only when no record of it exists.
+     */
+    public static Tally of(List<StoredRecord> records, Collection<String> notRecorded) {
         LotTally t = new LotTally();
+        for (String serial : notRecorded) {
+            t.add(serial, Verdict.INCOMPLETE); // a record of the same serial below replaces it
+        }
         for (StoredRecord r : records) {
             t.add(r.submission().serial(), r.submission().verdict());
         }

@@ -41,10 +41,7 @@ public final class QaHtml {
     public static HtmlReport check(String title, List<StoredRecord> records, double testVoltageV,
                                    Map<String, String> notRecorded) {
         HtmlReport.Builder b = HtmlReport.builder("Incoming QA check", title);
-        Tally tally = Tally.of(records);
-        long unrecordedMotors = notRecorded.keySet().stream()
-                .filter(sn -> records.stream().noneMatch(r -> r.submission().serial().equals(sn))).count();
-        tally = new Tally(tally.passed(), tally.failed(), tally.incomplete() + (int) unrecordedMotors);
+        Tally tally = Tally.of(records, notRecorded.keySet());
         if (!records.isEmpty()) {
             Submission s = records.get(0).submission();
             b.meta("Part", s.partNumber() + " rev " + s.partRevision() + ", spec v" + s.specVersion())
