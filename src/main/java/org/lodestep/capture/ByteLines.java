@@ -27,11 +27,40 @@ final class ByteLines {
     private int lineNumber;
     /** Index just after the last newline in the buffer; every line starting before it is whole in the buffer. */
     private int safeEnd;
+    /** Offset in the stream of {@code buf[0]}. */
+    private long bufferOffset;
 
     ByteLines(InputStream in, String source, int bufferBytes) {
+        this(in, source, bufferBytes, 0);
+    }
+
+    /**
+     * Lines of a stream that starts after line {@code linesBefore} of its file (a chunk of a larger file), so line
+     * numbers are the file's.
+     */
+    ByteLines(InputStream in, String source, int bufferBytes, int linesBefore) {
         this.in = in;
         this.source = source;
         this.buf = new byte[bufferBytes];
+        this.lineNumber = linesBefore;
+    }
+
+    /**
+     * Lines of a chunk of whole lines already in memory ({@code b[0 ... length-1]}), numbered from after line
+     * {@code linesBefore} of its file; the array is used as the buffer, not copied.
+     */
+    static ByteLines ofChunk(byte[] b, int length, String source, int linesBefore) {
+        ByteLines l = new ByteLines(InputStream.nullInputStream(), source, 0, linesBefore);
+        l.buf = b;
+        l.limit = length;
+        l.eof = true;
+        for (int i = length - 1; i >= 0; i--) {
+            if (b[i] == '\n') {
+                l.safeEnd = i + 1;
+                break;
+            }
+        }
+        return l;
     }
 
     /** Advances to the next line; false at the end of the input. */
@@ -73,6 +102,7 @@ final class ByteLines {
 
     private void fill() throws IOException, InputFormatException {
         int unread = limit - pos;
+        bufferOffset += pos;
         if (pos > 0) {
             System.arraycopy(buf, pos, buf, 0, unread);
         } else if (unread == buf.length) {
@@ -102,6 +132,11 @@ final class ByteLines {
     /** Position of the first unread byte. */
     int pos() {
         return pos;
+    }
+
+    /** Offset in the stream of the first unread byte. */
+    long offset() {
+        return bufferOffset + pos;
     }
 
     /**

@@ -38,6 +38,8 @@ import ch.randelshofer.fastdoubleparser.JavaDoubleParser;
  */
 public final class TimeSeriesCsvReader implements SampleStream {
     private static final int BUFFER_BYTES = 1 << 20;
+    /** Files at least this large have their rows parsed on every core ({@link ParallelCsvRows}). */
+    static final long PARALLEL_MIN_BYTES = 16L << 20;
     private static final String BEYOND_LIMIT = "is beyond the plausible magnitude "
             + InputLimits.MAX_SAMPLE_MAGNITUDE;
 
@@ -63,9 +65,26 @@ public final class TimeSeriesCsvReader implements SampleStream {
     private final int[] numberEnd = new int[1];
     private boolean closed;
 
-    private TimeSeriesCsvReader(InputStream in, String source) throws IOException, InputFormatException {
+    /** The file read, when a file: a large one has its later rows parsed on every core. */
+    private final Path file;
+    /** The parallel read of the rows after the first ones, once started; null before, and for streams. */
+    private ParallelCsvRows parallel;
+    private boolean parallelTried;
+    private long parallelMinBytes = Long.MAX_VALUE;
+    private int chunkBytes = ParallelCsvRows.CHUNK_BYTES;
+    private int threads = 1;
+    /** Lines of the file before the next parallel chunk (the consumer's count). */
+    private int linesBeforeChunk;
+    /** The serial read that took over from the parallel one at a chunk it could not take; null until then. */
+    private TimeSeriesCsvReader serialTail;
+    /** For a chunk parser: where each row's time stamp (s) and line go, unchecked; null in a reader. */
+    private double[] recordTimesS;
+    private int[] recordLines;
+
+    private TimeSeriesCsvReader(InputStream in, String source, Path file) throws IOException, InputFormatException {
         this.in = in;
         this.source = source;
+        this.file = file;
         this.lines = new ByteLines(in, source, BUFFER_BYTES);
         lines.skipByteOrderMark();
         Map<String, String> meta = new LinkedHashMap<>();
@@ -159,12 +178,80 @@ public final class TimeSeriesCsvReader implements SampleStream {
         this.frameIndex = n;
     }
 
-    /** Opens a CSV file for streaming. */
+    /**
+     * A reader of the rest of {@code parent}'s rows from {@code lines} on, sharing its columns and dialect. With
+     * {@code axis} null (a chunk parser) time stamps are recorded, not checked; else they are checked by {@code axis},
+     * the parent's, whose clock state carries on.
+     */
+    private TimeSeriesCsvReader(TimeSeriesCsvReader parent, InputStream in, ByteLines lines, TimeAxis axis,
+                                long firstFrame) {
+        this.in = in;
+        this.source = parent.source;
+        this.file = null;
+        this.lines = lines;
+        this.columns = parent.columns;
+        this.decimalComma = parent.decimalComma;
+        this.channelOfColumn = parent.channelOfColumn;
+        this.metadata = parent.metadata;
+        this.sampleRateHz = parent.sampleRateHz;
+        this.startTimeS = parent.startTimeS;
+        this.axis = axis;
+        this.pending = new double[parent.pending.length][0];
+        this.frameIndex = firstFrame;
+    }
+
+    /** Parses one chunk of whole lines of this reader's file, for {@link ParallelCsvRows}. */
+    static final class ChunkParser {
+        private final TimeSeriesCsvReader rows;
+
+        private ChunkParser(TimeSeriesCsvReader rows) {
+            this.rows = rows;
+        }
+
+        /** As {@link TimeSeriesCsvReader#read}, each row's time stamp (s) and line in the chunk recorded alongside. */
+        int readRows(double[][] dest, int at, int max) throws IOException, InputFormatException {
+            return rows.readRows(dest, at, max);
+        }
+
+        /** Arrays grown by the caller, same indexing as the rows. */
+        void recordInto(double[] timesS, int[] lines) {
+            rows.recordTimesS = timesS;
+            rows.recordLines = lines;
+        }
+
+        /** Lines of the chunk read so far. */
+        int lineNumber() {
+            return rows.lines.lineNumber();
+        }
+    }
+
+    ChunkParser chunkParser(byte[] chunk, int length, double[] timesS, int[] lines) {
+        ChunkParser p = new ChunkParser(new TimeSeriesCsvReader(this, InputStream.nullInputStream(),
+                ByteLines.ofChunk(chunk, length, source, 0), null, 0));
+        p.recordInto(timesS, lines);
+        return p;
+    }
+
+    /** Opens a CSV file for streaming; a large file's rows are parsed on every core. */
     public static TimeSeriesCsvReader open(Path path) throws IOException, InputFormatException {
+        return open(path, PARALLEL_MIN_BYTES, ParallelCsvRows.CHUNK_BYTES,
+                Runtime.getRuntime().availableProcessors());
+    }
+
+    /**
+     * Opens a CSV file, parsing its rows on {@code threads} threads in chunks of {@code chunkBytes} when it is at
+     * least {@code parallelMinBytes} long and {@code threads > 1}: tests cross many chunk bounds with small files.
+     */
+    static TimeSeriesCsvReader open(Path path, long parallelMinBytes, int chunkBytes, int threads)
+            throws IOException, InputFormatException {
         InputFiles.requireFile(path, "a time-series CSV");
         InputStream in = Files.newInputStream(path);
         try {
-            return new TimeSeriesCsvReader(in, path.toString());
+            TimeSeriesCsvReader r = new TimeSeriesCsvReader(in, path.toString(), path);
+            r.parallelMinBytes = parallelMinBytes;
+            r.chunkBytes = chunkBytes;
+            r.threads = threads;
+            return r;
         } catch (IOException | InputFormatException | RuntimeException e) {
             in.close();
             throw e;
@@ -176,7 +263,7 @@ public final class TimeSeriesCsvReader implements SampleStream {
      */
     public static TimeSeriesCsvReader open(InputStream in, String source) throws IOException, InputFormatException {
         try {
-            return new TimeSeriesCsvReader(in, source);
+            return new TimeSeriesCsvReader(in, source, null);
         } catch (IOException | InputFormatException | RuntimeException e) {
             in.close();
             throw e;
@@ -419,6 +506,9 @@ public final class TimeSeriesCsvReader implements SampleStream {
         if (closed) {
             throw new IOException(source + ": read after close");
         }
+        if (serialTail != null) {
+            return serialTail.read(dest, offset, maxFrames);
+        }
         if (pendingError != null) {
             InputFormatException e = pendingError;
             pendingError = null;
@@ -448,6 +538,17 @@ public final class TimeSeriesCsvReader implements SampleStream {
             pendingPos += take;
             k = take;
         }
+        if (k < maxFrames && startParallel()) {
+            k += parallel.read(dest, offset + k, maxFrames - k, parallelCheck);
+            if (k == 0) {
+                long from = parallel.serialFrom();
+                if (from >= 0) {
+                    continueSerially(from);
+                    return serialTail.read(dest, offset, maxFrames);
+                }
+            }
+            return k == 0 && maxFrames > 0 ? -1 : k;
+        }
         while (k < maxFrames) {
             k += parseWholeLinesInPlace(dest, offset + k, maxFrames - k);
             if (k >= maxFrames) {
@@ -460,7 +561,10 @@ public final class TimeSeriesCsvReader implements SampleStream {
             if (!parseRow(dest, offset + k)) {
                 continue;
             }
-            if (axis != null) {
+            if (recordTimesS != null) {
+                recordTimesS[offset + k] = rowTimeS;
+                recordLines[offset + k] = lines.lineNumber();
+            } else if (axis != null) {
                 axis.check(frameIndex, rowTimeS, lines.lineNumber());
             }
             frameIndex++;
@@ -523,7 +627,10 @@ public final class TimeSeriesCsvReader implements SampleStream {
                     timeS = v;
                 }
             }
-            if (timeCol >= 0) {
+            if (recordTimesS != null) {
+                recordTimesS[at + rows] = timeS * columns.timeToSeconds;
+                recordLines[at + rows] = lines.lineNumber() + 1;
+            } else if (timeCol >= 0) {
                 axis.check(frameIndex, timeS * columns.timeToSeconds, lines.lineNumber() + 1);
             }
             lines.consumeLine(q);
@@ -569,9 +676,64 @@ public final class TimeSeriesCsvReader implements SampleStream {
         return false;
     }
 
+    /**
+     * Starts the parallel read once the first rows are delivered, for a large file on a machine with a second core;
+     * true while it runs.
+     */
+    private boolean startParallel() throws IOException {
+        if (parallel != null) {
+            return true;
+        }
+        if (parallelTried || file == null || pendingPos < pendingCount) {
+            return false;
+        }
+        parallelTried = true;
+        if (threads < 2 || Files.size(file) < parallelMinBytes) {
+            return false;
+        }
+        linesBeforeChunk = lines.lineNumber();
+        parallel = new ParallelCsvRows(this, file, lines.offset(), threads, chunkBytes);
+        return true;
+    }
+
+    /** The consumer's side of the parallel read: each row's time stamp checked in file order, lines counted. */
+    private final ParallelCsvRows.RowCheck parallelCheck = new ParallelCsvRows.RowCheck() {
+        @Override
+        public void row(double timeS, int lineInChunk) throws InputFormatException {
+            if (axis != null) {
+                axis.check(frameIndex, timeS, linesBeforeChunk + lineInChunk);
+            }
+            frameIndex++;
+        }
+
+        @Override
+        public void linesPassed(int chunkLines) {
+            linesBeforeChunk += chunkLines;
+        }
+    };
+
+    /** Hands the rest of the file, from byte {@code from} (a line start), to a serial read. */
+    private void continueSerially(long from) throws IOException {
+        java.nio.channels.FileChannel ch = java.nio.channels.FileChannel.open(file);
+        ch.position(from);
+        InputStream tail = java.nio.channels.Channels.newInputStream(ch);
+        serialTail = new TimeSeriesCsvReader(this, tail, new ByteLines(tail, source, BUFFER_BYTES, linesBeforeChunk),
+                axis, frameIndex);
+        parallel.close();
+    }
+
     @Override
     public void close() throws IOException {
         closed = true;
-        in.close();
+        try {
+            if (parallel != null) {
+                parallel.close();
+            }
+            if (serialTail != null) {
+                serialTail.close();
+            }
+        } finally {
+            in.close();
+        }
     }
 }

@@ -13,6 +13,7 @@ import org.lodestep.sample.InputLimits;
 import org.lodestep.qa.DatabaseUrls;
 import org.lodestep.qa.StoreException;
 import org.lodestep.rig.RigException;
+import org.lodestep.workflow.InputDigests;
 
 import picocli.CommandLine;
 import picocli.CommandLine.Command;
@@ -99,6 +100,8 @@ public final class Main implements Runnable {
             out.flush();
             return ExitCode.OK;
         }
+        // Large input files are hashed for the report's provenance while the command works on them.
+        InputDigests.start(java.util.Arrays.asList(args));
         CommandLine cl = configure(TREE.buildFor(new Main(), args));
         cl.setOut(out);
         PrintWriter redacted = new PrintWriter(new RedactingWriter(err), true);

@@ -64,8 +64,15 @@ public record SweepLaw(SweepShape shape, double startFullStepsPerS, double endFu
      */
     void fullStepsAt(long firstSample, double sampleRateHz, double[] out, int n) {
         if (shape == SweepShape.LINEAR) {
+            // fullStepsAt(t) with its constants in locals, the operations in the same order
+            double start = startFullStepsPerS;
+            double span = endFullStepsPerS - startFullStepsPerS;
+            double twiceDuration = 2 * durationS;
+            double duration = durationS;
             for (int i = 0; i < n; i++) {
-                out[i] = fullStepsAt((firstSample + i) / sampleRateHz);
+                double timeS = (firstSample + i) / sampleRateHz;
+                out[i] = timeS >= 0 && timeS <= duration ? start * timeS + span * timeS * timeS / twiceDuration
+                        : Double.NaN;
             }
             return;
         }

@@ -54,41 +54,87 @@ final class SynchronismDetector {
      * close the open window).
      */
     void feed(double[] x, double[] fullSteps, int off, int len) {
-        for (int i = off; i < off + len; i++, index++) {
+        // The per-sample state lives in locals between window changes: field traffic in this loop, run for every
+        // sample of a capture, cost more than the arithmetic (the first-tier compiler keeps no field in a register).
+        final double limitSteps = MIN_PERIODS * periodFullSteps;
+        final double limitSamples = MIN_WINDOW_S * sampleRateHz;
+        final double period = periodFullSteps;
+        // A power-of-two period (2 or 4 full steps) divides exactly as a multiplication by its reciprocal.
+        final boolean exactReciprocal = period == Math.scalb(1.0, Math.getExponent(period));
+        final double reciprocal = 1 / period;
+        double[] bs = binSum;
+        int[] bc = binCount;
+        int nb = bins;
+        long idx = index;
+        long wStart = windowStart;
+        double start = startSteps;
+        double prev = previousSteps;
+        double last = lastSteps;
+        double s = sum;
+        double ss = sumSquares;
+        int count = n;
+        for (int i = off, end = off + len; i < end; i++, idx++) {
             double steps = fullSteps[i];
-            if (!Double.isFinite(steps) || !Double.isFinite(x[i])) {
-                close();
-                previousSteps = Double.NaN;
+            double v = x[i];
+            if (!Double.isFinite(steps) || !Double.isFinite(v)) {
+                if (wStart >= 0) {
+                    store(idx, wStart, start, last, s, ss, count);
+                    close();
+                    wStart = -1;
+                }
+                prev = Double.NaN;
                 continue;
             }
-            double increment = steps - previousSteps;
-            previousSteps = steps;
+            double increment = steps - prev;
+            prev = steps;
             if (!(increment > 0)) {
                 continue; // the first sample, or a command at rest: no rate to fold by
             }
-            if (windowStart < 0) {
+            if (wStart < 0 || steps - start >= limitSteps && idx - wStart >= limitSamples) {
+                if (wStart >= 0) {
+                    store(idx, wStart, start, last, s, ss, count);
+                    close();
+                }
+                index = idx;
                 open(steps, increment);
-            } else if (steps - startSteps >= MIN_PERIODS * periodFullSteps
-                    && index - windowStart >= MIN_WINDOW_S * sampleRateHz) {
-                close();
-                open(steps, increment);
+                bs = binSum;
+                bc = binCount;
+                nb = bins;
+                wStart = idx;
+                start = steps;
+                s = 0;
+                ss = 0;
+                count = 0;
             }
-            double phase = steps / periodFullSteps;
+            double phase = exactReciprocal ? steps * reciprocal : steps / period;
             // floor by a cast (exact for these magnitudes; the library call is not inlined by the first-tier
             // compiler and was a fifth of this loop); the fraction times bins is non-negative, so a cast floors it
             long whole = (long) phase;
             if (phase < whole) {
                 whole--;
             }
-            int b = (int) ((phase - whole) * bins);
-            b = Math.min(bins - 1, Math.max(0, b));
-            binSum[b] += x[i];
-            binCount[b]++;
-            sum += x[i];
-            sumSquares += x[i] * x[i];
-            n++;
-            lastSteps = steps;
+            int b = (int) ((phase - whole) * nb);
+            b = Math.min(nb - 1, Math.max(0, b));
+            bs[b] += v;
+            bc[b]++;
+            s += v;
+            ss += v * v;
+            count++;
+            last = steps;
         }
+        previousSteps = prev;
+        store(idx, wStart, start, last, s, ss, count);
+    }
+
+    /** Writes the loop's locals back to the fields, before a window closes and when a block ends. */
+    private void store(long idx, long wStart, double start, double last, double s, double ss, int count) {
+        index = idx;
+        windowStart = wStart;
+        startSteps = start;
+        lastSteps = last;
+        sum = s;
+        sumSquares = ss;
+        n = count;
     }
 
     /** Opens a window with one sample per bin over one period at the present rate (8 ... 1024 bins). */

@@ -60,7 +60,10 @@ public record Provenance(String reportId, String tool, List<String> commandLine,
         return make("lodestep " + toolVersion, commandLine, now.truncatedTo(ChronoUnit.SECONDS), List.of(), null);
     }
 
-    /** This provenance with one more input file, hashed now (a file that cannot be read keeps a note instead). */
+    /**
+     * This provenance with one more input file, hashed now or taken from the hash {@link InputDigests#start} began at
+     * the start of the run (a file that cannot be read keeps a note instead).
+     */
     public Provenance withInput(String role, Path file) {
         List<InputFile> more = new ArrayList<>(inputs);
         more.add(hash(role, file));
@@ -99,7 +102,7 @@ public record Provenance(String reportId, String tool, List<String> commandLine,
 
     private static InputFile hash(String role, Path file) {
         try {
-            return new InputFile(role, file.toString(), Files.size(file), Hashes.sha256(file), "");
+            return new InputFile(role, file.toString(), Files.size(file), InputDigests.sha256(file), "");
         } catch (IOException | RuntimeException e) {
             return new InputFile(role, file.toString(), -1, null, "not readable when hashed: "
                     + e.getClass().getSimpleName());

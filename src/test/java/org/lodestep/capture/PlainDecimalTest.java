@@ -47,6 +47,50 @@ class PlainDecimalTest {
         }
     }
 
+    /**
+     * The same check where the number sits inside a longer buffer, so its digits are taken eight bytes at a time:
+     * any byte value may follow the number's end, and lengths fall on and beside the word size.
+     */
+    @Test
+    void matchesJdkParserInsideLongerBuffersWhateverBytesFollow() {
+        SplittableRandom rnd = new SplittableRandom(7);
+        for (int n = 0; n < 200_000; n++) {
+            int intDigits = rnd.nextInt(0, 16);
+            int fracDigits = rnd.nextInt(intDigits == 0 ? 1 : 0, Math.max(2, 16 - intDigits));
+            StringBuilder sb = new StringBuilder(rnd.nextInt(4) == 0 ? "-" : "");
+            for (int i = 0; i < intDigits; i++) {
+                sb.append((char) ('0' + rnd.nextInt(10)));
+            }
+            if (fracDigits > 0) {
+                sb.append('.');
+            }
+            for (int i = 0; i < fracDigits; i++) {
+                sb.append((char) ('0' + rnd.nextInt(10)));
+            }
+            String s = sb.toString();
+            byte[] text = s.getBytes(StandardCharsets.US_ASCII);
+            int lead = rnd.nextInt(0, 9);
+            byte[] b = new byte[lead + text.length + 1 + rnd.nextInt(0, 12)];
+            for (int i = 0; i < b.length; i++) {
+                b[i] = (byte) rnd.nextInt(256);
+            }
+            System.arraycopy(text, 0, b, lead, text.length);
+            byte end;
+            do {
+                end = (byte) rnd.nextInt(256);
+            } while (end >= '0' && end <= '9' || end == '.' || end == 'e' || end == 'E');
+            b[lead + text.length] = end;
+            int[] endOut = new int[1];
+            double v = PlainDecimal.parse(b, lead, false, endOut);
+            if (intDigits + fracDigits > 15) {
+                assertTrue(Double.isNaN(v), s);
+                continue;
+            }
+            assertEquals(Double.doubleToRawLongBits(Double.parseDouble(s)), Double.doubleToRawLongBits(v), s);
+            assertEquals(lead + text.length, endOut[0], "end of " + s);
+        }
+    }
+
     @Test
     void readsDecimalCommaOnlyWhenAsked() {
         assertEquals(0.25, parse("0,25", true));
