@@ -44,18 +44,18 @@ public record SweepLaw(SweepShape shape, double startFullStepsPerS, double endFu
 
     /**
      * Full steps commanded from t = 0 to t (the integral of the rate), real-valued; NaN outside the sweep.
-     * Linear: r0·t + (r1 − r0)·t²/(2T); log: r0·T/ln(r1/r0)·((r1/r0)^(t/T) − 1).
+     * Linear: r0·t + (r1 − r0)·t²/(2T), worked out as t·(r0 + (r1 − r0)/(2T)·t); log: r0·T/ln(r1/r0)·((r1/r0)^(t/T)
+     * − 1), with the exponent worked out as t·(ln(r1/r0)/T). The forms keep divisions out of the per-sample loop.
      */
     public double fullStepsAt(double timeS) {
         if (!(timeS >= 0 && timeS <= durationS)) {
             return Double.NaN;
         }
         if (shape == SweepShape.LINEAR) {
-            return startFullStepsPerS * timeS
-                    + (endFullStepsPerS - startFullStepsPerS) * timeS * timeS / (2 * durationS);
+            return timeS * (startFullStepsPerS + halfAcceleration() * timeS);
         }
         double q = Math.log(endFullStepsPerS / startFullStepsPerS);
-        return startFullStepsPerS * durationS / q * Math.expm1(q * timeS / durationS);
+        return startFullStepsPerS * durationS / q * Math.expm1(timeS * (q / durationS));
     }
 
     /**
@@ -66,22 +66,26 @@ public record SweepLaw(SweepShape shape, double startFullStepsPerS, double endFu
         if (shape == SweepShape.LINEAR) {
             // fullStepsAt(t) with its constants in locals, the operations in the same order
             double start = startFullStepsPerS;
-            double span = endFullStepsPerS - startFullStepsPerS;
-            double twiceDuration = 2 * durationS;
+            double k = halfAcceleration();
             double duration = durationS;
             for (int i = 0; i < n; i++) {
                 double timeS = (firstSample + i) / sampleRateHz;
-                out[i] = timeS >= 0 && timeS <= duration ? start * timeS + span * timeS * timeS / twiceDuration
-                        : Double.NaN;
+                out[i] = timeS >= 0 && timeS <= duration ? timeS * (start + k * timeS) : Double.NaN;
             }
             return;
         }
         double q = Math.log(endFullStepsPerS / startFullStepsPerS);
         double scale = startFullStepsPerS * durationS / q;
+        double perS = q / durationS;
         for (int i = 0; i < n; i++) {
             double timeS = (firstSample + i) / sampleRateHz;
-            out[i] = timeS >= 0 && timeS <= durationS ? scale * Math.expm1(q * timeS / durationS) : Double.NaN;
+            out[i] = timeS >= 0 && timeS <= durationS ? scale * Math.expm1(timeS * perS) : Double.NaN;
         }
+    }
+
+    /** (r1 − r0)/(2T) of a linear sweep: full steps = t·(r0 + this·t), one division per block, not per sample. */
+    private double halfAcceleration() {
+        return (endFullStepsPerS - startFullStepsPerS) / (2 * durationS);
     }
 
     /** Rate of change of the commanded rate at time t, in full steps/s² (the sweep's acceleration). */
