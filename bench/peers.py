@@ -77,7 +77,7 @@ def launcher_java_command(args=("--version",)):
     env = dict(os.environ, LODESTEP_DRY_RUN="1")
     out = subprocess.run([LAUNCHER, *args], env=env, capture_output=True, text=True, check=True).stdout
     argv = shlex.split(out.strip().splitlines()[-1])
-    jar_at = argv.index("-jar")
+    jar_at = argv.index("-cp")
     return argv[1:jar_at]
 
 

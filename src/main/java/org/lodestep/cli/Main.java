@@ -84,7 +84,7 @@ public final class Main implements Runnable {
     public static void main(String[] args) {
         PrintWriter out = new PrintWriter(System.out, true, StandardCharsets.UTF_8);
         PrintWriter err = new PrintWriter(System.err, true, StandardCharsets.UTF_8);
-        int code = run(out, err, args);
+        int code = run(out, err, args, true);
         out.flush();
         err.flush();
         System.exit(code);
@@ -92,6 +92,11 @@ public final class Main implements Runnable {
 
     /** Runs one command line in-process, writing to the given streams; returns the exit code. */
     public static int run(PrintWriter out, PrintWriter err, String... args) {
+        return run(out, err, args, false);
+    }
+
+    /** @param launch whether this is the process's own command line (main), not one run in-process */
+    private static int run(PrintWriter out, PrintWriter err, String[] args, boolean launch) {
         if (args.length == 1 && (args[0].equals("--version") || args[0].equals("-V"))) {
             // The one command that needs no command model: what picocli would print (tested), without building it.
             for (String line : new VersionProvider().getVersion()) {
@@ -100,9 +105,19 @@ public final class Main implements Runnable {
             out.flush();
             return ExitCode.OK;
         }
+        String help = HelpTexts.forArgs(args);
+        if (help != null) {
+            // picocli's own text, rendered when the jar was built (HelpTexts): no command model to build
+            out.print(help);
+            out.flush();
+            return ExitCode.OK;
+        }
         // Large input files are hashed for the report's provenance while the command works on them.
         InputDigests.start(java.util.Arrays.asList(args));
         CommandLine cl = configure(TREE.buildFor(new Main(), args));
+        if (launch) {
+            RunProvenance.prepareMeanwhile();   // on the other core while the command runs
+        }
         cl.setOut(out);
         PrintWriter redacted = new PrintWriter(new RedactingWriter(err), true);
         cl.setErr(redacted);
@@ -122,11 +137,35 @@ public final class Main implements Runnable {
     private static CommandLine configure(CommandLine cl) {
         cl.setCaseInsensitiveEnumValuesAllowed(true);
         cl.setUsageHelpAutoWidth(true);
-        cl.setExecutionExceptionHandler((ex, cmd, parseResult) -> handle(ex, cmd, isVerbose(parseResult)));
-        cl.setParameterExceptionHandler(Main::badParameter);
-        cl.registerConverter(Double.class, Main::plausibleNumber);
-        cl.registerConverter(Double.TYPE, Main::plausibleNumber);
+        Handlers handlers = new Handlers();
+        cl.setExecutionExceptionHandler(handlers);
+        cl.setParameterExceptionHandler(handlers);
+        cl.registerConverter(Double.class, handlers);
+        cl.registerConverter(Double.TYPE, handlers);
         return cl;
+    }
+
+    /**
+     * Main's hooks into picocli as one named class, not lambdas: picocli's interfaces are old class files (Java 5),
+     * and a lambda implementing one makes the class-data archive leave out that interface and every picocli class
+     * implementing it (its type converters), which each launch then loads and verifies from the jar.
+     */
+    private static final class Handlers implements CommandLine.IExecutionExceptionHandler,
+            CommandLine.IParameterExceptionHandler, CommandLine.ITypeConverter<Double> {
+        @Override
+        public int handleExecutionException(Exception ex, CommandLine cmd, CommandLine.ParseResult parseResult) {
+            return handle(ex, cmd, isVerbose(parseResult));
+        }
+
+        @Override
+        public int handleParseException(CommandLine.ParameterException ex, String[] args) {
+            return badParameter(ex, args);
+        }
+
+        @Override
+        public Double convert(String text) {
+            return plausibleNumber(text);
+        }
     }
 
     /**

@@ -13,6 +13,20 @@ final class RunProvenance {
     private RunProvenance() {
     }
 
+    /**
+     * Sets up, on a daemon thread, what the run's provenance will need: the runtime's SHA-256 provider and its
+     * formatting of times, cold code that a run would otherwise do on its own thread after its analysis (it saved
+     * {@code leads identify} 10 to 18 ms); started before the analysis, it runs meanwhile on the other core.
+     * Nothing waits for it or sees its result. Called once the command model is built, when picocli has set up the
+     * time classes it probes, so the two never initialise those classes at once.
+     */
+    static void prepareMeanwhile() {
+        Thread t = new Thread(() -> Provenance.of(VersionProvider.version(), List.of(), Instant.now()),
+                "lodestep-provenance-setup");
+        t.setDaemon(true);
+        t.start();
+    }
+
     /** The run of the command whose spec is {@code spec}, no inputs yet. */
     static Provenance of(CommandLine.Model.CommandSpec spec) {
         List<String> cmd = new ArrayList<>();

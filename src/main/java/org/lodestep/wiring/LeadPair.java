@@ -47,6 +47,21 @@ public record LeadPair(String a, String b) implements Comparable<LeadPair> {
         throw new IllegalArgumentException(label + " is not in " + this);
     }
 
+    /*
+     * equals and hashCode written out, with the values the record's own would give (hash 31 * a + b, so maps keep
+     * their order): the record's are made through method handles on their first call, several milliseconds of a
+     * small command's start, and every identification keys its readings by pair.
+     */
+    @Override
+    public boolean equals(Object o) {
+        return o instanceof LeadPair p && a.equals(p.a) && b.equals(p.b);
+    }
+
+    @Override
+    public int hashCode() {
+        return 31 * a.hashCode() + b.hashCode();
+    }
+
     @Override
     public int compareTo(LeadPair o) {
         int c = a.compareTo(o.a);

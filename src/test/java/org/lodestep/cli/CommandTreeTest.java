@@ -94,13 +94,36 @@ class CommandTreeTest {
 
     @Test
     void standInsAreLeftOutOnlyOffThePath() {
-        CommandLine cl = Main.TREE.buildFor(new Main(), new String[] {"leads", "identify", "x.tsv"});
+        CommandLine root = Main.TREE.buildFor(new Main(), new String[] {});
+        assertFalse(root.getSubcommands().get("qa").getCommand() instanceof QaCommand, "qa is a stand-in");
+        CommandLine cl = Main.TREE.buildFor(new Main(), new String[] {"leads"});
         CommandLine leads = cl.getSubcommands().get("leads");
         assertTrue(leads.getCommand() instanceof LeadsCommand, "the invoked group has its full model");
-        assertTrue(leads.getSubcommands().get("identify").getCommand() instanceof LeadsIdentifyCommand,
-                "the invoked command has its full model");
-        assertFalse(cl.getSubcommands().get("qa").getCommand() instanceof QaCommand, "qa is a stand-in");
         assertFalse(leads.getSubcommands().get("probe").getCommand() instanceof LeadsProbeCommand,
                 "probe is a stand-in");
+    }
+
+    @Test
+    void aLineGoingStraightToACommandBuildsOnlyItsPath() {
+        CommandLine cl = Main.TREE.buildFor(new Main(), new String[] {"--verbose", "leads", "identify", "x.tsv"});
+        assertEquals(List.of("leads"), List.copyOf(cl.getSubcommands().keySet()), "no siblings, no help command");
+        CommandLine leads = cl.getSubcommands().get("leads");
+        assertFalse(leads.getCommand() instanceof LeadsCommand, "the group passed through is a stand-in");
+        assertEquals(List.of("identify"), List.copyOf(leads.getSubcommands().keySet()));
+        assertTrue(leads.getSubcommands().get("identify").getCommand() instanceof LeadsIdentifyCommand,
+                "the invoked command has its full model");
+    }
+
+    @Test
+    void optionsBeforeASubcommandKeepItsSiblings() {
+        same("--help", "leads");
+        same("-h", "leads", "identify");
+        same("leads", "--help", "identify");
+        same("leads", "--verbose", "identify", "--no-such-option");
+        same("leads", "--verbose", "identify", "--help");
+        same("--verbose", "help", "leads");
+        same("help");
+        same("help", "leads", "identify");
+        same("help", "leads", "--verbose");
     }
 }
