@@ -95,8 +95,7 @@ final class SynchronismDetector {
                     store(idx, wStart, start, last, s, ss, count);
                     close();
                 }
-                index = idx;
-                open(steps, increment);
+                open(increment);
                 bs = binSum;
                 bc = binCount;
                 nb = bins;
@@ -137,14 +136,11 @@ final class SynchronismDetector {
         n = count;
     }
 
-    /** Opens a window with one sample per bin over one period at the present rate (8 ... 1024 bins). */
-    private void open(double steps, double incrementFullSteps) {
-        windowStart = index;
-        startSteps = steps;
-        lastSteps = steps;
-        sum = 0;
-        sumSquares = 0;
-        n = 0;
+    /**
+     * Opens a window with one sample per bin over one period at the present rate (8 ... 1024 bins); {@link #feed}
+     * starts the window's sums and position in its locals.
+     */
+    private void open(double incrementFullSteps) {
         bins = (int) Math.max(8, Math.min(1024, Math.round(periodFullSteps / incrementFullSteps)));
         binSum = new double[bins];
         binCount = new int[bins];

@@ -5,7 +5,6 @@ import static org.junit.jupiter.api.Assertions.assertTrue;
 import static org.junit.jupiter.api.Assertions.fail;
 
 import java.io.ByteArrayInputStream;
-import java.io.ByteArrayOutputStream;
 import java.io.IOException;
 import java.nio.charset.StandardCharsets;
 import java.nio.file.Files;
@@ -14,6 +13,7 @@ import java.util.Locale;
 import java.util.Random;
 
 import org.junit.jupiter.api.Test;
+import org.lodestep.sample.ByteDamage;
 import org.lodestep.sample.InputFormatException;
 import org.lodestep.sample.InputLimits;
 import org.lodestep.sample.SampledSignal;
@@ -156,31 +156,7 @@ class DecoderFuzzTest {
         Random rnd = new Random(seed);
         byte[] alphabet = "0123456789,;\t\".-+eE#=\n\r NaIfy\0".getBytes(StandardCharsets.ISO_8859_1);
         for (int k = 0; k < CASES; k++) {
-            ByteArrayOutputStream b = new ByteArrayOutputStream();
-            b.writeBytes(base);
-            byte[] bytes = b.toByteArray();
-            int edits = 1 + rnd.nextInt(4);
-            for (int e = 0; e < edits && bytes.length > 0; e++) {
-                int at = rnd.nextInt(bytes.length);
-                byte x = rnd.nextInt(3) == 0 ? (byte) rnd.nextInt() : alphabet[rnd.nextInt(alphabet.length)];
-                switch (rnd.nextInt(4)) {
-                    case 0 -> bytes[at] = x;
-                    case 1 -> {
-                        byte[] n = new byte[bytes.length + 1];
-                        System.arraycopy(bytes, 0, n, 0, at);
-                        n[at] = x;
-                        System.arraycopy(bytes, at, n, at + 1, bytes.length - at);
-                        bytes = n;
-                    }
-                    case 2 -> {
-                        byte[] n = new byte[bytes.length - 1];
-                        System.arraycopy(bytes, 0, n, 0, at);
-                        System.arraycopy(bytes, at + 1, n, at, bytes.length - at - 1);
-                        bytes = n;
-                    }
-                    default -> bytes = java.util.Arrays.copyOf(bytes, at);
-                }
-            }
+            byte[] bytes = ByteDamage.edit(base, rnd, alphabet);
             decodeOrRefuse(bytes, d, name + "#" + k);
         }
     }

@@ -8,11 +8,11 @@ import java.io.IOException;
 import java.nio.charset.StandardCharsets;
 import java.nio.file.Files;
 import java.nio.file.Path;
-import java.util.Arrays;
 import java.util.Locale;
 import java.util.Random;
 
 import org.junit.jupiter.api.Test;
+import org.lodestep.sample.ByteDamage;
 import org.lodestep.sample.InputFormatException;
 import org.lodestep.sample.InputLimits;
 
@@ -81,29 +81,7 @@ class QaDecoderFuzzTest {
         Random rnd = new Random(seed);
         byte[] alphabet = "0123456789,\"[]=.-+eE#\n\r _abcnif\0{}'".getBytes(StandardCharsets.ISO_8859_1);
         for (int k = 0; k < CASES; k++) {
-            byte[] bytes = base.clone();
-            int edits = 1 + rnd.nextInt(4);
-            for (int e = 0; e < edits && bytes.length > 0; e++) {
-                int at = rnd.nextInt(bytes.length);
-                byte x = rnd.nextInt(3) == 0 ? (byte) rnd.nextInt() : alphabet[rnd.nextInt(alphabet.length)];
-                switch (rnd.nextInt(4)) {
-                    case 0 -> bytes[at] = x;
-                    case 1 -> {
-                        byte[] n = new byte[bytes.length + 1];
-                        System.arraycopy(bytes, 0, n, 0, at);
-                        n[at] = x;
-                        System.arraycopy(bytes, at, n, at + 1, bytes.length - at);
-                        bytes = n;
-                    }
-                    case 2 -> {
-                        byte[] n = new byte[bytes.length - 1];
-                        System.arraycopy(bytes, 0, n, 0, at);
-                        System.arraycopy(bytes, at + 1, n, at, bytes.length - at - 1);
-                        bytes = n;
-                    }
-                    default -> bytes = Arrays.copyOf(bytes, at);
-                }
-            }
+            byte[] bytes = ByteDamage.edit(base, rnd, alphabet);
             String source = name + "#" + k;
             try {
                 d.decode(bytes, source);

@@ -7,6 +7,7 @@ import java.io.IOException;
 import java.nio.charset.StandardCharsets;
 import java.nio.file.Files;
 import java.nio.file.Path;
+import java.time.Duration;
 import java.util.ArrayList;
 import java.util.Comparator;
 import java.util.List;
@@ -18,6 +19,9 @@ import java.util.stream.Stream;
 import javax.imageio.ImageIO;
 
 import org.junit.jupiter.api.Assumptions;
+import org.openqa.selenium.chrome.ChromeDriver;
+import org.openqa.selenium.chrome.ChromeDriverService;
+import org.openqa.selenium.chrome.ChromeOptions;
 
 /**
  * Renders an HTML file in headless Chromium (Debian's {@code chromium} package): a screenshot, the console messages,
@@ -67,6 +71,33 @@ public final class Chromium {
         }
         Assumptions.assumeTrue(false, message);
         return null;
+    }
+
+    /**
+     * A WebDriver session in headless Chromium, window {@code width} × {@code height}, its profile in {@code profile};
+     * without Chromium or its driver (Debian's {@code chromium-driver}) the calling test is skipped, or fails with
+     * {@code CI=true}.
+     */
+    public static ChromeDriver webDriver(Path profile, int width, int height) {
+        Path chromium = require();
+        Path chromedriver = Path.of(System.getenv().getOrDefault("LODESTEP_CHROMEDRIVER", "/usr/bin/chromedriver"));
+        if (!Files.isExecutable(chromedriver)) {
+            String message = "chromedriver not found (install Debian's 'chromium-driver'); browser test skipped";
+            if ("true".equals(System.getenv("CI"))) {
+                fail(message.replace("skipped", "required when CI=true"));
+            }
+            Assumptions.assumeTrue(false, message);
+        }
+        ChromeOptions o = new ChromeOptions();
+        o.setBinary(chromium.toFile());
+        o.addArguments("--headless", "--no-sandbox", "--disable-gpu", "--disable-background-networking",
+                "--disable-component-update", "--disable-sync", "--no-first-run", "--disable-dev-shm-usage",
+                "--user-data-dir=" + profile, "--window-size=" + width + "," + height);
+        ChromeDriverService service = new ChromeDriverService.Builder().usingDriverExecutable(chromedriver.toFile())
+                .usingAnyFreePort().build();
+        ChromeDriver driver = new ChromeDriver(service, o);
+        driver.manage().timeouts().implicitlyWait(Duration.ZERO);
+        return driver;
     }
 
     /** Loads {@code html} in a window {@code width} CSS pixels wide, tall enough for the whole page. */

@@ -2,25 +2,20 @@ package org.lodestep.report;
 
 import static org.junit.jupiter.api.Assertions.assertEquals;
 import static org.junit.jupiter.api.Assertions.assertTrue;
-import static org.junit.jupiter.api.Assertions.fail;
 
 import java.nio.file.Files;
 import java.nio.file.Path;
-import java.time.Duration;
 import java.util.ArrayList;
 import java.util.List;
 import java.util.Map;
 import java.util.stream.Stream;
 
 import org.junit.jupiter.api.AfterAll;
-import org.junit.jupiter.api.Assumptions;
 import org.junit.jupiter.api.BeforeAll;
 import org.junit.jupiter.api.Test;
 import org.junit.jupiter.api.io.TempDir;
 import org.openqa.selenium.JavascriptExecutor;
 import org.openqa.selenium.chrome.ChromeDriver;
-import org.openqa.selenium.chrome.ChromeDriverService;
-import org.openqa.selenium.chrome.ChromeOptions;
 
 /**
  * The demo's leads, motor, resonance and drive reports in Chromium (through chromedriver, whose device emulation
@@ -42,15 +37,7 @@ class ReportLayoutBrowserTest {
 
     @BeforeAll
     static void start() throws Exception {
-        Path chromium = Chromium.require();
-        Path chromedriver = Path.of(System.getenv().getOrDefault("LODESTEP_CHROMEDRIVER", "/usr/bin/chromedriver"));
-        if (!Files.isExecutable(chromedriver)) {
-            String message = "chromedriver not found (install Debian's 'chromium-driver'); browser test skipped";
-            if ("true".equals(System.getenv("CI"))) {
-                fail(message.replace("skipped", "required when CI=true"));
-            }
-            Assumptions.assumeTrue(false, message);
-        }
+        driver = Chromium.webDriver(dir.resolve("profile"), 1280, 900);
         Path out = dir.resolve("demo");
         ReportCli.Run demo = ReportCli.run("demo", "--out", out.toString());
         assertEquals(0, demo.code(), demo.err());
@@ -59,15 +46,6 @@ class ReportLayoutBrowserTest {
                     .toList();
         }
         assertTrue(reports.size() >= 10, reports.toString());
-        ChromeOptions o = new ChromeOptions();
-        o.setBinary(chromium.toFile());
-        o.addArguments("--headless", "--no-sandbox", "--disable-gpu", "--disable-background-networking",
-                "--disable-component-update", "--disable-sync", "--no-first-run", "--disable-dev-shm-usage",
-                "--user-data-dir=" + dir.resolve("profile"), "--window-size=1280,900");
-        ChromeDriverService service = new ChromeDriverService.Builder().usingDriverExecutable(chromedriver.toFile())
-                .usingAnyFreePort().build();
-        driver = new ChromeDriver(service, o);
-        driver.manage().timeouts().implicitlyWait(Duration.ZERO);
     }
 
     @AfterAll

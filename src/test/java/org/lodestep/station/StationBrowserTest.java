@@ -11,7 +11,6 @@ import java.time.Duration;
 import java.util.List;
 
 import org.junit.jupiter.api.AfterAll;
-import org.junit.jupiter.api.Assumptions;
 import org.junit.jupiter.api.BeforeAll;
 import org.junit.jupiter.api.MethodOrderer;
 import org.junit.jupiter.api.Order;
@@ -26,8 +25,6 @@ import org.openqa.selenium.Keys;
 import org.openqa.selenium.OutputType;
 import org.openqa.selenium.WebElement;
 import org.openqa.selenium.chrome.ChromeDriver;
-import org.openqa.selenium.chrome.ChromeDriverService;
-import org.openqa.selenium.chrome.ChromeOptions;
 import org.openqa.selenium.support.ui.Select;
 import org.openqa.selenium.support.ui.WebDriverWait;
 
@@ -55,28 +52,11 @@ class StationBrowserTest {
 
     @BeforeAll
     static void start() throws Exception {
-        Path chromium = Chromium.require();
-        Path chromedriver = Path.of(System.getenv().getOrDefault("LODESTEP_CHROMEDRIVER", "/usr/bin/chromedriver"));
-        if (!Files.isExecutable(chromedriver)) {
-            String message = "chromedriver not found (install Debian's 'chromium-driver'); browser test skipped";
-            if ("true".equals(System.getenv("CI"))) {
-                fail(message.replace("skipped", "required when CI=true"));
-            }
-            Assumptions.assumeTrue(false, message);
-        }
+        driver = Chromium.webDriver(dir.resolve("profile"), DESKTOP, 900);
         Files.createDirectories(SHOTS);
         station = Station.start(new Station.Settings("127.0.0.1", 0, null, dir.resolve("qa.sqlite").toString(),
                 "sim:bench-4", QA, QA, dir.resolve("out"), "test"));
         base = "http://127.0.0.1:" + station.port();
-        ChromeOptions o = new ChromeOptions();
-        o.setBinary(chromium.toFile());
-        o.addArguments("--headless", "--no-sandbox", "--disable-gpu", "--disable-background-networking",
-                "--disable-component-update", "--disable-sync", "--no-first-run", "--disable-dev-shm-usage",
-                "--user-data-dir=" + dir.resolve("profile"), "--window-size=" + DESKTOP + ",900");
-        ChromeDriverService service = new ChromeDriverService.Builder().usingDriverExecutable(chromedriver.toFile())
-                .usingAnyFreePort().build();
-        driver = new ChromeDriver(service, o);
-        driver.manage().timeouts().implicitlyWait(Duration.ZERO);
     }
 
     @AfterAll
