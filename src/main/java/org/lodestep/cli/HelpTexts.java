@@ -7,6 +7,7 @@ import java.io.StringWriter;
 import java.nio.charset.StandardCharsets;
 import java.nio.file.Files;
 import java.nio.file.Path;
+import java.nio.file.StandardCopyOption;
 import java.util.ArrayList;
 import java.util.List;
 
@@ -112,8 +113,7 @@ final class HelpTexts {
         Path file = here.resolve(resource(path));
         Path tmp = file.resolveSibling(file.getFileName() + ".tmp");
         Files.writeString(tmp, render(cl), StandardCharsets.UTF_8);
-        Files.move(tmp, file, java.nio.file.StandardCopyOption.REPLACE_EXISTING,
-                java.nio.file.StandardCopyOption.ATOMIC_MOVE);
+        Files.move(tmp, file, StandardCopyOption.REPLACE_EXISTING, StandardCopyOption.ATOMIC_MOVE);
         for (CommandTree child : node.children()) {
             List<String> p = new ArrayList<>(path);
             p.add(child.name());
