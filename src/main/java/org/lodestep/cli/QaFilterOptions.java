@@ -1,7 +1,5 @@
 package org.lodestep.cli;
 
-import java.time.LocalDate;
-import java.time.ZoneOffset;
 import java.time.format.DateTimeParseException;
 
 import org.lodestep.qa.RecordQuery;
@@ -40,8 +38,7 @@ final class QaFilterOptions {
             return null;
         }
         try {
-            LocalDate d = LocalDate.parse(text);
-            return Timestamps.format((endOfDay ? d.plusDays(1) : d).atStartOfDay(ZoneOffset.UTC).toInstant());
+            return Timestamps.dayBound(text, endOfDay);
         } catch (DateTimeParseException notADate) {
             try {
                 return Timestamps.format(Timestamps.parse(text));

@@ -1,6 +1,7 @@
 package org.lodestep.qa;
 
 import java.time.Instant;
+import java.time.LocalDate;
 import java.time.ZoneOffset;
 import java.time.format.DateTimeFormatter;
 import java.time.format.DateTimeParseException;
@@ -22,6 +23,17 @@ public final class Timestamps {
 
     public static String now() {
         return format(Instant.now());
+    }
+
+    /**
+     * A whole UTC day ({@code YYYY-MM-DD}) as the bound a record query compares with: the day's first instant, or for
+     * an upper bound the first instant of the next day, so the day itself is included.
+     *
+     * @throws DateTimeParseException when {@code date} is not a date of that form
+     */
+    public static String dayBound(String date, boolean upperBound) {
+        LocalDate d = LocalDate.parse(date);
+        return format((upperBound ? d.plusDays(1) : d).atStartOfDay(ZoneOffset.UTC).toInstant());
     }
 
     /** Parses any ISO-8601 instant; rejects other text with a message naming it. */

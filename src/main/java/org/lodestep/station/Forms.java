@@ -2,8 +2,6 @@ package org.lodestep.station;
 
 import java.net.URLEncoder;
 import java.nio.charset.StandardCharsets;
-import java.time.LocalDate;
-import java.time.ZoneOffset;
 import java.time.format.DateTimeParseException;
 
 import org.lodestep.qa.Timestamps;
@@ -48,8 +46,7 @@ final class Forms {
             return null;
         }
         try {
-            LocalDate d = LocalDate.parse(t);
-            return Timestamps.format((endOfDay ? d.plusDays(1) : d).atStartOfDay(ZoneOffset.UTC).toInstant());
+            return Timestamps.dayBound(t, endOfDay);
         } catch (DateTimeParseException e) {
             throw new SettingsException(what + " '" + t + "': expected a date YYYY-MM-DD");
         }
