@@ -4,9 +4,11 @@ import java.io.PrintWriter;
 import java.util.concurrent.Callable;
 
 import org.lodestep.report.Json;
+import org.lodestep.report.ProvenanceBlock;
 import org.lodestep.report.RigText;
 import org.lodestep.rig.RigInfo;
 import org.lodestep.workflow.Progress;
+import org.lodestep.workflow.Provenance;
 import org.lodestep.workflow.RigDescribe;
 
 import picocli.CommandLine.Command;
@@ -36,10 +38,13 @@ final class RigInfoCommand implements Callable<Integer> {
         PrintWriter out = spec.commandLine().getOut();
         if (address.equals("sim:")) {
             var scenarios = RigDescribe.scenarios();
+            // The tool's own catalogue, keyed by scenario name: no run or input to trace, so no provenance.
             out.print(json ? Json.write(scenarios) + "\n" : RigText.scenarios(scenarios));
         } else {
             RigInfo info = WorkflowCall.run(() -> RigDescribe.info(address, Progress.NONE));
-            out.print(json ? Json.write(info) + "\n" : RigText.info(info));
+            Provenance p = RunProvenance.of(spec).withRig(RunProvenance.rig(info));
+            out.print(json ? ProvenanceBlock.json(Json.write(info), p) + "\n" : RigText.info(info)
+                    + ProvenanceBlock.text(p));
         }
         out.flush();
         return ExitCode.OK;

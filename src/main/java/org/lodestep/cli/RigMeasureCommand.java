@@ -11,6 +11,7 @@ import java.util.concurrent.Callable;
 import org.lodestep.report.ProvenanceBlock;
 import org.lodestep.report.Json;
 import org.lodestep.report.RigText;
+import org.lodestep.workflow.Provenance;
 import org.lodestep.workflow.RigCaptureFile;
 import org.lodestep.workflow.RigMeasure;
 
@@ -131,19 +132,21 @@ final class RigMeasureCommand implements Callable<Integer> {
                 spec.commandLine().getErr(), quiet || !streams)) {
             r = WorkflowCall.run(() -> RigMeasure.run(settings, bar));
         }
+        // Readings name the rig that took them, as a capture's metadata does for a capture.
+        Provenance provenance = streams
+                ? RunProvenance.withCaptureRig(RunProvenance.of(spec), r.capture().metadata())
+                : RunProvenance.of(spec).withRig(RunProvenance.rig(r.rig()));
         switch (k) {
-            case RESISTANCE -> o.print(json ? Json.write(r.resistances()) + "\n"
-                    : RigText.resistances(r.resistances(), r.labels()) + ProvenanceBlock.text(RunProvenance.of(spec)));
-            case INSULATION -> o.print(json ? Json.write(r.insulation()) + "\n"
-                    : RigText.insulation(r.insulation(), r.labels()) + ProvenanceBlock.text(RunProvenance.of(spec)));
+            case RESISTANCE -> o.print(json ? ProvenanceBlock.json(Json.write(r.resistances()), provenance) + "\n"
+                    : RigText.resistances(r.resistances(), r.labels()) + ProvenanceBlock.text(provenance));
+            case INSULATION -> o.print(json ? ProvenanceBlock.json(Json.write(r.insulation()), provenance) + "\n"
+                    : RigText.insulation(r.insulation(), r.labels()) + ProvenanceBlock.text(provenance));
             default -> {
                 if (json) {
-                    o.println(ProvenanceBlock.json(Json.write(r.capture().metadata()),
-                            RunProvenance.withCaptureRig(RunProvenance.of(spec), r.capture().metadata())));
+                    o.println(ProvenanceBlock.json(Json.write(r.capture().metadata()), provenance));
                 } else {
                     o.print(RigText.capture(r.capture()));
-                    o.print(ProvenanceBlock.text(RunProvenance.withCaptureRig(RunProvenance.of(spec),
-                            r.capture().metadata())));
+                    o.print(ProvenanceBlock.text(provenance));
                 }
                 if (r.saved() != null) {
                     (json ? spec.commandLine().getErr() : o).println("saved " + r.saved());

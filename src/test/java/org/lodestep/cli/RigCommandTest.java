@@ -58,6 +58,25 @@ class RigCommandTest {
     }
 
     @Test
+    void everyReadingNamesTheRigThatTookIt() {
+        // Traceability: a resistance or insulation reading is only as good as the instrument that took it, so its
+        // provenance names the rig and its firmware, in text and in JSON, as a capture's does.
+        String rig = "\"rig\" : \"lodestep-virtual-rig, id ";
+        Result json = run("rig", "measure", "sim:bench-4", "resistance", "--pair", "1-2", "--json");
+        assertEquals(0, json.code(), json.err());
+        assertTrue(json.out().contains("\"provenance\"") && json.out().contains(rig), json.out());
+        Result ins = run("rig", "measure", "sim:bench-4", "insulation", "--lead", "1", "--volts", "250", "--seconds",
+                "1", "--yes-i-have-read-the-caution", "--json");
+        assertEquals(0, ins.code(), ins.err());
+        assertTrue(ins.out().contains(rig), ins.out());
+        Result text = run("rig", "measure", "sim:bench-4", "resistance", "--pair", "1-2");
+        assertTrue(text.out().lines().anyMatch(l -> l.strip().startsWith("rig") && l.contains("firmware 0.1.0")),
+                text.out());
+        Result info = run("rig", "info", "sim:bench-4", "--json");
+        assertTrue(info.out().strip().startsWith("{\n  \"provenance\""), info.out());
+    }
+
+    @Test
     void insulationWithoutConfirmationPrintsTheCautionAndRefuses() {
         Result r = run("rig", "measure", "sim:bench-4", "insulation");
         assertEquals(ExitCode.USAGE, r.code());
