@@ -138,9 +138,9 @@ final class RigMeasureCommand implements Callable<Integer> {
                 : RunProvenance.of(spec).withRig(RunProvenance.rig(r.rig()));
         switch (k) {
             case RESISTANCE -> o.print(json ? ProvenanceBlock.json(Json.write(r.resistances()), provenance) + "\n"
-                    : RigText.resistances(r.resistances(), r.labels()) + ProvenanceBlock.text(provenance));
+                    : RigText.resistances(r.resistances(), r.rig().labels()) + ProvenanceBlock.text(provenance));
             case INSULATION -> o.print(json ? ProvenanceBlock.json(Json.write(r.insulation()), provenance) + "\n"
-                    : RigText.insulation(r.insulation(), r.labels()) + ProvenanceBlock.text(provenance));
+                    : RigText.insulation(r.insulation(), r.rig().labels()) + ProvenanceBlock.text(provenance));
             default -> {
                 if (json) {
                     o.println(ProvenanceBlock.json(Json.write(r.capture().metadata()), provenance));

@@ -86,17 +86,15 @@ public final class RigMeasure {
     /**
      * What was measured; lists are empty and the capture null where the kind gives none.
      *
-     * @param rig         the rig that measured, as its handshake named it
-     * @param labels      the rig's lead labels, position 1 first
+     * @param rig         the rig that measured, as its handshake named it (its lead labels among it)
      * @param resistances resistance readings in the order measured
      * @param insulation  insulation readings in the order measured
      * @param capture     the step-response or back-EMF capture
      * @param saved       where the capture was saved, or null
      */
-    public record Result(Kind kind, RigInfo rig, List<String> labels, List<ResistanceReading> resistances,
+    public record Result(Kind kind, RigInfo rig, List<ResistanceReading> resistances,
                          List<InsulationReading> insulation, RigCapture capture, Path saved) {
         public Result {
-            labels = List.copyOf(labels);
             resistances = List.copyOf(resistances);
             insulation = List.copyOf(insulation);
         }
@@ -162,7 +160,7 @@ public final class RigMeasure {
                 saved = RigCaptureFile.save(cap, s.saveTo(), null, s.toolVersion(),
                         analysisMetadata(s, labels, c.info().capabilities(), cap.metadata()));
             }
-            return new Result(s.kind(), c.info(), labels, rs, ins, cap, saved);
+            return new Result(s.kind(), c.info(), rs, ins, cap, saved);
         }
     }
 

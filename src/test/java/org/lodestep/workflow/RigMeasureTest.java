@@ -33,7 +33,7 @@ class RigMeasureTest {
         // 6 leads: C(6,2) = 15 pairs; each centre-tapped phase's 3 leads join in 3 pairs (two phases: 6)
         assertEquals(15, r.resistances().size());
         assertEquals(6, r.resistances().stream().filter(x -> !x.open()).count());
-        assertEquals(6, r.labels().size());
+        assertEquals(6, r.rig().labels().size());
         assertNull(r.capture());
     }
 
