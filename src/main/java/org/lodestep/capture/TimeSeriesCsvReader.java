@@ -145,14 +145,7 @@ public final class TimeSeriesCsvReader implements SampleStream {
         this.pending = new double[nc][want];
         double[] times = new double[want];
         int[] rowLines = new int[want];
-        int n = 0;
-        while (n < want && lines.next()) {
-            if (parseRow(pending, n)) {
-                times[n] = rowTimeS;
-                rowLines[n] = lines.lineNumber();
-                n++;
-            }
-        }
+        int n = readFirstRows(times, rowLines);
         if (n == 0) {
             throw new InputFormatException(source, headerLine + 1, null, null,
                     "has no data rows: expected rows of numbers under the header");
@@ -176,6 +169,31 @@ public final class TimeSeriesCsvReader implements SampleStream {
                     : 0.0;
         }
         this.frameIndex = n;
+    }
+
+    /**
+     * Parses the rows that set the sample clock into {@link #pending}, each row's time stamp (s) and line recorded, not
+     * yet checked. The rows take the same two paths as every later row, so the first rows already warm the fast one.
+     */
+    private int readFirstRows(double[] timesS, int[] rowLines) throws IOException, InputFormatException {
+        recordTimesS = timesS;
+        recordLines = rowLines;
+        int want = timesS.length;
+        int n = 0;
+        while (n < want) {
+            n += parseWholeLinesInPlace(pending, n, want - n);
+            if (n >= want || !lines.next()) {
+                break;
+            }
+            if (parseRow(pending, n)) {
+                timesS[n] = rowTimeS;
+                rowLines[n] = lines.lineNumber();
+                n++;
+            }
+        }
+        recordTimesS = null;
+        recordLines = null;
+        return n;
     }
 
     /**
@@ -251,6 +269,7 @@ public final class TimeSeriesCsvReader implements SampleStream {
             r.parallelMinBytes = parallelMinBytes;
             r.chunkBytes = chunkBytes;
             r.threads = threads;
+            r.startParallel(); // the other cores parse ahead while the caller sets up its analysis
             return r;
         } catch (IOException | InputFormatException | RuntimeException e) {
             in.close();
@@ -677,14 +696,15 @@ public final class TimeSeriesCsvReader implements SampleStream {
     }
 
     /**
-     * Starts the parallel read once the first rows are delivered, for a large file on a machine with a second core;
-     * true while it runs.
+     * Starts the parallel read of the rows after the first ones, for a large file on a machine with a second core;
+     * true while it runs. It starts when the file is opened: the first rows, which set the clock, are parsed by
+     * then, and the rest are handed on only after them.
      */
     private boolean startParallel() throws IOException {
         if (parallel != null) {
             return true;
         }
-        if (parallelTried || file == null || pendingPos < pendingCount) {
+        if (parallelTried || file == null) {
             return false;
         }
         parallelTried = true;
