@@ -30,7 +30,10 @@ import org.lodestep.wiring.Severity;
  * @param supplyV                   supply voltage the rate figure uses, V
  * @param supplyBasis               where that voltage came from
  * @param suggestedSupplyV          rule-of-thumb supply voltage, V (common practice)
- * @param fullCurrentRateFullStepsPerS full-step rate above which the current no longer reaches its set value
+ * @param fullCurrentRateFullStepsPerS full-step rate above which the current no longer reaches its set value, in
+ *                                  full stepping (each current reversal done within two full steps)
+ * @param fullCurrentRateBasis      what that rate allows for (the inductance, and the back-EMF when Kt and the
+ *                                  rotor teeth are known); null when there is no rate
  * @param inertiaKgM2               rotor plus load inertia used for the natural frequency, kg·m²
  * @param naturalFrequencyHz        small-oscillation natural frequency, Hz
  * @param unknowns                  what remains unknown and why, coded; each front end phrases it
@@ -43,7 +46,8 @@ public record MotorCard(String topology, List<String> leads, String connection, 
                         Double stepAngleDeg, Double keVsPerRad, Double ktNmPerA, Double phaseCurrentA,
                         String phaseCurrentBasis, Double holdingTorqueNm, Double ratedCurrentMinA,
                         Double ratedCurrentMaxA, String ratedCurrentAssumption, Double supplyV, String supplyBasis,
-                        Double suggestedSupplyV, Double fullCurrentRateFullStepsPerS, Double inertiaKgM2,
+                        Double suggestedSupplyV, Double fullCurrentRateFullStepsPerS, String fullCurrentRateBasis,
+                        Double inertiaKgM2,
                         Double naturalFrequencyHz, List<Unknown> unknowns, List<Finding> findings,
                         BackEmfResult backEmf, List<StepInput> stepResponses) {
     public MotorCard {

@@ -282,14 +282,14 @@ public final class MotorIdentifier {
         return new MotorCard(topology.label(), phases.leads(), connection.label(), cards, wiring,
                 rotationConvention(emf, phases), teeth, steps, angle, keHalf, kt, d.current(), d.currentBasis(),
                 d.torque(), d.ratedMinA(), d.ratedMaxA(), d.ratedAssumption(), d.supply(), d.supplyBasis(),
-                d.suggestedSupply(), d.rate(), request.inertiaKgM2(), fn, unknowns, findings, emf,
+                d.suggestedSupply(), d.rate(), d.rateBasis(), request.inertiaKgM2(), fn, unknowns, findings, emf,
                 request.stepResponses());
     }
 
     /** The drive figures: rated-current estimate, the current used and its torque, supply, full-current rate. */
     private record Drive(Double current, String currentBasis, Double torque, Double ratedMinA, Double ratedMaxA,
                          String ratedAssumption, Double supply, String supplyBasis, Double suggestedSupply,
-                         Double rate) {
+                         Double rate, String rateBasis) {
     }
 
     /** The drive figures from the phases in the chosen connection, each noted as unknown where inputs are missing. */
@@ -329,18 +329,26 @@ public final class MotorIdentifier {
             supplyBasis = "rule-of-thumb suggestion";
         }
         Double rate = null;
+        String rateBasis = null;
         if (supply != null && phaseR != null && phaseL != null && current != null) {
             rate = DriveLimits.fullCurrentRateFullStepsPerS(supply, phaseR, phaseL, current);
             if (rate == 0.0) {
                 findings.add(Finding.error(MotorFindingCode.SUPPLY_TOO_LOW, String.format("%.3g V cannot drive "
                         + "%.3g A through %.3g ohm", supply, current, phaseR)));
+                rateBasis = "the supply cannot drive the current through the winding resistance";
             } else if (kt != null && steps != null) {
                 rate = withBackEmf(rate, supply, phaseR, phaseL, current, kt, steps, findings);
+                rateBasis = "full stepping: each current reversal within two full steps, against the inductance "
+                        + "and the back-EMF at its peak";
+            } else {
+                rateBasis = "full stepping: each current reversal within two full steps, against the inductance "
+                        + "only; the back-EMF (needs Kt and the rotor teeth) would lower it";
             }
         } else if (phaseL == null) {
             unknowns.add(Unknown.of(Unknown.What.INDUCTANCE));
         }
-        return new Drive(current, currentBasis, torque, iMin, iMax, assumption, supply, supplyBasis, suggested, rate);
+        return new Drive(current, currentBasis, torque, iMin, iMax, assumption, supply, supplyBasis, suggested, rate,
+                rateBasis);
     }
 
     /** The full-current rate lowered by the back-EMF ({@link BackEmfCurrentLimit}), with which limit binds. */

@@ -120,9 +120,10 @@ public final class MotorCardText {
             double rate = card.fullCurrentRateFullStepsPerS();
             String revs = card.fullCurrentRateRevPerS() == null ? ""
                     : String.format(Locale.ROOT, " = %s rev/s", num(card.fullCurrentRateRevPerS(), 3));
-            b.append(String.format(Locale.ROOT, "  full current up to     %s full steps/s%s at %s V (%s); back-EMF "
-                    + "ignored, so the real limit is lower%n", num(rate, 4), revs, num(card.supplyV(), 3),
-                    card.supplyBasis()));
+            b.append(String.format(Locale.ROOT, "  full current up to     %s full steps/s%s at %s V (%s)%n"
+                    + "                         %s; for a microstepping drive's sine currents, 'lodestep drive "
+                    + "curve --card' gives the steady-state limit%n", num(rate, 4), revs, num(card.supplyV(), 3),
+                    card.supplyBasis(), card.fullCurrentRateBasis()));
         }
         if (card.naturalFrequencyHz() != null) {
             b.append(String.format(Locale.ROOT, "  natural frequency      %s Hz with %s kg·m² (full-step resonance near "

@@ -113,7 +113,8 @@ public final class MotorHtml {
         put(f, "Full current up to", card.fullCurrentRateFullStepsPerS(), "%s full steps/s");
         put(f, "Natural frequency", card.naturalFrequencyHz(), "%s Hz");
         b.facts(f);
-        if (card.phaseCurrentBasis() != null || card.ratedCurrentAssumption() != null) {
+        if (card.phaseCurrentBasis() != null || card.ratedCurrentAssumption() != null
+                || card.fullCurrentRateBasis() != null) {
             List<HtmlReport.Finding> basis = new ArrayList<>();
             if (card.phaseCurrentBasis() != null) {
                 basis.add(new HtmlReport.Finding(Status.INFO, "Phase current: " + card.phaseCurrentBasis()));
@@ -123,6 +124,11 @@ public final class MotorHtml {
             }
             if (card.supplyBasis() != null) {
                 basis.add(new HtmlReport.Finding(Status.INFO, "Supply: " + card.supplyBasis()));
+            }
+            if (card.fullCurrentRateBasis() != null) {
+                basis.add(new HtmlReport.Finding(Status.INFO, "Full current: " + card.fullCurrentRateBasis()
+                        + "; for a microstepping drive's sine currents, 'lodestep drive curve --card' gives the "
+                        + "steady-state limit"));
             }
             b.findings(basis);
         }
