@@ -442,26 +442,40 @@ public final class WavReader implements SampleStream {
             switch (bits) {
                 case 8:
                     for (int i = 0; i < frames; i++, p += blockAlign) {
-                        d[offset + i] = ((b[p] & 0xFF) - 128) * 0x1p-7;
+                        d[offset + i] = exact((b[p] & 0xFF) - 128) * 0x1p-7;
                     }
                     break;
                 case 16:
                     for (int i = 0; i < frames; i++, p += blockAlign) {
-                        d[offset + i] = (short) SHORT_LE.get(b, p) * 0x1p-15;
+                        d[offset + i] = exact((short) SHORT_LE.get(b, p)) * 0x1p-15;
                     }
                     break;
                 case 24:
                     for (int i = 0; i < frames; i++, p += blockAlign) {
-                        d[offset + i] = ((b[p] & 0xFF) | (b[p + 1] & 0xFF) << 8 | b[p + 2] << 16) * 0x1p-23;
+                        d[offset + i] = exact((b[p] & 0xFF) | (b[p + 1] & 0xFF) << 8 | b[p + 2] << 16) * 0x1p-23;
                     }
                     break;
                 default:
                     for (int i = 0; i < frames; i++, p += blockAlign) {
-                        d[offset + i] = (int) INT_LE.get(b, p) * 0x1p-31;
+                        d[offset + i] = exact((int) INT_LE.get(b, p)) * 0x1p-31;
                     }
                     break;
             }
         }
+    }
+
+    /** The bits of 2^52: a double whose last mantissa bit is worth exactly 1. */
+    private static final long TWO_52_BITS = 0x4330_0000_0000_0000L;
+    private static final double TWO_52_PLUS_31 = 0x1p52 + 0x1p31;
+
+    /**
+     * {@code (double) v}, exactly, from bits: u = v + 2^31 lies in [0, 2^32), so the bits of 2^52 with u in the
+     * mantissa are the double 2^52 + u, and subtracting 2^52 + 2^31 is exact (the two are within a factor of two).
+     * The processor's integer-to-double conversion writes only part of its register, so in a decoding loop each
+     * one waited on the previous sample's: this way decodes a long 16-bit file about 2.5 times faster.
+     */
+    private static double exact(int v) {
+        return Double.longBitsToDouble(TWO_52_BITS | (v + 0x8000_0000L)) - TWO_52_PLUS_31;
     }
 
     @Override

@@ -73,6 +73,7 @@ final class SynchronismDetector {
         double s = sum;
         double ss = sumSquares;
         int count = n;
+        double whole = Double.NaN; // floor(phase) of the last sample binned; NaN: work it out afresh
         for (int i = off, end = off + len; i < end; i++, idx++) {
             double steps = fullSteps[i];
             double v = x[i];
@@ -106,13 +107,16 @@ final class SynchronismDetector {
                 count = 0;
             }
             double phase = exactReciprocal ? steps * reciprocal : steps / period;
-            // floor by a cast (exact for these magnitudes; the library call is not inlined by the first-tier
-            // compiler and was a fifth of this loop); the fraction times bins is non-negative, so a cast floors it
-            long whole = (long) phase;
-            if (phase < whole) {
-                whole--;
+            // The whole periods, floor(phase), carried from sample to sample as an integer-valued double: the phase
+            // creeps up by a fraction of a period per sample, so it mostly stays and now and then gains one. Both
+            // are exact, so the fraction is the one phase − floor(phase) gives; a library floor per sample is not
+            // inlined by the first-tier compiler, and a long conversion per sample waited on the one before.
+            double fraction = phase - whole;
+            if (!(fraction >= 0 && fraction < 1)) {
+                whole = fraction >= 1 && fraction < 2 ? whole + 1 : Math.floor(phase);
+                fraction = phase - whole;
             }
-            int b = (int) ((phase - whole) * nb);
+            int b = (int) (fraction * nb);
             b = Math.min(nb - 1, Math.max(0, b));
             bs[b] += v;
             bc[b]++;

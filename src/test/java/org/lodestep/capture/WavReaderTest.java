@@ -111,6 +111,53 @@ class WavReaderTest {
         }
     }
 
+    /**
+     * Every 16-bit code, and the extreme and middle codes of 8-, 24- and 32-bit PCM, decode to the code over the
+     * full scale (2^15, 2^7 after the offset of unsigned bytes, 2^23, 2^31) bit for bit, as the JDK's own
+     * integer-to-double conversion gives it: the decoder builds the double from bits, not by that conversion.
+     */
+    @Test
+    void decodesEveryCodeExactlyAsCodeOverFullScale() throws Exception {
+        ByteBuffer all16 = ByteBuffer.allocate(2 * 65536).order(ByteOrder.LITTLE_ENDIAN);
+        for (int v = Short.MIN_VALUE; v <= Short.MAX_VALUE; v++) {
+            all16.putShort((short) v);
+        }
+        try (WavReader r = read(wav(fmt(1, 1, 8000, 16), all16.array()))) {
+            double[] d = TestStreams.readAll(r, 5000)[0];
+            for (int v = Short.MIN_VALUE; v <= Short.MAX_VALUE; v++) {
+                assertEquals(Double.doubleToRawLongBits((double) v / 32768), Double.doubleToRawLongBits(
+                        d[v - Short.MIN_VALUE]), "16-bit code " + v);
+            }
+        }
+        int[] codes32 = {Integer.MIN_VALUE, Integer.MIN_VALUE + 1, -65536, -1, 0, 1, 12345678, Integer.MAX_VALUE};
+        ByteBuffer b32 = ByteBuffer.allocate(4 * codes32.length).order(ByteOrder.LITTLE_ENDIAN);
+        ByteBuffer b24 = ByteBuffer.allocate(3 * codes32.length).order(ByteOrder.LITTLE_ENDIAN);
+        for (int v : codes32) {
+            b32.putInt(v);
+            int v24 = v >> 8;
+            b24.put((byte) v24).put((byte) (v24 >> 8)).put((byte) (v24 >> 16));
+        }
+        try (WavReader r32 = read(wav(fmt(1, 1, 8000, 32), b32.array()));
+             WavReader r24 = read(wav(fmt(1, 1, 8000, 24), b24.array()))) {
+            double[] d32 = TestStreams.readAll(r32, 3)[0];
+            double[] d24 = TestStreams.readAll(r24, 3)[0];
+            for (int k = 0; k < codes32.length; k++) {
+                assertEquals(Double.doubleToRawLongBits((double) codes32[k] / 0x1p31),
+                        Double.doubleToRawLongBits(d32[k]), "32-bit code " + codes32[k]);
+                assertEquals(Double.doubleToRawLongBits((double) (codes32[k] >> 8) / 0x1p23),
+                        Double.doubleToRawLongBits(d24[k]), "24-bit code " + (codes32[k] >> 8));
+            }
+        }
+        byte[] b8 = {0, 1, 127, (byte) 128, (byte) 129, (byte) 255};
+        try (WavReader r8 = read(wav(fmt(1, 1, 8000, 8), b8))) {
+            double[] d8 = TestStreams.readAll(r8, 4)[0];
+            for (int k = 0; k < b8.length; k++) {
+                assertEquals(Double.doubleToRawLongBits(((b8[k] & 0xFF) - 128) / 128.0),
+                        Double.doubleToRawLongBits(d8[k]), "8-bit code " + (b8[k] & 0xFF));
+            }
+        }
+    }
+
     /** Builds a WAV from a fmt body and a list of (id, body) chunks placed before the data chunk. */
     private static byte[] wav(byte[] fmt, byte[] data, Object... chunks) {
         ByteArrayOutputStream body = new ByteArrayOutputStream();
