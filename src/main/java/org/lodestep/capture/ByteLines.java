@@ -17,12 +17,6 @@ final class ByteLines {
     static final int MAX_LINE_BYTES = 16 << 20;
 
     private final InputStream in;
-    /**
-     * Bytes kept unused past the end of the buffer's room, so that a parser may read a whole 64-bit word at any byte of a
-     * line without a bounds branch that would only be taken at a buffer's end.
-     */
-    static final int WORD_SLACK = Long.BYTES;
-
     private final String source;
     private byte[] buf;
     private int pos;
@@ -47,14 +41,13 @@ final class ByteLines {
     ByteLines(InputStream in, String source, int bufferBytes, int linesBefore) {
         this.in = in;
         this.source = source;
-        this.buf = new byte[bufferBytes + WORD_SLACK];
+        this.buf = new byte[bufferBytes];
         this.lineNumber = linesBefore;
     }
 
     /**
      * Lines of a chunk of whole lines already in memory ({@code b[0 ... length-1]}), numbered from after line
-     * {@code linesBefore} of its file; the array is used as the buffer, not copied. It should hold {@link #WORD_SLACK}
-     * bytes past {@code length}, so the fast parser never reaches its end.
+     * {@code linesBefore} of its file; the array is used as the buffer, not copied.
      */
     static ByteLines ofChunk(byte[] b, int length, String source, int linesBefore) {
         ByteLines l = new ByteLines(InputStream.nullInputStream(), source, 0, linesBefore);
@@ -112,16 +105,16 @@ final class ByteLines {
         bufferOffset += pos;
         if (pos > 0) {
             System.arraycopy(buf, pos, buf, 0, unread);
-        } else if (unread == room()) {
-            if (room() >= MAX_LINE_BYTES) {
+        } else if (unread == buf.length) {
+            if (buf.length >= MAX_LINE_BYTES) {
                 throw new InputFormatException(source, lineNumber + 1, null, null,
                         "is longer than " + (MAX_LINE_BYTES >> 20) + " MiB: expected one row of numbers per line");
             }
-            buf = Arrays.copyOf(buf, Math.min(room() * 2, MAX_LINE_BYTES) + WORD_SLACK);
+            buf = Arrays.copyOf(buf, Math.min(buf.length * 2, MAX_LINE_BYTES));
         }
         pos = 0;
         limit = unread;
-        int n = in.read(buf, limit, room() - limit);
+        int n = in.read(buf, limit, buf.length - limit);
         if (n < 0) {
             eof = true;
         } else {
@@ -134,11 +127,6 @@ final class ByteLines {
                 break;
             }
         }
-    }
-
-    /** Bytes the buffer may hold, the slack past them left free. */
-    private int room() {
-        return buf.length - WORD_SLACK;
     }
 
     /** Position of the first unread byte. */

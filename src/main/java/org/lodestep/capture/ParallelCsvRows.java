@@ -48,7 +48,7 @@ final class ParallelCsvRows implements AutoCloseable {
         int taken;
 
         Slot(int chunkBytes) {
-            bytes = new byte[chunkBytes + ByteLines.WORD_SLACK];
+            bytes = new byte[chunkBytes];
         }
     }
 
@@ -153,7 +153,7 @@ final class ParallelCsvRows implements AutoCloseable {
     }
 
     private int readAt(byte[] b, long offset) throws IOException {
-        ByteBuffer buf = ByteBuffer.wrap(b, 0, chunkBytes);
+        ByteBuffer buf = ByteBuffer.wrap(b);
         long at = offset;
         while (buf.hasRemaining()) {
             int got = channel.read(buf, at);
