@@ -168,7 +168,7 @@ public record CaptureSidecar(String dataFile, boolean complete, String interrupt
         } catch (JsonProcessingException e) {
             int line = e.getLocation() == null ? InputFormatException.NO_LINE : e.getLocation().getLineNr();
             throw new InputFormatException(source, line, null, null,
-                    "is not valid JSON (" + e.getOriginalMessage() + "): expected a capture sidecar");
+                    "is not valid JSON (" + JsonDocument.problem(e) + "): expected a capture sidecar");
         }
         if (o == null || !o.isObject() || !FORMAT.equals(o.path("format").asText(null))) {
             throw new InputFormatException(source, InputFormatException.NO_LINE, "format",

@@ -50,10 +50,22 @@ final class JsonDocument {
             return new JsonDocument(source, root, lines);
         } catch (JsonProcessingException e) {
             int line = e.getLocation() == null ? InputFormatException.NO_LINE : e.getLocation().getLineNr();
-            String msg = e.getOriginalMessage();
-            throw new InputFormatException(source, line, null, null, "is not valid JSON: "
-                    + (msg == null ? "" : msg.lines().findFirst().orElse("")));
+            throw new InputFormatException(source, line, null, null, "is not valid JSON: " + problem(e));
         }
+    }
+
+    /**
+     * The parser's own words for what is wrong, on one line, without its note of where the input came from (a
+     * "[Source: ...]" part that names the parser's settings, not the user's file).
+     */
+    static String problem(JsonProcessingException e) {
+        String msg = e.getOriginalMessage();
+        if (msg == null) {
+            return "unreadable";
+        }
+        String first = msg.lines().findFirst().orElse("");
+        return first.replaceAll("\\s*\\(start marker at \\[Source:.*$", "").replaceAll("\\s*at \\[Source:.*$", "")
+                .strip();
     }
 
     /** Line of the value at a JSON pointer ({@code /phases/0/resistance_ohm}), or the nearest parent's. */

@@ -78,11 +78,11 @@ public final class WavReader implements SampleStream {
         byte[] riff = readExactly(12, "a RIFF header of 12 bytes");
         String magic = ascii(riff, 0);
         if (!magic.equals("RIFF")) {
-            throw at(0, magic, "expected 'RIFF' at byte 0 (a WAVE file)"
+            throw at(0, magic, "expected 'RIFF' (a WAVE file)"
                     + (magic.equals("RF64") ? "; 64-bit RF64 files are not supported" : ""));
         }
         if (!ascii(riff, 8).equals("WAVE")) {
-            throw at(8, ascii(riff, 8), "expected 'WAVE' at byte 8");
+            throw at(8, ascii(riff, 8), "expected 'WAVE'");
         }
         Map<String, String> meta = new LinkedHashMap<>();
         int fmtFormat = -1;
@@ -309,7 +309,7 @@ public final class WavReader implements SampleStream {
     }
 
     private InputFormatException at(long byteOffset, String text, String expected) {
-        return new InputFormatException(source, InputFormatException.NO_LINE, "byte " + byteOffset, text, expected);
+        return InputFormatException.atByte(source, byteOffset, text, expected);
     }
 
     private static String ascii(byte[] b, int off) {

@@ -28,7 +28,13 @@ public class InputFormatException extends Exception {
      * @param expected what was expected there, in words a user understands (with the unit where one applies)
      */
     public InputFormatException(String source, int line, String column, String text, String expected) {
-        super(format(source, line, column, text, expected));
+        this(source, line, column, text, expected, (line > 0 ? " line " + line : "")
+                + (column != null ? ", column " + column : ""));
+    }
+
+    private InputFormatException(String source, int line, String column, String text, String expected,
+                                 String location) {
+        super(format(source, location, text, expected));
         this.source = Objects.requireNonNull(source, "source");
         this.line = line;
         this.column = column;
@@ -36,15 +42,17 @@ public class InputFormatException extends Exception {
         this.expected = Objects.requireNonNull(expected, "expected");
     }
 
-    private static String format(String source, int line, String column, String text, String expected) {
-        StringBuilder b = new StringBuilder(String.valueOf(source));
-        if (line > 0) {
-            b.append(" line ").append(line);
-        }
-        if (column != null) {
-            b.append(", column ").append(column);
-        }
-        b.append(": ");
+    /**
+     * A fault at a byte offset of a binary input (a WAV header), in the form {@code FILE, byte N: 'TEXT' EXPECTED};
+     * {@link #column()} reads {@code byte N}.
+     */
+    public static InputFormatException atByte(String source, long byteOffset, String text, String expected) {
+        String at = "byte " + byteOffset;
+        return new InputFormatException(source, NO_LINE, at, text, expected, ", " + at);
+    }
+
+    private static String format(String source, String location, String text, String expected) {
+        StringBuilder b = new StringBuilder(String.valueOf(source)).append(location).append(": ");
         if (text != null) {
             b.append('\'').append(oneLine(text)).append("' ");
         }

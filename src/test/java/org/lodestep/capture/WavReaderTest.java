@@ -274,6 +274,8 @@ class WavReaderTest {
                 () -> WavReader.open(TestStreams.fixture("wrong-riff.wav")));
         assertEquals("byte 0", riff.column());
         assertEquals("RIFX", riff.text());
+        assertTrue(riff.getMessage().endsWith("wrong-riff.wav, byte 0: 'RIFX' expected 'RIFF' (a WAVE file)"),
+                riff.getMessage());
 
         InputFormatException alaw = assertThrows(InputFormatException.class,
                 () -> read(wav(fmt(6, 1, 8000, 8), new byte[2])));
