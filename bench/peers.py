@@ -170,7 +170,8 @@ def main():
              "`lodestep leads identify` (sample)": [LAUNCHER, "leads", "identify", SAMPLE_LEADS]}
     for cmd in ["demo", "leads identify", "leads probe", "motor identify", "resonance sweep", "resonance ringdown",
                 "resonance predict", "qa check", "qa report", "qa export", "qa certificate", "rig ports", "rig info",
-                "rig measure", "rig capture", "rig serve"]:
+                "rig measure", "rig capture", "rig serve", "rig conformance", "drive curve", "drive plan",
+                "station"]:
         small[f"`lodestep {cmd} --help`"] = [LAUNCHER] + cmd.split() + ["--help"]
     small_res = alternate(small, SMALL_RUNS)
     check = alternate({"bash": ["bash", "-c", ":"],
