@@ -55,6 +55,10 @@ public final class WavReader implements SampleStream {
         (byte) 0xAA, 0x00, 0x38, (byte) 0x9B, 0x71};
     private static final long UNKNOWN_LENGTH = 0xFFFFFFFFL;
 
+    /** The bits of 2^52: a double whose last mantissa bit is worth exactly 1. */
+    private static final long TWO_52_BITS = 0x4330_0000_0000_0000L;
+    private static final double TWO_52_PLUS_31 = 0x1p52 + 0x1p31;
+
     private final String source;
     private final InputStream in;
     private final List<Channel> channels;
@@ -464,15 +468,11 @@ public final class WavReader implements SampleStream {
         }
     }
 
-    /** The bits of 2^52: a double whose last mantissa bit is worth exactly 1. */
-    private static final long TWO_52_BITS = 0x4330_0000_0000_0000L;
-    private static final double TWO_52_PLUS_31 = 0x1p52 + 0x1p31;
-
     /**
      * {@code (double) v}, exactly, from bits: u = v + 2^31 lies in [0, 2^32), so the bits of 2^52 with u in the
      * mantissa are the double 2^52 + u, and subtracting 2^52 + 2^31 is exact (the two are within a factor of two).
      * The processor's integer-to-double conversion writes only part of its register, so in a decoding loop each
-     * one waited on the previous sample's: this way decodes a long 16-bit file about 2.5 times faster.
+     * one waited on the previous sample's: this way decodes 16-bit samples about 2.5 times faster in optimised code.
      */
     private static double exact(int v) {
         return Double.longBitsToDouble(TWO_52_BITS | (v + 0x8000_0000L)) - TWO_52_PLUS_31;

@@ -1,6 +1,7 @@
 package org.lodestep.workflow;
 
 import static org.junit.jupiter.api.Assertions.assertEquals;
+import static org.junit.jupiter.api.Assertions.assertFalse;
 import static org.junit.jupiter.api.Assertions.assertTrue;
 
 import java.util.ArrayList;
@@ -58,5 +59,9 @@ class MotorOnRigTest {
         assertEquals(1, card.findings().size(), card.findings().toString());
         assertEquals(org.lodestep.motor.MotorFindingCode.FULL_CURRENT_LIMIT, card.findings().get(0).code());
         assertTrue(card.findings().get(0).message().contains("limited by back-EMF"), card.findings().toString());
+        // ... and the card's own account of the rate says the same, not that the back-EMF was left out
+        assertTrue(card.fullCurrentRateBasis().contains("back-EMF at its peak"), card.fullCurrentRateBasis());
+        String text = org.lodestep.report.MotorCardText.render(card);
+        assertFalse(text.contains("back-EMF ignored"), text);
     }
 }
