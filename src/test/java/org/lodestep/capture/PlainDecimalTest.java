@@ -48,8 +48,9 @@ class PlainDecimalTest {
     }
 
     /**
-     * The same check where the number sits inside a longer buffer, so its digits are taken eight bytes at a time:
-     * any byte value may follow the number's end, and lengths fall on and beside the word size.
+     * The same check where the number sits inside a longer buffer, as it does in a file's read buffer: any byte value
+     * may follow the number's end, and lengths fall on and beside eight bytes (a parser taking digits by the word
+     * would be held to the same answers).
      */
     @Test
     void matchesJdkParserInsideLongerBuffersWhateverBytesFollow() {
