@@ -286,6 +286,10 @@ public final class MotorIdentifier {
                 request.stepResponses());
     }
 
+    /** What the full-current rate asks of the drive, the start of its basis. */
+    private static final String FULL_STEP_REVERSAL = "full stepping: each current reversal within two full steps, "
+            + "against the inductance";
+
     /** The drive figures: rated-current estimate, the current used and its torque, supply, full-current rate. */
     private record Drive(Double current, String currentBasis, Double torque, Double ratedMinA, Double ratedMaxA,
                          String ratedAssumption, Double supply, String supplyBasis, Double suggestedSupply,
@@ -338,11 +342,9 @@ public final class MotorIdentifier {
                 rateBasis = "the supply cannot drive the current through the winding resistance";
             } else if (kt != null && steps != null) {
                 rate = withBackEmf(rate, supply, phaseR, phaseL, current, kt, steps, findings);
-                rateBasis = "full stepping: each current reversal within two full steps, against the inductance "
-                        + "and the back-EMF at its peak";
+                rateBasis = FULL_STEP_REVERSAL + " and the back-EMF at its peak";
             } else {
-                rateBasis = "full stepping: each current reversal within two full steps, against the inductance "
-                        + "only; the back-EMF (needs Kt and the rotor teeth) would lower it";
+                rateBasis = FULL_STEP_REVERSAL + " only; the back-EMF (needs Kt and the rotor teeth) would lower it";
             }
         } else if (phaseL == null) {
             unknowns.add(Unknown.of(Unknown.What.INDUCTANCE));

@@ -15,6 +15,10 @@ import org.lodestep.motor.Wiring;
 
 /** Renders a {@link MotorCard} as a plain-text card for the bench; computes nothing. */
 public final class MotorCardText {
+    /** Where the full-current limit of a microstepping drive comes from: the card's rate is for full stepping. */
+    static final String SINE_DRIVE_LIMIT = "for a microstepping drive's sine currents, 'lodestep drive curve --card' "
+            + "gives the steady-state limit";
+
     private MotorCardText() {
     }
 
@@ -121,9 +125,8 @@ public final class MotorCardText {
             String revs = card.fullCurrentRateRevPerS() == null ? ""
                     : String.format(Locale.ROOT, " = %s rev/s", num(card.fullCurrentRateRevPerS(), 3));
             b.append(String.format(Locale.ROOT, "  full current up to     %s full steps/s%s at %s V (%s)%n"
-                    + "                         %s; for a microstepping drive's sine currents, 'lodestep drive "
-                    + "curve --card' gives the steady-state limit%n", num(rate, 4), revs, num(card.supplyV(), 3),
-                    card.supplyBasis(), card.fullCurrentRateBasis()));
+                    + "                         %s; %s%n", num(rate, 4), revs, num(card.supplyV(), 3),
+                    card.supplyBasis(), card.fullCurrentRateBasis(), SINE_DRIVE_LIMIT));
         }
         if (card.naturalFrequencyHz() != null) {
             b.append(String.format(Locale.ROOT, "  natural frequency      %s Hz with %s kg·m² (full-step resonance near "

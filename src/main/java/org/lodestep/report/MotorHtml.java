@@ -127,8 +127,7 @@ public final class MotorHtml {
             }
             if (card.fullCurrentRateBasis() != null) {
                 basis.add(new HtmlReport.Finding(Status.INFO, "Full current: " + card.fullCurrentRateBasis()
-                        + "; for a microstepping drive's sine currents, 'lodestep drive curve --card' gives the "
-                        + "steady-state limit"));
+                        + "; " + MotorCardText.SINE_DRIVE_LIMIT));
             }
             b.findings(basis);
         }
