@@ -157,9 +157,10 @@ public final class Main implements Runnable {
     }
 
     /**
-     * Main's hooks into picocli as one named class, not lambdas: picocli's interfaces are old class files (Java 5),
-     * and a lambda implementing one makes the class-data archive leave out that interface and every picocli class
-     * implementing it (its type converters), which each launch then loads and verifies from the jar.
+     * Main's hooks into picocli as one named class, not lambdas: picocli ships its interfaces as Java 5 class files,
+     * and a lambda implementing one made the class-data archive leave out that interface and every picocli class
+     * implementing it (its type converters). The build now rewrites them as Java 6 class files
+     * ({@code org.lodestep.build.ClassFileUpgrade}); a named class keeps the archive independent of that.
      */
     private static final class Handlers implements CommandLine.IExecutionExceptionHandler,
             CommandLine.IParameterExceptionHandler, CommandLine.ITypeConverter<Double> {
