@@ -24,6 +24,12 @@ final class ParallelCsvRows implements AutoCloseable {
     static final int CHUNK_BYTES = 1 << 21;
     /** Most parsing threads. */
     static final int MAX_THREADS = 4;
+    /**
+     * Rows parsed, or checked, per call of the per-row loop: with many short calls the optimising compiler compiles
+     * each loop once, when the calls are many, instead of once while a long call runs (on-stack replacement) and
+     * again for the calls after it.
+     */
+    private static final int ROWS_PER_CALL = 4096;
 
     private static final int FREE = 0;
     private static final int PARSING = 1;
@@ -46,6 +52,8 @@ final class ParallelCsvRows implements AutoCloseable {
         int rows;
         int lineCount;
         int taken;
+        /** Rows whose time stamps passed their check, counted from the chunk's first. */
+        int checked;
 
         Slot(int chunkBytes) {
             bytes = new byte[chunkBytes];
@@ -191,7 +199,7 @@ final class ParallelCsvRows implements AutoCloseable {
         try {
             TimeSeriesCsvReader.ChunkParser p = reader.chunkParser(s.bytes, s.length, s.timesS, s.lines);
             int got;
-            while ((got = p.readRows(s.values, s.rows, s.timesS.length - s.rows)) > 0) {
+            while ((got = p.readRows(s.values, s.rows, Math.min(ROWS_PER_CALL, s.timesS.length - s.rows))) > 0) {
                 s.rows += got;
                 if (s.rows == s.timesS.length) {
                     int grown = s.timesS.length * 2;
@@ -246,13 +254,14 @@ final class ParallelCsvRows implements AutoCloseable {
             if (s == null || s.failed || s.lineTooLong) {
                 break;
             }
-            int take = Math.min(max - k, s.rows - s.taken);
-            int done = 0;
+            int end = s.taken + Math.min(max - k, s.rows - s.taken);
+            s.checked = s.taken;
             try {
-                for (; done < take; done++) {
-                    check.row(s.timesS[s.taken + done], s.lines[s.taken + done]);
+                while (s.checked < end) {
+                    checkRows(s, Math.min(end, s.checked + ROWS_PER_CALL), check);
                 }
             } finally {
+                int done = s.checked - s.taken;
                 for (int c = 0; c < dest.length; c++) {
                     System.arraycopy(s.values[c], s.taken, dest[c], at + k, done);
                 }
@@ -270,6 +279,18 @@ final class ParallelCsvRows implements AutoCloseable {
             }
         }
         return k;
+    }
+
+    /** Checks the rows of {@code s} from {@code s.checked} to {@code to}, in order; a failing row stops it there. */
+    private static void checkRows(Slot s, int to, RowCheck check) throws InputFormatException {
+        int i = s.checked;
+        try {
+            for (; i < to; i++) {
+                check.row(s.timesS[i], s.lines[i]);
+            }
+        } finally {
+            s.checked = i;
+        }
     }
 
     /**

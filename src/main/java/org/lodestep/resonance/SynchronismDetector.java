@@ -27,6 +27,9 @@ final class SynchronismDetector {
     record Window(double startS, double rateFullStepsPerS, double synchronousShare, double rms) {
     }
 
+    /** Samples per call of the per-sample loop ({@link #feed} says why). */
+    private static final int RUN_SAMPLES = 4096;
+
     private final double sampleRateHz;
     private final double periodFullSteps;
     private final List<Window> windows = new ArrayList<>();
@@ -54,6 +57,14 @@ final class SynchronismDetector {
      * close the open window).
      */
     void feed(double[] x, double[] fullSteps, int off, int len) {
+        // In runs of a few thousand samples: the optimising compiler then compiles the loop once, when its calls
+        // are many, instead of once while a long call runs (on-stack replacement) and again for the calls after it.
+        for (int from = off, end = off + len; from < end; from += RUN_SAMPLES) {
+            feedRun(x, fullSteps, from, Math.min(RUN_SAMPLES, end - from));
+        }
+    }
+
+    private void feedRun(double[] x, double[] fullSteps, int off, int len) {
         // The per-sample state lives in locals between window changes: field traffic in this loop, run for every
         // sample of a capture, cost more than the arithmetic (the first-tier compiler keeps no field in a register).
         final double limitSteps = MIN_PERIODS * periodFullSteps;
@@ -141,7 +152,7 @@ final class SynchronismDetector {
     }
 
     /**
-     * Opens a window with one sample per bin over one period at the present rate (8 ... 1024 bins); {@link #feed}
+     * Opens a window with one sample per bin over one period at the present rate (8 ... 1024 bins); {@link #feedRun}
      * starts the window's sums and position in its locals.
      */
     private void open(double incrementFullSteps) {

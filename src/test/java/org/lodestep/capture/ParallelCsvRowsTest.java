@@ -174,7 +174,7 @@ class ParallelCsvRowsTest {
             f[2] = bad;
             lines.set(at, String.join(",", f));
             Path file = write("bad-" + bad.length() + ".csv", lines, "\n", true);
-            for (int chunk : new int[] {200, 4096, 65536}) {
+            for (int chunk : new int[] {200, 4096, 65536, 1 << 18}) {
                 assertSameAsSerial(file, chunk, 777);
             }
         }
@@ -189,6 +189,9 @@ class ParallelCsvRowsTest {
             lines.set(at, stamp + lines.get(at).substring(lines.get(at).indexOf(',')));
             Path file = write("clock.csv", lines, "\n", true);
             assertSameAsSerial(file, 512, 4096);
+            // one chunk of more rows than one call of the row loop parses and checks
+            assertSameAsSerial(file, 1 << 18, 777);
+            assertSameAsSerial(file, 1 << 18, 8192);
         }
     }
 

@@ -101,4 +101,29 @@ class SynchronismTest {
             assertEquals(0.0, win.synchronousShare(), 0.2);
         }
     }
+
+    @Test
+    void theWindowsAreTheSameHoweverTheSamplesAreSplitIntoBlocks() {
+        // a streaming detector: one call, calls of awkward lengths and calls crossing its internal runs of 4096
+        // samples must give the same windows, bit for bit, gaps of unknown command included
+        java.util.Random rnd = new java.util.Random(5);
+        int n = 50_000;
+        double[] x = new double[n];
+        double[] steps = new double[n];
+        for (int i = 0; i < n; i++) {
+            steps[i] = i >= 20_000 && i < 20_700 ? Double.NaN : 80.0 * i / FS + 0.5 * 30 * Math.pow(i / FS, 2);
+            x[i] = Math.sin(2 * Math.PI * steps[i] / 4) + 0.5 * rnd.nextGaussian();
+        }
+        SynchronismDetector whole = new SynchronismDetector(FS, 4);
+        whole.feed(x, steps, 0, n);
+        java.util.List<SynchronismDetector.Window> expected = whole.finish();
+        assertTrue(expected.size() > 3, "windows: " + expected.size());
+        for (int block : new int[] {1, 4095, 4096, 4097, 9999}) {
+            SynchronismDetector split = new SynchronismDetector(FS, 4);
+            for (int from = 0; from < n; from += block) {
+                split.feed(x, steps, from, Math.min(block, n - from));
+            }
+            assertEquals(expected, split.finish(), "blocks of " + block);
+        }
+    }
 }
