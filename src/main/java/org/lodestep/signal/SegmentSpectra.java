@@ -247,8 +247,8 @@ public final class SegmentSpectra {
             int from = slot * settings.hopSamples();
             double[] x = samples;
             // Sums in four interleaved partial sums: one running sum makes each addition wait on the one before,
-            // and these two loops over every sample then cost about a quarter of the transform's time. The partial sums
-            // also round less than one running sum does (N. J. Higham, Accuracy and Stability of Numerical
+            // and these two loops over every sample then cost about a quarter of the transform's time. The partial
+            // sums also round less than one running sum does (N. J. Higham, Accuracy and Stability of Numerical
             // Algorithms, 2nd ed., SIAM 2002, ch. 4; references §30).
             double mean = 0;
             if (settings.detrend() == Detrend.MEAN) {
