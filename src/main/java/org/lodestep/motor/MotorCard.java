@@ -47,8 +47,7 @@ public record MotorCard(String topology, List<String> leads, String connection, 
                         String phaseCurrentBasis, Double holdingTorqueNm, Double ratedCurrentMinA,
                         Double ratedCurrentMaxA, String ratedCurrentAssumption, Double supplyV, String supplyBasis,
                         Double suggestedSupplyV, Double fullCurrentRateFullStepsPerS, String fullCurrentRateBasis,
-                        Double inertiaKgM2,
-                        Double naturalFrequencyHz, List<Unknown> unknowns, List<Finding> findings,
+                        Double inertiaKgM2, Double naturalFrequencyHz, List<Unknown> unknowns, List<Finding> findings,
                         BackEmfResult backEmf, List<StepInput> stepResponses) {
     public MotorCard {
         Objects.requireNonNull(topology, "topology");

@@ -20,6 +20,10 @@ import org.lodestep.wiring.Topology;
  * cards, then the motor-wide figures (step angle, constants, ratings, drive limits).
  */
 public final class MotorIdentifier {
+    /** What the full-current rate asks of the drive, the start of its basis. */
+    private static final String FULL_STEP_REVERSAL = "full stepping: each current reversal within two full steps, "
+            + "against the inductance";
+
     private MotorIdentifier() {
     }
 
@@ -285,10 +289,6 @@ public final class MotorIdentifier {
                 d.suggestedSupply(), d.rate(), d.rateBasis(), request.inertiaKgM2(), fn, unknowns, findings, emf,
                 request.stepResponses());
     }
-
-    /** What the full-current rate asks of the drive, the start of its basis. */
-    private static final String FULL_STEP_REVERSAL = "full stepping: each current reversal within two full steps, "
-            + "against the inductance";
 
     /** The drive figures: rated-current estimate, the current used and its torque, supply, full-current rate. */
     private record Drive(Double current, String currentBasis, Double torque, Double ratedMinA, Double ratedMaxA,

@@ -20,8 +20,8 @@ import org.objectweb.asm.MethodVisitor;
 import org.objectweb.asm.Opcodes;
 
 /**
- * Rewrites the class files of the runnable jar that predate Java 6 (the command-line and the maths library ship
- * them) as Java 6 class files with stack-map frames, run on the jar after it is assembled ({@code package} phase).
+ * Rewrites the class files of the runnable jar that predate Java 6 (picocli, Commons Math and ASM ship them) as
+ * Java 6 class files with stack-map frames, run on the jar after it is assembled ({@code package} phase).
  *
  * <p>Why: on Java 17 a static class-data archive holds such old classes but cannot verify them when it is made, so
  * the JVM verifies them at every start with its type-inferring verifier (JVMS 4.10.2); {@code leads identify} on a
