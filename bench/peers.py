@@ -245,7 +245,8 @@ def main():
           f"wall, {ing['cpu']:.2f} s CPU) | ≥ 400 MB/s | {'yes' if ingest_mbs >= 400 else 'no'} |")
     first = float(sp["first_gflops"])
     print(f"| spectral work, effective (2.5·N·log2 N per 4096-point transform, {sp['segments']} segments; Welch + "
-          f"spectrogram) | {first:.2f} GFLOP/s first pass in a fresh process, {float(sp['best_gflops']):.2f} warmed | "
+          f"spectrogram; `SpectralOnce` on the WAV, launcher's options for that file: `{' '.join(wav_opts)}`) | "
+          f"{first:.2f} GFLOP/s first pass in a fresh process, {float(sp['best_gflops']):.2f} warmed | "
           f"≥ 3 GFLOP/s | {'yes' if first >= 3 else 'no'} |")
     bare = medians(small_res["bare `java -version`"])["wall"]
     for name, goal in (("`lodestep --version`", 4), ("`lodestep leads identify` (sample)", 5)):
