@@ -4,9 +4,8 @@ import java.util.ArrayList;
 import java.util.List;
 import java.util.Map;
 import java.util.TreeMap;
-import java.util.concurrent.ForkJoinPool;
-import java.util.concurrent.ForkJoinTask;
 
+import org.lodestep.signal.BesideWork;
 import org.lodestep.signal.OrderTracking;
 import org.lodestep.signal.SegmentSpectra;
 import org.lodestep.signal.Spectrogram;
@@ -136,22 +135,23 @@ public final class SweepAnalyzer {
         }
         fed += len;
         // The step counts of a programmed sweep and the synchronism check need nothing from the spectra: they run
-        // on a second core while this thread frames and transforms. The detector sees the blocks one after another,
-        // in order, whichever thread runs it, so its results do not change.
+        // on a transform thread, ahead of the helpers the framer asks for, while this thread frames and transforms.
+        // The detector sees the blocks one after another, in order, whichever thread runs it, so its results do not
+        // change.
         Runnable beside = () -> {
             if (law != null) {
                 law.fullStepsAt(first, sampleRateHz, stepsBuffer, len);
             }
             sync.feed(x, shifted(off, len), off, len);
         };
-        ForkJoinTask<?> task = len >= BESIDE_MIN_FRAMES && Runtime.getRuntime().availableProcessors() > 1
-                ? ForkJoinPool.commonPool().submit(beside) : null;
+        BesideWork task = len >= BESIDE_MIN_FRAMES && Runtime.getRuntime().availableProcessors() > 1
+                ? BesideWork.start(beside) : null;
         if (task == null) {
             beside.run();
         }
         framer.feed(x, off, len);
         if (task != null) {
-            task.join(); // runs it here if no pool thread took it yet
+            task.join(); // runs it here if no transform thread took it yet
         }
     }
 
