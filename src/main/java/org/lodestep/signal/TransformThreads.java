@@ -35,13 +35,17 @@ final class TransformThreads {
         return Holder.POOL;
     }
 
+    /** Threads of the pool: one per core beside the feeding thread, at least one, within {@link #MAX_LANES}. */
+    static int poolThreads() {
+        return Math.max(1, Math.min(MAX_LANES, Runtime.getRuntime().availableProcessors()) - 1);
+    }
+
     /** Lazy holder: the pool exists only once a segmenter transforms in parallel. */
     private static final class Holder {
-        static final ExecutorService POOL = Executors.newFixedThreadPool(
-                Math.max(1, Math.min(MAX_LANES, Runtime.getRuntime().availableProcessors()) - 1), r -> {
-                    Thread t = new Thread(r, "lodestep-transform");
-                    t.setDaemon(true);
-                    return t;
-                });
+        static final ExecutorService POOL = Executors.newFixedThreadPool(poolThreads(), r -> {
+            Thread t = new Thread(r, "lodestep-transform");
+            t.setDaemon(true);
+            return t;
+        });
     }
 }

@@ -36,8 +36,7 @@ class BesideWorkTest {
     /** With every transform thread busy, the joining thread runs the work itself rather than wait for one. */
     @Test
     void joinRunsTheWorkHereWhenNoTransformThreadIsFree() throws InterruptedException {
-        int poolThreads = Math.max(1, Math.min(TransformThreads.MAX_LANES,
-                Runtime.getRuntime().availableProcessors()) - 1);
+        int poolThreads = TransformThreads.poolThreads();
         CountDownLatch release = new CountDownLatch(1);
         CountDownLatch started = new CountDownLatch(poolThreads);
         List<BesideWork> blockers = new ArrayList<>();
