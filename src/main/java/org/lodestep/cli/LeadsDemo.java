@@ -43,7 +43,7 @@ final class LeadsDemo implements DemoCommand.Section {
         if (files.isEmpty()) {
             throw new IOException(dir + ": no sample captures (*.csv, *.tsv) found");
         }
-        out.println(LeadsTextReport.CAUTION);
+        out.println(LeadsIdentifyOptions.CAUTION);
         int faulty = 0;
         ResistanceReadings probeTarget = null;
         for (Path f : files) {

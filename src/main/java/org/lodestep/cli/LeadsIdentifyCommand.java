@@ -106,7 +106,7 @@ final class LeadsIdentifyCommand implements Callable<Integer> {
         if (options.json) {
             out.println(ProvenanceBlock.json(LeadsJsonView.write(json), provenance));
         } else {
-            out.println(LeadsTextReport.CAUTION);
+            out.println(LeadsIdentifyOptions.CAUTION);
             out.print(ProvenanceBlock.text(provenance));
         }
         out.flush();

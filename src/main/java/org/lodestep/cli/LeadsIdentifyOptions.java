@@ -1,5 +1,6 @@
 package org.lodestep.cli;
 
+import org.lodestep.safety.Cautions;
 import org.lodestep.wiring.CopperTemperature;
 import org.lodestep.workflow.LeadsSettings;
 
@@ -7,6 +8,8 @@ import picocli.CommandLine.Option;
 
 /** Options shared by {@code leads identify} and {@code leads probe}: temperatures, tolerance, JSON. */
 final class LeadsIdentifyOptions {
+    /** The caution printed with every lead report on the terminal. */
+    static final String CAUTION = Cautions.leadMeasurementLine("with --ambient-c");
 
     @Option(names = "--ambient-c", paramLabel = "DEG_C",
             description = "Winding temperature when measured, in °C (identify: overrides '# temperature_c=' in the "

@@ -70,7 +70,7 @@ final class LeadsProbeCommand implements Callable<Integer> {
         PrintWriter prompts = options.json ? spec.commandLine().getErr() : out;
         int all = settings.allPairs();
         prompts.printf(Locale.ROOT, "Probing %d leads (%s); up to %d pairs.%n%s%n", leads.size(), String.join(", ",
-                leads), all, LeadsTextReport.CAUTION);
+                leads), all, LeadsIdentifyOptions.CAUTION);
         boolean scripted = answers != null || System.console() == null;
         try (BufferedReader in = answers != null ? Files.newBufferedReader(answers, StandardCharsets.UTF_8)
                 : new BufferedReader(new InputStreamReader(System.in, StandardCharsets.UTF_8))) {

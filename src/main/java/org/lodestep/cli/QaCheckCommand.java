@@ -14,6 +14,7 @@ import java.util.Map;
 import java.util.concurrent.Callable;
 
 import org.lodestep.report.ProvenanceBlock;
+import org.lodestep.safety.Cautions;
 import org.lodestep.workflow.Provenance;
 import org.lodestep.sample.InputFormatException;
 import org.lodestep.sample.InputLimits;
@@ -144,7 +145,7 @@ final class QaCheckCommand implements Callable<Integer> {
             QaCheck check = new QaCheck(settings, records);
             // the caution once every shared input has been read, and only where an insulation test is part of the work
             if (!json && partSpec.limit(Parameters.INSULATION_RESISTANCE).isPresent() && insulationTested()) {
-                out.println(QaText.insulationCaution(partSpec.insulationTestVoltageV()));
+                out.println(Cautions.insulationTestLine(partSpec.insulationTestVoltageV()));
             }
             if (serial != null) {
                 RecordStore.Appended a = check.check(serial, progress());

@@ -2,13 +2,16 @@ package org.lodestep.cli;
 
 import java.io.PrintWriter;
 import java.nio.file.Path;
+import java.util.Locale;
 import java.util.concurrent.Callable;
 
-import org.lodestep.report.ProvenanceBlock;
-import org.lodestep.report.Json;
-import org.lodestep.report.RigText;
 import org.lodestep.drive.DriveMode;
+import org.lodestep.report.Json;
+import org.lodestep.report.ProvenanceBlock;
+import org.lodestep.report.RigText;
 import org.lodestep.rig.SweepPlan;
+import org.lodestep.safety.Cautions;
+import org.lodestep.safety.Hazard;
 import org.lodestep.workflow.RigCaptureFile;
 import org.lodestep.workflow.RigSweepCapture;
 
@@ -102,7 +105,9 @@ final class RigCaptureCommand implements Callable<Integer> {
         PrintWriter o = spec.commandLine().getOut();
         // with --json the caution goes to stderr, so standard output stays one JSON document
         PrintWriter caution = json ? spec.commandLine().getErr() : o;
-        caution.printf(RigCautions.MOVING + "%n", Math.max(from, to));
+        caution.println(Cautions.beforeRigAction("moving axis", String.format(Locale.ROOT,
+                "the rig steps your driver up to %.0f full steps/s; the shaft and any load turn.", Math.max(from, to)),
+                Hazard.MOVING_AXIS, Hazard.HOT_MOTOR));
         caution.flush();
         RigSweepCapture.Result r;
         try (RigCli.Bar bar = new RigCli.Bar("sweep", spec.commandLine().getErr(), quiet)) {

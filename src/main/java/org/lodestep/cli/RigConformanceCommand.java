@@ -4,10 +4,12 @@ import java.io.Console;
 import java.io.PrintWriter;
 import java.util.concurrent.Callable;
 
-import org.lodestep.report.ProvenanceBlock;
 import org.lodestep.report.ConformanceText;
 import org.lodestep.report.Json;
+import org.lodestep.report.ProvenanceBlock;
 import org.lodestep.rig.RigConformance;
+import org.lodestep.safety.Cautions;
+import org.lodestep.safety.Hazard;
 import org.lodestep.workflow.Progress;
 import org.lodestep.workflow.RigConformanceCheck;
 
@@ -51,7 +53,10 @@ final class RigConformanceCommand implements Callable<Integer> {
         PrintWriter out = spec.commandLine().getOut();
         PrintWriter err = spec.commandLine().getErr();
         PrintWriter caution = json ? err : out;
-        caution.println(RigCautions.CONFORMANCE);
+        caution.println(Cautions.beforeRigAction("conformance run", "the checks apply the rig's lowest insulation test"
+                + " voltage (typically 100 V DC) between lead 1 and the motor frame several times, a few seconds each,"
+                + " and run a slow sweep (10 to 20 full steps/s) that turns the shaft. Better still, test with a dummy"
+                + " load of resistors on the rig's clips.", Hazard.INSULATION_TEST, Hazard.MOVING_AXIS));
         caution.flush();
         if (!confirmed && !confirmAtConsole()) {
             throw new UsageException("conformance run not confirmed: read the caution, then add "

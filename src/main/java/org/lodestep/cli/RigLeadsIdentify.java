@@ -53,7 +53,7 @@ final class RigLeadsIdentify {
             LeadsTextReport.write(out, "Motor on " + address + (motor == null ? "" : " (" + motor + ")"),
                     r.identification());
             out.println();
-            out.println(LeadsTextReport.CAUTION);
+            out.println(LeadsIdentifyOptions.CAUTION);
             out.print(ProvenanceBlock.text(provenance));
         }
         out.flush();

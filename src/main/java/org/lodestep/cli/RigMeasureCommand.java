@@ -8,9 +8,11 @@ import java.util.List;
 import java.util.Locale;
 import java.util.concurrent.Callable;
 
-import org.lodestep.report.ProvenanceBlock;
 import org.lodestep.report.Json;
+import org.lodestep.report.ProvenanceBlock;
 import org.lodestep.report.RigText;
+import org.lodestep.safety.Cautions;
+import org.lodestep.safety.Hazard;
 import org.lodestep.workflow.Provenance;
 import org.lodestep.workflow.RigCaptureFile;
 import org.lodestep.workflow.RigMeasure;
@@ -114,16 +116,21 @@ final class RigMeasureCommand implements Callable<Integer> {
         PrintWriter caution = json ? spec.commandLine().getErr() : o;
         if (k == RigMeasure.Kind.INSULATION) {
             int v = settings.insulationVolts();
-            caution.printf(RigCautions.INSULATION + "%n", v);
+            caution.println(Cautions.beforeRigAction("insulation test", "the rig applies " + v + " V DC between the"
+                    + " chosen lead and the motor frame, and discharges the winding before it answers.",
+                    Hazard.INSULATION_TEST));
             caution.flush();
             if (!confirmed && !confirmAtConsole(v)) {
                 throw new UsageException("insulation test not confirmed: read the caution, then add "
                         + "--yes-i-have-read-the-caution (or type ARM at the prompt)");
             }
         } else if (k == RigMeasure.Kind.STEP_RESPONSE) {
-            caution.printf(RigCautions.ENERGISED + "%n", settings.stepVolts());
+            caution.println(Cautions.beforeRigAction("energised winding", String.format(Locale.ROOT,
+                    "the rig drives up to %.3g V through the winding between the chosen leads.", settings.stepVolts()),
+                    Hazard.ENERGISED_WINDING));
         } else if (k == RigMeasure.Kind.BACK_EMF) {
-            caution.println(RigCautions.HAND_TURN);
+            caution.println(Cautions.beforeRigAction("hand turn", "you turn the shaft while the rig records the"
+                    + " voltage at the leads.", Hazard.TURNED_SHAFT));
         }
         RigMeasure.Result r;
         // a bar for streamed captures only; readings come one by one and print as a table

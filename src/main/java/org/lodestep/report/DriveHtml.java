@@ -19,10 +19,10 @@ import org.lodestep.report.html.Cell;
 import org.lodestep.report.html.Chart;
 import org.lodestep.report.html.HtmlReport;
 import org.lodestep.report.html.HtmlTable;
-import org.lodestep.report.html.SafetyNote;
 import org.lodestep.report.html.Status;
 import org.lodestep.report.html.XyChart;
 import org.lodestep.resonance.RateUnits;
+import org.lodestep.safety.Hazard;
 import org.lodestep.workflow.DriveCurve;
 import org.lodestep.workflow.DrivePlan;
 
@@ -124,7 +124,7 @@ public final class DriveHtml {
                     + (a.suggestions().size() > 1 ? " (more below)" : ""));
             b.verdict(s, head, answer, detail);
         }
-        b.safety(SafetyNote.MOVING_AXIS, SafetyNote.HOT_MOTOR);
+        b.safety(Hazard.MOVING_AXIS, Hazard.HOT_MOTOR);
         return b;
     }
 

@@ -13,6 +13,8 @@ import org.lodestep.drive.StepRateTable;
 import org.lodestep.drive.TorqueCurve;
 import org.lodestep.drive.TorquePoint;
 import org.lodestep.resonance.RateUnits;
+import org.lodestep.safety.Cautions;
+import org.lodestep.safety.Hazard;
 import org.lodestep.workflow.DriveCurve;
 import org.lodestep.workflow.DrivePlan;
 
@@ -166,7 +168,7 @@ public final class DriveJson {
             m.put("answer", null);
         }
         m.put("notes", r.notes());
-        m.put("safety", DriveText.safety());
+        m.put("safety", Cautions.sentences(Hazard.MOVING_AXIS, Hazard.HOT_MOTOR));
         return m;
     }
 }

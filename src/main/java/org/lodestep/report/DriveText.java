@@ -15,6 +15,8 @@ import org.lodestep.drive.Suggestion;
 import org.lodestep.drive.TorqueCurve;
 import org.lodestep.drive.TorquePoint;
 import org.lodestep.resonance.RateUnits;
+import org.lodestep.safety.Cautions;
+import org.lodestep.safety.Hazard;
 import org.lodestep.workflow.DriveCurve;
 import org.lodestep.workflow.DrivePlan;
 
@@ -27,18 +29,6 @@ public final class DriveText {
             + " see low-speed resonance or mid-band instability, where a motor can stall below this curve.";
 
     private DriveText() {
-    }
-
-    /** The cautions of a moving axis, one sentence each. */
-    public static List<String> safety() {
-        return List.of(
-                "A profile moves the axis at full torque: clear the travel, fit the guards, keep the emergency stop"
-                        + " within reach, and try a new profile at reduced speed and current first.",
-                "A motor that loses steps can jerk, stall and restart, and a vertical axis can drop when it stalls or"
-                        + " the drive is switched off: secure the load (brake, counterweight) before testing.",
-                "Motors and drivers get hot at high current; let them cool before handling.",
-                "Local electrical and machine-safety codes and your site's licensed practice take precedence over"
-                        + " anything printed here.");
     }
 
     public static void curve(PrintWriter out, DriveCurve.Result r) {
@@ -195,7 +185,7 @@ public final class DriveText {
         }
         out.println();
         out.println("Safety:");
-        for (String s : safety()) {
+        for (String s : Cautions.sentences(Hazard.MOVING_AXIS, Hazard.HOT_MOTOR)) {
             out.println("  - " + s);
         }
     }

@@ -8,8 +8,8 @@ import org.lodestep.report.html.Cell;
 import org.lodestep.report.html.Html;
 import org.lodestep.report.html.HtmlReport;
 import org.lodestep.report.html.HtmlTable;
-import org.lodestep.report.html.SafetyNote;
 import org.lodestep.report.html.Status;
+import org.lodestep.safety.Hazard;
 import org.lodestep.wiring.DriverWiring;
 import org.lodestep.wiring.Finding;
 import org.lodestep.wiring.Identification;
@@ -44,7 +44,7 @@ public final class LeadsHtml {
             b.meta("Temperature", LeadsTextReport.temperature(id));
         }
         verdict(b, id);
-        b.safety(SafetyNote.ENERGISED_COILS);
+        b.safety(Hazard.ENERGISED_WINDING);
 
         if (!id.connections().isEmpty()) {
             b.section("How to wire it");

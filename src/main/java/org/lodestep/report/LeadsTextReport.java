@@ -19,10 +19,6 @@ import org.lodestep.wiring.Winding;
  * findings with what to do next, driver connections, and the pairs still to measure.
  */
 public final class LeadsTextReport {
-    /** The one-line caution printed with every lead report. */
-    public static final String CAUTION = "Caution: measure with the motor disconnected from any driver and its shaft"
-            + " still; a hot motor reads high (let it cool or give --ambient-c). Follow local codes and practice.";
-
     private LeadsTextReport() {
     }
 

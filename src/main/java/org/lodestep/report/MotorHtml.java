@@ -6,12 +6,10 @@ import java.util.List;
 import java.util.Locale;
 import java.util.Map;
 
-import org.lodestep.wiring.Finding;
 import org.lodestep.motor.BackEmfTrace;
 import org.lodestep.motor.HalfWinding;
 import org.lodestep.motor.MotorCard;
 import org.lodestep.motor.PhaseCard;
-import org.lodestep.wiring.Severity;
 import org.lodestep.motor.StepInput;
 import org.lodestep.motor.StepResponseFit;
 import org.lodestep.motor.Terminal;
@@ -20,9 +18,11 @@ import org.lodestep.report.html.Cell;
 import org.lodestep.report.html.DriverTerminal;
 import org.lodestep.report.html.HtmlReport;
 import org.lodestep.report.html.HtmlTable;
-import org.lodestep.report.html.SafetyNote;
 import org.lodestep.report.html.Status;
 import org.lodestep.report.html.WiringDiagram;
+import org.lodestep.safety.Hazard;
+import org.lodestep.wiring.Finding;
+import org.lodestep.wiring.Severity;
 
 /**
  * The HTML motor card: wiring diagram, the motor's constants at a glance, each phase, the back-EMF of both phases,
@@ -83,7 +83,7 @@ public final class MotorHtml {
                     + (card.unknowns().isEmpty() ? "Nothing left unknown."
                     : "Still unknown: " + MotorCardText.unknownNames(card, phrasing) + "; see below."));
         }
-        b.safety(SafetyNote.ENERGISED_COILS, SafetyNote.HOT_MOTOR);
+        b.safety(Hazard.ENERGISED_WINDING, Hazard.HOT_MOTOR);
 
         if (card.wiring() != null && !card.phases().isEmpty()) {
             b.section("How to wire it");

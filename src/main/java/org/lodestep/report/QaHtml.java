@@ -19,8 +19,9 @@ import org.lodestep.report.html.ControlChart;
 import org.lodestep.report.html.HistogramChart;
 import org.lodestep.report.html.HtmlReport;
 import org.lodestep.report.html.HtmlTable;
-import org.lodestep.report.html.SafetyNote;
 import org.lodestep.report.html.Status;
+import org.lodestep.safety.Cautions;
+import org.lodestep.safety.Hazard;
 
 /**
  * HTML reports of incoming QA: the verdict table of each checked motor, and the lot report with, per parameter,
@@ -124,9 +125,8 @@ public final class QaHtml {
             }
         }
         if (!Double.isNaN(testVoltageV)) {
-            b.collapsed("\u26A0 Caution: the insulation test applies " + Math.round(testVoltageV) + " V DC: motor"
-                    + " disconnected, hands off, windings discharged (open for the full caution)");
-            b.safety(SafetyNote.INSULATION_TEST);
+            b.collapsed("\u26A0 " + Cautions.insulationTestLine(testVoltageV) + " (Open for the full caution.)");
+            b.safety(Hazard.INSULATION_TEST);
             b.endCollapsed();
         }
         return b.build();

@@ -103,13 +103,6 @@ public final class QaText {
                 t.failed(), t.incomplete());
     }
 
-    /** The one-line caution printed before checks that include an insulation test. */
-    public static String insulationCaution(double testVoltageV) {
-        return "Caution: the insulation test applies " + Math.round(testVoltageV) + " V DC. Motor disconnected from any"
-                + " driver, hands off leads and frame while the tester runs, windings discharged afterwards; local"
-                + " electrical-safety rules take precedence.";
-    }
-
     /**
      * The lot (or part, or date-range) report: the answer first (yield, failed and re-tested serials), the failed
      * checks with their margins, then each series (a parameter of one phase or pair).

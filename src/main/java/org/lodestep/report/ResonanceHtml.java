@@ -10,7 +10,6 @@ import org.lodestep.report.html.Cell;
 import org.lodestep.report.html.HeatMapChart;
 import org.lodestep.report.html.HtmlReport;
 import org.lodestep.report.html.HtmlTable;
-import org.lodestep.report.html.SafetyNote;
 import org.lodestep.report.html.Status;
 import org.lodestep.report.html.XyChart;
 import org.lodestep.resonance.AvoidList;
@@ -24,6 +23,7 @@ import org.lodestep.resonance.RingSpectrum;
 import org.lodestep.resonance.Stall;
 import org.lodestep.resonance.SweepResult;
 import org.lodestep.resonance.WatchPoint;
+import org.lodestep.safety.Hazard;
 import org.lodestep.signal.Spectrogram;
 import org.lodestep.signal.SpectrumScaling;
 import org.lodestep.workflow.ResonanceRingdown;
@@ -108,7 +108,7 @@ public final class ResonanceHtml {
                 b.findings(notes);
             }
         }
-        b.safety(SafetyNote.MOVING_AXIS, SafetyNote.HOT_MOTOR);
+        b.safety(Hazard.MOVING_AXIS, Hazard.HOT_MOTOR);
 
         b.section("Response against step rate");
         b.figure(responseChart(r, u, unit).toSvg(), "RMS vibration against full-step rate (bottom axis) and "
@@ -142,9 +142,6 @@ public final class ResonanceHtml {
                                 : String.format(Locale.ROOT, "%.1f Hz", band.mechanicalFrequencyHz())));
             }
             b.table(t.build());
-        }
-        for (String line : ResonanceSafety.lines()) {
-            b.paragraph(line);
         }
         return b.build();
     }
@@ -266,7 +263,7 @@ public final class ResonanceHtml {
                         risky.get(0), risky.get(1), risky.get(2)),
                 good ? criterion : criterion + " This fit is poor: the response is not a single damped oscillation,"
                         + " so these figures are rough.");
-        b.safety(SafetyNote.ENERGISED_COILS);
+        b.safety(Hazard.ENERGISED_WINDING);
         b.section("Decay and fit");
         b.figure(decayChart(w, u).toSvg(), String.format(Locale.ROOT, "The decay from its largest excursion"
                 + " (t = %.4f s) to where the fitted envelope has fallen to %.0f \u00D7 the noise RMS (%s %s): the"

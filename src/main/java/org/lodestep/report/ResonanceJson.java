@@ -7,16 +7,18 @@ import java.util.Locale;
 import java.util.Map;
 
 import org.lodestep.resonance.AvoidList;
+import org.lodestep.resonance.BackbonePoint;
 import org.lodestep.resonance.BandClass;
 import org.lodestep.resonance.Prediction;
 import org.lodestep.resonance.RateUnits;
 import org.lodestep.resonance.ResonanceBand;
 import org.lodestep.resonance.ResponsePoint;
-import org.lodestep.resonance.BackbonePoint;
 import org.lodestep.resonance.RingDownResult;
 import org.lodestep.resonance.Stall;
-import org.lodestep.resonance.WatchPoint;
 import org.lodestep.resonance.SweepResult;
+import org.lodestep.resonance.WatchPoint;
+import org.lodestep.safety.Cautions;
+import org.lodestep.safety.Hazard;
 
 /**
  * The JSON documents of the resonance commands, shaped for their readers (the README documents every key); computes
@@ -102,7 +104,7 @@ public final class ResonanceJson {
             }
             m.put("response", pts);
         }
-        m.put("safety", ResonanceSafety.lines());
+        m.put("safety", Cautions.sentences(Hazard.MOVING_AXIS, Hazard.HOT_MOTOR));
         return Json.write(m);
     }
 

@@ -11,8 +11,10 @@ import org.lodestep.resonance.RateUnits;
 import org.lodestep.resonance.ResonanceBand;
 import org.lodestep.resonance.RingDownResult;
 import org.lodestep.resonance.Stall;
-import org.lodestep.resonance.WatchPoint;
 import org.lodestep.resonance.SweepResult;
+import org.lodestep.resonance.WatchPoint;
+import org.lodestep.safety.Cautions;
+import org.lodestep.safety.Hazard;
 
 /** Plain-text rendering of sweep, ring-down and prediction results, for a terminal; computes nothing. */
 public final class ResonanceText {
@@ -201,7 +203,7 @@ public final class ResonanceText {
 
     public static void safety(PrintWriter out) {
         out.println("Safety:");
-        for (String s : ResonanceSafety.lines()) {
+        for (String s : Cautions.sentences(Hazard.MOVING_AXIS, Hazard.HOT_MOTOR)) {
             out.println("- " + s);
         }
     }

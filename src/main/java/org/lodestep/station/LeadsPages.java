@@ -9,17 +9,17 @@ import java.util.concurrent.ConcurrentHashMap;
 
 import org.lodestep.report.IdentifyProgressText;
 import org.lodestep.report.LeadsHtml;
-import org.lodestep.report.html.SafetyNote;
+import org.lodestep.report.html.Status;
 import org.lodestep.rig.RigClient;
 import org.lodestep.rig.RigInfo;
-import org.lodestep.workflow.LeadsOnRig;
+import org.lodestep.safety.Cautions;
+import org.lodestep.safety.Hazard;
+import org.lodestep.wiring.Identification;
 import org.lodestep.wiring.LeadPair;
-import org.lodestep.report.LeadsTextReport;
-import org.lodestep.report.html.Status;
+import org.lodestep.workflow.LeadsOnRig;
 import org.lodestep.workflow.LeadsProbe;
 import org.lodestep.workflow.LeadsSettings;
 import org.lodestep.workflow.SettingsException;
-import org.lodestep.wiring.Identification;
 
 import io.javalin.config.RoutesConfig;
 import io.javalin.http.Context;
@@ -111,7 +111,7 @@ final class LeadsPages {
     private String form(String problem) {
         return "<h1>Leads</h1>" + (problem == null ? "" : "<p class=\"problem\" role=\"alert\">"
                 + Layout.symbol(Status.FAIL) + " " + Layout.esc(problem) + "</p>")
-                + Layout.caution("Before you measure", List.of(LeadsTextReport.CAUTION))
+                + Layout.caution("Before you measure", List.of(Cautions.leadMeasurementLine("in the field below")))
                 + "<form method=\"post\" action=\"/leads/probes\" class=\"stack\">"
                 + Layout.formKeyField(desk.access.formKey())
                 + "<fieldset><legend>The motor's leads</legend>"
@@ -127,9 +127,9 @@ final class LeadsPages {
     /** Or let the rig measure: its caution, the arming, the start. */
     private String rigSection() {
         return "<section class=\"rig-action\" data-rig-action=\"leads\" data-url=\"/api/leads/rig\"><h2>Or let the rig "
-                + "measure</h2>" + Layout.caution(SafetyNote.ENERGISED_COILS.title(), List.of(
+                + "measure</h2>" + Layout.caution(Hazard.ENERGISED_WINDING.title(), List.of(
                 "The rig passes a measuring current through each lead pair of the motor clipped to it (rig "
-                        + desk.settings.rig() + ").", SafetyNote.ENERGISED_COILS.text()))
+                        + desk.settings.rig() + ").", Hazard.ENERGISED_WINDING.text()))
                 + "<div class=\"arm\"><button type=\"button\" class=\"arm-button\">Arm the rig for one session"
                 + "</button> <span class=\"arm-state\" role=\"status\" aria-live=\"assertive\">Not armed: the rig will "
                 + "not energise anything.</span></div><button type=\"button\" class=\"primary fire\" disabled>Measure "

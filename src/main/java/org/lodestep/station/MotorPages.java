@@ -7,18 +7,19 @@ import java.util.List;
 import java.util.Map;
 import java.util.concurrent.ConcurrentHashMap;
 
+import org.lodestep.motor.OrientedLeads;
+import org.lodestep.motor.WindingInput;
 import org.lodestep.report.IdentifyProgressText;
 import org.lodestep.report.MotorCardText;
 import org.lodestep.report.MotorHtml;
 import org.lodestep.report.MotorPhrasing;
-import org.lodestep.report.html.SafetyNote;
+import org.lodestep.rig.RigClient;
+import org.lodestep.rig.RigInfo;
+import org.lodestep.safety.Cautions;
+import org.lodestep.safety.Hazard;
 import org.lodestep.workflow.MotorCardSettings;
 import org.lodestep.workflow.MotorFromFiles;
 import org.lodestep.workflow.MotorOnRig;
-import org.lodestep.motor.OrientedLeads;
-import org.lodestep.motor.WindingInput;
-import org.lodestep.rig.RigClient;
-import org.lodestep.rig.RigInfo;
 import org.lodestep.workflow.SettingsException;
 
 import io.javalin.config.RoutesConfig;
@@ -55,8 +56,8 @@ final class MotorPages {
 
     private String form() {
         return "<h1>Motor</h1>"
-                + Layout.caution(SafetyNote.ENERGISED_COILS.title(), List.of(SafetyNote.ENERGISED_COILS.text(),
-                SafetyNote.HOT_MOTOR.text()))
+                + Layout.caution(Hazard.ENERGISED_WINDING.title(),
+                Cautions.sentences(Hazard.ENERGISED_WINDING, Hazard.HOT_MOTOR))
                 + "<form id=\"motor-form\" class=\"stack\" enctype=\"multipart/form-data\"><fieldset><legend>Captures"
                 + "</legend><label for=\"step_response\">Current step responses (CSV time_s,current_a with "
                 + "<code># leads=</code>), one per coil or phase</label><input type=\"file\" id=\"step_response\" "
@@ -77,11 +78,10 @@ final class MotorPages {
     /** Or measure on the rig: resistances, step responses, a hand-turned back-EMF, after the caution and arming. */
     private String rigSection() {
         return "<section class=\"rig-action\" data-rig-action=\"motor\" data-url=\"/api/motor/rig\"><h2>Or measure on "
-                + "the rig</h2>" + Layout.caution(SafetyNote.ENERGISED_COILS.title(), List.of("The rig ("
+                + "the rig</h2>" + Layout.caution(Hazard.ENERGISED_WINDING.title(), List.of("The rig ("
                 + desk.settings.rig() + ") measures the lead-pair resistances, then drives a voltage step through each "
                 + "coil (the caution above applies), then asks you to turn the shaft by hand while it records the "
-                + "back-EMF.", "Turning the shaft generates voltage at the leads, more the faster it turns: keep them "
-                + "apart and off any driver while you turn it."))
+                + "back-EMF.", Hazard.TURNED_SHAFT.text()))
                 + "<form class=\"stack rig-fields\"><fieldset class=\"grid\"><legend>Where the rig does not say</legend>"
                 + field("rig_revolutions", "Revolutions you will turn") + field("rig_phase_current_a",
                 "Rated phase current, A") + field("rig_supply_v", "Drive supply, V") + "</fieldset></form>"

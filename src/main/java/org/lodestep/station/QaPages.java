@@ -20,6 +20,7 @@ import org.lodestep.report.QaHtml;
 import org.lodestep.report.QaText;
 import org.lodestep.report.html.Status;
 import org.lodestep.rig.RigException;
+import org.lodestep.safety.Cautions;
 import org.lodestep.sample.InputFormatException;
 import org.lodestep.workflow.Progress;
 import org.lodestep.workflow.QaCertificate;
@@ -199,7 +200,7 @@ final class QaPages {
                 .append(" \u00b7 ").append(Layout.esc(run.sourceText)).append("</p>");
         if (run.rigInsulation) {
             double v = spec.insulationTestVoltageV();
-            sb.append(Layout.caution("High voltage: insulation test", List.of(QaText.insulationCaution(v))))
+            sb.append(Layout.caution("High voltage: insulation test", List.of(Cautions.insulationTestLine(v))))
                     .append("<div class=\"arm\"><button type=\"button\" id=\"arm\" data-volts=\"")
                     .append(Math.round(v)).append("\">Arm the ").append(Math.round(v))
                     .append(" V insulation test for the next motor</button> <span id=\"arm-state\" role=\"status\" "

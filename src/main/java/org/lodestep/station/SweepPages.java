@@ -22,13 +22,14 @@ import org.lodestep.report.DriveHtml;
 import org.lodestep.report.DriveText;
 import org.lodestep.report.ResonanceHtml;
 import org.lodestep.report.ResonanceJson;
-import org.lodestep.report.ResonanceSafety;
 import org.lodestep.report.ResonanceText;
 import org.lodestep.report.html.OutputFile;
 import org.lodestep.resonance.AvoidRange;
 import org.lodestep.resonance.ResonanceBand;
 import org.lodestep.resonance.ResponsePoint;
 import org.lodestep.rig.SweepPlan;
+import org.lodestep.safety.Cautions;
+import org.lodestep.safety.Hazard;
 import org.lodestep.workflow.DriveCurve;
 import org.lodestep.workflow.DrivePlan;
 import org.lodestep.workflow.ResonanceSweep;
@@ -104,7 +105,7 @@ final class SweepPages {
 
     private String form() {
         return "<h1>Sweep</h1>"
-                + Layout.caution("Moving axis", ResonanceSafety.lines())
+                + Layout.caution(Hazard.MOVING_AXIS.title(), Cautions.sentences(Hazard.MOVING_AXIS, Hazard.HOT_MOTOR))
                 + "<form id=\"sweep-form\" class=\"stack\">"
                 + "<label class=\"choice ack\"><input type=\"checkbox\" id=\"ack\" name=\"ack\" value=\"yes\"> I have read "
                 + "the caution: the travel is clear, the guards are on and the emergency stop is within reach</label>"
@@ -297,7 +298,8 @@ final class SweepPages {
     // ---- the drive profile across the bands ----
 
     private String planForm(String sweepId, int microsteps) {
-        return "<h2>Drive profile across the bands</h2>" + Layout.caution("Moving axis", DriveText.safety().subList(0, 2))
+        return "<h2>Drive profile across the bands</h2>" + Layout.caution(Hazard.MOVING_AXIS.title(),
+                Cautions.sentences(Hazard.MOVING_AXIS))
                 + "<form id=\"plan-form\" class=\"stack\" data-sweep=\"" + sweepId + "\"><p>The motor's constants (from "
                 + "its motor card or datasheet), the drive and the load; the profile crosses each band of this sweep's "
                 + "avoid-list at no less than its crossing acceleration.</p><fieldset class=\"grid\"><legend>Motor"

@@ -8,6 +8,8 @@ import java.util.List;
 import java.util.Map;
 import java.util.Objects;
 
+import org.lodestep.safety.Hazard;
+
 
 /**
  * One self-contained HTML report: inline CSS and SVG, no scripts, no network. The markup is XHTML-compatible (it
@@ -225,10 +227,10 @@ public final class HtmlReport {
         }
 
         /** Safety notes, each in a bordered box with a warning sign. */
-        public Builder safety(SafetyNote... notes) {
+        public Builder safety(Hazard... notes) {
             // one group, so that print can set the notes side by side and leave page 1 to the answer
             body.append("<div class=\"safety-notes\">");
-            for (SafetyNote n : notes) {
+            for (Hazard n : notes) {
                 body.append("<aside class=\"safety\"><h3>").append(Html.escape(n.title())).append("</h3><p>")
                         .append(Html.escape(n.text())).append("</p></aside>\n");
             }

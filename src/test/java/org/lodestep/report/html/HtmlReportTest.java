@@ -11,6 +11,7 @@ import java.nio.file.Path;
 import java.util.List;
 import java.util.stream.Stream;
 
+import org.lodestep.safety.Hazard;
 import org.junit.jupiter.api.Test;
 import org.junit.jupiter.api.io.TempDir;
 import org.w3c.dom.Document;
@@ -120,15 +121,15 @@ class HtmlReportTest {
 
     @Test
     void safetyNotesDeferToLocalCodes() throws Exception {
-        for (SafetyNote n : SafetyNote.values()) {
+        for (Hazard n : Hazard.values()) {
             Document d = XmlCheck.parse(HtmlReport.builder("k", "t").safety(n).build().html());
             Element aside = XmlCheck.elements(d, XmlCheck.XHTML, "aside").get(0);
             assertEquals("safety", aside.getAttribute("class"));
             assertTrue(aside.getTextContent().contains(n.title()));
         }
-        assertTrue(SafetyNote.INSULATION_TEST.text().contains("local electrical codes"));
-        assertTrue(SafetyNote.MOVING_AXIS.text().contains("licensed practice"));
-        assertTrue(SafetyNote.ENERGISED_COILS.text().contains("licensed practice"));
+        assertTrue(Hazard.INSULATION_TEST.text().contains("local electrical codes"));
+        assertTrue(Hazard.MOVING_AXIS.text().contains("licensed practice"));
+        assertTrue(Hazard.ENERGISED_WINDING.text().contains("licensed practice"));
     }
 
     @Test

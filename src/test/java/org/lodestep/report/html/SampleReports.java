@@ -4,6 +4,8 @@ import java.util.LinkedHashMap;
 import java.util.List;
 import java.util.Map;
 
+import org.lodestep.safety.Hazard;
+
 /**
  * Reports built from synthetic data with known shapes, for the structural and browser tests. The scenario (workshop,
  * part and serial numbers) is invented.
@@ -193,7 +195,7 @@ final class SampleReports {
                 .subtitle("Bench 3, Harrowgate Motion Repair (invented)")
                 .meta("Serial", hostile).meta("Operator", hostile).meta("Source", "captures/" + hostile + ".csv")
                 .verdict(Status.WARN, "Two resonance bands found", "Avoid 288\u2013326 steps/s. " + hostile)
-                .safety(SafetyNote.MOVING_AXIS)
+                .safety(Hazard.MOVING_AXIS)
                 .section("Wiring")
                 .figure(sixLeadSeries().toSvg(), "Six-lead motor in bipolar series.")
                 .figure(WiringDiagram.builder("Custom " + hostile).coil("A", hostile, "B" + hostile)
