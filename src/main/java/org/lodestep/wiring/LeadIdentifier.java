@@ -76,11 +76,8 @@ public final class LeadIdentifier {
         for (Winding w : windings) {
             WindingChecks.shorted(w).ifPresent(findings::add);
         }
-        for (ReadingUse u : cg.uses) {
-            if (u.kind().equals("leakage")) {
-                findings.add(WindingChecks.leakage(u, cg.continuityLimitOhm));
-            }
-        }
+        findings.addAll(WindingChecks.leakage(cg.uses.stream().filter(u -> u.kind().equals("leakage")).toList(),
+                windings, cg.continuityLimitOhm));
         List<DriverWiring> salvage = null;
         List<OpenCoil> openCoils = List.of();
         if (groupsDecided && !singletons.isEmpty()) {

@@ -1,10 +1,14 @@
 package org.lodestep.wiring;
 
 import java.util.ArrayList;
+import java.util.Comparator;
+import java.util.LinkedHashMap;
 import java.util.List;
 import java.util.Locale;
+import java.util.Map;
 import java.util.Optional;
 import java.util.OptionalDouble;
+import java.util.stream.Stream;
 
 /**
  * Builds windings from a fitted group and the findings about them: series relations, tap symmetry, phase balance,
@@ -206,7 +210,76 @@ final class WindingChecks {
                 + " from any driver, check the labels, and measure these pairs again.", String.join(", ", g)), g);
     }
 
-    static Finding leakage(ReadingUse u, double limitOhm) {
+    /**
+     * One finding per leakage fault: the readings between the same two windings are one fault (their insulation from
+     * each other), however many lead pairs show it; a reading between leads of no known winding stands alone.
+     */
+    static List<Finding> leakage(List<ReadingUse> leaks, List<Winding> windings, double limitOhm) {
+        Map<List<Integer>, List<ReadingUse>> byWindings = new LinkedHashMap<>();
+        List<Finding> out = new ArrayList<>();
+        for (ReadingUse u : leaks) {
+            int a = windingOf(u.pair().a(), windings);
+            int b = windingOf(u.pair().b(), windings);
+            if (a < 0 || b < 0 || a == b) {
+                out.add(leakage(u, limitOhm));
+            } else {
+                byWindings.computeIfAbsent(List.of(Math.min(a, b), Math.max(a, b)), k -> new ArrayList<>()).add(u);
+            }
+        }
+        for (var e : byWindings.entrySet()) {
+            List<ReadingUse> between = e.getValue();
+            out.add(between.size() == 1 ? leakage(between.get(0), limitOhm)
+                    : leakageBetween(windings.get(e.getKey().get(0)), windings.get(e.getKey().get(1)), between,
+                    limitOhm));
+        }
+        return out;
+    }
+
+    private static int windingOf(String lead, List<Winding> windings) {
+        for (int i = 0; i < windings.size(); i++) {
+            if (windings.get(i).leads().contains(lead)) {
+                return i;
+            }
+        }
+        return -1;
+    }
+
+    /**
+     * Several readings between two windings. Through one leakage path of resistance R between a point of each
+     * winding, the reading between any lead of the first and any of the second is R plus the copper from each lead
+     * to its point (series resistances add): so the readings lie between R and R plus both windings' resistances,
+     * and the lowest is between the leads nearest the path. Readings spread wider than that take more than one path.
+     */
+    private static Finding leakageBetween(Winding w1, Winding w2, List<ReadingUse> between, double limitOhm) {
+        ReadingUse lowest = between.stream().min(Comparator.comparingDouble(ReadingUse::resistanceOhm)).orElseThrow();
+        double lowOhm = lowest.resistanceOhm();
+        double highOhm = between.stream().mapToDouble(ReadingUse::resistanceOhm).max().orElseThrow();
+        // A handheld meter's error on one range (about 1 % of the reading, common practice) and probe contact (tenths
+        // of an ohm) blur where along the windings the path is.
+        double blurOhm = 0.01 * lowOhm + 0.3;
+        double copperOhm = w1.resistanceOhm() + w2.resistanceOhm();
+        String where;
+        if (highOhm - lowOhm > copperOhm + blurOhm) {
+            where = "They spread wider than one leakage path allows (more than both windings' " + ohm(copperOhm)
+                    + "), so there is more than one path.";
+        } else if (highOhm - lowOhm > blurOhm) {
+            where = "They fit one leakage path of about " + ohm(lowOhm) + " nearest " + lowest.pair().a() + " and "
+                    + lowest.pair().b() + " (the lowest reading; the others add the copper from each lead to it).";
+        } else {
+            where = "They fit one leakage path of about " + ohm(lowOhm) + ".";
+        }
+        List<String> leads = between.stream().flatMap(u -> Stream.of(u.pair().a(), u.pair().b()))
+                .distinct().sorted().toList();
+        return new Finding(FindingCode.PHASE_LEAKAGE, Severity.ERROR, String.format(Locale.ROOT,
+                "Windings %s and %s are not isolated from each other: %d readings between them, %s to %s, far above"
+                + " winding continuity (limit %s) but not open (damaged insulation, contamination, or leads"
+                + " touching). %s Separate and clean the lead ends and measure again; if it stays, run an"
+                + " insulation-resistance test before using the motor.", String.join("-", w1.ends()),
+                String.join("-", w2.ends()), between.size(), ohm(lowOhm), ohm(highOhm), ohm(limitOhm), where),
+                leads);
+    }
+
+    private static Finding leakage(ReadingUse u, double limitOhm) {
         LeadPair p = u.pair();
         return new Finding(FindingCode.PHASE_LEAKAGE, Severity.ERROR, String.format(Locale.ROOT,
                 "%s reads %s: far above winding continuity (limit %s) but not open, so there is leakage between leads"

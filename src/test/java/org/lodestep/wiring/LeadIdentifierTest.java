@@ -266,6 +266,44 @@ class LeadIdentifierTest {
         assertEquals(List.of("1", "3"), id.findings().get(0).leads());
     }
 
+    /**
+     * One leakage path of 56 Ω from a point 30 % along winding 1-2 to a point 80 % along winding 3-4. Series
+     * resistances add (Ohm's law), so each cross reading is the path plus the copper from each lead to its point:
+     * one fault, read four times, named once, nearest 1 and 4.
+     */
+    @Test
+    void readingsBetweenTwoWindingsAreOneLeakageFaultNearestTheirLowestPair() {
+        double r12 = 2.40;
+        double r34 = 2.38;
+        double pathOhm = 56.0;
+        double x = 0.3;
+        double y = 0.8;
+        ResistanceMatrix m = ResistanceMatrix.builder().reading("1", "2", r12).reading("3", "4", r34)
+                .reading("1", "3", x * r12 + pathOhm + y * r34)
+                .reading("1", "4", x * r12 + pathOhm + (1 - y) * r34)
+                .reading("2", "3", (1 - x) * r12 + pathOhm + y * r34)
+                .reading("2", "4", (1 - x) * r12 + pathOhm + (1 - y) * r34).build();
+        Identification id = identify(m);
+        assertEquals(Topology.FOUR_LEAD, id.topology());
+        assertEquals(1, id.findings().size(), id.findings().toString());
+        Finding f = id.findings().get(0);
+        assertEquals("phase-leakage", f.code().code());
+        assertEquals(List.of("1", "2", "3", "4"), f.leads());
+        assertTrue(f.message().contains("Windings 1-2 and 3-4 are not isolated"), f.message());
+        assertTrue(f.message().contains("one leakage path of about 57.2 Ω nearest 1 and 4"), f.message());
+    }
+
+    /** Two paths far apart along the windings spread the readings wider than both windings' copper. */
+    @Test
+    void readingsSpreadWiderThanTheCopperTakeMoreThanOnePath() {
+        ResistanceMatrix m = ResistanceMatrix.builder().reading("1", "2", 2.4).reading("3", "4", 2.4)
+                .reading("1", "3", 40.0).reading("1", "4", 70.0).reading("2", "3", 65.0).reading("2", "4", 90.0)
+                .build();
+        Identification id = identify(m);
+        assertEquals(1, id.findings().size(), id.findings().toString());
+        assertTrue(id.findings().get(0).message().contains("more than one path"), id.findings().get(0).message());
+    }
+
     @Test
     void loneKiloohmReadingIsLeakageNotAWinding() {
         ResistanceMatrix m = ResistanceMatrix.builder().reading("1", "2", 48_000).lead("3").lead("4").build();
