@@ -178,22 +178,26 @@ public final class TimeSeriesCsvReader implements SampleStream {
     private int readFirstRows(double[] timesS, int[] rowLines) throws IOException, InputFormatException {
         recordTimesS = timesS;
         recordLines = rowLines;
-        int want = timesS.length;
-        int n = 0;
-        while (n < want) {
-            n += parseWholeLinesInPlace(pending, n, want - n);
-            if (n >= want || !lines.next()) {
-                break;
+        try {
+            int want = timesS.length;
+            int n = 0;
+            while (n < want) {
+                n += parseWholeLinesInPlace(pending, n, want - n);
+                if (n >= want || !lines.next()) {
+                    break;
+                }
+                if (parseRow(pending, n)) {
+                    timesS[n] = rowTimeS;
+                    rowLines[n] = lines.lineNumber();
+                    n++;
+                }
             }
-            if (parseRow(pending, n)) {
-                timesS[n] = rowTimeS;
-                rowLines[n] = lines.lineNumber();
-                n++;
-            }
+            return n;
+        } finally {
+            // later rows are checked against the clock these rows set, not recorded
+            recordTimesS = null;
+            recordLines = null;
         }
-        recordTimesS = null;
-        recordLines = null;
-        return n;
     }
 
     /**
