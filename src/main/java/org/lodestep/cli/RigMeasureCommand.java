@@ -126,7 +126,8 @@ final class RigMeasureCommand implements Callable<Integer> {
             }
         } else if (k == RigMeasure.Kind.STEP_RESPONSE) {
             caution.println(Cautions.beforeRigAction("energised winding", String.format(Locale.ROOT,
-                    "the rig drives up to %.3g V through the winding between the chosen leads.", settings.stepVolts()),
+                    "the rig drives up to %.3g V through the winding between the chosen leads: hands off the leads"
+                    + " while the test runs.", settings.stepVolts()),
                     Hazard.ENERGISED_WINDING));
         } else if (k == RigMeasure.Kind.BACK_EMF) {
             caution.println(Cautions.beforeRigAction("hand turn", "you turn the shaft while the rig records the"

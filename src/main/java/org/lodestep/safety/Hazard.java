@@ -20,12 +20,10 @@ public enum Hazard {
             Hazard.ELECTRICAL_CODES),
     /** Energised windings: stored energy and the inductive kick. */
     ENERGISED_WINDING("Energised windings", List.of(
-            "A winding carrying current stores energy and kicks back a high voltage when the circuit opens: keep"
-                    + " hands off the leads while a test runs.",
-            "Connect and disconnect leads only with the driver or supply switched off and its capacitors discharged;"
-                    + " never unplug a motor from a running driver, which can destroy the driver and arc at the"
-                    + " connector.",
-            "Use a current-limited supply for step-response tests; windings warm up on repeated tests."),
+            "A winding carrying current stores energy and kicks back a high voltage when the circuit opens.",
+            "Connect and disconnect leads only with the driver or supply off and its capacitors discharged; unplugging"
+                    + " a motor from a running driver can destroy the driver and arc at the connector.",
+            "Use a current-limited supply for step-response tests."),
             Hazard.ELECTRICAL_CODES),
     /** Sweeps, ring-downs and motion profiles on a moving axis. */
     MOVING_AXIS("A sweep moves the axis", List.of(
@@ -50,8 +48,8 @@ public enum Hazard {
             "Turning the shaft generates voltage at the leads, more the faster it turns: keep the leads apart and"
                     + " disconnected from any driver while it turns."), null);
 
-    private static final String ELECTRICAL_CODES = "Follow local electrical codes, your site's procedures and"
-            + " licensed practice; they take precedence over anything printed here.";
+    private static final String ELECTRICAL_CODES = "Local electrical codes, the site's procedures and licensed"
+            + " practice take precedence.";
 
     private final String title;
     private final List<String> sentences;

@@ -127,7 +127,7 @@ class HtmlReportTest {
             assertEquals("safety", aside.getAttribute("class"));
             assertTrue(aside.getTextContent().contains(n.title()));
         }
-        assertTrue(Hazard.INSULATION_TEST.text().contains("local electrical codes"));
+        assertTrue(Hazard.INSULATION_TEST.text().contains("Local electrical codes"));
         assertTrue(Hazard.MOVING_AXIS.text().contains("licensed practice"));
         assertTrue(Hazard.ENERGISED_WINDING.text().contains("licensed practice"));
     }
