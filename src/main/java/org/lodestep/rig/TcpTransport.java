@@ -6,6 +6,7 @@ import java.io.OutputStream;
 import java.net.InetSocketAddress;
 import java.net.Socket;
 import java.net.SocketTimeoutException;
+import java.net.UnknownHostException;
 
 /** A rig behind a serial-to-network bridge, or {@code lodestep rig serve --tcp}: {@code tcp:host:port}. */
 final class TcpTransport implements Transport {
@@ -33,7 +34,11 @@ final class TcpTransport implements Transport {
             } catch (IOException ignored) {
                 // already failing
             }
-            throw new RigException(address + ": cannot connect (" + e.getMessage() + ")", e);
+            // an unknown host's message is the bare host name
+            String why = e instanceof UnknownHostException ? "unknown host " + host
+                    : e instanceof SocketTimeoutException ? "no answer within " + connectTimeoutMs + " ms"
+                    : e.getMessage();
+            throw new RigException(address + ": cannot connect (" + why + ")", e);
         }
     }
 

@@ -117,6 +117,14 @@ class RigCommandTest {
     }
 
     @Test
+    void aRigHostThatDoesNotResolveIsNamedAsUnknown() {
+        // .invalid never resolves (RFC 6761, section 6.4; references §32)
+        Result r = run("rig", "info", "tcp:rig.example.invalid:5000");
+        assertEquals(ExitCode.RIG_OR_IO, r.code());
+        assertTrue(r.err().contains("cannot connect (unknown host rig.example.invalid)"), r.err());
+    }
+
+    @Test
     void badPairAndBadKindAreUsageErrors() {
         assertEquals(ExitCode.USAGE, run("rig", "measure", "sim:bench-4", "resistance", "--pair", "2-2").code());
         assertEquals(ExitCode.USAGE, run("rig", "measure", "sim:bench-4", "inductance").code());
