@@ -45,7 +45,8 @@ class QaHtmlTest {
         assertTrue(cells.contains("\u2716 fail") && cells.contains("\u2714 pass"), cells);
         // The operator's name is shown as typed, markup characters and all.
         assertTrue(ReportCli.texts(lotCheck, ReportCli.XHTML, "dd").contains("R. <Okafor> & co"));
-        assertTrue(String.join(" ", ReportCli.texts(lotCheck, ReportCli.XHTML, "aside")).contains("local electrical"));
+        assertTrue(String.join(" ", ReportCli.texts(lotCheck, ReportCli.XHTML, "aside"))
+                .contains("Local electrical codes"));
     }
 
     // The lot's check page is compact: a motor that passed is one collapsed line, one that failed shows its checks
