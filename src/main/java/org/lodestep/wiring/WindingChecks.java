@@ -270,13 +270,15 @@ final class WindingChecks {
         }
         List<String> leads = between.stream().flatMap(u -> Stream.of(u.pair().a(), u.pair().b()))
                 .distinct().sorted().toList();
+        String range = !ohm(lowOhm).equals(ohm(highOhm)) ? ohm(lowOhm) + " to " + ohm(highOhm)
+                : (between.size() == 2 ? "both " : "all ") + ohm(lowOhm);
         return new Finding(FindingCode.PHASE_LEAKAGE, Severity.ERROR, String.format(Locale.ROOT,
-                "Windings %s and %s are not isolated from each other: %d readings between them, %s to %s, far above"
-                + " winding continuity (limit %s) but not open (damaged insulation, contamination, or leads"
-                + " touching). %s Separate and clean the lead ends and measure again; if it stays, run an"
-                + " insulation-resistance test before using the motor.", String.join("-", w1.ends()),
-                String.join("-", w2.ends()), between.size(), ohm(lowOhm), ohm(highOhm), ohm(limitOhm), where),
-                leads);
+                "%s %s and %s are not isolated from each other: %d readings between them, %s, far above winding"
+                + " continuity (limit %s) but not open (damaged insulation, contamination, or leads touching). %s"
+                + " Separate and clean the lead ends and measure again; if it stays, run an insulation-resistance test"
+                + " before using the motor.", w1.halfWinding() && w2.halfWinding() ? "Half-windings" : "Windings",
+                String.join("-", w1.ends()), String.join("-", w2.ends()), between.size(), range, ohm(limitOhm),
+                where), leads);
     }
 
     private static Finding leakage(ReadingUse u, double limitOhm) {
