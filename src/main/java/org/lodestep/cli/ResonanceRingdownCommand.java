@@ -63,9 +63,9 @@ final class ResonanceRingdownCommand implements Callable<Integer> {
             ProvenanceBlock.html(ResonanceHtml.ringDown(r), provenance).write(report);
         }
         if (json) {
-            out.println(ProvenanceBlock.json(ResonanceJson.ringDown(r.source(), r.channel(), r.fit()), provenance));
+            out.println(ProvenanceBlock.json(ResonanceJson.ringDown(r), provenance));
         } else {
-            ResonanceText.ringDown(out, r.source(), r.channel(), r.fit());
+            ResonanceText.ringDown(out, r);
             out.print(ProvenanceBlock.text(provenance));
         }
         out.flush();

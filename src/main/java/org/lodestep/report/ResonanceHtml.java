@@ -263,6 +263,10 @@ public final class ResonanceHtml {
                         risky.get(0), risky.get(1), risky.get(2)),
                 good ? criterion : criterion + " This fit is poor: the response is not a single damped oscillation,"
                         + " so these figures are rough.");
+        String glitches = ResonanceText.bridgedSamples(w);
+        if (glitches != null) {
+            b.findings(List.of(new HtmlReport.Finding(Status.WARN, glitches)));
+        }
         b.safety(Hazard.ENERGISED_WINDING);
         b.section("Decay and fit");
         b.figure(decayChart(w, u).toSvg(), String.format(Locale.ROOT, "The decay from its largest excursion"
@@ -304,7 +308,8 @@ public final class ResonanceHtml {
                     r.wholeRingFrequencyHz(), r.wholeRingRSquared()));
             facts.put("Cycles measured", Integer.toString(r.backbone().size()));
         }
-        facts.put("Quality factor Q", String.format(Locale.ROOT, "%.1f", r.qualityFactor()));
+        facts.put("Quality factor Q", Double.isFinite(r.qualityFactor())
+                ? String.format(Locale.ROOT, "%.1f", r.qualityFactor()) : "not determined (no decay measured)");
         facts.put("Decay rate \u03C3", String.format(Locale.ROOT, "%.1f 1/s", r.decayRatePerS()));
         facts.put("Fit quality R\u00B2", String.format(Locale.ROOT, "%.3f", r.rSquared()));
         facts.put("RMS residual", sig(r.rmsResidual()) + " " + u);

@@ -19,6 +19,8 @@ import org.lodestep.resonance.SweepResult;
 import org.lodestep.resonance.WatchPoint;
 import org.lodestep.safety.Cautions;
 import org.lodestep.safety.Hazard;
+import org.lodestep.signal.LoneSamples.LoneSample;
+import org.lodestep.workflow.ResonanceRingdown;
 
 /**
  * The JSON documents of the resonance commands, shaped for their readers (the README documents every key); computes
@@ -168,10 +170,11 @@ public final class ResonanceJson {
         return j;
     }
 
-    public static String ringDown(String source, String channel, RingDownResult r) {
+    public static String ringDown(ResonanceRingdown.Result w) {
+        RingDownResult r = w.fit();
         Map<String, Object> m = new LinkedHashMap<>();
-        m.put("source", source);
-        m.put("channel", channel);
+        m.put("source", w.source());
+        m.put("channel", w.channel());
         m.put("natural_frequency_hz", r.naturalFrequencyHz());
         m.put("damped_frequency_hz", r.dampedFrequencyHz());
         m.put("damping_ratio", r.dampingRatio());
@@ -194,6 +197,16 @@ public final class ResonanceJson {
         m.put("ring_start_time_s", r.ringStartTimeS());
         m.put("noise_rms", r.noiseRms());
         m.put("decay_end_time_s", r.decayEndTimeS());
+        List<Map<String, Object>> bridged = new ArrayList<>();
+        double[] t = w.timeS();
+        for (LoneSample g : w.bridged()) {
+            Map<String, Object> j = new LinkedHashMap<>();
+            j.put("time_s", t[g.index()]);
+            j.put("read", g.readValue());
+            j.put("bridged", g.bridgedValue());
+            bridged.add(j);
+        }
+        m.put("bridged_samples", bridged);
         List<Map<String, Object>> bb = new ArrayList<>();
         for (BackbonePoint c : r.backbone()) {
             Map<String, Object> j = new LinkedHashMap<>();

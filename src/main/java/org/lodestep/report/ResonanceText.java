@@ -1,6 +1,7 @@
 package org.lodestep.report;
 
 import java.io.PrintWriter;
+import java.util.List;
 import java.util.Locale;
 
 import org.lodestep.resonance.AvoidList;
@@ -15,6 +16,8 @@ import org.lodestep.resonance.SweepResult;
 import org.lodestep.resonance.WatchPoint;
 import org.lodestep.safety.Cautions;
 import org.lodestep.safety.Hazard;
+import org.lodestep.signal.LoneSamples.LoneSample;
+import org.lodestep.workflow.ResonanceRingdown;
 
 /** Plain-text rendering of sweep, ring-down and prediction results, for a terminal; computes nothing. */
 public final class ResonanceText {
@@ -133,15 +136,20 @@ public final class ResonanceText {
         }
     }
 
-    public static void ringDown(PrintWriter out, String source, String channel, RingDownResult r) {
-        out.printf(Locale.ROOT, "Ring-down: %s, channel %s%n", source, channel);
+    public static void ringDown(PrintWriter out, ResonanceRingdown.Result w) {
+        RingDownResult r = w.fit();
+        out.printf(Locale.ROOT, "Ring-down: %s, channel %s%n", w.source(), w.channel());
+        String glitches = bridgedSamples(w);
+        if (glitches != null) {
+            out.println("  " + glitches);
+        }
         boolean bb = !r.backbone().isEmpty();
         out.printf(Locale.ROOT, "  natural frequency   %10.1f Hz%s%n", r.naturalFrequencyHz(), bb
                 ? String.format(Locale.ROOT, " ± %.1f  (small-signal, extrapolated to zero swing)",
                 r.naturalFrequencyErrorHz()) : "");
         out.printf(Locale.ROOT, "  damped frequency    %10.1f Hz%s%n", r.dampedFrequencyHz(), "");
-        out.printf(Locale.ROOT, "  damping ratio       %10.4f%s   (Q = %.1f)%n", r.dampingRatio(), bb
-                ? String.format(Locale.ROOT, " ± %.4f", r.dampingRatioError()) : "", r.qualityFactor());
+        out.printf(Locale.ROOT, "  damping ratio       %10.4f%s   (%s)%n", r.dampingRatio(), bb
+                ? String.format(Locale.ROOT, " ± %.4f", r.dampingRatioError()) : "", quality(r));
         if (bb) {
             out.printf(Locale.ROOT, "  large-swing freq.   %10.1f Hz   (first cycle; %d cycles measured; one sinusoid"
                     + " over the whole ring would say %.1f Hz, R² %.3f)%n", r.largeSwingFrequencyHz(),
@@ -161,6 +169,37 @@ public final class ResonanceText {
         out.println("  Low-speed resonance is expected near full-step rates of f_n, f_n/2, f_n/3:");
         java.util.List<Double> risky = r.riskyRatesFullStepsPerS(3);
         out.printf(Locale.ROOT, "  %.1f, %.1f, %.1f full steps/s%n", risky.get(0), risky.get(1), risky.get(2));
+    }
+
+    /** Q, or why there is none: a damping ratio of zero (no decay measured) gives no finite Q. */
+    static String quality(RingDownResult r) {
+        return Double.isFinite(r.qualityFactor()) ? String.format(Locale.ROOT, "Q = %.1f", r.qualityFactor())
+                : "Q not determined: no decay measured";
+    }
+
+    /**
+     * The samples bridged as glitches, in a sentence, or null when there were none. Up to three are named with their
+     * times and readings.
+     */
+    static String bridgedSamples(ResonanceRingdown.Result w) {
+        List<LoneSample> b = w.bridged();
+        if (b.isEmpty()) {
+            return null;
+        }
+        double[] t = w.timeS();
+        StringBuilder named = new StringBuilder();
+        for (int i = 0; i < Math.min(3, b.size()); i++) {
+            LoneSample s = b.get(i);
+            named.append(i == 0 ? "" : "; ").append(String.format(Locale.ROOT, "t = %.4f s read %s (neighbours' mean"
+                    + " %s)", t[s.index()], sig(s.readValue()), sig(s.bridgedValue())));
+        }
+        if (b.size() > 3) {
+            named.append("; and ").append(b.size() - 3).append(" more");
+        }
+        return String.format(Locale.ROOT, "%d sample%s taken for a glitch and bridged by the mean of its neighbours: %s."
+                + " A lone sample standing over both neighbours by more than four times the largest step around it is"
+                + " no part of an oscillation; check the sensor's cable and the acquisition.", b.size(),
+                b.size() == 1 ? "" : "s", named);
     }
 
     /** Up to six cycles from the largest swing to the smallest, evenly spread. */

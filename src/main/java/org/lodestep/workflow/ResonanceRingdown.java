@@ -3,6 +3,7 @@ package org.lodestep.workflow;
 import java.io.IOException;
 import java.nio.file.Path;
 import java.util.Arrays;
+import java.util.List;
 import java.util.Objects;
 
 import org.lodestep.capture.Captures;
@@ -11,10 +12,13 @@ import org.lodestep.resonance.RingDownResult;
 import org.lodestep.resonance.RingSpectrum;
 import org.lodestep.sample.InputFormatException;
 import org.lodestep.sample.SampledSignal;
+import org.lodestep.signal.LoneSamples;
+import org.lodestep.signal.LoneSamples.LoneSample;
 
 /**
- * Fits a damped oscillation to a single-step (or tap) response: picks the channel, cuts the time window, runs
- * {@link RingDownFit} and hands back the fitted stretch with the fit, so a report draws both without refitting.
+ * Fits a damped oscillation to a single-step (or tap) response: picks the channel, cuts the time window, bridges
+ * lone glitch samples ({@link LoneSamples}), runs {@link RingDownFit} and hands back the fitted stretch with the fit,
+ * so a report draws both without refitting.
  *
  * <p>Errors: a window that selects no samples is an {@link IllegalArgumentException} (the caller's setting); a
  * capture that holds no ring-down is an {@link InputFormatException} naming the source and channel.
@@ -46,12 +50,16 @@ public final class ResonanceRingdown {
      * @param decayTo   index after the last sample of the decay: where the envelope has fallen into the noise
      *                  ({@link RingDownResult#decayEndTimeS}), or the end of the window
      * @param spectrum  the decay's spectrum ({@link RingSpectrum}), up to {@link #SPECTRUM_SPAN} times f_n
+     * @param bridged   samples taken for glitches ({@link LoneSamples}): in {@code values} and in the fit each
+     *                  stands bridged by its neighbours' mean; indices into {@code timeS}
      */
     public record Result(String source, String channel, String unit, double[] timeS, double[] values,
-                         RingDownResult fit, int decayFrom, int decayTo, RingSpectrum spectrum) {
+                         RingDownResult fit, int decayFrom, int decayTo, RingSpectrum spectrum,
+                         List<LoneSample> bridged) {
         public Result {
             Objects.requireNonNull(fit, "fit");
             Objects.requireNonNull(spectrum, "spectrum");
+            bridged = List.copyOf(bridged);
             if (timeS.length != values.length) {
                 throw new IllegalArgumentException("time and values differ in length: " + timeS.length + " and "
                         + values.length + " samples");
@@ -110,7 +118,10 @@ public final class ResonanceRingdown {
             throw new IllegalArgumentException("the time window (from-s/to-s) selects no samples of " + source
                     + " (it runs from " + sig.startTimeS() + " s for " + x.length / fs + " s)");
         }
-        double[] part = Arrays.copyOfRange(x, from, to);
+        // One bad sample would otherwise be the ring's largest excursion and its fit's worst residual.
+        double[] read = Arrays.copyOfRange(x, from, to);
+        List<LoneSample> lone = LoneSamples.find(read);
+        double[] part = LoneSamples.bridged(read, lone);
         double t0 = sig.startTimeS() + from / fs;
         progress.step("fitting the ring-down of channel " + name);
         RingDownResult r;
@@ -132,6 +143,6 @@ public final class ResonanceRingdown {
         decayTo = Math.max(decayTo, Math.min(part.length, Math.max(decayFrom + 8, twoPeriods)));
         RingSpectrum spectrum = RingSpectrum.of(Arrays.copyOfRange(part, decayFrom, decayTo), r.offset(), fs,
                 SPECTRUM_SPAN * r.naturalFrequencyHz());
-        return new Result(source, name, sig.channels().get(c).unit(), t, part, r, decayFrom, decayTo, spectrum);
+        return new Result(source, name, sig.channels().get(c).unit(), t, part, r, decayFrom, decayTo, spectrum, lone);
     }
 }

@@ -26,6 +26,37 @@ class ResonanceRingdownTest {
         assertEquals(t[1] - t[0], t[t.length - 1] - t[t.length - 2], 1e-9);
     }
 
+    /**
+     * A damped oscillation from the model x = e^(-ζω_n t)·cos(ω_d t) (S. S. Rao, Mechanical Vibrations, 5th ed.,
+     * ch. 2), f_n = 80 Hz, ζ = 0.05, with noise: one bad sample in the ring, five times the first swing, would be
+     * the ring's largest excursion; bridged, the fit gives what the clean record gives.
+     */
+    @Test
+    void oneBadSampleInTheRingIsBridgedAndTheFitStaysOnTheModel() throws Exception {
+        double fs = 10_000;
+        double fn = 80;
+        double zeta = 0.05;
+        double wd = 2 * Math.PI * fn * Math.sqrt(1 - zeta * zeta);
+        java.util.Random rnd = new java.util.Random(3);
+        double[] x = new double[5000];
+        for (int i = 0; i < x.length; i++) {
+            double t = i / fs - 0.05;
+            x[i] = (t < 0 ? 0 : Math.exp(-zeta * 2 * Math.PI * fn * t) * Math.cos(wd * t)) + 0.002 * rnd.nextGaussian();
+        }
+        x[1200] = 5.0;
+        org.lodestep.sample.SampledSignal sig = new org.lodestep.sample.SampledSignal("glitchy ring",
+                java.util.List.of(new org.lodestep.sample.Channel("accel", "g")), fs, 0, java.util.Map.of(),
+                new double[][] {x});
+        ResonanceRingdown.Result r = ResonanceRingdown.fit(sig, ResonanceRingdown.Settings.DEFAULT, Progress.NONE);
+        assertEquals(1, r.bridged().size());
+        assertEquals(0.12, r.timeS()[r.bridged().get(0).index()], 1e-9);
+        assertEquals(5.0, r.bridged().get(0).readValue());
+        assertEquals(fn, r.fit().naturalFrequencyHz(), 0.5);
+        assertEquals(zeta, r.fit().dampingRatio(), 0.002);
+        assertTrue(r.fit().rSquared() > 0.99, "R² " + r.fit().rSquared());
+        assertTrue(r.fit().ringStartTimeS() < 0.06, "the ring starts at its own first swing, not at the glitch");
+    }
+
     @Test
     void windowThatSelectsNoSamplesIsASettingError() {
         IllegalArgumentException e = assertThrows(IllegalArgumentException.class, () -> ResonanceRingdown.fit(
