@@ -3,6 +3,8 @@ package org.lodestep.motor;
 import java.util.ArrayList;
 import java.util.Arrays;
 import java.util.List;
+import org.lodestep.signal.LoneSamples;
+import org.lodestep.signal.LoneSamples.LoneSample;
 import org.lodestep.wiring.Finding;
 
 /**
@@ -51,7 +53,7 @@ public final class BackEmfAnalyzer {
                                  int pulsesPerRevolution) {
         int n = checkedLength(channels, revolutions, indexChannel, pulsesPerRevolution);
         List<Finding> findings = new ArrayList<>();
-        Centred c = centred(channels, n);
+        Centred c = centred(bridged(channels, findings), n);
         List<Integer> live = liveChannels(channels, c, findings);
         int m = live.size();
         double[][][] z = new double[m][][];
@@ -137,6 +139,33 @@ public final class BackEmfAnalyzer {
             throw new IllegalArgumentException("pulses per revolution must be at least 1, got " + pulsesPerRevolution);
         }
         return n;
+    }
+
+    /**
+     * Each channel with its lone glitch samples bridged by their neighbours' mean, each bridging named in a finding:
+     * one glitch would otherwise bias that coil's Ke and, at rest, look like motion.
+     */
+    private List<EmfChannel> bridged(List<EmfChannel> channels, List<Finding> findings) {
+        List<EmfChannel> out = new ArrayList<>();
+        double[] timeS = null;
+        for (EmfChannel ch : channels) {
+            double[] v = ch.voltageV();
+            List<LoneSample> lone = LoneSamples.find(v);
+            if (lone.isEmpty()) {
+                out.add(ch);
+                continue;
+            }
+            if (timeS == null) {
+                timeS = new double[v.length];
+                for (int i = 0; i < v.length; i++) {
+                    timeS[i] = i / sampleRateHz;
+                }
+            }
+            findings.add(Finding.warning(MotorFindingCode.GLITCH_BRIDGED, "channel " + ch.pair() + ": "
+                    + LoneSamples.describe(lone, timeS, "V")));
+            out.add(new EmfChannel(ch.pair(), LoneSamples.bridged(v, lone)));
+        }
+        return out;
     }
 
     /** Mean removed: a DC offset of the recorder would bias the correlations. */

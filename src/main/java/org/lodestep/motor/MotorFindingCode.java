@@ -16,6 +16,8 @@ public enum MotorFindingCode implements Finding.Code {
     COUPLING("coupling"),
     /** The shaft changed direction during the back-EMF capture. */
     DIRECTION_REVERSED("direction_reversed"),
+    /** A lone glitch sample of a capture was bridged by the mean of its neighbours. */
+    GLITCH_BRIDGED("glitch_bridged"),
     /** The step response rises in a way that suggests eddy currents. */
     EDDY_CURRENT("eddy_current"),
     /** Which limit, inductance or back-EMF, sets the full-current step rate. */

@@ -14,6 +14,8 @@ import org.apache.commons.math3.linear.RealMatrix;
 import org.apache.commons.math3.linear.RealVector;
 import org.apache.commons.math3.stat.regression.SimpleRegression;
 import org.apache.commons.math3.util.Pair;
+import org.lodestep.signal.LoneSamples;
+import org.lodestep.signal.LoneSamples.LoneSample;
 import org.lodestep.wiring.Finding;
 
 /**
@@ -58,17 +60,21 @@ public final class StepResponseFitter {
      * Fits one response.
      *
      * @param timeS    sample times, s, increasing
-     * @param currentA winding current at those times, A
+     * @param readA    winding current at those times, A; a lone glitch sample is bridged and named in a finding
      * @throws IllegalArgumentException when the arrays differ in length, hold fewer than 20 samples or show no rise
      */
-    public StepResponseFit fit(double[] timeS, double[] currentA) {
-        if (timeS.length != currentA.length) {
-            throw new IllegalArgumentException(timeS.length + " times but " + currentA.length + " currents");
+    public StepResponseFit fit(double[] timeS, double[] readA) {
+        if (timeS.length != readA.length) {
+            throw new IllegalArgumentException(timeS.length + " times but " + readA.length + " currents");
         }
         int n = timeS.length;
         if (n < 20) {
             throw new IllegalArgumentException("a step response needs at least 20 samples, got " + n);
         }
+        // A winding's current cannot jump (its inductance), so one sample far over both neighbours is a glitch; left
+        // in, it alone can make the rise scatter past the fit's screen.
+        List<LoneSample> lone = LoneSamples.find(readA);
+        double[] currentA = LoneSamples.bridged(readA, lone);
         double[] guess = initialGuess(timeS, currentA);
         LeastSquaresOptimizer.Optimum optimum;
         try {
@@ -108,6 +114,9 @@ public final class StepResponseFitter {
         }
 
         List<Finding> findings = new ArrayList<>();
+        if (!lone.isEmpty()) {
+            findings.add(Finding.warning(MotorFindingCode.GLITCH_BRIDGED, LoneSamples.describe(lone, timeS, "A")));
+        }
         double early = localTimeConstant(timeS, currentA, offsetA, finalA, stepS, 0.05, 0.50);
         double late = localTimeConstant(timeS, currentA, offsetA, finalA, stepS, 0.50, 0.90);
         ResponseShape shape = ResponseShape.EXPONENTIAL;

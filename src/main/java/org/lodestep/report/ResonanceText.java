@@ -16,7 +16,7 @@ import org.lodestep.resonance.SweepResult;
 import org.lodestep.resonance.WatchPoint;
 import org.lodestep.safety.Cautions;
 import org.lodestep.safety.Hazard;
-import org.lodestep.signal.LoneSamples.LoneSample;
+import org.lodestep.signal.LoneSamples;
 import org.lodestep.workflow.ResonanceRingdown;
 
 /** Plain-text rendering of sweep, ring-down and prediction results, for a terminal; computes nothing. */
@@ -177,29 +177,9 @@ public final class ResonanceText {
                 : "Q not determined: no decay measured";
     }
 
-    /**
-     * The samples bridged as glitches, in a sentence, or null when there were none. Up to three are named with their
-     * times and readings.
-     */
+    /** The samples bridged as glitches, in a sentence, or null when there were none. */
     static String bridgedSamples(ResonanceRingdown.Result w) {
-        List<LoneSample> b = w.bridged();
-        if (b.isEmpty()) {
-            return null;
-        }
-        double[] t = w.timeS();
-        StringBuilder named = new StringBuilder();
-        for (int i = 0; i < Math.min(3, b.size()); i++) {
-            LoneSample s = b.get(i);
-            named.append(i == 0 ? "" : "; ").append(String.format(Locale.ROOT, "t = %.4f s read %s (neighbours' mean"
-                    + " %s)", t[s.index()], sig(s.readValue()), sig(s.bridgedValue())));
-        }
-        if (b.size() > 3) {
-            named.append("; and ").append(b.size() - 3).append(" more");
-        }
-        return String.format(Locale.ROOT, "%d sample%s taken for a glitch and bridged by the mean of its neighbours: %s."
-                + " A lone sample standing over both neighbours by more than four times the largest step around it is"
-                + " no part of an oscillation; check the sensor's cable and the acquisition.", b.size(),
-                b.size() == 1 ? "" : "s", named);
+        return w.bridged().isEmpty() ? null : LoneSamples.describe(w.bridged(), w.timeS(), w.unit());
     }
 
     /** Up to six cycles from the largest swing to the smallest, evenly spread. */

@@ -2,6 +2,7 @@ package org.lodestep.signal;
 
 import java.util.ArrayList;
 import java.util.List;
+import java.util.Locale;
 
 /**
  * Single samples that jump far over both their neighbours: a glitch of the acquisition (a flipped bit, a conversion
@@ -59,6 +60,36 @@ public final class LoneSamples {
             y[s.index()] = s.bridgedValue();
         }
         return y;
+    }
+
+    /**
+     * The samples bridged, in a sentence for a report: how many, up to three with their times and readings, and what
+     * to check.
+     *
+     * @param timeS the time of each sample, s
+     * @param unit  the samples' unit, or "" for none
+     */
+    public static String describe(List<LoneSample> lone, double[] timeS, String unit) {
+        String u = unit == null || unit.isBlank() ? "" : " " + unit;
+        StringBuilder named = new StringBuilder();
+        for (int i = 0; i < Math.min(3, lone.size()); i++) {
+            LoneSample s = lone.get(i);
+            named.append(i == 0 ? "" : "; ").append(String.format(Locale.ROOT, "t = %s s read %.3g%s (neighbours'"
+                    + " mean %.3g%s)", seconds(timeS[s.index()]), s.readValue(), u, s.bridgedValue(), u));
+        }
+        if (lone.size() > 3) {
+            named.append("; and ").append(lone.size() - 3).append(" more");
+        }
+        return String.format(Locale.ROOT, "%d sample%s taken for a glitch and bridged by the mean of its neighbours:"
+                + " %s. A lone sample standing over both neighbours by more than four times the largest step around it"
+                + " is no part of the signal; check the sensor's cable and the acquisition.", lone.size(),
+                lone.size() == 1 ? "" : "s", named);
+    }
+
+    /** Six significant figures, without the trailing zeros of a sample clock's round times. */
+    private static String seconds(double t) {
+        String s = String.format(Locale.ROOT, "%.6g", t);
+        return s.contains("e") || !s.contains(".") ? s : s.replaceAll("0+$", "").replaceAll("\\.$", "");
     }
 
     /** The largest step between neighbouring samples within {@link #REACH} of i, the two steps touching i left out. */

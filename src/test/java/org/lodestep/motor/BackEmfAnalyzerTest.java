@@ -58,6 +58,22 @@ class BackEmfAnalyzerTest {
     }
 
     @Test
+    void oneGlitchSampleOnAChannelIsBridgedAndNamedAndItsKeIsTheCleanOnes() {
+        // the same hand turn (Ke = 0.05 V·s/rad per coil); one sample of coil 1-2 reads 9.5 V mid-turn
+        double[] theta = SyntheticMotor.handTurnAngleRad(20_000, FS, 3.0);
+        List<EmfChannel> clean = SyntheticMotor.backEmf(EIGHT_LEAD, theta, FS, 50, 0.05, 0.01, 11);
+        BackEmfResult before = new BackEmfAnalyzer(FS).analyze(clean, 3.0, null, 1);
+        List<EmfChannel> ch = new java.util.ArrayList<>(clean);
+        double[] v = ch.get(0).voltageV();
+        v[10_000] = 9.5;
+        ch.set(0, new EmfChannel(ch.get(0).pair(), v));
+        BackEmfResult r = new BackEmfAnalyzer(FS).analyze(ch, 3.0, null, 1);
+        assertEquals(coil(before, "1").keVsPerRad(), coil(r, "1").keVsPerRad(), 1e-4);
+        assertEquals(1, r.findings().stream().filter(f -> f.code() == MotorFindingCode.GLITCH_BRIDGED).count());
+        assertEquals(0, before.findings().stream().filter(f -> f.code() == MotorFindingCode.GLITCH_BRIDGED).count());
+    }
+
+    @Test
     void reverseTurnSwapsTheStartOfPhaseB() {
         double[] theta = SyntheticMotor.handTurnAngleRad(20_000, FS, 3.0);
         for (int i = 0; i < theta.length; i++) {
