@@ -11,6 +11,7 @@ import java.nio.file.NoSuchFileException;
 import org.lodestep.sample.InputFormatException;
 import org.lodestep.sample.InputLimits;
 import org.lodestep.qa.DatabaseUrls;
+import org.lodestep.qa.SpecChangedException;
 import org.lodestep.qa.StoreException;
 import org.lodestep.rig.RigException;
 import org.lodestep.workflow.InputDigests;
@@ -258,6 +259,9 @@ public final class Main implements Runnable {
         } else if (t instanceof IOException) {
             code = ExitCode.RIG_OR_IO;
             message = "I/O: " + t.getMessage();
+        } else if (t instanceof SpecChangedException) {
+            code = ExitCode.USAGE; // the spec file is at fault, not the store
+            message = t.getMessage();
         } else if (t instanceof StoreException) {
             code = ExitCode.DATABASE;
             message = "database: " + t.getMessage();

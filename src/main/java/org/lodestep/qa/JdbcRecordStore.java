@@ -155,7 +155,7 @@ final class JdbcRecordStore implements RecordStore {
             p.setString(4, s.specSha256());
             try (ResultSet rs = p.executeQuery()) {
                 if (rs.next()) {
-                    throw new StoreException("spec " + s.partNumber() + " rev " + s.partRevision() + " v"
+                    throw new SpecChangedException("spec " + s.partNumber() + " rev " + s.partRevision() + " v"
                             + s.specVersion() + " was already used with different content (SHA-256 "
                             + rs.getString(1).substring(0, 12) + "..., now " + s.specSha256().substring(0, 12)
                             + "...): increment spec_version in the spec file when a limit changes");

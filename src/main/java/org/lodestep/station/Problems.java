@@ -5,6 +5,7 @@ import java.nio.file.AccessDeniedException;
 import java.nio.file.NoSuchFileException;
 import java.util.Map;
 
+import org.lodestep.qa.SpecChangedException;
 import org.lodestep.qa.StoreException;
 import org.lodestep.report.Json;
 import org.lodestep.rig.RigException;
@@ -45,6 +46,9 @@ final class Problems {
         if (e instanceof RigException) {
             return new Problem("rig", "rig fault: " + e.getMessage() + ". The rig switches every output off when "
                     + "the line drops; nothing was recorded.", HttpStatus.BAD_GATEWAY);
+        }
+        if (e instanceof SpecChangedException) { // the spec file is at fault, not the store
+            return new Problem("input", e.getMessage(), HttpStatus.CONFLICT);
         }
         if (e instanceof StoreException) {
             return new Problem("store", "record store: " + e.getMessage(), HttpStatus.SERVICE_UNAVAILABLE);

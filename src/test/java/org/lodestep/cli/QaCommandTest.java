@@ -93,6 +93,15 @@ class QaCommandTest {
     }
 
     @Test
+    void aLimitChangedWithoutANewSpecVersionIsAnInputErrorNotADatabaseFailure() throws IOException {
+        assertEquals(ExitCode.OK, check("SN-1", "1.90,1.92"), err);
+        Files.writeString(spec, Files.readString(spec).replace("tolerance_pct = 10", "tolerance_pct = 15"));
+        assertEquals(ExitCode.USAGE, check("SN-2", "1.90,1.92"));
+        assertTrue(err.contains("increment spec_version") && !err.contains("database:"), err);
+        assertEquals(1, err.strip().lines().count(), err);
+    }
+
+    @Test
     void failingMotorExitsThreeAndRetestLinks() {
         assertEquals(ExitCode.FINDING, check("SN-2", "2.40,1.92"));
         assertTrue(out.contains("XXXX"), out);

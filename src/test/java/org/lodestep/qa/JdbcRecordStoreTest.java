@@ -48,6 +48,26 @@ class JdbcRecordStoreTest {
 
     @ParameterizedTest
     @MethodSource("backends")
+    void aSpecChangedUnderTheSameVersionIsRefusedAndNothingIsWritten(String name) throws Exception {
+        try (Backend b = Backend.create(name); RecordStore store = b.open()) {
+            Measurements m = Fixtures.motor(2.02, 2.05, 23.0, Fixtures.sha("a"));
+            store.append(Fixtures.submission("KV-1", "L1", m, "2026-07-01T08:00:00.000Z"));
+            PartSpec widened = Fixtures.spec(Fixtures.SPEC.replace("tolerance_pct = 10", "tolerance_pct = 15"));
+            Submission s = Submission.of("KV-2", "L1", widened, Inspection.judge(widened, m), m, 22.0, "inspector",
+                    "bench-1", "2026-07-01T08:05:00.000Z", "2026-07-01T08:05:00.000Z", "test");
+            SpecChangedException e = assertThrows(SpecChangedException.class, () -> store.append(s));
+            assertTrue(e.getMessage().contains("increment spec_version"), e.getMessage());
+            assertEquals(1, store.find(RecordQuery.all()).size(), "the refused record is not written");
+            PartSpec next = Fixtures.spec(Fixtures.SPEC.replace("tolerance_pct = 10", "tolerance_pct = 15")
+                    .replace("spec_version = 2", "spec_version = 3"));
+            store.append(Submission.of("KV-2", "L1", next, Inspection.judge(next, m), m, 22.0, "inspector",
+                    "bench-1", "2026-07-01T08:06:00.000Z", "2026-07-01T08:06:00.000Z", "test"));
+            assertEquals(2, store.find(RecordQuery.all()).size(), "with a new spec_version it is recorded");
+        }
+    }
+
+    @ParameterizedTest
+    @MethodSource("backends")
     void overRangeInsulationSurvivesTheRoundTrip(String name) throws Exception {
         try (Backend b = Backend.create(name); RecordStore store = b.open()) {
             Measurements m = new Measurements(List.of(2.0, 2.0), 20.0, List.of(3.2e-3, 3.2e-3),
