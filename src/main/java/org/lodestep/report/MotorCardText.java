@@ -98,11 +98,11 @@ public final class MotorCardText {
         int before = b.length();
         if (card.keVsPerRad() != null) {
             b.append(String.format(Locale.ROOT, "  Ke per half-winding   %s V·s/rad peak (%s V/krpm); a full phase in "
-                    + "series has twice this%n", num(card.keVsPerRad(), 4), num(card.keVPerKrpm(), 4)));
+                    + "series has twice this%n", measured(card.keVsPerRad(), 3), measured(card.keVPerKrpm(), 3)));
         }
         if (card.ktNmPerA() != null) {
             b.append(String.format(Locale.ROOT, "  Kt, phase as wired     %s N·m/A (= Ke in SI units)%n",
-                    num(card.ktNmPerA(), 4)));
+                    measured(card.ktNmPerA(), 3)));
         }
         if (card.phaseCurrentA() != null) {
             b.append(String.format(Locale.ROOT, "  phase current          %s A (%s)%n", num(card.phaseCurrentA(), 3),
@@ -200,8 +200,26 @@ public final class MotorCardText {
         return d.stripTrailingZeros().toPlainString();
     }
 
+    /**
+     * A measured value to {@code significant} figures with the zeros the rounding leaves: a Ke read as 0.0900 is not
+     * 0.09, which claims one figure. {@link #num} strips them, right for exact values such as a step angle of 1.8°.
+     */
+    static String measured(Double v, int significant) {
+        if (v == null || !Double.isFinite(v)) {
+            return "?";
+        }
+        if (v == 0) {
+            return "0";
+        }
+        java.math.BigDecimal d = new java.math.BigDecimal(v).round(new java.math.MathContext(significant));
+        if (d.precision() < significant) {
+            d = d.setScale(d.scale() + significant - d.precision());
+        }
+        return d.toPlainString();
+    }
+
     private static String ohm(Double v) {
-        return v == null ? "R ?" : num(v, 3) + " \u03A9";
+        return v == null ? "R ?" : measured(v, 3) + " \u03A9";
     }
 
     /** True when the card's wiring rests on a guess of which coils pair (5- and 8-lead without back-EMF). */
@@ -247,14 +265,14 @@ public final class MotorCardText {
     }
 
     private static String henry(Double v) {
-        return v == null ? "L ?" : num(v * 1e3, 3) + " mH";
+        return v == null ? "L ?" : measured(v * 1e3, 3) + " mH";
     }
 
     private static String ms(Double v) {
-        return v == null ? "?" : num(v * 1e3, 3) + " ms";
+        return v == null ? "?" : measured(v * 1e3, 3) + " ms";
     }
 
     private static String ke(Double v) {
-        return v == null ? "?" : num(v, 3) + " V·s/rad";
+        return v == null ? "?" : measured(v, 3) + " V·s/rad";
     }
 }

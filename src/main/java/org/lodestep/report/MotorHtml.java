@@ -73,7 +73,7 @@ public final class MotorHtml {
         } else {
             String head = card.stepAngleDeg() == null ? card.topology() + " motor"
                     : String.format(Locale.ROOT, "%s motor, %s\u00B0 step (%d steps/rev)", card.topology(),
-                    num(card.stepAngleDeg()), card.fullStepsPerRevolution());
+                    MotorCardText.num(card.stepAngleDeg(), 4), card.fullStepsPerRevolution());
             // a card measures; it has no spec to pass. Guessed pairing is provisional, a warning finding a warning.
             Status st = MotorCardText.provisional(card) ? Status.PROVISIONAL : warn ? Status.WARN : Status.INFO;
             String wiring = card.wiring() == null ? null : "Wire " + connectionTitle(card.connection()).toLowerCase(
@@ -97,8 +97,13 @@ public final class MotorHtml {
 
         b.section("The card");
         Map<String, String> f = new LinkedHashMap<>();
-        put(f, "Step angle", card.stepAngleDeg(), "%s\u00B0");
-        put(f, "Rotor teeth", card.rotorTeeth() == null ? null : card.rotorTeeth().doubleValue(), "%s");
+        // exact, from the tooth count: no zeros of a measurement's precision
+        if (card.stepAngleDeg() != null) {
+            f.put("Step angle", MotorCardText.num(card.stepAngleDeg(), 4) + "\u00B0");
+        }
+        if (card.rotorTeeth() != null) {
+            f.put("Rotor teeth", String.valueOf(card.rotorTeeth()));
+        }
         put(f, "Back-EMF constant Ke", card.keVsPerRad(), "%s V\u00B7s/rad");
         put(f, "Torque constant Kt", card.ktNmPerA(), "%s N\u00B7m/A");
         put(f, "Phase current", card.phaseCurrentA(), "%s A");
@@ -272,10 +277,6 @@ public final class MotorHtml {
         if (Math.abs(v) >= 1000 && Math.abs(v) < 1e7) {
             return String.format(Locale.ROOT, "%.0f", v);
         }
-        String s = String.format(Locale.ROOT, "%.3g", v);
-        if (s.contains(".") && !s.contains("e")) {
-            s = s.replaceAll("0+$", "").replaceAll("\\.$", "");
-        }
-        return s;
+        return MotorCardText.measured(v, 3); // its zeros kept, as on the text card
     }
 }
