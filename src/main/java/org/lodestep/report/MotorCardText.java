@@ -189,15 +189,10 @@ public final class MotorCardText {
         };
     }
 
+    /** {@link #measured} without trailing zeros: for exact values (a step angle) and estimates (a rated current). */
     static String num(Double v, int significant) {
-        if (v == null || !Double.isFinite(v)) {
-            return "?";
-        }
-        if (v == 0) {
-            return "0";
-        }
-        java.math.BigDecimal d = new java.math.BigDecimal(v).round(new java.math.MathContext(significant));
-        return d.stripTrailingZeros().toPlainString();
+        String m = measured(v, significant);
+        return m.contains(".") ? new java.math.BigDecimal(m).stripTrailingZeros().toPlainString() : m;
     }
 
     /**
