@@ -13,7 +13,8 @@ import java.util.Locale;
  * which is no more than that largest step (trigonometric identities; true at any sample rate above the Nyquist
  * rate). So a sample that stands over both neighbours by several times the largest step between the other samples
  * around it is not part of an oscillation sampled there. Our own screen (references §33): four times the largest
- * step within 16 samples either side. Noise alone practically never gives it: the largest of 32 steps of Gaussian
+ * step within 16 samples either side, and at least four of the record's least step (a converter's code, so a
+ * quiet stretch's flicker between two codes is no glitch). Noise alone practically never gives it: the largest of 32 steps of Gaussian
  * noise of deviation σ is about 4 σ, and a sample 16 σ above both neighbours has a probability far below 10⁻⁴⁰.
  */
 public final class LoneSamples {
@@ -38,6 +39,8 @@ public final class LoneSamples {
     /** The lone samples of {@code x}, in order; the first and last samples have one neighbour and are never lone. */
     public static List<LoneSample> find(double[] x) {
         List<LoneSample> found = new ArrayList<>();
+        // A converter's least step: on a quiet stretch every step is 0 but a code's flicker, which is no glitch.
+        double quantum = smallestStep(x);
         for (int i = 1; i + 1 < x.length; i++) {
             double up = x[i] - x[i - 1];
             double down = x[i] - x[i + 1];
@@ -45,7 +48,7 @@ public final class LoneSamples {
                 continue; // not an extremum over both neighbours
             }
             double over = Math.min(Math.abs(up), Math.abs(down));
-            double largest = largestStepAround(x, i);
+            double largest = Math.max(quantum, largestStepAround(x, i));
             if (over > FACTOR * largest) {
                 found.add(new LoneSample(i, x[i], (x[i - 1] + x[i + 1]) / 2));
             }
@@ -90,6 +93,18 @@ public final class LoneSamples {
     private static String seconds(double t) {
         String s = String.format(Locale.ROOT, "%.6g", t);
         return s.contains("e") || !s.contains(".") ? s : s.replaceAll("0+$", "").replaceAll("\\.$", "");
+    }
+
+    /** The smallest step between neighbouring samples that is not zero; 0 when every step is. */
+    private static double smallestStep(double[] x) {
+        double smallest = Double.POSITIVE_INFINITY;
+        for (int j = 1; j < x.length; j++) {
+            double d = Math.abs(x[j] - x[j - 1]);
+            if (d > 0 && d < smallest) {
+                smallest = d;
+            }
+        }
+        return Double.isInfinite(smallest) ? 0 : smallest;
     }
 
     /** The largest step between neighbouring samples within {@link #REACH} of i, the two steps touching i left out. */

@@ -66,6 +66,22 @@ class LoneSamplesTest {
     }
 
     @Test
+    void aQuietQuantisedStretchFlickeringBetweenCodesHasNoGlitchButABigJumpIs() {
+        // a 12-bit converter over 2 A (0.49 mA a code) reading a current at rest: single codes flicker up and down
+        double lsb = 2.0 / 4096;
+        double[] x = new double[2000];
+        Random rnd = new Random(5);
+        for (int i = 0; i < x.length; i++) {
+            x[i] = (100 + (rnd.nextInt(20) == 0 ? (rnd.nextBoolean() ? 1 : -1) : 0)) * lsb;
+        }
+        assertEquals(List.of(), LoneSamples.find(x));
+        x[1000] = 140 * lsb;
+        x[999] = 100 * lsb;
+        x[1001] = 100 * lsb;
+        assertEquals(List.of(1000), LoneSamples.find(x).stream().map(LoneSamples.LoneSample::index).toList());
+    }
+
+    @Test
     void twoGlitchesApartAreBothFoundAndTheEndsAreNeverLone() {
         double[] x = ring(3000, 30, 0.01, 0, new Random(1));
         x[0] = 40;
