@@ -11,7 +11,6 @@ import org.lodestep.report.ProvenanceBlock;
 import org.lodestep.report.RigText;
 import org.lodestep.rig.SweepPlan;
 import org.lodestep.safety.Cautions;
-import org.lodestep.safety.Hazard;
 import org.lodestep.workflow.RigCaptureFile;
 import org.lodestep.workflow.RigSweepCapture;
 
@@ -107,7 +106,7 @@ final class RigCaptureCommand implements Callable<Integer> {
         PrintWriter caution = json ? spec.commandLine().getErr() : o;
         caution.println(Cautions.beforeRigAction("moving axis", String.format(Locale.ROOT,
                 "the rig steps your driver up to %.0f full steps/s; the shaft and any load turn.", Math.max(from, to)),
-                Hazard.MOVING_AXIS, Hazard.HOT_MOTOR));
+                Cautions.motion()));
         caution.flush();
         RigSweepCapture.Result r;
         try (RigCli.Bar bar = new RigCli.Bar("sweep", spec.commandLine().getErr(), quiet)) {

@@ -22,7 +22,7 @@ import org.lodestep.report.html.HtmlTable;
 import org.lodestep.report.html.Status;
 import org.lodestep.report.html.XyChart;
 import org.lodestep.resonance.RateUnits;
-import org.lodestep.safety.Hazard;
+import org.lodestep.safety.Cautions;
 import org.lodestep.workflow.DriveCurve;
 import org.lodestep.workflow.DrivePlan;
 
@@ -124,7 +124,7 @@ public final class DriveHtml {
                     + (a.suggestions().size() > 1 ? " (more below)" : ""));
             b.verdict(s, head, answer, detail);
         }
-        b.safety(Hazard.MOVING_AXIS, Hazard.HOT_MOTOR);
+        b.safety(Cautions.motion());
         return b;
     }
 

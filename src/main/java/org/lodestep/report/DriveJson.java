@@ -14,7 +14,6 @@ import org.lodestep.drive.TorqueCurve;
 import org.lodestep.drive.TorquePoint;
 import org.lodestep.resonance.RateUnits;
 import org.lodestep.safety.Cautions;
-import org.lodestep.safety.Hazard;
 import org.lodestep.workflow.DriveCurve;
 import org.lodestep.workflow.DrivePlan;
 
@@ -168,7 +167,7 @@ public final class DriveJson {
             m.put("answer", null);
         }
         m.put("notes", r.notes());
-        m.put("safety", Cautions.sentences(Hazard.MOVING_AXIS, Hazard.HOT_MOTOR));
+        m.put("safety", Cautions.sentences(Cautions.motion()));
         return m;
     }
 }

@@ -16,7 +16,6 @@ import org.lodestep.drive.TorqueCurve;
 import org.lodestep.drive.TorquePoint;
 import org.lodestep.resonance.RateUnits;
 import org.lodestep.safety.Cautions;
-import org.lodestep.safety.Hazard;
 import org.lodestep.workflow.DriveCurve;
 import org.lodestep.workflow.DrivePlan;
 
@@ -185,7 +184,7 @@ public final class DriveText {
         }
         out.println();
         out.println("Safety:");
-        for (String s : Cautions.sentences(Hazard.MOVING_AXIS, Hazard.HOT_MOTOR)) {
+        for (String s : Cautions.sentences(Cautions.motion())) {
             out.println("  - " + s);
         }
     }

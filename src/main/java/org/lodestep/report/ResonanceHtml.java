@@ -23,6 +23,7 @@ import org.lodestep.resonance.RingSpectrum;
 import org.lodestep.resonance.Stall;
 import org.lodestep.resonance.SweepResult;
 import org.lodestep.resonance.WatchPoint;
+import org.lodestep.safety.Cautions;
 import org.lodestep.safety.Hazard;
 import org.lodestep.signal.Spectrogram;
 import org.lodestep.signal.SpectrumScaling;
@@ -108,7 +109,7 @@ public final class ResonanceHtml {
                 b.findings(notes);
             }
         }
-        b.safety(Hazard.MOVING_AXIS, Hazard.HOT_MOTOR);
+        b.safety(Cautions.motion());
 
         b.section("Response against step rate");
         b.figure(responseChart(r, u, unit).toSvg(), "RMS vibration against full-step rate (bottom axis) and "

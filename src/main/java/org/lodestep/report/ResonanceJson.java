@@ -18,7 +18,6 @@ import org.lodestep.resonance.Stall;
 import org.lodestep.resonance.SweepResult;
 import org.lodestep.resonance.WatchPoint;
 import org.lodestep.safety.Cautions;
-import org.lodestep.safety.Hazard;
 import org.lodestep.signal.LoneSamples.LoneSample;
 import org.lodestep.workflow.ResonanceRingdown;
 
@@ -106,7 +105,7 @@ public final class ResonanceJson {
             }
             m.put("response", pts);
         }
-        m.put("safety", Cautions.sentences(Hazard.MOVING_AXIS, Hazard.HOT_MOTOR));
+        m.put("safety", Cautions.sentences(Cautions.motion()));
         return Json.write(m);
     }
 

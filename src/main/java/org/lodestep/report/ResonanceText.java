@@ -15,7 +15,6 @@ import org.lodestep.resonance.Stall;
 import org.lodestep.resonance.SweepResult;
 import org.lodestep.resonance.WatchPoint;
 import org.lodestep.safety.Cautions;
-import org.lodestep.safety.Hazard;
 import org.lodestep.signal.LoneSamples;
 import org.lodestep.workflow.ResonanceRingdown;
 
@@ -222,7 +221,7 @@ public final class ResonanceText {
 
     public static void safety(PrintWriter out) {
         out.println("Safety:");
-        for (String s : Cautions.sentences(Hazard.MOVING_AXIS, Hazard.HOT_MOTOR)) {
+        for (String s : Cautions.sentences(Cautions.motion())) {
             out.println("- " + s);
         }
     }

@@ -16,6 +16,11 @@ public final class Cautions {
     private Cautions() {
     }
 
+    /** The hazards of a motor running its axis (a sweep, a ring-down test, a motion profile), for every such report. */
+    public static Hazard[] motion() {
+        return new Hazard[] {Hazard.MOVING_AXIS, Hazard.HOT_MOTOR};
+    }
+
     /**
      * The sentences of each hazard in turn, then their deferrals to local codes, each once: one list for a report or
      * a page that names several hazards.

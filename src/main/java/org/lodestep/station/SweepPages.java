@@ -105,7 +105,7 @@ final class SweepPages {
 
     private String form() {
         return "<h1>Sweep</h1>"
-                + Layout.caution(Hazard.MOVING_AXIS.title(), Cautions.sentences(Hazard.MOVING_AXIS, Hazard.HOT_MOTOR))
+                + Layout.caution(Hazard.MOVING_AXIS.title(), Cautions.sentences(Cautions.motion()))
                 + "<form id=\"sweep-form\" class=\"stack\">"
                 + "<label class=\"choice ack\"><input type=\"checkbox\" id=\"ack\" name=\"ack\" value=\"yes\"> I have read "
                 + "the caution: the travel is clear, the guards are on and the emergency stop is within reach</label>"
