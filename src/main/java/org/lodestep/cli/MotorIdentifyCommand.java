@@ -23,6 +23,8 @@ import org.lodestep.report.MotorJson;
 import org.lodestep.report.ProvenanceBlock;
 import org.lodestep.workflow.Provenance;
 import org.lodestep.report.MotorCardText;
+import org.lodestep.safety.Cautions;
+import org.lodestep.safety.Hazard;
 
 import picocli.CommandLine.Command;
 import picocli.CommandLine.Model.CommandSpec;
@@ -247,14 +249,9 @@ final class MotorIdentifyCommand implements Callable<Integer> {
         }
     }
 
-    /** The cautions printed under every text card. */
-    static final List<String> SAFETY = List.of(
-            "Safety: a step-response test energises the coil; the current keeps flowing for a moment after the "
-                    + "supply is cut and an interrupted coil can kick back a high voltage: switch off before "
-                    + "touching leads. A shaft turned by hand generates voltage at the leads, more the faster it "
-                    + "turns, and a coil shorted by a low-resistance meter or a joint brakes the shaft. A motor run "
-                    + "near its rated current gets hot enough to burn (often 80 °C on the case). Follow your local "
-                    + "electrical codes and workshop practice.");
+    /** The cautions printed under every text card: the card's tests energise coils and turn the shaft. */
+    static final List<String> SAFETY = List.of("Safety: " + String.join(" ",
+            Cautions.sentences(Hazard.ENERGISED_WINDING, Hazard.TURNED_SHAFT, Hazard.HOT_MOTOR)));
 
     private static void positive(Double v, String option) {
         if (v != null && !(v > 0 && Double.isFinite(v))) {

@@ -21,6 +21,7 @@ import org.lodestep.report.html.OutputFile;
 import org.lodestep.report.QaCsv;
 import org.lodestep.report.QaHtml;
 import org.lodestep.report.QaText;
+import org.lodestep.safety.Cautions;
 import org.lodestep.workflow.Progress;
 import org.lodestep.workflow.QaCertificate;
 import org.lodestep.workflow.QaCheck;
@@ -58,8 +59,9 @@ final class QaDemo implements DemoCommand.Section {
         out.println("Harrow Fen instrument works (invented) receives lot " + LOT + ": twelve KV-4218-M steppers from"
                 + " Kestrel Vale Motion (invented). The inspector scans each serial number; resistance comes from the"
                 + " lead-pair CSVs, insulation and inductance from the bench meter log.");
-        out.println("Safety: the insulation tester applies 500 V DC. Motor disconnected from any driver, hands off the"
-                + " leads while it runs, windings discharged afterwards; local rules take precedence.");
+        if (Double.isFinite(spec.insulationTestVoltageV())) {
+            out.println(Cautions.insulationTestLine(spec.insulationTestVoltageV()));
+        }
         int worst = ExitCode.OK;
         try (RecordStore store = RecordStores.open(db.toString(), Map.of())) {
             worst = expect(worst, lot(spec, qa, dir, store, out), ExitCode.FINDING);
