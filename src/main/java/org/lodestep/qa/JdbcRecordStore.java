@@ -146,6 +146,7 @@ final class JdbcRecordStore implements RecordStore {
     }
 
     private void refuseChangedSpec(Submission s) throws SQLException, StoreException {
+        String recordedSha;
         try (PreparedStatement p = connection.prepareStatement(
                 "SELECT spec_sha256 FROM qa_record WHERE part_number = ? AND part_revision = ? AND spec_version = ? "
                         + "AND spec_sha256 <> ? LIMIT 1")) {
@@ -154,14 +155,27 @@ final class JdbcRecordStore implements RecordStore {
             p.setInt(3, s.specVersion());
             p.setString(4, s.specSha256());
             try (ResultSet rs = p.executeQuery()) {
-                if (rs.next()) {
-                    throw new SpecChangedException("spec " + s.partNumber() + " rev " + s.partRevision() + " v"
-                            + s.specVersion() + " was already used with different content (SHA-256 "
-                            + rs.getString(1).substring(0, 12) + "..., now " + s.specSha256().substring(0, 12)
-                            + "...): increment spec_version in the spec file when a limit changes");
+                if (!rs.next()) {
+                    return;
                 }
+                recordedSha = rs.getString(1);
             }
         }
+        int highest;
+        try (PreparedStatement p = connection.prepareStatement(
+                "SELECT MAX(spec_version) FROM qa_record WHERE part_number = ? AND part_revision = ?")) {
+            p.setString(1, s.partNumber());
+            p.setString(2, s.partRevision());
+            try (ResultSet rs = p.executeQuery()) {
+                rs.next();
+                highest = rs.getInt(1);
+            }
+        }
+        throw new SpecChangedException(("spec_version " + s.specVersion() + " of " + s.partNumber() + " rev "
+                + s.partRevision() + " was already used with different content (recorded spec SHA-256 "
+                + recordedSha.substring(0, 12) + "..., this one " + s.specSha256().substring(0, 12)
+                + "...): expected a new spec_version, " + (highest + 1) + " or more, whenever a limit changes")
+                .replaceAll("\\p{Cntrl}", "?"));
     }
 
     private Long previous(String serial, String partNumber) throws SQLException {

@@ -19,15 +19,18 @@ import java.util.Optional;
  * @param limits              the checks this spec asks for, one limit per parameter
  * @param insulationTestVoltageV DC test voltage the insulation minimum applies at, V (NaN when no insulation check)
  * @param specSha256          SHA-256 of the spec file's bytes (hex)
+ * @param source              the file (or upload) the spec was read from, for messages about it
+ * @param specVersionLine     1-based line of {@code spec_version} in that file, 0 when unknown
  */
 public record PartSpec(String partNumber, String revision, int specVersion, String description,
                        double referenceTemperatureC, List<Limit> limits, double insulationTestVoltageV,
-                       String specSha256) {
+                       String specSha256, String source, int specVersionLine) {
     public PartSpec {
         Objects.requireNonNull(partNumber, "partNumber");
         Objects.requireNonNull(revision, "revision");
         Objects.requireNonNull(description, "description");
         Objects.requireNonNull(specSha256, "specSha256");
+        Objects.requireNonNull(source, "source");
         limits = List.copyOf(limits);
         if (partNumber.isBlank()) {
             throw new IllegalArgumentException("part number is blank");

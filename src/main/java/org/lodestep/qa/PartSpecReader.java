@@ -223,7 +223,8 @@ public final class PartSpecReader {
                         "has no checks: expected at least one of the sections [resistance], [inductance], "
                                 + "[insulation], [back_emf], [step_angle]");
             }
-            return new PartSpec(number, revision, version, description, referenceC, limits, testVoltageV, sha256);
+            return new PartSpec(number, revision, version, description, referenceC, limits, testVoltageV, sha256,
+                    source, lineOf("part", "spec_version"));
         }
 
         private void checkKnownKeys() throws InputFormatException {

@@ -11,4 +11,12 @@ public final class SpecChangedException extends StoreException {
     public SpecChangedException(String message) {
         super(message);
     }
+
+    /** This refusal located in the spec file: {@code FILE line N: } before the message (no line when 0). */
+    public SpecChangedException in(String source, int line) {
+        SpecChangedException located = new SpecChangedException(
+                (source + (line > 0 ? " line " + line : "") + ": ").replaceAll("\\p{Cntrl}", "?") + getMessage());
+        located.initCause(this);
+        return located;
+    }
 }

@@ -7,6 +7,7 @@ import org.lodestep.qa.Inspection;
 import org.lodestep.qa.Measurements;
 import org.lodestep.qa.PartSpec;
 import org.lodestep.qa.RecordStore;
+import org.lodestep.qa.SpecChangedException;
 import org.lodestep.qa.StoreException;
 import org.lodestep.qa.Submission;
 import org.lodestep.qa.Timestamps;
@@ -120,6 +121,10 @@ public final class QaCheck {
             throw new SettingsException(e.getMessage());
         }
         progress.step("recording " + serial);
-        return store.append(s);
+        try {
+            return store.append(s);
+        } catch (SpecChangedException e) {
+            throw e.in(spec.source(), spec.specVersionLine()); // the spec file is at fault: say where
+        }
     }
 }

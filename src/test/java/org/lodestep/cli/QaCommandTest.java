@@ -97,7 +97,9 @@ class QaCommandTest {
         assertEquals(ExitCode.OK, check("SN-1", "1.90,1.92"), err);
         Files.writeString(spec, Files.readString(spec).replace("tolerance_pct = 10", "tolerance_pct = 15"));
         assertEquals(ExitCode.USAGE, check("SN-2", "1.90,1.92"));
-        assertTrue(err.contains("increment spec_version") && !err.contains("database:"), err);
+        // one line naming the spec file and the line of its spec_version (line 4 of this spec), and what is expected
+        assertTrue(err.contains(spec + " line 4: spec_version 3 of ") && !err.contains("database:"), err);
+        assertTrue(err.contains("expected a new spec_version, 4 or more"), err);
         assertEquals(1, err.strip().lines().count(), err);
     }
 

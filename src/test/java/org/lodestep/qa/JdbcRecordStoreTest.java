@@ -56,7 +56,10 @@ class JdbcRecordStoreTest {
             Submission s = Submission.of("KV-2", "L1", widened, Inspection.judge(widened, m), m, 22.0, "inspector",
                     "bench-1", "2026-07-01T08:05:00.000Z", "2026-07-01T08:05:00.000Z", "test");
             SpecChangedException e = assertThrows(SpecChangedException.class, () -> store.append(s));
-            assertTrue(e.getMessage().contains("increment spec_version"), e.getMessage());
+            // the message says which version is next: one above the highest recorded for the part (2 here)
+            assertTrue(e.getMessage().startsWith("spec_version 2 of ") && e.getMessage().contains(
+                    "expected a new spec_version, 3 or more, whenever a limit changes"), e.getMessage());
+            assertEquals(1, e.getMessage().lines().count(), e.getMessage());
             assertEquals(1, store.find(RecordQuery.all()).size(), "the refused record is not written");
             PartSpec next = Fixtures.spec(Fixtures.SPEC.replace("tolerance_pct = 10", "tolerance_pct = 15")
                     .replace("spec_version = 2", "spec_version = 3"));
@@ -140,7 +143,10 @@ class JdbcRecordStoreTest {
             Submission s = Submission.of("KV-9", "L1", edited, Inspection.judge(edited, m), m, 20.0, "", "",
                     "2026-07-01T08:00:00.000Z", "2026-07-01T08:00:00.000Z", "test");
             StoreException e = assertThrows(StoreException.class, () -> store.append(s));
-            assertTrue(e.getMessage().contains("increment spec_version"), e.getMessage());
+            // the message says which version is next: one above the highest recorded for the part (2 here)
+            assertTrue(e.getMessage().startsWith("spec_version 2 of ") && e.getMessage().contains(
+                    "expected a new spec_version, 3 or more, whenever a limit changes"), e.getMessage());
+            assertEquals(1, e.getMessage().lines().count(), e.getMessage());
             assertEquals(1, store.find(RecordQuery.all()).size());
         }
     }

@@ -23,6 +23,8 @@ class PartSpecReaderTest {
         assertEquals("KV-4218-M", s.partNumber());
         assertEquals("B", s.revision());
         assertEquals(2, s.specVersion());
+        assertEquals("kv-4218-m.toml", s.source());
+        assertEquals(5, s.specVersionLine(), "after the comment, [part], number and revision");
         assertEquals(20.0, s.referenceTemperatureC());
         Limit r = s.limit(Parameters.PHASE_RESISTANCE).orElseThrow();
         assertEquals(1.8, r.lower(), 1e-12);
