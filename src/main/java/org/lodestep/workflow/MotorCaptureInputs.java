@@ -92,8 +92,7 @@ public final class MotorCaptureInputs {
         String src = s.source();
         int current = currentChannel(s);
         if (current < 0) {
-            throw new InputFormatException(src, InputFormatException.NO_LINE, null, String.join(",",
-                    s.channelNames()), "has no current column: expected a column such as current_a (amperes)");
+            throw missingColumn(s, "current", "a column such as current_a (amperes)");
         }
         String leadsText = s.metadata().get("leads");
         List<String> leads;
@@ -218,9 +217,7 @@ public final class MotorCaptureInputs {
             }
         }
         if (channels.isEmpty()) {
-            throw new InputFormatException(src, InputFormatException.NO_LINE, null, String.join(",",
-                    s.channelNames()), "has no back-EMF column: expected columns named emf_<lead>_<lead>_v, "
-                    + "+ on the first lead, e.g. emf_1_2_v");
+            throw missingColumn(s, "back-EMF", "columns named emf_<lead>_<lead>_v, + on the first lead, e.g. emf_1_2_v");
         }
         Double revs = revolutionsFlag != null ? revolutionsFlag : number(s, "revolutions", "revolutions", false, MAX_REVOLUTIONS);
         Double pulses = pulsesFlag != null ? Double.valueOf(pulsesFlag) : number(s, "pulses_per_rev", "pulses", false, MAX_PULSES_PER_REV);
@@ -275,5 +272,11 @@ public final class MotorCaptureInputs {
                             + " of " + unit.toLowerCase(Locale.ROOT) + " up to " + max);
         }
         return v;
+    }
+
+    /** A capture without the column a test needs, naming the columns it has. */
+    private static InputFormatException missingColumn(SampledSignal s, String what, String expected) {
+        return new InputFormatException(s.source(), InputFormatException.NO_LINE, null, null, "has no " + what
+                + " column (its columns: " + String.join(", ", s.channelNames()) + "): expected " + expected);
     }
 }

@@ -5,13 +5,16 @@ import static org.junit.jupiter.api.Assertions.assertFalse;
 import static org.junit.jupiter.api.Assertions.assertThrows;
 import static org.junit.jupiter.api.Assertions.assertTrue;
 
+import java.nio.file.Files;
 import java.nio.file.Path;
 import java.util.List;
 
 import org.junit.jupiter.api.Test;
+import org.junit.jupiter.api.io.TempDir;
 import org.lodestep.motor.MotorCard;
 import org.lodestep.motor.StepResponseFit;
 import org.lodestep.motor.Unknown;
+import org.lodestep.sample.InputFormatException;
 
 class MotorFromFilesTest {
     private static final Path DIR = Path.of("sample-captures", "motor");
@@ -48,5 +51,19 @@ class MotorFromFilesTest {
     void nothingToIdentifyIsASettingError() {
         assertThrows(IllegalArgumentException.class, () -> new MotorFromFiles.Settings(null, List.of(), null, null,
                 null, null, null, MotorCardSettings.NONE, false));
+    }
+
+    @Test
+    void aCaptureWithoutTheColumnATestNeedsNamesTheColumnsItHas(@TempDir Path dir) throws Exception {
+        Path accel = dir.resolve("tap.csv");
+        Files.writeString(accel, "time_s,accel_g\n0,0.1\n0.001,0.2\n0.002,0.1\n");
+        InputFormatException step = assertThrows(InputFormatException.class,
+                () -> MotorCaptureInputs.stepResponse(accel, null, null, null));
+        assertEquals(accel + ": has no current column (its columns: accel): expected a column such as current_a"
+                + " (amperes)", step.getMessage());
+        InputFormatException emf = assertThrows(InputFormatException.class,
+                () -> MotorCaptureInputs.backEmf(accel, null, null));
+        assertTrue(emf.getMessage().startsWith(accel + ": has no back-EMF column (its columns: accel): expected"
+                + " columns named emf_"), emf.getMessage());
     }
 }
