@@ -106,7 +106,7 @@ public final class TimeSeriesCsvReader implements SampleStream {
                 }
                 continue;
             }
-            header = text;
+            header = lines.strictText("a header such as time_s,accel_g").strip();
             break;
         }
         if (header == null) {

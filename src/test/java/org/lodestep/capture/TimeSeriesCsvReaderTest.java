@@ -7,7 +7,9 @@ import static org.junit.jupiter.api.Assertions.assertEquals;
 import static org.junit.jupiter.api.Assertions.assertThrows;
 import static org.junit.jupiter.api.Assertions.assertTrue;
 
+import java.io.ByteArrayInputStream;
 import java.io.IOException;
+import java.nio.charset.StandardCharsets;
 import java.util.List;
 
 import org.junit.jupiter.api.Test;
@@ -299,6 +301,36 @@ class TimeSeriesCsvReaderTest {
             assertEquals(404, r.read(buf, 0, 4096));
             InputFormatException e = assertThrows(InputFormatException.class, () -> r.read(buf, 0, 4096));
             assertEquals(4502, e.line());
+        }
+    }
+
+    /** RFC 3629 (references §28): a header that is not UTF-8, a binary file's first bytes, is refused as such. */
+    @Test
+    void aHeaderThatIsNotUtf8TextIsRefusedWithItsLineAndOffset() {
+        byte[] binary = {'#', ' ', 'x', '\n', 'P', 'K', 3, 4, (byte) 0xC3, (byte) 0x28, ',', 'a', '\n', '0', '\n'};
+        InputFormatException e = assertThrows(InputFormatException.class, () -> {
+            try (TimeSeriesCsvReader r = TimeSeriesCsvReader.open(new ByteArrayInputStream(binary), "bin.csv")) {
+                TestStreams.readAll(r, 10);
+            }
+        });
+        assertEquals("bin.csv line 2: has a byte that is not UTF-8 at offset 8: expected a header such as"
+                + " time_s,accel_g in UTF-8 text", e.getMessage());
+        byte[] nul = "time_s,ac\0cel_g\n0,1\n".getBytes(StandardCharsets.UTF_8);
+        InputFormatException n = assertThrows(InputFormatException.class, () -> {
+            try (TimeSeriesCsvReader r = TimeSeriesCsvReader.open(new ByteArrayInputStream(nul), "nul.csv")) {
+                TestStreams.readAll(r, 10);
+            }
+        });
+        assertEquals("nul.csv line 1: has a NUL character: expected a header such as time_s,accel_g in text, not a"
+                + " binary file", n.getMessage());
+    }
+
+    /** A comment in another encoding (a logger's Latin-1 degree sign) is only a comment: the capture still reads. */
+    @Test
+    void aCommentInAnotherEncodingDoesNotStopTheCapture() throws Exception {
+        byte[] latin1 = "# bench at 21 \u00B0C\ntime_s,accel_g\n0,1\n0.001,2\n".getBytes(StandardCharsets.ISO_8859_1);
+        try (TimeSeriesCsvReader r = TimeSeriesCsvReader.open(new ByteArrayInputStream(latin1), "latin1.csv")) {
+            assertArrayEquals(new double[] {1, 2}, TestStreams.readAll(r, 10)[0]);
         }
     }
 }
