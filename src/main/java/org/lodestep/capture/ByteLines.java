@@ -1,11 +1,9 @@
 package org.lodestep.capture;
 
 import org.lodestep.sample.InputFormatException;
+import org.lodestep.sample.Utf8Text;
 import java.io.IOException;
 import java.io.InputStream;
-import java.nio.ByteBuffer;
-import java.nio.CharBuffer;
-import java.nio.charset.CharsetDecoder;
 import java.nio.charset.StandardCharsets;
 import java.util.Arrays;
 
@@ -171,26 +169,13 @@ final class ByteLines {
     }
 
     /**
-     * The current line as text, refused unless it is UTF-8 without NUL (RFC 3629, references §28): read leniently, a
-     * binary file's first bytes would become U+FFFD and be named as a column.
+     * The current line as text, refused unless it is UTF-8 without NUL ({@link Utf8Text}): read leniently, a binary
+     * file's first bytes would become U+FFFD and be named as a column.
      *
      * @param what what the line should be, for the message ("a header such as time_s,accel_g")
      */
     String strictText(String what) throws InputFormatException {
-        ByteBuffer in = ByteBuffer.wrap(buf, start, end - start);
-        CharBuffer out = CharBuffer.allocate(end - start);
-        CharsetDecoder d = StandardCharsets.UTF_8.newDecoder(); // a new decoder reports malformed input
-        if (d.decode(in, out, true).isError()) {
-            throw new InputFormatException(source, lineNumber, null, null, "has a byte that is not UTF-8 at offset "
-                    + (bufferOffset + in.position()) + ": expected " + what + " in UTF-8 text");
-        }
-        d.flush(out);
-        String text = out.flip().toString();
-        if (text.indexOf('\0') >= 0) {
-            throw new InputFormatException(source, lineNumber, null, null, "has a NUL character: expected " + what
-                    + " in text, not a binary file");
-        }
-        return text;
+        return Utf8Text.decodeLine(buf, start, end, source, lineNumber, bufferOffset + start, what);
     }
 
     /** Skips a UTF-8 byte-order mark at the very start of the input, if present. */

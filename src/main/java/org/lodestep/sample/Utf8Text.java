@@ -37,24 +37,55 @@ public final class Utf8Text {
 
     /** Decodes and checks bytes; {@code source} names them in the message. */
     public static String decode(byte[] bytes, String source, String what) throws InputFormatException {
-        CharsetDecoder d = StandardCharsets.UTF_8.newDecoder().onMalformedInput(CodingErrorAction.REPORT)
-                .onUnmappableCharacter(CodingErrorAction.REPORT);
         ByteBuffer in = ByteBuffer.wrap(bytes);
-        CharBuffer out = CharBuffer.allocate(bytes.length);
-        var result = d.decode(in, out, true);
-        if (result.isError()) {
-            throw new InputFormatException(source, lineAt(bytes, in.position()), null, null,
-                    "has a byte that is not UTF-8 at offset " + in.position() + ": expected " + what
-                            + " in UTF-8 text");
+        String text = strictly(in, bytes.length);
+        if (text == null) {
+            throw notUtf8(source, lineAt(bytes, in.position()), in.position(), what);
         }
-        d.flush(out);
-        String text = out.flip().toString();
-        int nul = text.indexOf('\0');
-        if (nul >= 0) {
-            throw new InputFormatException(source, lineAt(bytes, byteIndexOf(bytes, (byte) 0)), null, null,
-                    "has a NUL character: expected " + what + " in text, not a binary file");
+        if (text.indexOf('\0') >= 0) {
+            throw nul(source, lineAt(bytes, byteIndexOf(bytes, (byte) 0)), what);
         }
         return text.startsWith("\uFEFF") ? text.substring(1) : text;
+    }
+
+    /**
+     * Decodes and checks one line, {@code b[from]} to {@code b[to - 1]}, of a larger input read piece by piece (a
+     * capture's header): {@code line} and {@code offset}, where {@code b[from]} sits in the input, place a fault in
+     * the input's own terms.
+     */
+    public static String decodeLine(byte[] b, int from, int to, String source, int line, long offset, String what)
+            throws InputFormatException {
+        ByteBuffer in = ByteBuffer.wrap(b, from, to - from);
+        String text = strictly(in, to - from);
+        if (text == null) {
+            throw notUtf8(source, line, offset + in.position() - from, what);
+        }
+        if (text.indexOf('\0') >= 0) {
+            throw nul(source, line, what);
+        }
+        return text;
+    }
+
+    /** The text of {@code in}'s remaining bytes, or null with {@code in} at the first ill-formed byte. */
+    private static String strictly(ByteBuffer in, int bytes) {
+        CharsetDecoder d = StandardCharsets.UTF_8.newDecoder().onMalformedInput(CodingErrorAction.REPORT)
+                .onUnmappableCharacter(CodingErrorAction.REPORT);
+        CharBuffer out = CharBuffer.allocate(bytes);
+        if (d.decode(in, out, true).isError()) {
+            return null;
+        }
+        d.flush(out);
+        return out.flip().toString();
+    }
+
+    private static InputFormatException notUtf8(String source, int line, long offset, String what) {
+        return new InputFormatException(source, line, null, null, "has a byte that is not UTF-8 at offset " + offset
+                + ": expected " + what + " in UTF-8 text");
+    }
+
+    private static InputFormatException nul(String source, int line, String what) {
+        return new InputFormatException(source, line, null, null, "has a NUL character: expected " + what
+                + " in text, not a binary file");
     }
 
     private static int lineAt(byte[] bytes, int offset) {
